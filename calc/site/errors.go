@@ -1,0 +1,88 @@
+package site
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+)
+
+// RangeError reports an input outside its valid range. Value, Min and Max
+// are in Unit (display units, e.g. kPa, deg), not SI, so the message reads
+// as the engineer wrote the input. Where names the layer or footing.
+type RangeError struct {
+	Where  string
+	Param  string
+	Value  float64
+	Min    float64
+	Max    float64
+	Unit   string
+	Reason string // optional: why the range is what it is
+}
+
+func (e *RangeError) Error() string {
+	var b strings.Builder
+	if e.Where != "" {
+		b.WriteString(e.Where)
+		b.WriteString(": ")
+	}
+	u := e.Unit
+	if u != "" {
+		u = " " + u
+	}
+	fmt.Fprintf(&b, "%s = %s%s is outside the valid range %s to %s%s", e.Param, num(e.Value), u, num(e.Min), num(e.Max), u)
+	if e.Reason != "" {
+		b.WriteString(" (")
+		b.WriteString(e.Reason)
+		b.WriteString(")")
+	}
+	return b.String()
+}
+
+func num(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
+
+// InputError reports an input that is inconsistent rather than out of a
+// numeric range (layers out of order, a missing required parameter).
+type InputError struct {
+	Where string
+	Param string
+	Msg   string
+}
+
+func (e *InputError) Error() string {
+	s := e.Msg
+	if e.Param != "" {
+		s = e.Param + ": " + s
+	}
+	if e.Where != "" {
+		s = e.Where + ": " + s
+	}
+	return s
+}
+
+// Errors is a list of input errors; it is returned as one error.
+type Errors []error
+
+func (l Errors) Error() string {
+	parts := make([]string, len(l))
+	for i, e := range l {
+		parts[i] = e.Error()
+	}
+	return strings.Join(parts, "; ")
+}
+
+// Err returns nil for an empty list, else the list.
+func (l Errors) Err() error {
+	if len(l) == 0 {
+		return nil
+	}
+	return l
+}
+
+// check appends a RangeError when v (SI) scaled by 1/scale lies outside
+// [min, max] (display units). openMin excludes min itself.
+func (l *Errors) check(where, param string, v, scale, min, max float64, openMin bool, unit string) {
+	d := v / scale
+	if d < min || d > max || (openMin && d == min) || d != d {
+		*l = append(*l, &RangeError{Where: where, Param: param, Value: d, Min: min, Max: max, Unit: unit})
+	}
+}

@@ -1,0 +1,198 @@
+package site
+
+import (
+	"fmt"
+	"math"
+	"sort"
+)
+
+// Unit scales used for the ranges below: SI value = display value × scale.
+const (
+	kPa           = 1e3
+	kNm3          = 1e3
+	m2MN          = 1e-6
+	m2yr          = 1.0 / (365.25 * 86400)
+	MPa           = 1e6
+	deg           = math.Pi / 180
+	GammaWDefault = 9.81e3 // N/m³, unit weight of water (common practice)
+)
+
+// SoilType says how a layer drains under a footing load.
+type SoilType int
+
+const (
+	// Auto: fine-grained if c_u is given, otherwise coarse-grained.
+	Auto SoilType = iota
+	Coarse
+	Fine
+)
+
+// Layer is one stratum. Top is its depth below ground level; it extends to
+// the next layer's top (the last layer extends without limit). Ranges are
+// inclusive unless marked open.
+type Layer struct {
+	Name     string
+	Type     SoilType
+	Top      float64 // m, 0–200; the first layer's top is 0
+	Gamma    float64 // bulk unit weight above the water table, N/m³, 5–30 kN/m³
+	GammaSat Opt     // saturated unit weight, N/m³, ≥ Gamma, ≤ 30 kN/m³ (default Gamma)
+	Cu       Opt     // undrained shear strength, Pa, (0, 2000] kPa
+	Phi      Opt     // effective angle of shearing resistance φ′, rad, [0, 50) deg
+	C        Opt     // effective cohesion c′, Pa, 0–500 kPa
+	Eu       Opt     // undrained Young's modulus, Pa, (0, 10000] MPa
+	E        Opt     // drained Young's modulus E′, Pa, (0, 10000] MPa
+	Nu       Opt     // Poisson's ratio, 0–0.5
+	Mv       Opt     // coefficient of volume compressibility, 1/Pa, (0, 10] m²/MN
+	Cv       Opt     // coefficient of consolidation, m²/s, (0, 10000] m²/yr
+	Cc       Opt     // compression index, (0, 10]
+	Cr       Opt     // recompression (swelling) index, (0, 10], ≤ Cc
+	E0       Opt     // initial void ratio, (0, 15]
+	SigmaP   Opt     // preconsolidation pressure σ′_p, Pa, (0, 10000] kPa
+	OCR      Opt     // overconsolidation ratio, 1–50 (alternative to SigmaP)
+	Calpha   Opt     // secondary compression index C_α, 0–1
+	N        Opt     // SPT blow count N (as measured), 0–300
+	Qc       Opt     // CPT cone resistance, Pa, (0, 100] MPa
+	Dr       Opt     // relative density (fraction), 0–1
+}
+
+// Fine reports whether the layer is treated as fine-grained (undrained in
+// the short term): its Type if set, else whether c_u is given.
+func (l Layer) Fine() bool {
+	if l.Type == Auto {
+		return l.Cu.Set
+	}
+	return l.Type == Fine
+}
+
+// GammaSatOr returns γ_sat, defaulting to γ.
+func (l Layer) GammaSatOr() float64 { return l.GammaSat.Or(l.Gamma) }
+
+// Ground is the ground model: layers from ground level down, groundwater.
+type Ground struct {
+	Name   string
+	Layers []Layer
+	Water  Opt     // depth of the groundwater table below ground level, m, 0–200; not set = no groundwater in the depth of interest
+	GammaW float64 // unit weight of water, N/m³, 9–10.5 kN/m³; 0 means GammaWDefault
+}
+
+// Gw returns the unit weight of water, applying the default.
+func (g Ground) Gw() float64 {
+	if g.GammaW == 0 {
+		return GammaWDefault
+	}
+	return g.GammaW
+}
+
+// Validate checks every layer and the water level, returning all problems.
+func (g Ground) Validate() error {
+	var errs Errors
+	if len(g.Layers) == 0 {
+		errs = append(errs, &InputError{Where: g.Name, Msg: "the ground model has no layers"})
+	}
+	for i, l := range g.Layers {
+		w := fmt.Sprintf("layer %d", i+1)
+		if l.Name != "" {
+			w = fmt.Sprintf("layer %q", l.Name)
+		}
+		if i == 0 && l.Top != 0 {
+			errs = append(errs, &InputError{Where: w, Param: "top", Msg: fmt.Sprintf("the first layer must start at ground level (top = 0 m), not %g m", l.Top)})
+		}
+		if i > 0 && l.Top <= g.Layers[i-1].Top {
+			errs = append(errs, &InputError{Where: w, Param: "top", Msg: fmt.Sprintf("layers must be listed from the top down: top %g m is not below the layer above (%g m)", l.Top, g.Layers[i-1].Top)})
+		}
+		errs.check(w, "top", l.Top, 1, 0, 200, false, "m")
+		errs.check(w, "gamma", l.Gamma, kNm3, 5, 30, false, "kN/m3")
+		if l.GammaSat.Set {
+			errs.check(w, "gamma_sat", l.GammaSat.V, kNm3, 5, 30, false, "kN/m3")
+			if l.GammaSat.V < l.Gamma {
+				errs = append(errs, &RangeError{Where: w, Param: "gamma_sat", Value: l.GammaSat.V / kNm3, Min: l.Gamma / kNm3, Max: 30, Unit: "kN/m3", Reason: "saturated unit weight cannot be less than the bulk unit weight"})
+			}
+		}
+		opt := func(name string, o Opt, scale, min, max float64, open bool, unit string) {
+			if o.Set {
+				errs.check(w, name, o.V, scale, min, max, open, unit)
+			}
+		}
+		opt("c_u", l.Cu, kPa, 0, 2000, true, "kPa")
+		if l.Phi.Set && l.Phi.V/deg >= 50 {
+			errs = append(errs, &RangeError{Where: w, Param: "phi'", Value: l.Phi.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it and the factors are meaningless there"})
+		} else {
+			opt("phi'", l.Phi, deg, 0, 50, false, "deg")
+		}
+		opt("c'", l.C, kPa, 0, 500, false, "kPa")
+		opt("E_u", l.Eu, MPa, 0, 10000, true, "MPa")
+		opt("E'", l.E, MPa, 0, 10000, true, "MPa")
+		opt("nu", l.Nu, 1, 0, 0.5, false, "")
+		opt("m_v", l.Mv, m2MN, 0, 10, true, "m2/MN")
+		opt("c_v", l.Cv, m2yr, 0, 10000, true, "m2/yr")
+		opt("C_c", l.Cc, 1, 0, 10, true, "")
+		opt("C_r", l.Cr, 1, 0, 10, true, "")
+		if l.Cr.Set && l.Cc.Set && l.Cr.V > l.Cc.V {
+			errs = append(errs, &RangeError{Where: w, Param: "C_r", Value: l.Cr.V, Min: 0, Max: l.Cc.V, Reason: "the recompression index cannot exceed the compression index"})
+		}
+		opt("e_0", l.E0, 1, 0, 15, true, "")
+		opt("sigma'_p", l.SigmaP, kPa, 0, 10000, true, "kPa")
+		opt("OCR", l.OCR, 1, 1, 50, false, "")
+		opt("C_alpha", l.Calpha, 1, 0, 1, false, "")
+		opt("N", l.N, 1, 0, 300, false, "")
+		opt("q_c", l.Qc, MPa, 0, 100, true, "MPa")
+		opt("D_r", l.Dr, 1, 0, 1, false, "")
+	}
+	if g.Water.Set {
+		errs.check(g.Name, "water", g.Water.V, 1, 0, 200, false, "m")
+	}
+	if g.GammaW != 0 {
+		errs.check(g.Name, "gamma_w", g.GammaW, kNm3, 9, 10.5, false, "kN/m3")
+	}
+	return errs.Err()
+}
+
+// At returns the index of the layer containing depth z (a depth exactly at
+// a boundary belongs to the layer below it).
+func (g Ground) At(z float64) int {
+	i := sort.Search(len(g.Layers), func(i int) bool { return g.Layers[i].Top > z }) - 1
+	if i < 0 {
+		i = 0
+	}
+	return i
+}
+
+// Bottom returns the depth of the bottom of layer i (+Inf for the last).
+func (g Ground) Bottom(i int) float64 {
+	if i+1 < len(g.Layers) {
+		return g.Layers[i+1].Top
+	}
+	return math.Inf(1)
+}
+
+// SigmaV returns the total vertical stress at depth z (Pa): the sum of
+// γ·thickness above the water table and γ_sat·thickness below it, layer by
+// layer (common practice).
+func (g Ground) SigmaV(z float64) float64 {
+	var s float64
+	w := math.Inf(1)
+	if g.Water.Set {
+		w = g.Water.V
+	}
+	for i, l := range g.Layers {
+		top, bot := l.Top, math.Min(g.Bottom(i), z)
+		if top >= z {
+			break
+		}
+		dry := math.Max(0, math.Min(bot, w)-top)
+		wet := (bot - top) - dry
+		s += dry*l.Gamma + wet*l.GammaSatOr()
+	}
+	return s
+}
+
+// PoreP returns the hydrostatic pore pressure at depth z (Pa).
+func (g Ground) PoreP(z float64) float64 {
+	if !g.Water.Set || z <= g.Water.V {
+		return 0
+	}
+	return (z - g.Water.V) * g.Gw()
+}
+
+// SigmaVEff returns the vertical effective stress σ′_v = σ_v − u at z (Pa).
+func (g Ground) SigmaVEff(z float64) float64 { return g.SigmaV(z) - g.PoreP(z) }

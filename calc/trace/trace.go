@@ -1,0 +1,191 @@
+package trace
+
+import (
+	"errors"
+	"fmt"
+	"math"
+)
+
+// Value is one number used in or produced by a step: SI value, and the
+// unit to display it in ("" for a pure number; any name calc/units parses).
+type Value struct {
+	Symbol string
+	V      float64
+	Unit   string
+}
+
+// Source is a publication an engine method comes from. Key is short and
+// unique across the engine ("EN1997-1", "Vesic1973"); Citation is the full
+// reference as printed in the references list.
+type Source struct {
+	Key      string
+	Citation string
+}
+
+// Ref points at a place in a Source: Clause is a clause, equation, table
+// or page ("Annex D, D.4", "eq. (4.7)", "Table 4.1").
+type Ref struct {
+	Source Source
+	Clause string
+}
+
+// Step is one computed (or taken) value, in the order of computation.
+type Step struct {
+	Symbol  string  // sheet notation: "N_q", "phi'_d", "B'"
+	Formula Expr    // nil when the value is taken as given or read from a table
+	Inputs  []Value // every symbol in Formula with the value substituted
+	Value   float64 // SI
+	Unit    string  // display unit ("" = dimensionless)
+	Ref     Ref     // where the formula comes from (zero if none applies)
+	Note    string  // a few words: "bearing capacity factor"
+	Case    string  // the case it belongs to ("" = common to all)
+}
+
+// Severity ranks a caution. The document boxes them with the words NOTE,
+// WARNING and CAUTION.
+type Severity int
+
+const (
+	SevNote Severity = iota
+	SevWarning
+	SevCaution
+)
+
+func (s Severity) String() string {
+	switch s {
+	case SevWarning:
+		return "WARNING"
+	case SevCaution:
+		return "CAUTION"
+	}
+	return "NOTE"
+}
+
+// Caution records a method near or past its limits, or an input that needs
+// the engineer's attention. Step is the index of the step that raised it
+// (-1 for the calculation as a whole).
+type Caution struct {
+	Code     string // stable identifier, e.g. "ecc-b6"
+	Severity Severity
+	Message  string
+	Values   []Value // the values that triggered it
+	Step     int
+	Ref      Ref
+	Case     string
+}
+
+// Trace is the ordered working of one calculation.
+type Trace struct {
+	Steps    []Step
+	Cautions []Caution
+	Sources  []Source
+}
+
+// Add appends s, cites its source and returns its value, so calculations
+// read as v := t.Add(trace.Step{...}).
+func (t *Trace) Add(s Step) float64 {
+	t.Steps = append(t.Steps, s)
+	t.Cite(s.Ref.Source)
+	return s.Value
+}
+
+// Cite adds src to the sources list unless it is empty or already there.
+func (t *Trace) Cite(src Source) {
+	if src.Key == "" {
+		return
+	}
+	for _, s := range t.Sources {
+		if s.Key == src.Key {
+			return
+		}
+	}
+	t.Sources = append(t.Sources, src)
+}
+
+// Warn records a caution raised by the latest step (Step is set to the
+// index of the last step unless c.Step is already positive).
+func (t *Trace) Warn(c Caution) {
+	if c.Step <= 0 {
+		c.Step = len(t.Steps) - 1
+	}
+	t.Cite(c.Ref.Source)
+	t.Cautions = append(t.Cautions, c)
+}
+
+// Append adds all of u to t, shifting u's step indices. A non-empty
+// caseName labels every appended step and caution that has no case yet.
+func (t *Trace) Append(u Trace, caseName string) {
+	off := len(t.Steps)
+	for _, s := range u.Steps {
+		if s.Case == "" {
+			s.Case = caseName
+		}
+		t.Steps = append(t.Steps, s)
+	}
+	for _, c := range u.Cautions {
+		if c.Step >= 0 {
+			c.Step += off
+		}
+		if c.Case == "" {
+			c.Case = caseName
+		}
+		t.Cautions = append(t.Cautions, c)
+	}
+	for _, s := range u.Sources {
+		t.Cite(s)
+	}
+}
+
+// Verify replays every step: each symbol of a formula has an input, each
+// formula reproduces its step's value to within rel (relative, with an
+// absolute floor of rel for values near zero), no value is NaN or Inf, and
+// every source cited by a step or caution is in Sources. Steps with opaque
+// functions are checked for inputs only.
+func Verify(t Trace, rel float64) error {
+	var errs []error
+	cited := map[string]bool{}
+	for _, s := range t.Sources {
+		cited[s.Key] = true
+	}
+	for i, s := range t.Steps {
+		if math.IsNaN(s.Value) || math.IsInf(s.Value, 0) {
+			errs = append(errs, fmt.Errorf("step %d %s: value %v", i, s.Symbol, s.Value))
+		}
+		if k := s.Ref.Source.Key; k != "" && !cited[k] {
+			errs = append(errs, fmt.Errorf("step %d %s: source %s not in Sources", i, s.Symbol, k))
+		}
+		if s.Formula == nil {
+			continue
+		}
+		have := map[string]bool{"pi": true}
+		for _, in := range s.Inputs {
+			have[in.Symbol] = true
+		}
+		for _, name := range Symbols(s.Formula) {
+			if !have[name] {
+				errs = append(errs, fmt.Errorf("step %d %s: formula uses %s with no input value", i, s.Symbol, name))
+			}
+		}
+		v, err := Eval(s.Formula, s.Inputs)
+		var op ErrOpaque
+		if errors.As(err, &op) {
+			continue
+		}
+		if err != nil {
+			errs = append(errs, fmt.Errorf("step %d %s: %v", i, s.Symbol, err))
+			continue
+		}
+		if d := math.Abs(v - s.Value); d > rel*math.Max(math.Abs(s.Value), 1) && d > rel*math.Abs(v) {
+			errs = append(errs, fmt.Errorf("step %d %s: formula gives %.10g, step says %.10g", i, s.Symbol, v, s.Value))
+		}
+	}
+	for i, c := range t.Cautions {
+		if k := c.Ref.Source.Key; k != "" && !cited[k] {
+			errs = append(errs, fmt.Errorf("caution %d %s: source %s not in Sources", i, c.Code, k))
+		}
+		if c.Step >= len(t.Steps) {
+			errs = append(errs, fmt.Errorf("caution %d %s: step %d out of range", i, c.Code, c.Step))
+		}
+	}
+	return errors.Join(errs...)
+}
