@@ -1,0 +1,76 @@
+package site_test
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"plinth/calc/site"
+)
+
+const kN = 1e3
+
+func clay() site.Ground {
+	return site.Ground{
+		Name:  "site",
+		Water: site.Some(2.0),
+		Layers: []site.Layer{
+			{Name: "Made ground", Top: 0, Gamma: 18 * kN},
+			{Name: "Firm clay", Top: 0.6, Gamma: 19 * kN, GammaSat: site.Some(20 * kN), Cu: site.Some(60e3)},
+		},
+	}
+}
+
+// Hand calculation (common practice): σ_v(3 m) = 0.6×18 + 1.4×19 + 1.0×20
+// = 57.4 kPa; u = 1.0×9.81 = 9.81 kPa; σ′_v = 47.59 kPa.
+func TestStresses(t *testing.T) {
+	g := clay()
+	for _, c := range []struct {
+		name string
+		got  float64
+		want float64
+	}{
+		{"SigmaV(3)", g.SigmaV(3), 57.4e3},
+		{"PoreP(3)", g.PoreP(3), 9.81e3},
+		{"SigmaVEff(3)", g.SigmaVEff(3), 47.59e3},
+		{"SigmaV(0.3)", g.SigmaV(0.3), 5.4e3},
+		{"PoreP(1)", g.PoreP(1), 0},
+	} {
+		if math.Abs(c.got-c.want) > 1e-6 {
+			t.Errorf("%s = %v, want %v", c.name, c.got, c.want)
+		}
+	}
+	if g.At(0.6) != 1 || g.At(0.59) != 0 || g.At(50) != 1 {
+		t.Error("At: wrong layer")
+	}
+	if !g.Layers[1].Fine() || g.Layers[0].Fine() {
+		t.Error("Fine: c_u given should mean fine-grained")
+	}
+}
+
+func TestValidate(t *testing.T) {
+	if err := clay().Validate(); err != nil {
+		t.Fatal(err)
+	}
+	g := clay()
+	g.Layers[0].Top = 0.5
+	g.Layers[1].Phi = site.Some(52 * math.Pi / 180)
+	g.Layers[1].GammaSat = site.Some(18 * kN)
+	err := g.Validate()
+	for _, want := range []string{
+		"must start at ground level",
+		"phi' = 52 deg is outside the valid range 0 to 50 deg",
+		"gamma_sat = 18 kN/m3 is outside the valid range 19 to 30 kN/m3",
+	} {
+		if err == nil || !strings.Contains(err.Error(), want) {
+			t.Errorf("Validate() = %v, want it to contain %q", err, want)
+		}
+	}
+	f := site.Footing{Name: "P1", Shape: site.Rectangle, B: 3, L: 2, D: -1}
+	err = f.Validate()
+	for _, want := range []string{"B is the shorter side", "D = -1 m is outside"} {
+		if err == nil || !strings.Contains(err.Error(), want) {
+			t.Errorf("Footing.Validate() = %v, want %q", err, want)
+		}
+	}
+}
