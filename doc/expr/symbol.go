@@ -1,0 +1,50 @@
+package expr
+
+import "strings"
+
+// SplitSymbol splits a symbol for typesetting. The text before the first
+// "_" is the base, the rest the subscript with further "_" shown as commas;
+// primes are counted wherever they end the base or the subscript:
+//
+//	gamma_sat  → ("gamma", 0, "sat")
+//	q_ult_net  → ("q", 0, "ult,net")
+//	phi'_d     → ("phi", 1, "d")
+//	sigma_v'   → ("sigma", 1, "v")
+//	B'         → ("B", 1, "")
+//
+// For a block result (F1.R_d) only the part after the last "." is split;
+// the prefix stays at the front of base: ("F1.R", 0, "d").
+func SplitSymbol(name string) (base string, primes int, sub string) {
+	prefix := ""
+	if i := strings.LastIndexByte(name, '.'); i >= 0 {
+		prefix, name = name[:i+1], name[i+1:]
+	}
+	base, sub, _ = strings.Cut(name, "_")
+	trimmed := strings.TrimRight(base, "'")
+	primes = len(base) - len(trimmed)
+	base = trimmed
+	trimmed = strings.TrimRight(sub, "'")
+	primes += len(sub) - len(trimmed)
+	sub = strings.ReplaceAll(trimmed, "_", ",")
+	return prefix + base, primes, sub
+}
+
+var greek = map[string]string{
+	"alpha": "α", "beta": "β", "gamma": "γ", "delta": "δ", "epsilon": "ε",
+	"zeta": "ζ", "eta": "η", "theta": "θ", "iota": "ι", "kappa": "κ",
+	"lambda": "λ", "mu": "μ", "nu": "ν", "xi": "ξ", "omicron": "ο",
+	"pi": "π", "rho": "ρ", "sigma": "σ", "tau": "τ", "upsilon": "υ",
+	"phi": "φ", "chi": "χ", "psi": "ψ", "omega": "ω",
+	"Alpha": "Α", "Beta": "Β", "Gamma": "Γ", "Delta": "Δ", "Epsilon": "Ε",
+	"Zeta": "Ζ", "Eta": "Η", "Theta": "Θ", "Iota": "Ι", "Kappa": "Κ",
+	"Lambda": "Λ", "Mu": "Μ", "Nu": "Ν", "Xi": "Ξ", "Omicron": "Ο",
+	"Pi": "Π", "Rho": "Ρ", "Sigma": "Σ", "Tau": "Τ", "Upsilon": "Υ",
+	"Phi": "Φ", "Chi": "Χ", "Psi": "Ψ", "Omega": "Ω",
+}
+
+// Greek returns the Greek letter for a spelled-out base ("gamma" → "γ",
+// "Gamma" → "Γ", "pi" → "π"); false when base is not a letter name.
+func Greek(base string) (string, bool) {
+	g, ok := greek[base]
+	return g, ok
+}
