@@ -1,0 +1,410 @@
+package bearing
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// geo is the effective geometry and load of one case.
+type geo struct {
+	strip, circC bool // strip; Terzaghi circle under central load (diameter used)
+	Bp, Lp, Ap   float64
+	Bf, D, alpha float64
+	V, H         float64
+	eB, eL       float64
+	noDepth      bool // no depth factors (lower layer, load spread)
+}
+
+// soil is the design strength of one layer in one case.
+type soil struct {
+	und           bool
+	cu, c, phi    float64
+	gam, q        float64 // unit weight of the N_γ term; overburden (q or q′)
+	layer         int
+	local         bool
+	phiClamp      bool
+	kPhi, kC, kCu string // characteristic symbols
+	nPhi, nC, nCu string // design symbols
+}
+
+var (
+	gPhi = "gamma_phi"
+	gC   = "gamma_c"
+	gCu  = "gamma_cu"
+)
+
+// Formulas that do not depend on the input, built once.
+var (
+	fRkUlt  = mul(sym("q_ult"), sym("A'"))
+	fRkLim  = mul(sym("q_lim"), sym("A'"))
+	fRd     = div(sym("R_k"), sym("gamma_Rv"))
+	fQEd    = div(sym("V_d"), sym("A'"))
+	fQRd    = div(sym("R_d"), sym("A'"))
+	fUtil   = div(sym("V_d"), sym("R_d"))
+	fHd     = fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2))))
+	feB     = div(fn("abs", sym("M_B_d")), sym("V_d"))
+	feL     = div(fn("abs", sym("M_L_d")), sym("V_d"))
+	fBpB    = sub(sym("B"), mul(num(2), sym("e_B")))
+	fBpL    = sub(sym("L"), mul(num(2), sym("e_L")))
+	fApStr  = sym("B'")
+	fApRect = mul(sym("B'"), sym("L'"))
+	fBeta   = fn("atan", div(sym("H_d"), sym("V_d")))
+	fk1     = div(sym("D"), sym("B"))
+	fk2     = fn("atan", div(sym("D"), sym("B")))
+	fThB    = fn("atan2", fn("abs", sym("H_B_d")), fn("abs", sym("H_L_d")))
+	fThL    = fn("atan2", fn("abs", sym("H_L_d")), fn("abs", sym("H_B_d")))
+	fIdent  = map[string]expr{"sigma_v0": sym("sigma_v0"), "sigma'_v0": sym("sigma'_v0"), "gamma'_k": sym("gamma'_k")}
+	fSoil   = map[soilKey]expr{}
+)
+
+// soilForm returns the design-value formula of characteristic symbol k
+// with partial factor g, for an angle (tan) or a strength, with or without
+// the local-shear ⅔. The table is built at start-up and only read after.
+func soilForm(k, g string, angle, local bool) expr {
+	return fSoil[soilKey{k, g, angle, local}]
+}
+
+type soilKey struct {
+	k, g         string
+	angle, local bool
+}
+
+func init() {
+	for _, k := range []struct {
+		k, g  string
+		angle bool
+	}{{"phi'_k", gPhi, true}, {"phi'_2k", gPhi, true}, {"c'_k", gC, false}, {"c'_2k", gC, false}, {"c_u_k", gCu, false}, {"c_u_2k", gCu, false}} {
+		for _, local := range []bool{false, true} {
+			var f expr
+			switch {
+			case k.angle && local:
+				f = fn("atan", div(mul(num(2.0/3), fn("tan", sym(k.k))), sym(k.g)))
+			case k.angle:
+				f = fn("atan", div(fn("tan", sym(k.k)), sym(k.g)))
+			case local:
+				f = div(mul(num(2.0/3), sym(k.k)), sym(k.g))
+			default:
+				f = div(sym(k.k), sym(k.g))
+			}
+			fSoil[soilKey{k.k, k.g, k.angle, local}] = f
+		}
+	}
+}
+
+// phiMin is the least φ′ used in a drained formula: the factors are then
+// their φ′ → 0 limits to within 1e-8 without dividing by tan 0.
+const phiMin = 1e-4
+
+// bearingCase checks one design load under one drainage condition.
+func (c *calc) bearingCase(ld design.Load, d Drainage) {
+	name := ld.Name + " · " + d.String()
+	c.cas = name
+	c.hcLim = false
+	c.pf = [4]bool{}
+	start := len(c.t.Steps)
+	ld.Record(c.t, c.acts, name, c.uF, c.uM)
+	if ld.V <= 0 {
+		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		return
+	}
+	g, ok := c.geometry(ld, false)
+	cs := Case{Name: name, Combination: ld.Name, Drainage: d, V: ld.V, H: g.H, EB: g.eB, EL: g.eL}
+	if !ok {
+		cs.Util = c.take("util", UtilCap, "", trace.Ref{}, "no effective area: the check fails")
+		cs.Factors = c.factors(start)
+		c.r.Cases = append(c.r.Cases, cs)
+		return
+	}
+	cs.B, cs.A = g.Bp, g.Ap
+	if !g.strip {
+		cs.L = g.Lp
+	}
+	fl := c.g.Layers[c.fi]
+	und := undrainedIn(fl, d)
+	s := c.designSoil(c.fi, und, ld.Set.Material, false)
+	gg := ld.Set.Material.GammaGamma
+	if und {
+		s.q = c.overStep("q", "sigma_v0", c.sv0, gg, "total overburden at the base")
+	} else {
+		s.q = c.overStep("q'", "sigma'_v0", c.sv0e, gg, "effective overburden at the base")
+		s.gam = c.overStep("gamma'", "gamma'_k", c.gEffK, gg, "unit weight in the N_γ term")
+	}
+	qult := c.resist(c.opt.Method, fMain, s, &g)
+	qsym, qlim := "q_ult", qult
+	if c.weak >= 0 {
+		if tl, q := c.twoLayer(ld, d, &g, s, qult); tl != nil {
+			cs.TwoLayer = tl
+			qsym, qlim = "q_lim", q
+		}
+	}
+	cs.QUlt = qlim
+	vA, vV := val("A'", g.Ap, c.uA), val("V_d", ld.V, c.uF)
+	vq := val(qsym, qlim, "kPa")
+	fRk := fRkUlt
+	if qsym == "q_lim" {
+		fRk = fRkLim
+	}
+	rk := c.step("R_k", fRk, qlim*g.Ap, c.uF, ref652, "characteristic bearing resistance", vq, vA)
+	var rd float64
+	if c.ap.Allowable() {
+		q0, q0s := s.q, "q'"
+		if und {
+			q0s = "q"
+		}
+		rd = g.Ap * ((qlim-q0)/c.ap.FS + q0)
+		c.step("R_d", mul(sym("A'"), add(div(sub(sym(qsym), sym(q0s)), sym("FS")), sym(q0s))), rd, c.uF, trace.Ref{},
+			"allowable bearing resistance: net ultimate pressure over FS plus overburden (common practice)", vA, vq, val(q0s, q0, "kPa"), val("FS", c.ap.FS, ""))
+	} else {
+		grv := c.take("gamma_Rv", ld.Set.Resistance.GammaRv, "", refA5, "partial factor on bearing resistance ("+ld.Set.Resistance.Name+")")
+		rd = c.step("R_d", fRd, rk/grv, c.uF, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design bearing resistance", val("R_k", rk, c.uF), val("gamma_Rv", grv, ""))
+	}
+	cs.R = rd
+	cs.QEd = c.step("q_Ed", fQEd, ld.V/g.Ap, "kPa", ref652, "design bearing pressure on the effective area", vV, vA)
+	cs.QRd = c.step("q_Rd", fQRd, rd/g.Ap, "kPa", ref652, "design bearing resistance as a pressure", val("R_d", rd, c.uF), vA)
+	switch {
+	case rd <= 0:
+		cs.Util = c.take("util", UtilCap, "", trace.Ref{}, "no bearing resistance: the check fails")
+	case c.hcLim:
+		u := math.Max(ld.V/rd, g.H/(g.Ap*s.cu))
+		cs.Util = c.step("util", fn("max", div(sym("V_d"), sym("R_d")), div(sym("H_d"), mul(sym("A'"), sym("c_u_d")))), u, "", refD3,
+			"utilisation: H_d exceeds A′c_u,d, the limit of D.3", vV, val("R_d", rd, c.uF), val("H_d", g.H, c.uF), vA, val("c_u_d", s.cu, "kPa"))
+	default:
+		cs.Util = c.step("util", fUtil, ld.V/rd, "", ref652, "utilisation V_d/R_d", vV, val("R_d", rd, c.uF))
+	}
+	cs.Util = math.Min(cs.Util, UtilCap)
+	cs.OK = cs.Util <= 1+1e-12
+	cs.Factors = c.factors(start)
+	c.r.Cases = append(c.r.Cases, cs)
+}
+
+// overStep records q = σ/γ_γ (the identity when γ_γ = 1).
+func (c *calc) overStep(s, from string, v, gg float64, note string) float64 {
+	unit := "kPa"
+	if strings.HasPrefix(s, "gamma") {
+		unit = "kN/m3"
+	}
+	if gg == 1 {
+		return c.step(s, fIdent[from], v, unit, trace.Ref{}, note, val(from, v, unit))
+	}
+	if !c.pf[3] {
+		c.pf[3] = true
+		c.take("gamma_gamma", gg, "", refA4, "partial factor on unit weight")
+	}
+	return c.step(s, div(sym(from), sym("gamma_gamma")), v/gg, unit, refMat, note, val(from, v, unit), val("gamma_gamma", gg, ""))
+}
+
+// factors collects every factor recorded since step start.
+func (c *calc) factors(start int) map[string]float64 {
+	m := make(map[string]float64, 24)
+	for _, s := range c.t.Steps[start:] {
+		if isFactor(s.Symbol) {
+			m[s.Symbol] = s.Value
+		}
+	}
+	return m
+}
+
+func isFactor(s string) bool {
+	switch s {
+	case "m", "k", "r_q", "r_a", "gamma_G_sup", "gamma_G_inf", "gamma_Q", "gamma_phi", "gamma_c", "gamma_cu", "gamma_gamma", "gamma_Rv", "gamma_Rh", "FS":
+		return true
+	}
+	for _, p := range []string{"N_", "s_", "d_", "i_", "b_", "s'_", "d'_", "i'_", "b'_", "m_", "K_", "psi_0_"} {
+		if strings.HasPrefix(s, p) {
+			return true
+		}
+	}
+	return false
+}
+
+// geometry records H_d, the eccentricities and the effective dimensions
+// of one case. ok is false when the resultant lies outside the base.
+// quiet suppresses the eccentricity cautions (they were raised by the
+// bearing case of the same load).
+func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
+	f := c.f
+	g := geo{strip: f.Shape == site.Strip, Bf: f.B, D: f.D, alpha: f.Alpha, V: ld.V}
+	vV, vB := val("V_d", ld.V, c.uF), val("B", f.B, "m")
+	if ld.HB != 0 || ld.HL != 0 {
+		g.H = math.Hypot(ld.HB, ld.HL)
+		c.step("H_d", fHd, g.H, c.uF, trace.Ref{}, "resultant horizontal action",
+			val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
+	} else {
+		c.take("H_d", 0, c.uF, trace.Ref{}, "no horizontal action")
+	}
+	g.eB = c.step("e_B", feB, math.Abs(ld.MB)/ld.V, "m", refD1, "eccentricity along B", val("M_B_d", ld.MB, c.uM), vV)
+	if !g.strip {
+		g.eL = c.step("e_L", feL, math.Abs(ld.ML)/ld.V, "m", refD1, "eccentricity along L", val("M_L_d", ld.ML, c.uM), vV)
+	}
+	var e, lim6, lim3, edge float64
+	var what string
+	switch f.Shape {
+	case site.Circle:
+		e = math.Hypot(g.eB, g.eL)
+		lim6, lim3, edge, what = f.B/8, 0.3*f.B, f.B/2, "r/4 (kern of a circle)"
+	default:
+		e = math.Max(g.eB/f.B, g.eL/f.L) * f.B
+		if g.strip {
+			e = g.eB
+		}
+		lim6, lim3, edge, what = f.B/6, f.B/3, f.B/2, "B/6 (middle third)"
+	}
+	if e >= edge {
+		c.warn("ecc-out", trace.SevCaution, ref654, fmt.Sprintf("%s: the resultant lies at or outside the edge of the base (e = %.3f m): the footing overturns and has no bearing resistance.", c.cas, e), val("e", e, "m"))
+		return g, false
+	}
+	if !quiet {
+		if e > lim3 {
+			lim := "B/3"
+			if f.Shape == site.Circle {
+				lim = "0.6 r"
+			}
+			c.warn("ecc-b3", trace.SevCaution, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
+		} else if e > lim6 {
+			c.warn("ecc-b6", trace.SevWarning, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
+		}
+	}
+	switch {
+	case g.strip:
+		g.Bp = c.step("B'", fBpB, f.B-2*g.eB, "m", refMey53, "effective width", vB, val("e_B", g.eB, "m"))
+		g.Ap = c.step("A'", fApStr, g.Bp, c.uA, refD1, "effective area per metre run", val("B'", g.Bp, "m"))
+	case f.Shape == site.Circle:
+		c.circle(&g, e)
+	default:
+		b1, l1 := f.B-2*g.eB, f.L-2*g.eL
+		vL, veB, veL := val("L", f.L, "m"), val("e_B", g.eB, "m"), val("e_L", g.eL, "m")
+		fb, fl := fBpB, fBpL
+		if b1 <= l1 {
+			g.Bp = c.step("B'", fb, b1, "m", refMey53, "effective width", vB, veB)
+			g.Lp = c.step("L'", fl, l1, "m", refMey53, "effective length", vL, veL)
+		} else {
+			g.Bp = c.step("B'", fl, l1, "m", refMey53, "effective width (the shorter effective side, along L)", vL, veL)
+			g.Lp = c.step("L'", fb, b1, "m", refMey53, "effective length (along B)", vB, veB)
+		}
+		g.Ap = c.step("A'", fApRect, g.Bp*g.Lp, c.uA, refD1, "effective area", val("B'", g.Bp, "m"), val("L'", g.Lp, "m"))
+	}
+	if g.H > 0 {
+		c.step("beta", fBeta, math.Atan(g.H/ld.V), "deg", trace.Ref{}, "inclination of the load from the vertical", val("H_d", g.H, c.uF), vV)
+		if !quiet && g.H/ld.V > 0.3 {
+			c.warn("hv-large", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
+		}
+		if !g.strip && (c.opt.Method == EC7 || c.opt.Method == Vesic) {
+			c.theta(&g, ld)
+		}
+	}
+	if (c.opt.Method == Hansen || c.opt.Method == Vesic) && !g.noDepth {
+		vD := val("D", f.D, "m")
+		if f.D <= f.B {
+			c.step("k", fk1, f.D/f.B, "", refHan70, "depth ratio (D/B ≤ 1)", vD, vB)
+		} else {
+			c.step("k", fk2, math.Atan(f.D/f.B), "", refHan70, "depth ratio, arctan(D/B) in radians (D/B > 1)", vD, vB)
+		}
+	}
+	return g, true
+}
+
+// circle records the effective area of a circular base (the segment
+// inside the chord at distance e from the centre) and its equivalent
+// rectangle (API RP 2GEO, after API RP 2A); with a central load and the
+// Terzaghi method the diameter itself is used.
+func (c *calc) circle(g *geo, e float64) {
+	f := c.f
+	vB := val("B", f.B, "m")
+	if c.opt.Method == Terzaghi && e == 0 {
+		g.circC = true
+		g.Bp = c.step("B'", sym("B"), f.B, "m", refTerz, "diameter (Terzaghi's circular footing)", vB)
+		g.Lp = c.step("L'", sym("B"), f.B, "m", refTerz, "diameter", vB)
+		g.Ap = c.step("A'", div(mul(sym("pi"), pow(sym("B"), num(2))), num(4)), math.Pi*f.B*f.B/4, c.uA, refTerz, "area of the circle", vB)
+		return
+	}
+	R := c.step("R", div(sym("B"), num(2)), f.B/2, "m", trace.Ref{}, "radius", vB)
+	vR := val("R", R, "m")
+	e = c.step("e", fn("sqrt", add(pow(sym("e_B"), num(2)), pow(sym("e_L"), num(2)))), e, "m", refCircle, "resultant eccentricity", val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+	ve := val("e", e, "m")
+	A := 2 * (R*R*math.Acos(e/R) - e*math.Sqrt(R*R-e*e))
+	g.Ap = c.step("A'", mul(num(2), sub(mul(pow(sym("R"), num(2)), fn("acos", div(sym("e"), sym("R")))), mul(sym("e"), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))))),
+		A, c.uA, refCircle, "effective area (circular segment)", vR, ve)
+	be := c.step("b_e", mul(num(2), sub(sym("R"), sym("e"))), 2*(R-e), "m", refCircle, "width of the effective segment", vR, ve)
+	le := c.step("l_e", mul(num(2), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))), 2*math.Sqrt(R*R-e*e), "m", refCircle, "chord length of the effective segment", vR, ve)
+	vA, vbe, vle := val("A'", A, c.uA), val("b_e", be, "m"), val("l_e", le, "m")
+	g.Lp = c.step("L'", fn("sqrt", div(mul(sym("A'"), sym("l_e")), sym("b_e"))), math.Sqrt(A*le/be), "m", refCircle, "equivalent effective length", vA, vle, vbe)
+	g.Bp = c.step("B'", div(mul(sym("L'"), sym("b_e")), sym("l_e")), g.Lp*be/le, "m", refCircle, "equivalent effective width", val("L'", g.Lp, "m"), vbe, vle)
+}
+
+// theta records the angle of H to the direction of L′ (EN 1997-1 D.4).
+func (c *calc) theta(g *geo, ld design.Load) {
+	vHB, vHL := val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF)
+	HB, HL := math.Abs(ld.HB), math.Abs(ld.HL)
+	note := "angle of H_d to the direction of L′"
+	switch {
+	case c.f.Shape == site.Circle && (g.eB != 0 || g.eL != 0):
+		// B′ lies along the resultant eccentricity
+		hb := math.Abs(ld.HB*g.eB + ld.HL*g.eL)
+		hl := math.Abs(ld.HL*g.eB - ld.HB*g.eL)
+		c.step("theta", fn("atan2", fn("abs", add(mul(sym("H_B_d"), sym("e_B")), mul(sym("H_L_d"), sym("e_L")))), fn("abs", sub(mul(sym("H_L_d"), sym("e_B")), mul(sym("H_B_d"), sym("e_L"))))),
+			math.Atan2(hb, hl), "deg", refD4, note+" (B′ along the eccentricity)", vHB, vHL, val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+	case c.f.Shape != site.Circle && c.f.B-2*g.eB > c.f.L-2*g.eL:
+		c.step("theta", fThL, math.Atan2(HL, HB), "deg", refD4, note+" (B′ lies along L)", vHB, vHL)
+	default:
+		c.step("theta", fThB, math.Atan2(HB, HL), "deg", refD4, note, vHB, vHL)
+	}
+}
+
+// designSoil records the design strength of layer i: for the founding
+// layer (lower = false) with Terzaghi's local-shear reduction when it
+// applies, φ′_d = atan(tan φ′_k / γ_φ′), c′_d = c′_k/γ_c′, c_u,d =
+// c_u,k/γ_cu (EN 1997-1 2.4.6.2).
+func (c *calc) designSoil(i int, und bool, mat design.MaterialSet, lower bool) soil {
+	l := c.g.Layers[i]
+	s := soil{und: und, layer: i, local: c.local && !lower}
+	s.kPhi, s.kC, s.kCu, s.nPhi, s.nC, s.nCu = "phi'_k", "c'_k", "c_u_k", "phi'_d", "c'_d", "c_u_d"
+	if lower {
+		s.kPhi, s.kC, s.kCu, s.nPhi, s.nC, s.nCu = "phi'_2k", "c'_2k", "c_u_2k", "phi'_2", "c'_2", "c_u_2"
+	}
+	ln := c.lname[i]
+	red := 1.0
+	ref := refMat
+	note := "design value"
+	if s.local {
+		red, ref, note = 2.0/3, refLocal, "design value with Terzaghi's local-shear reduction"
+	}
+	if und {
+		c.take(s.kCu, l.Cu.V, "kPa", trace.Ref{}, "characteristic undrained strength of "+ln)
+		g := c.pfStep(2, gCu, mat.GammaCu, mat.Name)
+		f := soilForm(s.kCu, gCu, false, s.local)
+		s.cu = c.step(s.nCu, f, red*l.Cu.V/g, "kPa", ref, note, val(s.kCu, l.Cu.V, "kPa"), val(gCu, g, ""))
+		return s
+	}
+	phik := l.Phi.V
+	c.take(s.kPhi, phik, "deg", trace.Ref{}, "characteristic angle of shearing resistance of "+ln)
+	g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
+	phi := math.Atan(red * math.Tan(phik) / g)
+	f := soilForm(s.kPhi, gPhi, true, s.local)
+	if phi < phiMin {
+		phi, s.phiClamp = phiMin, true
+		f = fn("max", f, num(phiMin))
+		note += "; φ′ ≈ 0 is replaced by 0.0001 rad so the factors take their φ′ → 0 limits"
+	}
+	s.phi = c.step(s.nPhi, f, phi, "deg", ref, note, val(s.kPhi, phik, "deg"), val(gPhi, g, ""))
+	ck := l.C.Or(0)
+	c.take(s.kC, ck, "kPa", trace.Ref{}, "characteristic effective cohesion of "+ln)
+	gc := c.pfStep(1, gC, mat.GammaC, mat.Name)
+	fc := soilForm(s.kC, gC, false, s.local)
+	s.c = c.step(s.nC, fc, red*ck/gc, "kPa", ref, note, val(s.kC, ck, "kPa"), val(gC, gc, ""))
+	return s
+}
+
+// pfStep records a material partial factor once per case.
+func (c *calc) pfStep(k int, s string, v float64, set string) float64 {
+	if !c.pf[k] {
+		c.pf[k] = true
+		what := [...]string{"on tan φ′", "on c′", "on c_u"}[k]
+		c.take(s, v, "", refA4, "partial factor "+what+" ("+set+")")
+	}
+	return v
+}

@@ -1,0 +1,290 @@
+package bearing
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// calc carries one calculation: input, trace, and what the common steps
+// found.
+type calc struct {
+	in    Input
+	opt   Options
+	ap    design.Approach
+	g     site.Ground
+	f     site.Footing
+	acts  []site.Action
+	t     *trace.Trace
+	cas   string
+	arena []trace.Value
+	r     *Result
+
+	uF, uM, uA string // display units of forces, moments, areas
+
+	fi    int     // founding layer
+	weak  int     // weakest lower layer within 2B below the base (-1 none)
+	zw    float64 // water depth (+Inf when none)
+	sv0   float64 // σ_v0 at the base
+	u0    float64
+	sv0e  float64
+	gEffK float64 // γ′ of the N_γ term, founding layer
+	local bool    // Terzaghi's local shear applies to the founding layer
+	hcLim bool    // the current undrained case has H_d > A′c_u,d
+	pf    [4]bool // partial factors γ_φ′, γ_c′, γ_cu, γ_γ recorded in this case
+	once  []string
+	lname []string // layer names as printed
+}
+
+// Check runs the bearing (and sliding) calculation of in: every design
+// load of the approach under each drainage condition that applies, with
+// the full working in Result.Trace. Input outside its valid range returns
+// a site.Errors list of *site.RangeError and *site.InputError; the
+// calculation itself never returns NaN or Inf.
+func Check(in Input) (*Result, error) {
+	opt, err := validate(in)
+	if err != nil {
+		return nil, err
+	}
+	c := newCalc(in, opt)
+	loads := design.Loads(in.Actions, opt.Approach)
+	c.t.Steps = make([]trace.Step, 0, 32)
+	c.arena = make([]trace.Value, 0, 96)
+	c.common()
+	drains := c.drainages()
+	sl := c.slidingDrainages(drains)
+	// size the trace once: about 50 steps a bearing case (140 with a
+	// two-layer check) and 30 a sliding case, 3 inputs a step
+	per := 50
+	if c.weak >= 0 {
+		per = 140
+	}
+	need := len(c.t.Steps) + len(loads)*(len(drains)*per+len(sl)*30)
+	steps := make([]trace.Step, len(c.t.Steps), need)
+	copy(steps, c.t.Steps)
+	c.t.Steps = steps
+	c.arena = make([]trace.Value, 0, 3*need)
+	for _, ld := range loads {
+		for _, d := range drains {
+			c.bearingCase(ld, d)
+		}
+	}
+	if len(sl) > 0 {
+		for _, ld := range loads {
+			for _, d := range sl {
+				c.slideCase(ld, d)
+			}
+		}
+	}
+	c.summarise()
+	return c.r, nil
+}
+
+func newCalc(in Input, opt Options) *calc {
+	c := &calc{
+		in: in, opt: opt, ap: opt.Approach, g: in.Ground, f: in.Footing, acts: in.Actions,
+		uF: "kN", uM: "kNm", uA: "m2", weak: -1,
+	}
+	if c.f.Shape == site.Strip {
+		c.uF, c.uM, c.uA = "kN/m", "kNm/m", "m2/m"
+	}
+	if c.f.Shape == site.Square {
+		c.f.L = c.f.B
+	}
+	c.r = &Result{Approach: opt.Approach.Name, Source: opt.Approach.Source, Method: opt.Method, Governing: -1, GoverningSliding: -1}
+	c.t = &c.r.Trace
+	c.lname = make([]string, len(c.g.Layers))
+	for i := range c.g.Layers {
+		c.lname[i] = layerName(c.g, i)
+	}
+	c.zw = math.Inf(1)
+	if c.g.Water.Set {
+		c.zw = c.g.Water.V
+	}
+	return c
+}
+
+func val(sym string, v float64, unit string) trace.Value {
+	return trace.Value{Symbol: sym, V: v, Unit: unit}
+}
+
+// step appends a step in the current case. The inputs are copied into an
+// arena so a step costs no allocation of its own.
+func (c *calc) step(sym string, f trace.Expr, v float64, unit string, ref trace.Ref, note string, in ...trace.Value) float64 {
+	n := len(c.arena)
+	c.arena = append(c.arena, in...)
+	c.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: c.arena[n:len(c.arena):len(c.arena)], Value: v, Unit: unit, Ref: ref, Note: note, Case: c.cas})
+	return v
+}
+
+// take appends a value taken as given (no formula).
+func (c *calc) take(sym string, v float64, unit string, ref trace.Ref, note string) float64 {
+	return c.step(sym, nil, v, unit, ref, note)
+}
+
+// warnOnce raises a caution once per calculation (the first case that
+// meets it).
+func (c *calc) warnOnce(code string, sev trace.Severity, ref trace.Ref, msg string, vals ...trace.Value) {
+	for _, o := range c.once {
+		if o == code {
+			return
+		}
+	}
+	c.once = append(c.once, code)
+	c.warn(code, sev, ref, msg, vals...)
+}
+
+func (c *calc) warn(code string, sev trace.Severity, ref trace.Ref, msg string, vals ...trace.Value) {
+	c.t.Warn(trace.Caution{Code: code, Severity: sev, Message: msg, Values: vals, Ref: ref, Case: c.cas})
+}
+
+// common records the steps shared by every case: footing, overburden,
+// groundwater, the layers below the base and the choices made.
+func (c *calc) common() {
+	c.cas = ""
+	f, g := c.f, c.g
+	c.take("B", f.B, "m", trace.Ref{}, "footing width ("+f.Shape.String()+")")
+	if f.Shape == site.Rectangle || f.Shape == site.Square {
+		c.take("L", f.L, "m", trace.Ref{}, "footing length")
+	}
+	c.take("D", f.D, "m", trace.Ref{}, "depth of the base below ground level")
+	if f.Alpha != 0 {
+		c.take("alpha", f.Alpha, "deg", trace.Ref{}, "inclination of the base")
+	}
+	if c.ap.Allowable() {
+		c.warn("allowable", trace.SevNote, trace.Ref{}, fmt.Sprintf("Allowable-stress design: characteristic actions and parameters, global factor %g on the net ultimate bearing pressure and %g on sliding (common practice).", c.ap.FS, c.ap.SlidingFS()))
+	} else if strings.HasPrefix(c.ap.Name, "DA3") {
+		c.warn("da3-actions", trace.SevNote, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.4.4"}, "DA3: all actions on the footing are taken as structural actions (set A1).")
+	}
+	if names := design.PsiDefaulted(c.acts); len(names) > 0 {
+		c.warn("psi0-default", trace.SevWarning, trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1"},
+			fmt.Sprintf("No ψ0 given for %s: ψ0 = %g taken when not leading (EN 1990 Table A1.1, imposed loads categories A–D). State ψ0 for wind, snow or storage loads.", strings.Join(names, ", "), c.ap.Psi0()),
+			val("psi_0", c.ap.Psi0(), ""))
+	}
+	c.overburden()
+	c.fi = g.At(f.D)
+	l := g.Layers[c.fi]
+	c.take("gamma", l.Gamma, "kN/m3", trace.Ref{}, "bulk unit weight of "+layerName(g, c.fi))
+	if c.zw < f.D+f.B {
+		c.take("gamma_sat", l.GammaSatOr(), "kN/m3", trace.Ref{}, "saturated unit weight of "+layerName(g, c.fi))
+	}
+	c.gEffK = c.unitWeight("gamma'_k", l, "gamma", "gamma_sat", f.D, "D", f.B, "B")
+	if l.Phi.Set && l.Phi.V > 40*degr {
+		c.warn("phi-high", trace.SevWarning, trace.Ref{}, fmt.Sprintf("φ′ = %.1f° of %s is above about 40°: the bearing factors grow very fast there and the resistance is sensitive to the value chosen.", l.Phi.V/degr, layerName(g, c.fi)),
+			val("phi'_k", l.Phi.V, "deg"))
+	}
+	c.layers()
+	c.localShear()
+	if f.Alpha != 0 && (c.opt.Method == Meyerhof || c.opt.Method == Terzaghi) {
+		c.warn("base-tilt", trace.SevWarning, trace.Ref{}, fmt.Sprintf("The %s method has no base-inclination factors: the inclination of the base is not taken into account. Use ec7, vesic or hansen.", c.opt.Method))
+	}
+	if c.opt.Method == Terzaghi && c.anyH() {
+		c.warn("terzaghi-incl", trace.SevCaution, refMey63, "Terzaghi (1943) gives no inclination factors: Meyerhof's (1963) i_c = i_q = (1 − β/90°)², i_γ = (1 − β/φ′)² are applied to the inclined load.")
+	}
+	if c.opt.Method == Terzaghi && f.Shape == site.Circle {
+		c.warn("terzaghi-circle", trace.SevNote, refTerz, "Terzaghi circle: with a central load the diameter is used with s_c = 1.3, s_γ = 0.6; with an eccentric load the equivalent rectangle of the effective area is used with the rectangular factors.")
+	}
+	if f.Shape == site.Circle && c.opt.Method != Terzaghi {
+		c.warn("circle-area", trace.SevNote, refCircle, "Circle: the effective area is the circular segment within the resultant's chord, replaced by an equivalent rectangle B′ × L′ of the same area (API RP 2GEO); with a central load that is the square of equal area.")
+	}
+}
+
+func (c *calc) anyH() bool {
+	for _, a := range c.acts {
+		if a.HB != 0 || a.HL != 0 {
+			return true
+		}
+	}
+	return false
+}
+
+// overburden records σ_v0, u_0 and σ′_v0 at the base from the layers above
+// it (common practice: Σγh, with γ_sat below the water table).
+func (c *calc) overburden() {
+	g, D := c.g, c.f.D
+	var f trace.Expr
+	var in []trace.Value
+	var parts []string
+	k := 0
+	for i, l := range g.Layers {
+		top, bot := l.Top, math.Min(g.Bottom(i), D)
+		if top >= D {
+			break
+		}
+		for _, seg := range []struct {
+			a, b, gam float64
+			wet       bool
+		}{{top, math.Min(bot, c.zw), l.Gamma, false}, {math.Max(top, c.zw), bot, l.GammaSatOr(), true}} {
+			h := seg.b - seg.a
+			if h <= 0 {
+				continue
+			}
+			k++
+			gs, hs := fmt.Sprintf("gamma_s%d", k), fmt.Sprintf("h_s%d", k)
+			term := mul(sym(gs), sym(hs))
+			if f == nil {
+				f = term
+			} else {
+				f = add(f, term)
+			}
+			in = append(in, val(gs, seg.gam, "kN/m3"), val(hs, h, "m"))
+			w := ""
+			if seg.wet {
+				w = ", below water"
+			}
+			parts = append(parts, fmt.Sprintf("%d: %s%s", k, layerName(g, i), w))
+		}
+	}
+	ref := trace.Ref{}
+	note := "total vertical stress at the base (common practice)"
+	if len(parts) > 0 {
+		note += "; strata " + strings.Join(parts, "; ")
+	}
+	c.sv0 = g.SigmaV(D)
+	c.step("sigma_v0", f, c.sv0, "kPa", ref, note, in...)
+	if c.g.Water.Set {
+		c.take("z_w", c.zw, "m", trace.Ref{}, "depth of the groundwater table")
+		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, "unit weight of water")
+	}
+	c.u0 = g.PoreP(D)
+	if c.zw < D {
+		c.step("u_0", mul(sym("gamma_w"), sub(sym("D"), sym("z_w"))), c.u0, "kPa", trace.Ref{}, "pore pressure at the base",
+			val("gamma_w", g.Gw(), "kN/m3"), val("D", D, "m"), val("z_w", c.zw, "m"))
+	} else {
+		c.take("u_0", 0, "kPa", trace.Ref{}, "pore pressure at the base (water table at or below it)")
+	}
+	c.sv0e = c.sv0 - c.u0
+	c.step("sigma'_v0", sub(sym("sigma_v0"), sym("u_0")), c.sv0e, "kPa", trace.Ref{}, "effective vertical stress at the base",
+		val("sigma_v0", c.sv0, "kPa"), val("u_0", c.u0, "kPa"))
+}
+
+// unitWeight records the unit weight of the N_γ term of layer l for a
+// base at depth z (symbol zs) of width b (symbol bs), by the three
+// water-table cases (Das 2011): water at or above the base, γ′ = γ_sat −
+// γ_w; within b below it, γ′ + (d/b)(γ − γ′); deeper, γ.
+func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, zs string, b float64, bs string) float64 {
+	gw := c.g.Gw()
+	gam, gsat := l.Gamma, l.GammaSatOr()
+	vg, vgs, vw := val(gs, gam, "kN/m3"), val(gss, gsat, "kN/m3"), val("gamma_w", gw, "kN/m3")
+	switch {
+	case c.zw <= z:
+		if c.cas == "" {
+			c.warn("water-above-base", trace.SevNote, refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
+		}
+		return c.step(name, sub(sym(gss), sym("gamma_w")), gsat-gw, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
+	case c.zw < z+b:
+		d := c.zw - z
+		if c.cas == "" {
+			c.warn("water-within-B", trace.SevNote, refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
+		}
+		sub1 := sub(sym(gss), sym("gamma_w"))
+		f := add(sub1, mul(div(sub(sym("z_w"), sym(zs)), sym(bs)), sub(sym(gs), sub1)))
+		v := gsat - gw + d/b*(gam-(gsat-gw))
+		return c.step(name, f, v, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
+	}
+	return c.step(name, sym(gs), gam, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
+}

@@ -1,0 +1,233 @@
+package bearing_test
+
+import (
+	"fmt"
+	"testing"
+
+	"plinth/calc/bearing"
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+var methods = []bearing.Method{bearing.EC7, bearing.Vesic, bearing.Meyerhof, bearing.Hansen, bearing.Terzaghi}
+
+func sandPad(phi, D float64, water site.Opt) bearing.Input {
+	return bearing.Input{
+		Ground:  site.Ground{Water: water, Layers: []site.Layer{{Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), Phi: site.Some(phi * deg), Dr: site.Some(0.7)}}},
+		Footing: site.Footing{Shape: site.Rectangle, B: 2, L: 3, D: D},
+		Actions: []site.Action{{Name: "G", V: 800e3, HB: 60e3, MB: 80e3}, {Name: "Q", Kind: site.Variable, V: 300e3}},
+		Options: bearing.Options{Drainage: bearing.Drained, Approach: design.DA1(), Sliding: bearing.No},
+	}
+}
+
+func govR(t *testing.T, in bearing.Input) float64 {
+	r := check(t, "invariant", in)
+	return r.Cases[r.Governing].R
+}
+
+// Invariants (common practice; they follow from every method's formulas):
+// resistance rises with φ′ and with D; a rising water table lowers the
+// drained resistance; DA1-C2 governs for a typical drained pad.
+func TestInvariants(t *testing.T) {
+	for _, m := range methods {
+		prev := 0.0
+		for phi := 20.0; phi <= 44; phi += 4 {
+			in := sandPad(phi, 1, site.Opt{})
+			in.Options.Method = m
+			R := govR(t, in)
+			if R <= prev {
+				t.Errorf("%v: R_d at φ′ = %g° is %.1f kN, not above %.1f at %g°", m, phi, R/kN, prev/kN, phi-4)
+			}
+			prev = R
+		}
+		prev = 0
+		for _, D := range []float64{0, 0.5, 1, 2, 3} {
+			in := sandPad(32, D, site.Opt{})
+			in.Options.Method = m
+			R := govR(t, in)
+			if R <= prev {
+				t.Errorf("%v: R_d at D = %g m is %.1f kN, not above %.1f", m, D, R/kN, prev/kN)
+			}
+			prev = R
+		}
+		prev = -1
+		for _, zw := range []float64{6, 2.5, 1.5, 1.0, 0.5, 0} {
+			in := sandPad(32, 1, site.Some(zw))
+			in.Options.Method = m
+			R := govR(t, in)
+			if prev >= 0 && R > prev {
+				t.Errorf("%v: R_d rose from %.1f to %.1f kN as the water table rose to %g m", m, prev/kN, R/kN, zw)
+			}
+			prev = R
+		}
+		in := sandPad(32, 1, site.Opt{})
+		in.Options.Method = m
+		r := check(t, "DA1", in)
+		if g := r.Cases[r.Governing].Name; len(g) < 6 || g[:6] != "DA1-C2" {
+			t.Errorf("%v: governing case %q, want DA1-C2", m, g)
+		}
+	}
+}
+
+// Every combination of method, shape, drainage and approach produces a
+// trace whose formulas reproduce their values, with no NaN or Inf.
+func TestTraceVerifiesEverywhere(t *testing.T) {
+	shapes := []site.Footing{
+		{Shape: site.Strip, B: 1.5, D: 0.8},
+		{Shape: site.Square, B: 2, D: 1},
+		{Shape: site.Rectangle, B: 2, L: 3.5, D: 1.2, Alpha: 5 * deg},
+		{Shape: site.Circle, B: 3, D: 1},
+	}
+	ground := site.Ground{Water: site.Some(1.8), Layers: []site.Layer{
+		{Name: "Fill", Top: 0, Gamma: 18e3, Phi: site.Some(30 * deg)},
+		{Name: "Clay", Top: 0.5, Gamma: 19e3, GammaSat: site.Some(20e3), Cu: site.Some(45e3), Phi: site.Some(26 * deg), C: site.Some(5e3)},
+		{Name: "Soft", Top: 3.0, Gamma: 17e3, GammaSat: site.Some(18e3), Cu: site.Some(18e3), Phi: site.Some(22 * deg)},
+	}}
+	approaches := []design.Approach{design.DA1(), design.DA2(), design.DA3(), design.FS(3)}
+	n := 0
+	for _, f := range shapes {
+		acts := []site.Action{
+			{Name: "Dead", V: 600e3, HB: 20e3, MB: 40e3},
+			{Name: "Imposed", Kind: site.Variable, V: 250e3, Psi0: site.Some(0.7)},
+			{Name: "Wind", Kind: site.Variable, HB: 30e3, MB: 60e3},
+		}
+		if f.Shape != site.Strip {
+			acts[2].HL, acts[2].ML = 15e3, 20e3
+		}
+		for _, m := range methods {
+			for _, ap := range approaches {
+				for _, d := range []bearing.Drainage{bearing.DrainageAuto, bearing.Undrained, bearing.Drained} {
+					in := bearing.Input{Ground: ground, Footing: f, Actions: acts,
+						Options: bearing.Options{Method: m, Approach: ap, Drainage: d}}
+					r := check(t, fmt.Sprintf("%v %v %s %v", f.Shape, m, ap.Name, d), in)
+					n += len(r.Cases) + len(r.Sliding)
+					if r.Governing < 0 || len(r.Values) == 0 {
+						t.Errorf("%v %v %s: no governing case", f.Shape, m, ap.Name)
+					}
+				}
+			}
+		}
+	}
+	t.Logf("%d cases verified", n)
+}
+
+// Eccentricity limits are separate cautions: e > B/6 (part of the base
+// lifts) and e > B/3 (EN 1997-1 6.5.4); a resultant outside the base fails.
+func TestEccentricityCautions(t *testing.T) {
+	base := func(mb float64) bearing.Input {
+		return bearing.Input{
+			Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(32 * deg)}),
+			Footing: site.Footing{Shape: site.Square, B: 3, D: 1},
+			Actions: []site.Action{{Name: "G", V: 1000e3, MB: mb}},
+			Options: bearing.Options{Approach: design.FS(3)},
+		}
+	}
+	for _, r := range []struct {
+		e          float64
+		b6, b3, ok bool
+	}{{0.4, false, false, true}, {0.6, true, false, true}, {1.1, false, true, false}, {1.6, false, false, false}} {
+		res := check(t, "ecc", base(r.e*1000e3))
+		if hasCaution(res, "ecc-b6") != r.b6 || hasCaution(res, "ecc-b3") != r.b3 {
+			t.Errorf("e = %g m: ecc-b6 %v ecc-b3 %v, want %v %v", r.e, hasCaution(res, "ecc-b6"), hasCaution(res, "ecc-b3"), r.b6, r.b3)
+		}
+		if r.e >= 1.5 && (!hasCaution(res, "ecc-out") || res.OK || res.Cases[0].Util != bearing.UtilCap) {
+			t.Errorf("e = %g m: resultant outside the base should fail", r.e)
+		}
+	}
+}
+
+// Short and long term: a fine-grained founding layer is checked both ways
+// by default and the result says which governs; sliding adds the 0.4 V_d
+// limit where water can reach the interface.
+func TestShortAndLongTerm(t *testing.T) {
+	in := bearing.Input{
+		Ground:  oneLayer(site.Layer{Top: 0, Gamma: 19e3, Cu: site.Some(100e3), Phi: site.Some(25 * deg), C: site.Some(2e3)}),
+		Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
+		Actions: []site.Action{{Name: "G", V: 500e3, HB: 150e3}},
+		Options: bearing.Options{Approach: design.DA1(), LocalShear: bearing.No},
+	}
+	r := check(t, "clay", in)
+	var nu, nd int
+	for _, c := range r.Cases {
+		if c.Drainage == bearing.Undrained {
+			nu++
+		} else {
+			nd++
+		}
+	}
+	if nu == 0 || nd == 0 {
+		t.Fatalf("want both drainage cases, got %d undrained, %d drained", nu, nd)
+	}
+	if _, ok := r.Value("util_u"); !ok {
+		t.Error("no util_u")
+	}
+	if r.GoverningDrainage != r.Cases[r.Governing].Drainage {
+		t.Error("governing drainage mismatch")
+	}
+	lim := false
+	for _, s := range r.Sliding {
+		lim = lim || s.Limit04
+	}
+	if !lim || !hasCaution(r, "slide-04V") {
+		t.Error("0.4 V_d limit should govern undrained sliding here (DA1-C1: A′c_u,d = 400 kN > 0.4 V_d = 270 kN)")
+	}
+	in.Options.Interface.Sealed = true
+	r = check(t, "sealed", in)
+	for _, s := range r.Sliding {
+		if s.Limit04 {
+			t.Error("sealed interface: no 0.4 V_d limit")
+		}
+	}
+	in.Options.Drainage = bearing.Drained
+	if r = check(t, "drained only", in); !hasCaution(r, "undrained-missing") {
+		t.Error("drained only on clay: want an undrained-missing caution")
+	}
+}
+
+// Sliding on sand, EN 1997-1 6.5.3 (6.3a), hand calculation: V = 500 kN,
+// H = 100 kN, φ′_k = 30°, δ = φ′ (cast in situ), no water; DA1-C1:
+// R_h,d = 500 tan 30° = 288.68 kN with G at γ_G,inf (675 tan 30° = 389.71 kN
+// at γ_G,sup); DA1-C2: tan δ_d = tan 30°/1.25,
+// R_h,d = 500·0.46188 = 230.94 kN.
+func TestSlidingDrained(t *testing.T) {
+	in := bearing.Input{
+		Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(30 * deg)}),
+		Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
+		Actions: []site.Action{{Name: "G", V: 500e3, HB: 100e3}},
+		Options: bearing.Options{Approach: design.DA1()},
+	}
+	r := check(t, "sliding", in)
+	want := map[string]float64{"DA1-C1 · permanent only · G inf · sliding drained": 288.675, "DA1-C1 · permanent only · G sup · sliding drained": 389.711, "DA1-C2 · permanent only · G sup · sliding drained": 230.940}
+	for _, s := range r.Sliding {
+		if w, ok := want[s.Name]; ok && !within(s.R/kN, w, 1e-5, 0) {
+			t.Errorf("%s: R_h,d = %.3f kN, want %.3f", s.Name, s.R/kN, w)
+		}
+	}
+	if len(r.Sliding) == 0 {
+		t.Fatal("no sliding cases")
+	}
+}
+
+func TestCapacityAt(t *testing.T) {
+	in := daInput()
+	prev := 0.0
+	for _, B := range []float64{1, 1.5, 2, 3} {
+		cp, err := bearing.CapacityAt(in, B)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := trace.Verify(cp.Trace, 1e-9); err != nil {
+			t.Fatal(err)
+		}
+		if cp.QRd <= prev {
+			t.Errorf("q_Rd should rise with B on sand: %.1f kPa at B = %g m", cp.QRd/kPa, B)
+		}
+		prev = cp.QRd
+	}
+	cp, _ := bearing.CapacityAt(in, 2)
+	// DA1-C2 at B = 2 m: q_ult = 678.17 kPa (see TestWorkedExamples), γ_Rv = 1
+	if !within(cp.QRd/kPa, 678.170, 1e-5, 0) {
+		t.Errorf("q_Rd(2 m) = %.3f kPa, want 678.170", cp.QRd/kPa)
+	}
+}

@@ -1,0 +1,200 @@
+package bearing
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// undrainedIn reports whether layer l acts undrained in a case of
+// drainage d: a fine-grained layer with c_u, in the short term.
+func undrainedIn(l site.Layer, d Drainage) bool {
+	return d == Undrained && l.Fine() && l.Cu.Set
+}
+
+// stripQ returns a layer's surface strip capacity with characteristic
+// parameters, the measure Meyerhof & Hanna (1978) compare layers by:
+// q = c N_c + ½ γ B N_γ (undrained: N_c c_u). ok is false when the layer
+// lacks the parameter the case needs.
+func (c *calc) stripQ(i int, d Drainage) (float64, bool) {
+	l := c.g.Layers[i]
+	if undrainedIn(l, d) {
+		nc := math.Pi + 2
+		if c.opt.Method == Terzaghi {
+			nc = 1.5*math.Pi + 1
+		}
+		return nc * l.Cu.V, true
+	}
+	if !l.Phi.Set {
+		return 0, false
+	}
+	fa := Factors(c.opt.Method, l.Phi.V)
+	gam := l.Gamma
+	if c.zw <= l.Top {
+		gam = l.GammaSatOr() - c.g.Gw()
+	}
+	return l.C.Or(0)*fa.Nc + 0.5*gam*c.f.B*fa.Ngamma, true
+}
+
+// layers applies plinth's governing-layer rule to the zone from the base
+// to 2B below it: the founding layer supplies the parameters; a lower
+// layer starting in the zone whose strip capacity q_2 is below the
+// founding layer's q_1 (Meyerhof & Hanna 1978) is checked as the lower
+// layer of a two-layer system (the weakest one, if several); stronger
+// layers are ignored, which is conservative.
+func (c *calc) layers() {
+	g, f := c.g, c.f
+	z1 := f.D + 2*f.B
+	var zone []int
+	for i := c.fi + 1; i < len(g.Layers) && g.Layers[i].Top < z1; i++ {
+		zone = append(zone, i)
+	}
+	if len(zone) == 0 {
+		return
+	}
+	var ns []string
+	for _, i := range zone {
+		ns = append(ns, fmt.Sprintf("%s (top %.2f m)", layerName(g, i), g.Layers[i].Top))
+	}
+	c.warn("layers-in-zone", trace.SevNote, refMH, fmt.Sprintf("%s start within 2B = %.2f m below the base. Rule: the founding layer's parameters are used; a lower layer weaker than it (strip capacity q_2 < q_1, Meyerhof & Hanna 1978) is checked as a two-layer system (the weakest if several); stronger layers are ignored (conservative).",
+		strings.Join(ns, ", "), 2*f.B), val("z_2B", z1, "m"))
+	// weakest per drainage (characteristic values); the case uses its own
+	// design values for q_2/q_1
+	best, bestR := -1, math.Inf(1)
+	for _, d := range []Drainage{Undrained, Drained} {
+		q1, ok1 := c.stripQ(c.fi, d)
+		if !ok1 || q1 <= 0 {
+			continue
+		}
+		for _, i := range zone {
+			q2, ok := c.stripQ(i, d)
+			if !ok {
+				continue
+			}
+			if r := q2 / q1; r < 1 && r < bestR {
+				best, bestR = i, r
+			}
+		}
+	}
+	for _, i := range zone {
+		l := g.Layers[i]
+		if !l.Phi.Set && !(l.Fine() && l.Cu.Set) {
+			c.warn("layer-no-strength", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s lies within 2B below the base but has neither φ′ nor c_u: it cannot be checked.", layerName(g, i)))
+		}
+	}
+	if best < 0 {
+		return
+	}
+	c.weak = best
+	if c.opt.TwoLayer == No {
+		c.weak = -1
+		c.warn("weaker-layer", trace.SevCaution, refMH, fmt.Sprintf("%s within 2B below the base is weaker than the founding layer (q_2/q_1 = %.2f) but two_layer = no: it is not checked and the resistance may be unsafe.", layerName(g, best), bestR),
+			val("r_q", bestR, ""))
+		return
+	}
+	c.warn("weaker-layer", trace.SevWarning, refMH, fmt.Sprintf("%s (top %.2f m) within 2B below the base is weaker than the founding layer (characteristic q_2/q_1 = %.2f): checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", layerName(g, best), g.Layers[best].Top, bestR),
+		val("r_q", bestR, ""))
+}
+
+// localShear decides whether Terzaghi's (1943) local-shear strengths apply
+// to the founding layer. Auto applies them to loose or very loose sand
+// (density index I_D < 0.35, EN ISO 14688-2 Table 4; without I_D, SPT N <
+// 10, Terzaghi & Peck 1948) and to clay of low or lower strength (c_u < 40
+// kPa, EN ISO 14688-2 Table 5): the local and punching shear region of
+// Vesić's (1973) failure-mode chart at any embedment. Medium-dense sand
+// and medium clay raise a warning instead (transitional).
+func (c *calc) localShear() {
+	l := c.g.Layers[c.fi]
+	ln := layerName(c.g, c.fi)
+	loose, trans := false, false
+	var why string
+	var vals []trace.Value
+	ref := trace.Ref{Source: SrcISO14688, Clause: "Table 4"}
+	switch {
+	case l.Fine() && l.Cu.Set:
+		ref.Clause = "Table 5"
+		vals = append(vals, val("c_u_k", l.Cu.V, "kPa"))
+		loose = l.Cu.V < 40*kPa
+		trans = !loose && l.Cu.V < 75*kPa
+		why = fmt.Sprintf("c_u = %.0f kPa", l.Cu.V/kPa)
+	case l.Dr.Set:
+		vals = append(vals, val("I_D", l.Dr.V, ""))
+		loose = l.Dr.V < 0.35
+		trans = !loose && l.Dr.V < 0.65
+		why = fmt.Sprintf("I_D = %.2f", l.Dr.V)
+	case l.N.Set:
+		ref = trace.Ref{Source: SrcTerzaghiPeck, Clause: "SPT N and density of sands"}
+		vals = append(vals, val("N", l.N.V, ""))
+		loose = l.N.V < 10
+		trans = !loose && l.N.V < 30
+		why = fmt.Sprintf("N = %.0f", l.N.V)
+	}
+	switch c.opt.LocalShear {
+	case Yes:
+		c.local = true
+		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used for "+ln+".")
+	case No:
+		if loose {
+			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s of %s indicates loose or soft ground where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln), vals...)
+		}
+	default:
+		switch {
+		case loose:
+			c.local = true
+			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s of %s is loose or soft (EN ISO 14688-2) — in the local/punching shear region of Vesić's (1973) chart — so Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used.", why, ln), vals...)
+			c.t.Cite(ref.Source)
+		case trans:
+			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s of %s is medium dense or medium strength: Vesić (1973) places this between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln), vals...)
+			c.t.Cite(ref.Source)
+		case why == "" && !l.Fine():
+			c.warn("density-unknown", trace.SevNote, refMode, "local_shear = auto: no density (I_D or N) is given for "+ln+", so general shear is assumed.")
+		}
+	}
+}
+
+// drainages returns the drainage cases to check and raises the cautions
+// about them.
+func (c *calc) drainages() []Drainage {
+	fl := c.g.Layers[c.fi]
+	fineZone := false
+	for i := c.fi + 1; i < len(c.g.Layers) && c.g.Layers[i].Top < c.f.D+2*c.f.B; i++ {
+		if l := c.g.Layers[i]; l.Fine() && l.Cu.Set {
+			fineZone = true
+		}
+	}
+	fine := fl.Fine()
+	switch c.opt.Drainage {
+	case Undrained:
+		if !fine {
+			c.warn("undrained-coarse", trace.SevNote, trace.Ref{}, layerName(c.g, c.fi)+" is coarse-grained: it acts drained in the undrained (short-term) case.")
+		}
+		if fine && fl.Phi.Set {
+			c.warn("drained-missing", trace.SevWarning, trace.Ref{}, "drainage = undrained: the long-term (drained) check of "+layerName(c.g, c.fi)+" is not made.")
+		}
+		return []Drainage{Undrained}
+	case Drained:
+		if fine || fineZone {
+			c.warn("undrained-missing", trace.SevCaution, trace.Ref{}, "drainage = drained: the short-term (undrained) check of the fine-grained ground is not made; for saturated clay it usually governs.")
+		}
+		return []Drainage{Drained}
+	case Both:
+		return []Drainage{Undrained, Drained}
+	}
+	if fine && fl.Cu.Set {
+		if !fl.Phi.Set {
+			c.warn("drained-missing", trace.SevWarning, trace.Ref{}, "No φ′ for the fine-grained "+layerName(c.g, c.fi)+": only the undrained (short-term) check is made.")
+			return []Drainage{Undrained}
+		}
+		return []Drainage{Undrained, Drained}
+	}
+	if fine {
+		c.warn("undrained-missing", trace.SevCaution, trace.Ref{}, "No c_u for the fine-grained "+layerName(c.g, c.fi)+": the short-term (undrained) check of the founding layer cannot be made.")
+	}
+	if fineZone && fl.Phi.Set {
+		return []Drainage{Undrained, Drained}
+	}
+	return []Drainage{Drained}
+}

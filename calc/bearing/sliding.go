@@ -1,0 +1,202 @@
+package bearing
+
+import (
+	"fmt"
+	"math"
+
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// slidingDrainages returns the sliding checks to make: none when sliding
+// = no, or auto with no horizontal action; drained sliding where the
+// founding layer acts drained in some case, undrained where it acts
+// undrained.
+func (c *calc) slidingDrainages(drains []Drainage) []Drainage {
+	if c.opt.Sliding == No || (c.opt.Sliding == Auto && !c.anyH()) {
+		return nil
+	}
+	fl := c.g.Layers[c.fi]
+	var out []Drainage
+	for _, d := range drains {
+		x := Drained
+		if undrainedIn(fl, d) {
+			x = Undrained
+		}
+		dup := false
+		for _, o := range out {
+			dup = dup || o == x
+		}
+		if !dup {
+			out = append(out, x)
+		}
+	}
+	return out
+}
+
+// slideCase checks sliding on the base (EN 1997-1 6.5.3): drained R_d =
+// V′_d tanδ_d / γ_Rh (6.3a, 6.3b); undrained R_d = A′c_u,d / γ_Rh (6.4a,
+// 6.4b), not more than 0.4 V_d where water or air can reach the interface
+// (6.5). Passive resistance in front of the footing is ignored.
+func (c *calc) slideCase(ld design.Load, d Drainage) {
+	name := ld.Name + " · sliding " + d.String()
+	c.cas = name
+	c.pf = [4]bool{}
+	ld.Record(c.t, c.acts, name, c.uF, c.uM)
+	sc := SlideCase{Name: name, Combination: ld.Name, Drainage: d}
+	if ld.V <= 0 {
+		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		return
+	}
+	H := math.Hypot(ld.HB, ld.HL)
+	sc.H = H
+	vV := val("V_d", ld.V, c.uF)
+	fl := c.g.Layers[c.fi]
+	mat := ld.Set.Material
+	gRh := ld.Set.Resistance.GammaRh
+	fs := c.ap.Allowable()
+	var R float64
+	if d == Drained {
+		c.step("H_d", fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2)))), H, c.uF, trace.Ref{}, "resultant horizontal action", val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
+		var dk float64
+		if c.opt.Interface.Delta.Set {
+			dk = c.take("delta_k", c.opt.Interface.Delta.V, "deg", refDelta, "characteristic base friction angle (given)")
+		} else {
+			c.take("phi'_k", fl.Phi.V, "deg", trace.Ref{}, "characteristic angle of shearing resistance of "+layerName(c.g, c.fi))
+			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, "δ/φ′ (1 for concrete cast in situ, 2/3 for smooth precast)")
+			dk = c.step("delta_k", mul(sym("k_delta"), sym("phi'_k")), c.opt.Interface.KDelta*fl.Phi.V, "deg", refDelta, "characteristic base friction angle",
+				val("k_delta", c.opt.Interface.KDelta, ""), val("phi'_k", fl.Phi.V, "deg"))
+		}
+		g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
+		dd := c.step("delta_d", fn("atan", div(fn("tan", sym("delta_k")), sym(gPhi))), math.Atan(math.Tan(dk)/g), "deg", refMat, "design base friction angle",
+			val("delta_k", dk, "deg"), val(gPhi, g, ""))
+		vp := ld.V
+		if c.u0 > 0 {
+			A := c.f.Area()
+			c.step("A_b", nil, A, c.uA, trace.Ref{}, "plan area of the base")
+			U := c.step("U", mul(sym("u_0"), sym("A_b")), c.u0*A, c.uF, trace.Ref{}, "water pressure on the base", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
+			vp = c.step("V'_d", sub(sym("V_d"), sym("U")), ld.V-U, c.uF, refSlide, "effective vertical action", vV, val("U", U, c.uF))
+		} else {
+			vp = c.step("V'_d", sym("V_d"), ld.V, c.uF, refSlide, "effective vertical action (no water pressure on the base)", vV)
+		}
+		sc.V = vp
+		fsym, fv := "gamma_Rh", gRh
+		if fs {
+			fsym, fv = "FS_s", c.ap.SlidingFS()
+			c.take(fsym, fv, "", trace.Ref{}, "global factor on sliding (common practice)")
+		} else {
+			c.take("gamma_Rh", gRh, "", refA5, "partial factor on sliding resistance ("+ld.Set.Resistance.Name+")")
+		}
+		vf := val(fsym, fv, "")
+		R = math.Max(0, vp) * math.Tan(dd) / fv
+		c.step("R_h_d", div(mul(fn("max", num(0), sym("V'_d")), fn("tan", sym("delta_d"))), sym(fsym)), R, c.uF, refSlide, "design sliding resistance",
+			val("V'_d", vp, c.uF), val("delta_d", dd, "deg"), vf)
+	} else {
+		g, ok := c.geometry(ld, true)
+		if !ok {
+			c.finishSlide(&sc, 0)
+			return
+		}
+		c.take("c_u_k", fl.Cu.V, "kPa", trace.Ref{}, "characteristic undrained strength of "+layerName(c.g, c.fi))
+		gc := c.pfStep(2, gCu, mat.GammaCu, mat.Name)
+		cu := c.step("c_u_d", div(sym("c_u_k"), sym(gCu)), fl.Cu.V/gc, "kPa", refMat, "design value", val("c_u_k", fl.Cu.V, "kPa"), val(gCu, gc, ""))
+		fsym, fv := "gamma_Rh", gRh
+		if fs {
+			fsym, fv = "FS_s", c.ap.SlidingFS()
+			c.take(fsym, fv, "", trace.Ref{}, "global factor on sliding (common practice)")
+		} else {
+			c.take("gamma_Rh", gRh, "", refA5, "partial factor on sliding resistance ("+ld.Set.Resistance.Name+")")
+		}
+		sc.V = ld.V
+		r1 := g.Ap * cu / fv
+		vA := val("A'", g.Ap, c.uA)
+		if c.opt.Interface.Sealed {
+			R = c.step("R_h_d", div(mul(sym("A'"), sym("c_u_d")), sym(fsym)), r1, c.uF, refSlideU, "design sliding resistance (water and air cannot reach the interface)",
+				vA, val("c_u_d", cu, "kPa"), val(fsym, fv, ""))
+		} else {
+			R = math.Min(r1, 0.4*ld.V)
+			sc.Limit04 = 0.4*ld.V < r1
+			R = c.step("R_h_d", fn("min", div(mul(sym("A'"), sym("c_u_d")), sym(fsym)), mul(num(0.4), sym("V_d"))), R, c.uF, ref04V,
+				"design sliding resistance, not more than 0.4 V_d (water or air can reach the interface)", vA, val("c_u_d", cu, "kPa"), val(fsym, fv, ""), vV)
+			if sc.Limit04 {
+				c.warn("slide-04V", trace.SevNote, ref04V, name+": the limit 0.4 V_d governs the undrained sliding resistance.", val("V_d", ld.V, c.uF))
+			}
+		}
+	}
+	c.finishSlide(&sc, R)
+}
+
+func (c *calc) finishSlide(sc *SlideCase, R float64) {
+	sc.R = R
+	switch {
+	case sc.H == 0:
+		sc.Util = c.take("util_h", 0, "", trace.Ref{}, "no horizontal action")
+	case R <= 0:
+		sc.Util = c.take("util_h", UtilCap, "", trace.Ref{}, "no sliding resistance: the check fails")
+	default:
+		sc.Util = math.Min(UtilCap, c.step("util_h", div(sym("H_d"), sym("R_h_d")), sc.H/R, "", refSlide, "sliding utilisation H_d/R_h,d",
+			val("H_d", sc.H, c.uF), val("R_h_d", R, c.uF)))
+	}
+	sc.OK = sc.Util <= 1+1e-12
+	c.r.Sliding = append(c.r.Sliding, *sc)
+}
+
+// summarise marks the governing cases and builds the summary values.
+func (c *calc) summarise() {
+	r := c.r
+	c.cas = ""
+	r.OK = len(r.Cases) > 0
+	uu, ud := -1.0, -1.0
+	for i, cs := range r.Cases {
+		if r.Governing < 0 || cs.Util > r.Cases[r.Governing].Util {
+			r.Governing = i
+		}
+		r.OK = r.OK && cs.OK
+		if cs.Drainage == Undrained {
+			uu = math.Max(uu, cs.Util)
+		} else {
+			ud = math.Max(ud, cs.Util)
+		}
+	}
+	for i, sc := range r.Sliding {
+		if r.GoverningSliding < 0 || sc.Util > r.Sliding[r.GoverningSliding].Util {
+			r.GoverningSliding = i
+		}
+		r.OK = r.OK && sc.OK
+	}
+	if r.Governing >= 0 {
+		g := r.Cases[r.Governing]
+		r.GoverningDrainage = g.Drainage
+		c.whole("governing", fmt.Sprintf("Bearing governed by %s: utilisation %.3f; the %s case governs.", g.Name, g.Util, g.Drainage), val("util", g.Util, ""))
+		strip := c.f.Shape == site.Strip
+		r.Values = append(r.Values,
+			val("R_d", g.R, c.uF), val("util", g.Util, ""), val("q_Ed", g.QEd, "kPa"), val("q_Rd", g.QRd, "kPa"), val("q_ult", g.QUlt, "kPa"),
+			val("V_d", g.V, c.uF), val("H_d", g.H, c.uF), val("e_B", g.EB, "m"))
+		if !strip {
+			r.Values = append(r.Values, val("e_L", g.EL, "m"))
+		}
+		r.Values = append(r.Values, val("B'", g.B, "m"))
+		if !strip {
+			r.Values = append(r.Values, val("L'", g.L, "m"))
+		}
+		r.Values = append(r.Values, val("A'", g.A, c.uA))
+	}
+	if uu >= 0 {
+		r.Values = append(r.Values, val("util_u", uu, ""))
+	}
+	if ud >= 0 {
+		r.Values = append(r.Values, val("util_dr", ud, ""))
+	}
+	if r.GoverningSliding >= 0 {
+		s := r.Sliding[r.GoverningSliding]
+		r.Values = append(r.Values, val("R_h_d", s.R, c.uF), val("util_h", s.Util, ""))
+		c.whole("governing-sliding", fmt.Sprintf("Sliding governed by %s: utilisation %.3f.", s.Name, s.Util), val("util_h", s.Util, ""))
+	}
+}
+
+// whole records a note about the calculation as a whole (Step -1; Warn
+// would attach it to the latest step).
+func (c *calc) whole(code, msg string, vals ...trace.Value) {
+	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Values: vals, Step: -1})
+}
