@@ -112,6 +112,13 @@ func (t *Trace) Warn(c Caution) {
 	t.Cautions = append(t.Cautions, c)
 }
 
+// WarnAll records a caution about the calculation as a whole (Step -1).
+func (t *Trace) WarnAll(c Caution) {
+	c.Step = -1
+	t.Cite(c.Ref.Source)
+	t.Cautions = append(t.Cautions, c)
+}
+
 // Append adds all of u to t, shifting u's step indices. A non-empty
 // caseName labels every appended step and caution that has no case yet.
 func (t *Trace) Append(u Trace, caseName string) {

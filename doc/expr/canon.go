@@ -12,16 +12,17 @@ import (
 )
 
 // Canonical writes n in govaluate's syntax, fully parenthesised, with its
-// parameters: symbols as escaped names "[phi']" valued from env (SI
-// float64), every number and pi as a parameter "[#0]", "[#1]" ... in
-// source order (govaluate cannot read 1e3, and formatting floats into the
+// parameters: each distinct symbol as an escaped positional parameter
+// "[$0]", "[$1]" ... in order of first use, valued from env (SI float64),
+// so a name such as phi' or F1.R_d never reaches govaluate's lexer; every
+// number and pi as a parameter "[#0]", "[#1]" ... in source order (govaluate cannot read 1e3, and formatting floats into the
 // text would round them), unary minus as "(-(x))", powers as "(a ** b)"
 // (govaluate's ** is left-associative and binds looser than its prefix
 // minus; full parentheses make that irrelevant), functions by their own
 // names, registered with govaluate and working on SI values (angles in
-// radians). The map is never nil. Because numbers are parameters, lines of
-// the same shape share one canonical string, so compiled expressions are
-// cached by it.
+// radians). The map is never nil. Because numbers and symbols are parameters,
+// lines of the same shape share one canonical string, so compiled
+// expressions are cached by it.
 func Canonical(n Node, env Env) (string, map[string]interface{}) {
 	c := canon{env: env, params: make(map[string]interface{}, 8)}
 	c.b.Grow(64)
@@ -34,6 +35,7 @@ type canon struct {
 	env    Env
 	params map[string]interface{}
 	nums   int
+	syms   map[string]string // symbol name → its parameter name "$k"
 }
 
 var numNames = func() []string {
@@ -65,17 +67,21 @@ func (c *canon) write(n Node) {
 	case *Const:
 		c.number(n.V)
 	case *Ident:
-		if c.env != nil {
-			if q, ok := c.env.Lookup(n.Name); ok {
-				c.params[n.Name] = q.V
+		name, ok := c.syms[n.Name]
+		if !ok {
+			if c.syms == nil {
+				c.syms = make(map[string]string, 4)
+			}
+			name = "$" + strconv.Itoa(len(c.syms))
+			c.syms[n.Name] = name
+			if c.env != nil {
+				if q, ok := c.env.Lookup(n.Name); ok {
+					c.params[name] = q.V
+				}
 			}
 		}
 		c.b.WriteByte('[')
-		if strings.ContainsAny(n.Name, `\]`) {
-			c.b.WriteString(strings.NewReplacer(`\`, `\\`, `]`, `\]`).Replace(n.Name))
-		} else {
-			c.b.WriteString(n.Name)
-		}
+		c.b.WriteString(name)
 		c.b.WriteByte(']')
 	case *Paren:
 		c.write(n.X)

@@ -96,7 +96,8 @@
 //
 // All values are SI float64; angles are radians. Direct walks the tree.
 // Eval gets the value from govaluate on the Canonical form — fully
-// parenthesised, every symbol an escaped parameter "[phi']", every number
+// parenthesised, every symbol an escaped positional parameter "[$0]" (so
+// names such as phi' never reach govaluate's lexer), every number
 // a parameter "[#0]" (govaluate cannot read 1e3 and a formatted float would
 // be rounded), unary minus as "(-(x))", powers as "(a ** b)" — and runs
 // Direct as well: Direct places domain errors (division by zero, sqrt of
@@ -106,6 +107,6 @@
 // escapes: govaluate runs under recover.
 //
 // Compiled govaluate expressions are cached by canonical string. Because
-// numbers are parameters, lines of the same shape share an entry. The
-// cache is emptied when it holds 4096 entries.
+// numbers and symbols are parameters, lines of the same shape share an
+// entry. The cache is emptied when it holds 4096 entries.
 package expr

@@ -268,10 +268,10 @@ func TestCanonical(t *testing.T) {
 		{"2^3^2", "([#0] ** ([#1] ** [#2]))"},
 		{"(-2)^2", "((-([#0])) ** [#1])"},
 		{"2^-1", "([#0] ** (-([#1])))"},
-		{"phi' + gamma_sat * 1e3", "([phi'] + ([gamma_sat] * [#0]))"},
-		{"max(a, b, 2) - atan2(F1.R_d, c)", "(max([a], [b], [#0]) - atan2([F1.R_d], [c]))"},
+		{"phi' + gamma_sat * 1e3", "([$0] + ([$1] * [#0]))"},
+		{"max(a, b, 2) - atan2(F1.R_d, a)", "(max([$0], [$1], [#0]) - atan2([$2], [$0]))"},
 		{"+pi", "[#0]"},
-		{"((a))", "[a]"},
+		{"((a))", "[$0]"},
 	} {
 		got, params := expr.Canonical(mustExpr(t, r.src), env)
 		if got != r.want || params == nil {
@@ -279,7 +279,7 @@ func TestCanonical(t *testing.T) {
 		}
 	}
 	_, params := expr.Canonical(mustExpr(t, "18 kN/m3 * B + pi"), env)
-	if params["#0"] != 18000.0 || params["B"] != 2.0 || params["#1"] != math.Pi || len(params) != 3 {
+	if params["#0"] != 18000.0 || params["$0"] != 2.0 || params["#1"] != math.Pi || len(params) != 3 {
 		t.Errorf("params = %v", params)
 	}
 }

@@ -1,0 +1,75 @@
+package main
+
+import (
+	"fmt"
+	"strings"
+)
+
+// options are the parsed command-line arguments. Flags may come before or
+// after PATH.
+type options struct {
+	path   string
+	sets   []string
+	json   bool
+	output string
+}
+
+// parseArgs reads args for cmd; allowed names the flags the command takes.
+func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
+	var o options
+	ok := map[string]bool{}
+	for _, a := range allowed {
+		ok[a] = true
+	}
+	for i := 0; i < len(args); i++ {
+		a := args[i]
+		name, val, hasVal := strings.Cut(a, "=")
+		if !strings.HasPrefix(a, "-") || a == "-" {
+			if o.path != "" {
+				return o, fmt.Errorf("%s takes one PATH, got %q and %q", cmd, o.path, a)
+			}
+			o.path = a
+			continue
+		}
+		name = strings.TrimLeft(name, "-")
+		if name == "o" {
+			name = "output"
+		}
+		if !ok[name] {
+			return o, fmt.Errorf("%s: unknown flag %s", cmd, a)
+		}
+		value := func() (string, error) {
+			if hasVal {
+				return val, nil
+			}
+			if i+1 >= len(args) {
+				return "", fmt.Errorf("%s: flag %s needs a value", cmd, a)
+			}
+			i++
+			return args[i], nil
+		}
+		switch name {
+		case "json":
+			if hasVal {
+				return o, fmt.Errorf("%s: --json takes no value", cmd)
+			}
+			o.json = true
+		case "set":
+			v, err := value()
+			if err != nil {
+				return o, err
+			}
+			o.sets = append(o.sets, v)
+		case "output":
+			v, err := value()
+			if err != nil {
+				return o, err
+			}
+			o.output = v
+		}
+	}
+	if o.path == "" {
+		return o, fmt.Errorf("%s needs a PATH (a package folder or a sheet)", cmd)
+	}
+	return o, nil
+}

@@ -1,0 +1,108 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"strings"
+	"text/tabwriter"
+
+	"plinth/calc/units"
+	"plinth/doc/eval"
+	"plinth/doc/source"
+)
+
+// check implements "plinth check".
+func check(args []string, stdout, stderr io.Writer) int {
+	o, err := parseArgs("check", args, "set", "json")
+	if err != nil {
+		fmt.Fprintf(stderr, "plinth: %v\n", err)
+		return exitErrors
+	}
+	res, diags := evaluate(o.path, o.sets)
+	if o.json {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(report(res, diags)); err != nil {
+			fmt.Fprintf(stderr, "plinth: %v\n", err)
+			return exitErrors
+		}
+	} else {
+		if !diags.HasErrors() {
+			printTables(stdout, res)
+		}
+		printDiags(stderr, diags)
+	}
+	return status(res, diags)
+}
+
+// status is the exit status for a run.
+func status(res *eval.Result, diags source.List) int {
+	if diags.HasErrors() {
+		return exitErrors
+	}
+	for _, c := range res.Checks {
+		if !c.OK {
+			return exitNotOK
+		}
+	}
+	return exitOK
+}
+
+// printTables writes every symbol and every check as readable tables.
+func printTables(w io.Writer, res *eval.Result) {
+	if res.Variant() {
+		var sets []string
+		for _, o := range res.Overrides {
+			sets = append(sets, o.Arg)
+		}
+		fmt.Fprintf(w, "VARIANT: %s\n\n", strings.Join(sets, ", "))
+	}
+	for _, s := range res.Sheets {
+		title := s.Meta.Title.Value
+		if title != "" {
+			title = " — " + title
+		}
+		fmt.Fprintf(w, "%s%s\n", s.Src.File.Path, title)
+		if len(s.Symbols) == 0 {
+			fmt.Fprintln(w, "  (no symbols)")
+		} else {
+			tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+			fmt.Fprintln(tw, "  symbol\tvalue\tunit\tnote\twhere")
+			for _, y := range s.Symbols {
+				note := y.Note.Value
+				if y.Override != nil {
+					note = "[--set] " + note
+				}
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\n", y.Name, units.Format(y.Q.V, y.Unit, y.Decimals), y.Unit.Name, note, where(y.Span))
+			}
+			tw.Flush()
+		}
+		fmt.Fprintln(w)
+	}
+	if len(res.Checks) == 0 {
+		fmt.Fprintln(w, "no checks")
+		return
+	}
+	fmt.Fprintln(w, "checks")
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, "  check\tleft\t\tright\tutilisation\tverdict\twhere")
+	nok := 0
+	for _, c := range res.Checks {
+		util := "—"
+		if c.HasUtil() {
+			util = fmt.Sprintf("%.2f", c.Util)
+		}
+		if !c.OK {
+			nok++
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", c.Text, eval.Format(c.L, c.Unit, -1), c.Op, eval.Format(c.R, c.Unit, -1), util, c.Verdict(), where(c.Span))
+	}
+	tw.Flush()
+	fmt.Fprintf(w, "\n%d check%s: %d OK, %d NOT OK\n", len(res.Checks), plural(len(res.Checks)), len(res.Checks)-nok, nok)
+}
+
+func where(sp source.Span) string {
+	p := sp.Pos()
+	return fmt.Sprintf("%s:%d", p.Path, p.Line)
+}

@@ -1,0 +1,52 @@
+package main
+
+import (
+	"fmt"
+	"io"
+
+	"plinth/doc/eval"
+	"plinth/doc/load"
+	"plinth/doc/parse"
+	"plinth/doc/source"
+)
+
+// evaluate runs load → parse → eval and returns the result with every
+// diagnostic of the run, sorted.
+func evaluate(path string, sets []string) (*eval.Result, source.List) {
+	lp, diags := load.Path(path)
+	if lp == nil {
+		diags.Sort()
+		return nil, diags
+	}
+	pkg, pd := parse.Package(lp)
+	diags.Append(pd)
+	if pkg == nil || diags.HasErrors() {
+		diags.Sort()
+		return nil, diags
+	}
+	res, ed := eval.Package(pkg, eval.Options{Set: sets})
+	diags.Append(ed)
+	diags.Sort()
+	return res, diags
+}
+
+// printDiags writes each diagnostic on its own line, then a count.
+func printDiags(w io.Writer, diags source.List) {
+	n := 0
+	for _, d := range diags {
+		fmt.Fprintln(w, d.Error())
+		if d.Severity == source.Error {
+			n++
+		}
+	}
+	if n > 0 {
+		fmt.Fprintf(w, "%d error%s\n", n, plural(n))
+	}
+}
+
+func plural(n int) string {
+	if n == 1 {
+		return ""
+	}
+	return "s"
+}

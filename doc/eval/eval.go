@@ -1,0 +1,240 @@
+package eval
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"plinth/doc/expr"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// Options control an evaluation.
+type Options struct {
+	// Set holds --set arguments: "name=value" or "sheet.md:name=value".
+	Set []string
+}
+
+// Package evaluates every sheet of p. It returns the result even when
+// there are errors, so a caller can list every problem of the run; a
+// result with errors must not be rendered.
+func Package(p *sheet.Package, opt Options) (*Result, source.List) {
+	e := &evaluator{pkg: p, res: &Result{Src: p, byName: map[string]*Sheet{}}}
+	for i, s := range p.Sheets {
+		es := &Sheet{
+			Src: s, Meta: p.Effective(s), Index: i,
+			stmts:   map[*sheet.Stmt]any{},
+			interps: map[*sheet.Interp]*Interp{},
+			local:   map[string]*Symbol{},
+		}
+		e.res.Sheets = append(e.res.Sheets, es)
+		e.res.byName[es.Name()] = es
+	}
+	e.defs = make([]map[string]def, len(e.res.Sheets))
+	for i, s := range e.res.Sheets {
+		e.defs[i] = e.collect(s)
+	}
+	e.resolveUses()
+	e.parseOverrides(opt.Set)
+	for _, s := range e.order() {
+		e.sheet(s)
+	}
+	e.register()
+	for _, s := range e.res.Sheets {
+		e.prose(s)
+	}
+	e.errs.Sort()
+	return e.res, e.errs
+}
+
+// def is a name defined on a sheet, found before evaluation.
+type def struct {
+	span   source.Span
+	input  bool // a statement whose expression holds no symbol
+	assign *expr.Assign
+}
+
+type evaluator struct {
+	pkg    *sheet.Package
+	res    *Result
+	errs   source.List
+	defs   []map[string]def // per sheet index
+	failed map[string]bool  // "sheet\x00name" of symbols whose evaluation failed
+	over   map[*Sheet]map[string]*Override
+}
+
+// collect finds every name a sheet defines, reporting redefinitions.
+func (e *evaluator) collect(s *Sheet) map[string]def {
+	defs := map[string]def{}
+	add := func(name string, sp source.Span, a *expr.Assign) {
+		if d, ok := defs[name]; ok {
+			e.errs.Add(sp, "%s is already defined at %s", name, posText(d.span, s.Src.File))
+			return
+		}
+		defs[name] = def{span: sp, assign: a, input: a != nil && len(expr.Idents(a.X)) == 0}
+	}
+	for _, b := range s.Src.Body {
+		prefix := blockPrefix(b)
+		for _, st := range blockStmts(b) {
+			if a, ok := st.X.(*expr.Assign); ok {
+				add(prefix+a.Sym.Name, symSpan(st, a), a)
+			}
+		}
+	}
+	return defs
+}
+
+// blockPrefix is the name prefix of statements inside a block: "" for
+// calc, "NAME." for ground and footing blocks.
+func blockPrefix(b sheet.Block) string {
+	switch b := b.(type) {
+	case *sheet.Ground:
+		return b.Name.Value + "."
+	case *sheet.Footing:
+		return b.Name.Value + "."
+	}
+	return ""
+}
+
+// blockStmts lists the statements of a plinth block.
+func blockStmts(b sheet.Block) []*sheet.Stmt {
+	var lines []sheet.Line
+	switch b := b.(type) {
+	case *sheet.Calc:
+		lines = b.Lines
+	case *sheet.Ground:
+		lines = b.Lines
+	case *sheet.Footing:
+		lines = b.Lines
+	}
+	var out []*sheet.Stmt
+	for _, l := range lines {
+		if st, ok := l.(*sheet.Stmt); ok {
+			out = append(out, st)
+		}
+	}
+	return out
+}
+
+func symSpan(st *sheet.Stmt, a *expr.Assign) source.Span {
+	return source.Span{File: st.Span.File, Start: a.Sym.Pos, End: a.Sym.End}
+}
+
+// posText names a span for a message: "line 12" in the same file, else
+// "02-loads.md:12:1".
+func posText(sp source.Span, here *source.File) string {
+	p := sp.Pos()
+	if sp.File == here {
+		return fmt.Sprintf("line %d", p.Line)
+	}
+	return p.String()
+}
+
+// resolveUses links each sheet to the sheets it uses and reports unknown
+// names, a sheet using itself and redefinitions of used symbols.
+func (e *evaluator) resolveUses() {
+	var names []string
+	for _, s := range e.res.Sheets {
+		names = append(names, s.Name())
+	}
+	for _, s := range e.res.Sheets {
+		for _, u := range s.Meta.Uses {
+			t := e.res.byName[u.Value]
+			switch {
+			case t == nil:
+				hint := ""
+				if n, ok := sheet.Nearest(u.Value, names); ok {
+					hint = fmt.Sprintf("did you mean %s?", n)
+				}
+				e.errs.AddHint(u.Span, hint, "uses %q: no such sheet in this package", u.Value)
+			case t == s:
+				e.errs.Add(u.Span, "a sheet cannot use itself")
+			default:
+				s.Uses = append(s.Uses, t)
+			}
+		}
+	}
+	for i, s := range e.res.Sheets {
+		for _, name := range sortedKeys(e.defs[i]) {
+			for _, t := range s.Uses {
+				if d, ok := e.defs[t.Index][name]; ok {
+					e.errs.Add(e.defs[i][name].span, "%s is already defined on %s (used by this sheet): redefining a used symbol is not allowed", name, d.span.Pos())
+				}
+			}
+		}
+	}
+}
+
+func sortedKeys[V any](m map[string]V) []string {
+	out := make([]string, 0, len(m))
+	for k := range m {
+		out = append(out, k)
+	}
+	sort.Strings(out)
+	return out
+}
+
+// order returns the sheets in evaluation order: file-name order, except
+// that used sheets come first. A uses cycle is reported once, at the
+// uses entry that closes it.
+func (e *evaluator) order() []*Sheet {
+	const (
+		white = iota
+		grey
+		black
+	)
+	state := make([]int, len(e.res.Sheets))
+	var out []*Sheet
+	var visit func(s *Sheet, path []*Sheet)
+	visit = func(s *Sheet, path []*Sheet) {
+		state[s.Index] = grey
+		path = append(path, s)
+		for _, t := range s.Uses {
+			switch state[t.Index] {
+			case grey:
+				var names []string
+				start := 0
+				for i, p := range path {
+					if p == t {
+						start = i
+					}
+				}
+				for _, p := range path[start:] {
+					names = append(names, p.Name())
+				}
+				names = append(names, t.Name())
+				e.errs.Add(usesSpan(s, t.Name()), "uses cycle: %s", strings.Join(names, " → "))
+			case white:
+				visit(t, path)
+			}
+		}
+		state[s.Index] = black
+		out = append(out, s)
+	}
+	for _, s := range e.res.Sheets {
+		if state[s.Index] == white {
+			visit(s, nil)
+		}
+	}
+	return out
+}
+
+func usesSpan(s *Sheet, name string) source.Span {
+	for _, u := range s.Meta.Uses {
+		if u.Value == name {
+			return u.Span
+		}
+	}
+	return source.Span{File: s.Src.File}
+}
+
+// register builds the check register in printing order.
+func (e *evaluator) register() {
+	for _, s := range e.res.Sheets {
+		for _, c := range s.Checks {
+			c.Anchor = fmt.Sprintf("check-%d", len(e.res.Checks)+1)
+			e.res.Checks = append(e.res.Checks, c)
+		}
+	}
+}

@@ -1,0 +1,159 @@
+package eval
+
+import (
+	"crypto/sha256"
+	"encoding/binary"
+	"encoding/hex"
+	"fmt"
+	"strings"
+
+	"plinth/calc/units"
+	"plinth/doc/expr"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// parseOverrides reads the --set arguments and finds the input each one
+// replaces. Errors point into a pseudo-file named "--set" holding the
+// argument, so "--set c_u=55kPx:1:8: unknown unit" shows the column.
+func (e *evaluator) parseOverrides(args []string) {
+	e.over = map[*Sheet]map[string]*Override{}
+	for _, arg := range args {
+		f := source.NewFile("--set "+arg, []byte(arg))
+		o := &Override{Arg: arg}
+		lhs, rhs, ok := strings.Cut(arg, "=")
+		if !ok {
+			e.errs.Add(spanOf(f, 0, len(arg)), "expected name=value, e.g. --set c_u=55kPa")
+			continue
+		}
+		name := strings.TrimSpace(lhs)
+		if i := strings.LastIndex(name, ".md:"); i >= 0 {
+			o.Sheet, name = name[:i+3], name[i+4:]
+		}
+		o.Name = name
+		valStart := len(lhs) + 1
+		x, errs := expr.ParseExpr(rhs, valStart)
+		if len(errs) > 0 {
+			e.addErrs(f, errs)
+			continue
+		}
+		if ids := expr.Idents(x); len(ids) > 0 {
+			e.errs.Add(spanOf(f, ids[0].Pos, ids[0].End), "a --set value must be a number with its unit, not a symbol")
+			continue
+		}
+		q, errs := expr.Eval(x, expr.MapEnv{})
+		if len(errs) > 0 {
+			e.addErrs(f, errs)
+			continue
+		}
+		o.Q = q
+		o.Unit = units.Display(q.Dim)
+		if n, ok := x.(*expr.Num); ok && n.HasUnit {
+			o.Unit = n.Unit
+		}
+		t, sp := e.overrideTarget(f, o)
+		if t == nil {
+			continue
+		}
+		d := e.defs[t.Index][name]
+		if !d.input {
+			e.errs.Add(spanOf(f, 0, len(lhs)), "%s on %s is calculated (%s), not an input: only inputs can be set", name, t.Name(), d.span.Pos())
+			continue
+		}
+		if dim, _ := expr.Dims(d.assign.X, expr.MapEnv{}); dim != q.Dim {
+			e.errs.Add(sp, "%s is %s but the value given is %s", name, dimWords(dim), dimWords(q.Dim))
+			continue
+		}
+		if e.over[t] == nil {
+			e.over[t] = map[string]*Override{}
+		}
+		if e.over[t][name] != nil {
+			e.errs.Add(spanOf(f, 0, len(arg)), "%s on %s is set twice", name, t.Name())
+			continue
+		}
+		e.over[t][name] = o
+		e.res.Overrides = append(e.res.Overrides, o)
+	}
+}
+
+// overrideTarget finds the sheet an override applies to.
+func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.Span) {
+	nameSpan := spanOf(f, 0, strings.Index(o.Arg, "="))
+	valSpan := spanOf(f, nameSpan.End+1, len(o.Arg))
+	if o.Sheet != "" {
+		t := e.res.byName[o.Sheet]
+		if t == nil {
+			e.errs.Add(nameSpan, "no sheet named %s in this package", o.Sheet)
+			return nil, valSpan
+		}
+		if _, ok := e.defs[t.Index][o.Name]; !ok {
+			e.errs.AddHint(nameSpan, e.nearest(o.Name, t), "%s is not defined on %s", o.Name, o.Sheet)
+			return nil, valSpan
+		}
+		return t, valSpan
+	}
+	var found []*Sheet
+	for _, s := range e.res.Sheets {
+		if _, ok := e.defs[s.Index][o.Name]; ok {
+			found = append(found, s)
+		}
+	}
+	switch len(found) {
+	case 0:
+		e.errs.AddHint(nameSpan, e.nearest(o.Name, nil), "%s is not defined on any sheet", o.Name)
+		return nil, valSpan
+	case 1:
+		return found[0], valSpan
+	}
+	var where []string
+	for _, s := range found {
+		where = append(where, fmt.Sprintf("%s (%s)", s.Name(), e.defs[s.Index][o.Name].span.Pos()))
+	}
+	e.errs.AddHint(nameSpan, fmt.Sprintf("write --set %s:%s=...", found[0].Name(), o.Name),
+		"%s is defined on several sheets: %s", o.Name, strings.Join(where, ", "))
+	return nil, valSpan
+}
+
+// nearest suggests a defined name close to name (on s, or anywhere).
+func (e *evaluator) nearest(name string, s *Sheet) string {
+	var names []string
+	for _, t := range e.res.Sheets {
+		if s == nil || s == t {
+			names = append(names, sortedKeys(e.defs[t.Index])...)
+		}
+	}
+	if n, ok := sheet.Nearest(name, names); ok {
+		return fmt.Sprintf("did you mean %s?", n)
+	}
+	return ""
+}
+
+// dimWords names a dimension by its display unit ("a stress (kPa)").
+func dimWords(d units.Dim) string {
+	u := units.Display(d)
+	if u.Name == "" {
+		return "dimensionless"
+	}
+	return "in " + u.Name
+}
+
+// Fingerprint is the SHA-256 of the package's source files in order (each
+// as its path, length and bytes) followed by the --set arguments in force.
+// A printed document carries its first 12 hex digits on every page.
+func (r *Result) Fingerprint() string {
+	h := sha256.New()
+	var n [8]byte
+	put := func(b []byte) {
+		binary.BigEndian.PutUint64(n[:], uint64(len(b)))
+		h.Write(n[:])
+		h.Write(b)
+	}
+	for _, f := range r.Src.Files {
+		put([]byte(f.Path))
+		put(f.Text)
+	}
+	for _, o := range r.Overrides {
+		put([]byte("--set " + o.Arg))
+	}
+	return hex.EncodeToString(h.Sum(nil))
+}

@@ -1,0 +1,7 @@
+package eval
+
+import "plinth/doc/source"
+
+func spanOf(f *source.File, start, end int) source.Span {
+	return source.Span{File: f, Start: start, End: end}
+}
