@@ -3,12 +3,15 @@ module plinth
 go 1.26.0
 
 require (
-	github.com/Knetic/govaluate v3.0.0+incompatible // indirect
+	github.com/Knetic/govaluate v3.0.0+incompatible
+	github.com/signintech/gopdf v0.38.1
+	github.com/yuin/goldmark v1.8.7
+	go.yaml.in/yaml/v3 v3.0.6
+	golang.org/x/image v0.48.0
+	gonum.org/v1/gonum v0.17.0
+)
+
+require (
 	github.com/phpdave11/gofpdi v1.0.14-0.20211212211723-1f10f9844311 // indirect
 	github.com/pkg/errors v0.8.1 // indirect
-	github.com/signintech/gopdf v0.38.1 // indirect
-	github.com/yuin/goldmark v1.8.7 // indirect
-	go.yaml.in/yaml/v3 v3.0.6 // indirect
-	golang.org/x/image v0.48.0 // indirect
-	gonum.org/v1/gonum v0.17.0 // indirect
 )

@@ -11,6 +11,7 @@ import (
 // as the engineer wrote the input. Where names the layer or footing.
 type RangeError struct {
 	Where  string
+	Layer  int // 1-based index of the layer concerned; 0 when not a layer
 	Param  string
 	Value  float64
 	Min    float64
@@ -44,6 +45,7 @@ func num(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
 // numeric range (layers out of order, a missing required parameter).
 type InputError struct {
 	Where string
+	Layer int // 1-based index of the layer concerned; 0 when not a layer
 	Param string
 	Msg   string
 }
@@ -81,8 +83,13 @@ func (l Errors) Err() error {
 // check appends a RangeError when v (SI) scaled by 1/scale lies outside
 // [min, max] (display units). openMin excludes min itself.
 func (l *Errors) check(where, param string, v, scale, min, max float64, openMin bool, unit string) {
+	l.checkLayer(where, 0, param, v, scale, min, max, openMin, unit)
+}
+
+// checkLayer is check for a parameter of layer n (1-based).
+func (l *Errors) checkLayer(where string, n int, param string, v, scale, min, max float64, openMin bool, unit string) {
 	d := v / scale
 	if d < min || d > max || (openMin && d == min) || d != d {
-		*l = append(*l, &RangeError{Where: where, Param: param, Value: d, Min: min, Max: max, Unit: unit})
+		*l = append(*l, &RangeError{Where: where, Layer: n, Param: param, Value: d, Min: min, Max: max, Unit: unit})
 	}
 }

@@ -94,28 +94,29 @@ func (g Ground) Validate() error {
 		if l.Name != "" {
 			w = fmt.Sprintf("layer %q", l.Name)
 		}
+		n := i + 1
 		if i == 0 && l.Top != 0 {
-			errs = append(errs, &InputError{Where: w, Param: "top", Msg: fmt.Sprintf("the first layer must start at ground level (top = 0 m), not %g m", l.Top)})
+			errs = append(errs, &InputError{Where: w, Layer: n, Param: "top", Msg: fmt.Sprintf("the first layer must start at ground level (top = 0 m), not %g m", l.Top)})
 		}
 		if i > 0 && l.Top <= g.Layers[i-1].Top {
-			errs = append(errs, &InputError{Where: w, Param: "top", Msg: fmt.Sprintf("layers must be listed from the top down: top %g m is not below the layer above (%g m)", l.Top, g.Layers[i-1].Top)})
+			errs = append(errs, &InputError{Where: w, Layer: n, Param: "top", Msg: fmt.Sprintf("layers must be listed from the top down: top %g m is not below the layer above (%g m)", l.Top, g.Layers[i-1].Top)})
 		}
-		errs.check(w, "top", l.Top, 1, 0, 200, false, "m")
-		errs.check(w, "gamma", l.Gamma, kNm3, 5, 30, false, "kN/m3")
+		errs.checkLayer(w, n, "top", l.Top, 1, 0, 200, false, "m")
+		errs.checkLayer(w, n, "gamma", l.Gamma, kNm3, 5, 30, false, "kN/m3")
 		if l.GammaSat.Set {
-			errs.check(w, "gamma_sat", l.GammaSat.V, kNm3, 5, 30, false, "kN/m3")
+			errs.checkLayer(w, n, "gamma_sat", l.GammaSat.V, kNm3, 5, 30, false, "kN/m3")
 			if l.GammaSat.V < l.Gamma {
-				errs = append(errs, &RangeError{Where: w, Param: "gamma_sat", Value: l.GammaSat.V / kNm3, Min: l.Gamma / kNm3, Max: 30, Unit: "kN/m3", Reason: "saturated unit weight cannot be less than the bulk unit weight"})
+				errs = append(errs, &RangeError{Where: w, Layer: n, Param: "gamma_sat", Value: l.GammaSat.V / kNm3, Min: l.Gamma / kNm3, Max: 30, Unit: "kN/m3", Reason: "saturated unit weight cannot be less than the bulk unit weight"})
 			}
 		}
 		opt := func(name string, o Opt, scale, min, max float64, open bool, unit string) {
 			if o.Set {
-				errs.check(w, name, o.V, scale, min, max, open, unit)
+				errs.checkLayer(w, n, name, o.V, scale, min, max, open, unit)
 			}
 		}
 		opt("c_u", l.Cu, kPa, 0, 2000, true, "kPa")
 		if l.Phi.Set && l.Phi.V/deg >= 50 {
-			errs = append(errs, &RangeError{Where: w, Param: "phi'", Value: l.Phi.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it and the factors are meaningless there"})
+			errs = append(errs, &RangeError{Where: w, Layer: n, Param: "phi'", Value: l.Phi.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it and the factors are meaningless there"})
 		} else {
 			opt("phi'", l.Phi, deg, 0, 50, false, "deg")
 		}
@@ -128,7 +129,7 @@ func (g Ground) Validate() error {
 		opt("C_c", l.Cc, 1, 0, 10, true, "")
 		opt("C_r", l.Cr, 1, 0, 10, true, "")
 		if l.Cr.Set && l.Cc.Set && l.Cr.V > l.Cc.V {
-			errs = append(errs, &RangeError{Where: w, Param: "C_r", Value: l.Cr.V, Min: 0, Max: l.Cc.V, Reason: "the recompression index cannot exceed the compression index"})
+			errs = append(errs, &RangeError{Where: w, Layer: n, Param: "C_r", Value: l.Cr.V, Min: 0, Max: l.Cc.V, Reason: "the recompression index cannot exceed the compression index"})
 		}
 		opt("e_0", l.E0, 1, 0, 15, true, "")
 		opt("sigma'_p", l.SigmaP, kPa, 0, 10000, true, "kPa")

@@ -1,0 +1,147 @@
+package parse
+
+import (
+	"errors"
+	"io/fs"
+	"net/url"
+	"strings"
+
+	"plinth/doc/load"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// Package parses a loaded package: package.yaml, then every sheet in
+// order. It then checks what needs the whole package: every uses entry
+// names another sheet of the package, and every image, page template and
+// partial-factor file named lies inside the package folder (asked of
+// doc/load, so this package itself does no I/O).
+func Package(p *load.Package) (*sheet.Package, source.List) {
+	var diags source.List
+	pkg := &sheet.Package{Dir: p.Dir, Files: p.Files(), Inside: p}
+	if p.Config != nil {
+		m, d := Config(p.Config)
+		pkg.Meta = m
+		diags.Append(d)
+	}
+	for _, f := range p.Sheets {
+		s, d := Sheet(f)
+		pkg.Sheets = append(pkg.Sheets, s)
+		diags.Append(d)
+	}
+	ck := checker{p: p, pkg: pkg, diags: &diags}
+	ck.meta(&pkg.Meta)
+	for _, s := range pkg.Sheets {
+		ck.meta(&s.Meta)
+		ck.uses(s)
+		ck.images(s.Body)
+	}
+	diags.Sort()
+	return pkg, diags
+}
+
+type checker struct {
+	p     *load.Package
+	pkg   *sheet.Package
+	diags *source.List
+}
+
+// meta checks the file paths a settings block names.
+func (ck *checker) meta(m *sheet.Meta) {
+	if t := m.Template; t.IsSet() && !contains(sheet.Templates, t.Value) {
+		hint := "a built-in template (" + strings.Join(sheet.Templates, ", ") + ") or a file inside the package folder"
+		if near, ok := sheet.Nearest(t.Value, sheet.Templates); ok {
+			hint = "did you mean " + quote(near) + "?"
+		}
+		ck.file(t, "template", hint)
+	}
+	if f := m.Factors; f.IsSet() {
+		ck.file(f, "factors file", "")
+	}
+}
+
+// file checks that s names a file inside the package folder.
+func (ck *checker) file(s sheet.Str, what, hint string) {
+	if s.Value == "" {
+		ck.diags.Add(s.Span, "%s: expected a path inside the package folder", what)
+		return
+	}
+	if strings.Contains(s.Value, "://") || strings.HasPrefix(s.Value, "data:") {
+		ck.diags.AddHint(s.Span, "copy the file into the package folder and name it by its path there",
+			"%s %q: files load from inside the package folder, not from the web", what, s.Value)
+		return
+	}
+	rel := s.Value
+	if strings.Contains(rel, "%") {
+		if u, err := url.PathUnescape(rel); err == nil {
+			rel = u
+		}
+	}
+	_, err := ck.p.Resolve(rel)
+	switch {
+	case err == nil:
+	case errors.Is(err, load.ErrOutside):
+		ck.diags.AddHint(s.Span, "files a sheet names must lie inside the package folder",
+			"%s %q lies outside the package folder", what, s.Value)
+	case errors.Is(err, fs.ErrNotExist):
+		if hint == "" {
+			hint = "paths are relative to the package folder"
+		}
+		ck.diags.AddHint(s.Span, hint, "%s %q not found in the package folder", what, s.Value)
+	default:
+		ck.diags.Add(s.Span, "%s %q: %v", what, s.Value, err)
+	}
+}
+
+// uses checks that each uses entry names another sheet of the package.
+func (ck *checker) uses(s *sheet.Sheet) {
+	var names, others []string
+	for _, o := range ck.pkg.Sheets {
+		names = append(names, o.Name())
+		if o != s {
+			others = append(others, o.Name())
+		}
+	}
+	seen := map[string]int{}
+	for _, u := range s.Meta.Uses {
+		switch {
+		case u.Value == s.Name():
+			ck.diags.Add(u.Span, "a sheet cannot use itself")
+		case seen[u.Value] > 0:
+			ck.diags.Add(u.Span, "%q is listed twice in uses (first at line %d)", u.Value, seen[u.Value])
+		case contains(names, u.Value):
+		case ck.p.Single:
+			ck.diags.AddHint(u.Span, "render the package folder to use other sheets",
+				"%q is not part of this run: a single sheet was given", u.Value)
+		default:
+			hint := "uses lists file names of the package's other sheets: " + strings.Join(others, ", ")
+			if contains(others, u.Value+".md") {
+				hint = "did you mean " + quote(u.Value+".md") + "?"
+			} else if near, ok := sheet.Nearest(u.Value, others); ok {
+				hint = "did you mean " + quote(near) + "?"
+			}
+			ck.diags.AddHint(u.Span, hint, "no sheet %q in this package", u.Value)
+		}
+		if seen[u.Value] == 0 {
+			seen[u.Value] = u.Span.Pos().Line
+		}
+	}
+}
+
+// images checks every figure's path, in nested blocks too.
+func (ck *checker) images(blocks []sheet.Block) {
+	for _, b := range blocks {
+		switch b := b.(type) {
+		case *sheet.Image:
+			ck.file(b.Path, "image", "")
+		case *sheet.List:
+			for _, it := range b.Items {
+				ck.images(it.Blocks)
+			}
+		case *sheet.Quote:
+			ck.images(b.Body)
+		case *sheet.Caution:
+			ck.images(b.Body)
+		}
+	}
+}
