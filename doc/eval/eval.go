@@ -2,9 +2,11 @@ package eval
 
 import (
 	"fmt"
+	"path/filepath"
 	"sort"
 	"strings"
 
+	"plinth/calc/units"
 	"plinth/doc/expr"
 	"plinth/doc/sheet"
 	"plinth/doc/source"
@@ -24,14 +26,19 @@ func Package(p *sheet.Package, opt Options) (*Result, source.List) {
 	for i, s := range p.Sheets {
 		es := &Sheet{
 			Src: s, Meta: p.Effective(s), Index: i,
-			stmts:   map[*sheet.Stmt]any{},
-			interps: map[*sheet.Interp]*Interp{},
-			local:   map[string]*Symbol{},
+			stmts:    map[*sheet.Stmt]any{},
+			interps:  map[*sheet.Interp]*Interp{},
+			local:    map[string]*Symbol{},
+			blocks:   map[sheet.Block]*Block{},
+			grounds:  map[string]*Ground{},
+			footings: map[string]*Footing{},
 		}
 		e.res.Sheets = append(e.res.Sheets, es)
 		e.res.byName[es.Name()] = es
 	}
 	e.defs = make([]map[string]def, len(e.res.Sheets))
+	e.blockNames = make([]map[string][]string, len(e.res.Sheets))
+	e.tables = map[*sheet.Grid]*table{}
 	for i, s := range e.res.Sheets {
 		e.defs[i] = e.collect(s)
 	}
@@ -50,39 +57,105 @@ func Package(p *sheet.Package, opt Options) (*Result, source.List) {
 
 // def is a name defined on a sheet, found before evaluation.
 type def struct {
-	span   source.Span
-	input  bool // a statement whose expression holds no symbol
-	assign *expr.Assign
+	span  source.Span
+	input bool      // a value given directly (no symbol in its expression)
+	dim   units.Dim // an input's dimension (for checking --set values)
 }
 
 type evaluator struct {
-	pkg    *sheet.Package
-	res    *Result
-	errs   source.List
-	defs   []map[string]def // per sheet index
-	failed map[string]bool  // "sheet\x00name" of symbols whose evaluation failed
-	over   map[*Sheet]map[string]*Override
+	pkg        *sheet.Package
+	res        *Result
+	errs       source.List
+	defs       []map[string]def // per sheet index
+	failed     map[string]bool  // "sheet\x00name" of symbols whose evaluation failed
+	over       map[*Sheet]map[string]*Override
+	tables     map[*sheet.Grid]*table
+	blockNames []map[string][]string // per sheet: "ground"/"footing" → names defined
+	annexes    map[string]annexEntry
 }
 
 // collect finds every name a sheet defines, reporting redefinitions.
 func (e *evaluator) collect(s *Sheet) map[string]def {
 	defs := map[string]def{}
-	add := func(name string, sp source.Span, a *expr.Assign) {
-		if d, ok := defs[name]; ok {
-			e.errs.Add(sp, "%s is already defined at %s", name, posText(d.span, s.Src.File))
+	add := func(name string, d def) {
+		if old, ok := defs[name]; ok {
+			e.errs.Add(d.span, "%s is already defined at %s", name, posText(old.span, s.Src.File))
 			return
 		}
-		defs[name] = def{span: sp, assign: a, input: a != nil && len(expr.Idents(a.X)) == 0}
+		defs[name] = d
 	}
 	for _, b := range s.Src.Body {
 		prefix := blockPrefix(b)
 		for _, st := range blockStmts(b) {
 			if a, ok := st.X.(*expr.Assign); ok {
-				add(prefix+a.Sym.Name, symSpan(st, a), a)
+				d := def{span: symSpan(st, a), input: len(expr.Idents(a.X)) == 0}
+				if d.input {
+					d.dim, _ = expr.Dims(a.X, expr.MapEnv{})
+				}
+				add(prefix+a.Sym.Name, d)
 			}
 		}
+		for _, c := range e.tableDefs(b) {
+			add(c.name, c.def)
+		}
+		e.blockDefs(s, b, add)
 	}
 	return defs
+}
+
+// tableDefs reads a ground or footing table (once, kept for evaluation)
+// and lists the symbols its cells define.
+func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
+	var t *table
+	switch b := b.(type) {
+	case *sheet.Ground:
+		if b.Table != nil {
+			t = e.readTable(b.Table, groundColumns, b.Name.Value+".", "layer", "L")
+			e.tables[b.Table] = t
+		}
+	case *sheet.Footing:
+		if b.Table != nil {
+			t = e.readTable(b.Table, footingCol, b.Name.Value+".", "action", "A")
+			e.tables[b.Table] = t
+		}
+	}
+	if t == nil || !t.ok {
+		return nil
+	}
+	return t.defs()
+}
+
+// blockDefs records ground, footing and analysis names, and the result
+// symbols an analysis will define.
+func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
+	names := e.blockNames[s.Index]
+	if names == nil {
+		names = map[string][]string{}
+		e.blockNames[s.Index] = names
+	}
+	reg := func(kind string, n sheet.Str) {
+		for _, k := range []string{"ground", "footing"} {
+			if containsStr(names[k], n.Value) {
+				e.errs.Add(n.Span, "%s is already the name of a %s on this sheet", n.Value, k)
+				return
+			}
+		}
+		names[kind] = append(names[kind], n.Value)
+	}
+	switch b := b.(type) {
+	case *sheet.Ground:
+		reg("ground", b.Name)
+	case *sheet.Footing:
+		reg("footing", b.Name)
+	case *sheet.Analysis:
+		p := b.ResultPrefix()
+		for _, n := range resultNames[b.Kind] {
+			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
+				continue
+			}
+			add(p.Value+"."+n, def{span: headerSpan(b.Span)})
+		}
+	}
 }
 
 // blockPrefix is the name prefix of statements inside a block: "" for
@@ -122,13 +195,14 @@ func symSpan(st *sheet.Stmt, a *expr.Assign) source.Span {
 }
 
 // posText names a span for a message: "line 12" in the same file, else
-// "02-loads.md:12:1".
+// "02-loads.md:12:1" (sheets of a package share a folder, so the file name
+// is enough).
 func posText(sp source.Span, here *source.File) string {
 	p := sp.Pos()
 	if sp.File == here {
 		return fmt.Sprintf("line %d", p.Line)
 	}
-	return p.String()
+	return fmt.Sprintf("%s:%d:%d", filepath.Base(p.Path), p.Line, p.Col)
 }
 
 // resolveUses links each sheet to the sheets it uses and reports unknown
@@ -159,7 +233,7 @@ func (e *evaluator) resolveUses() {
 		for _, name := range sortedKeys(e.defs[i]) {
 			for _, t := range s.Uses {
 				if d, ok := e.defs[t.Index][name]; ok {
-					e.errs.Add(e.defs[i][name].span, "%s is already defined on %s (used by this sheet): redefining a used symbol is not allowed", name, d.span.Pos())
+					e.errs.Add(e.defs[i][name].span, "%s is already defined on %s (used by this sheet): redefining a used symbol is not allowed", name, posText(d.span, nil))
 				}
 			}
 		}

@@ -92,7 +92,7 @@ func (sc scope) unresolved(name string, sp source.Span) {
 		}
 		if d, ok := e.defs[t.Index][name]; ok {
 			e.errs.AddHint(sp, fmt.Sprintf("add %s to this sheet's uses", t.Name()),
-				"%s is defined on %s, which this sheet does not use", name, d.span.Pos())
+				"%s is defined on %s, which this sheet does not use", name, posText(d.span, nil))
 			return
 		}
 	}

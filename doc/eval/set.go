@@ -57,11 +57,11 @@ func (e *evaluator) parseOverrides(args []string) {
 		}
 		d := e.defs[t.Index][name]
 		if !d.input {
-			e.errs.Add(spanOf(f, 0, len(lhs)), "%s on %s is calculated (%s), not an input: only inputs can be set", name, t.Name(), d.span.Pos())
+			e.errs.Add(spanOf(f, 0, len(lhs)), "%s on %s is calculated (%s), not an input: only inputs can be set", name, t.Name(), posText(d.span, nil))
 			continue
 		}
-		if dim, _ := expr.Dims(d.assign.X, expr.MapEnv{}); dim != q.Dim {
-			e.errs.Add(sp, "%s is %s but the value given is %s", name, dimWords(dim), dimWords(q.Dim))
+		if d.dim != q.Dim {
+			e.errs.Add(sp, "%s is %s but the value given is %s", name, dimWords(d.dim), dimWords(q.Dim))
 			continue
 		}
 		if e.over[t] == nil {
@@ -107,7 +107,7 @@ func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.
 	}
 	var where []string
 	for _, s := range found {
-		where = append(where, fmt.Sprintf("%s (%s)", s.Name(), e.defs[s.Index][o.Name].span.Pos()))
+		where = append(where, posText(e.defs[s.Index][o.Name].span, nil))
 	}
 	e.errs.AddHint(nameSpan, fmt.Sprintf("write --set %s:%s=...", found[0].Name(), o.Name),
 		"%s is defined on several sheets: %s", o.Name, strings.Join(where, ", "))
@@ -128,13 +128,28 @@ func (e *evaluator) nearest(name string, s *Sheet) string {
 	return ""
 }
 
-// dimWords names a dimension by its display unit ("a stress (kPa)").
+// dimWords names a dimension for messages: "a stress (kPa)".
 func dimWords(d units.Dim) string {
-	u := units.Display(d)
-	if u.Name == "" {
-		return "dimensionless"
+	kinds := []struct {
+		d    units.Dim
+		word string
+	}{
+		{units.Length, "a length"}, {units.Area, "an area"}, {units.Volume, "a volume"},
+		{units.Force, "a force"}, {units.Pressure, "a stress"}, {units.UnitWeight, "a unit weight"},
+		{units.LineLoad, "a force per metre"}, {units.Moment, "a moment"}, {units.Angle, "an angle"},
+		{units.Time, "a time"}, {units.Compliance, "a compressibility"}, {units.Diffusivity, "a consolidation coefficient"},
+		{units.Mass, "a mass"}, {units.Velocity, "a velocity"},
 	}
-	return "in " + u.Name
+	if d.IsNone() {
+		return "a pure number"
+	}
+	u := units.Display(d).Name
+	for _, k := range kinds {
+		if k.d == d {
+			return k.word + " (" + u + ")"
+		}
+	}
+	return "a quantity in " + u
 }
 
 // Fingerprint is the SHA-256 of the package's source files in order (each

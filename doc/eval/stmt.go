@@ -13,6 +13,14 @@ func (e *evaluator) sheet(s *Sheet) {
 		for _, st := range blockStmts(b) {
 			e.stmt(s, prefix, st)
 		}
+		switch b := b.(type) {
+		case *sheet.Ground:
+			e.ground(s, b)
+		case *sheet.Footing:
+			e.footing(s, b)
+		case *sheet.Analysis:
+			e.analysis(s, b)
+		}
 	}
 }
 

@@ -47,9 +47,12 @@ type Sheet struct {
 	Checks  []*Check   // on this sheet, in document order
 	Uses    []*Sheet   // sheets whose symbols this sheet reads
 
-	stmts   map[*sheet.Stmt]any // *Symbol or *Check
-	interps map[*sheet.Interp]*Interp
-	local   map[string]*Symbol // by full name
+	stmts    map[*sheet.Stmt]any // *Symbol or *Check
+	interps  map[*sheet.Interp]*Interp
+	local    map[string]*Symbol // by full name
+	blocks   map[sheet.Block]*Block
+	grounds  map[string]*Ground
+	footings map[string]*Footing
 }
 
 // Name is the sheet's file name ("03-pad.md").

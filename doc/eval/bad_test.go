@@ -1,0 +1,33 @@
+package eval_test
+
+import (
+	"testing"
+
+	"plinth/doc/eval"
+	"plinth/doc/load"
+	"plinth/doc/parse"
+	"plinth/doc/source"
+	"plinth/internal/badcase"
+)
+
+// TestBad runs the evaluation-stage cases of testdata/bad/eval (see
+// testdata/bad/README.md): the input parses, and evaluation must report
+// exactly the annotated diagnostics.
+func TestBad(t *testing.T) {
+	n := badcase.Run(t, "../../testdata/bad/eval", func(path string) source.List {
+		p, diags := load.Path(path)
+		if p == nil {
+			return diags
+		}
+		pkg, d := parse.Package(p)
+		diags.Append(d)
+		if diags.HasErrors() {
+			return diags
+		}
+		_, d = eval.Package(pkg, eval.Options{})
+		return append(diags, d...)
+	})
+	if n < 2 {
+		t.Errorf("only %d cases", n)
+	}
+}

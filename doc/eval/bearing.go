@@ -1,0 +1,138 @@
+package eval
+
+import (
+	"plinth/calc/bearing"
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/units"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// bearingNotes describe the bearing block's result symbols.
+var bearingNotes = map[string]string{
+	"R_d": "design bearing resistance, governing case", "util": "bearing utilisation V_d/R_d, governing case",
+	"q_Ed": "design bearing pressure V_d/A'", "q_Rd": "design resistance pressure R_d/A'",
+	"q_ult": "ultimate bearing pressure used", "V_d": "design vertical action, governing case",
+	"H_d": "design horizontal action, governing case", "e_B": "eccentricity along B", "e_L": "eccentricity along L",
+	"B'": "effective width", "L'": "effective length", "A'": "effective area",
+	"util_u": "highest undrained (short-term) utilisation", "util_dr": "highest drained (long-term) utilisation",
+	"R_h_d": "design sliding resistance, governing case", "util_h": "sliding utilisation, governing case",
+}
+
+// bearingInput builds the engine input shared by bearing and capacity
+// blocks: ground, footing, actions (with self-weight when asked) and the
+// bearing options.
+func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts, methodKey string) (bearing.Input, bool) {
+	in := bearing.Input{Ground: blk.On.Model, Footing: blk.Of.Model, Actions: withSelfWeight(blk.Of, blk.On)}
+	ok := true
+	if d := o.word("drainage", ""); d != "" {
+		in.Options.Drainage, _ = bearing.ParseDrainage(d)
+	}
+	in.Options.Method, _ = bearing.ParseMethod(o.word(methodKey, "ec7"))
+	in.Options.LocalShear, _ = bearing.ParseSwitch(o.word("local_shear", "auto"))
+	if w := o.word("sliding", ""); w != "" {
+		in.Options.Sliding, _ = bearing.ParseSwitch(w)
+	}
+	in.Options.TwoLayer, _ = bearing.ParseSwitch(o.word("two_layer", "auto"))
+	if o.word("interface", "cast") == "precast" {
+		in.Options.Interface.KDelta = 2.0 / 3
+	}
+	if x := o["delta"]; x != nil {
+		q, qok := e.quantity(scope{e: e, s: s}, x, units.Angle, "an angle")
+		ok = ok && qok
+		in.Options.Interface.Delta = site.Some(q.V)
+	}
+	ap, aok := e.approach(s, o)
+	in.Options.Approach = ap
+	return in, ok && aok
+}
+
+// approach reads the approach option against the partial-factor sets in
+// force (EN 1997-1 recommended, or the package's factors file).
+func (e *evaluator) approach(s *Sheet, o opts) (design.Approach, bool) {
+	annex, ok := e.annex(s)
+	if !ok {
+		return design.Approach{}, false
+	}
+	x := o["approach"]
+	if x == nil {
+		ap, err := annex.Lookup("DA1")
+		if err != nil {
+			e.errs.Add(s.Meta.Factors.Span, "the partial-factor file has no DA1, the default approach: %v", err)
+			return ap, false
+		}
+		return ap, true
+	}
+	ap, err := annex.Lookup(x.Value.Value)
+	if err != nil {
+		e.errs.Add(x.Value.Span, "approach %s: %v", x.Value.Value, err)
+		return ap, false
+	}
+	return ap, true
+}
+
+// withSelfWeight returns the footing's actions, adding its own weight and
+// the backfill over it as a permanent action when self_weight = auto:
+// W = γ_c·A·h + A·σ_v(D − h), the backfill taking the ground's total
+// vertical stress from ground level to the top of the footing (common
+// practice).
+func withSelfWeight(f *Footing, g *Ground) []site.Action {
+	acts := append([]site.Action(nil), f.Actions...)
+	if !f.SelfWeight {
+		return acts
+	}
+	a := f.Model.Area()
+	w := f.GammaC*a*f.H + a*g.Model.SigmaV(f.Model.D-f.H)
+	return append([]site.Action{{Name: "Self weight and backfill", Kind: site.Permanent, V: w}}, acts...)
+}
+
+// SelfWeight is the weight withSelfWeight adds (N, or N/m for a strip);
+// 0 when self_weight is not auto.
+func (f *Footing) SelfWeightOn(g *Ground) float64 {
+	if !f.SelfWeight {
+		return 0
+	}
+	a := f.Model.Area()
+	return f.GammaC*a*f.H + a*g.Model.SigmaV(f.Model.D-f.H)
+}
+
+// bearing runs the bearing engine for a block.
+func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bool {
+	in, ok := e.bearingInput(s, b, blk, o, "method")
+	if !ok {
+		return false
+	}
+	res, err := bearing.Check(in)
+	if err != nil {
+		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		return false
+	}
+	blk.Bearing = res
+	blk.Cautions = res.Trace.Cautions
+	blk.Sources = res.Trace.Sources
+	e.defineResults(s, blk, res.Values, bearingNotes)
+	if res.Governing >= 0 {
+		c := res.Cases[res.Governing]
+		fu := forceUnit(in.Footing)
+		e.addCheck(s, blk, blk.Name+" bearing: V_d <= R_d", "<=",
+			units.Quantity{V: c.V, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
+			"bearing resistance, governing case: "+c.Name)
+	}
+	if res.GoverningSliding >= 0 {
+		c := res.Sliding[res.GoverningSliding]
+		fu := forceUnit(in.Footing)
+		e.addCheck(s, blk, blk.Name+" sliding: H_d <= R_h_d", "<=",
+			units.Quantity{V: c.H, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
+			"sliding resistance, governing case: "+c.Name)
+	}
+	return true
+}
+
+// forceUnit is kN for a pad and kN/m for a strip.
+func forceUnit(f site.Footing) units.Unit {
+	if f.Shape == site.Strip {
+		return units.MustParse("kN/m")
+	}
+	return units.MustParse("kN")
+}

@@ -1,0 +1,195 @@
+package eval
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/calc/bearing"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// Block is an evaluated plinth block other than calc: a ground model, a
+// footing, or an analysis with the engine's result. Results are the
+// symbols the analysis defines (PREFIX.R_d ...), Checks its governing
+// checks (they enter the check register). Nothing here is recomputed
+// later: the document prints the engine's trace as it is.
+type Block struct {
+	Kind    sheet.Kind
+	Name    string // ground/footing name, or the analysis' result prefix
+	Span    source.Span
+	Sheet   *Sheet
+	Ground  *Ground
+	Footing *Footing
+	// Analyses: the ground and footing analysed, and the engine results.
+	On       *Ground
+	Of       *Footing
+	Bearing  *bearing.Result
+	Settle   *SettleResult
+	Capacity *CapacityResult
+	Options  []string // the options in force, "method = ec7", for printing
+	Results  []*Symbol
+	Checks   []*Check
+	Cautions []trace.Caution // every engine caution, in trace order
+	Sources  []trace.Source  // every publication the engine cited
+}
+
+// Block returns the evaluated form of a ground, footing or analysis block.
+func (s *Sheet) Block(b sheet.Block) *Block { return s.blocks[b] }
+
+// Blocks lists the sheet's evaluated blocks in document order.
+func (s *Sheet) Blocks() []*Block {
+	var out []*Block
+	for _, b := range s.Src.Body {
+		if x := s.blocks[b]; x != nil {
+			out = append(out, x)
+		}
+	}
+	return out
+}
+
+// resultNames lists the symbols each analysis kind may define, for
+// "used above its definition" messages before evaluation.
+var resultNames = map[sheet.Kind][]string{
+	sheet.KindBearing: {"R_d", "util", "q_Ed", "q_Rd", "q_ult", "V_d", "H_d", "e_B", "e_L", "B'", "L'", "A'", "util_u", "util_dr", "R_h_d", "util_h"},
+}
+
+// findFooting and findGround look a block name up on the sheet and the
+// sheets it uses.
+func (e *evaluator) findFooting(s *Sheet, name sheet.Str) (*Footing, bool) {
+	for _, t := range append([]*Sheet{s}, s.Uses...) {
+		if f := t.footings[name.Value]; f != nil {
+			return f, f.OK
+		}
+	}
+	e.missingBlock(s, name, "footing", func(t *Sheet) []string { return keysOf(t.footings) })
+	return nil, false
+}
+
+func (e *evaluator) findGround(s *Sheet, name sheet.Str) (*Ground, bool) {
+	for _, t := range append([]*Sheet{s}, s.Uses...) {
+		if g := t.grounds[name.Value]; g != nil {
+			return g, g.OK
+		}
+	}
+	e.missingBlock(s, name, "ground", func(t *Sheet) []string { return keysOf(t.grounds) })
+	return nil, false
+}
+
+func keysOf[V any](m map[string]V) []string { return sortedKeys(m) }
+
+// missingBlock reports a footing or ground name that is not defined above.
+func (e *evaluator) missingBlock(s *Sheet, name sheet.Str, kind string, names func(*Sheet) []string) {
+	for _, t := range e.res.Sheets {
+		if t != s && containsStr(e.blockNames[t.Index][kind], name.Value) {
+			e.errs.AddHint(name.Span, "add "+t.Name()+" to this sheet's uses", "%s %s is defined on %s, which this sheet does not use", kind, name.Value, t.Name())
+			return
+		}
+	}
+	if containsStr(e.blockNames[s.Index][kind], name.Value) {
+		e.errs.Add(name.Span, "%s %s is defined below this block: define it first", kind, name.Value)
+		return
+	}
+	var all []string
+	for _, t := range append([]*Sheet{s}, s.Uses...) {
+		all = append(all, e.blockNames[t.Index][kind]...)
+	}
+	hint := ""
+	if n, ok := sheet.Nearest(name.Value, all); ok {
+		hint = fmt.Sprintf("did you mean %s?", n)
+	} else if len(all) == 0 {
+		hint = fmt.Sprintf("define it in a ```%s %s block", kind, name.Value)
+	}
+	e.errs.AddHint(name.Span, hint, "no %s named %s", kind, name.Value)
+}
+
+func containsStr(list []string, s string) bool {
+	for _, x := range list {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}
+
+// analysis evaluates a bearing, settlement or capacity block.
+func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
+	blk := &Block{Kind: b.Kind, Name: b.ResultPrefix().Value, Span: b.Span, Sheet: s}
+	s.blocks[b] = blk
+	f, fok := e.findFooting(s, b.Footing)
+	g, gok := e.findGround(s, b.Ground)
+	blk.Of, blk.On = f, g
+	opts := e.options(b)
+	if !fok || !gok || opts == nil {
+		e.failResults(s, blk)
+		return
+	}
+	for _, o := range b.Options() {
+		blk.Options = append(blk.Options, o.Name.Value+" = "+o.Value.Value)
+	}
+	var ok bool
+	switch b.Kind {
+	case sheet.KindBearing:
+		ok = e.bearing(s, b, blk, opts)
+	case sheet.KindSettlement:
+		ok = e.settlement(s, b, blk, opts)
+	case sheet.KindCapacity:
+		ok = e.capacity(s, b, blk, opts)
+	}
+	if !ok {
+		e.failResults(s, blk)
+	}
+}
+
+// failResults marks an analysis' result names as failed so uses of them
+// are not reported again.
+func (e *evaluator) failResults(s *Sheet, blk *Block) {
+	for _, n := range resultNames[blk.Kind] {
+		e.fail(s, blk.Name+"."+n)
+	}
+}
+
+// defineResults turns engine summary values into symbols PREFIX.name.
+func (e *evaluator) defineResults(s *Sheet, blk *Block, vals []trace.Value, notes map[string]string) {
+	for _, v := range vals {
+		name := blk.Name + "." + v.Symbol
+		if old := s.local[name]; old != nil {
+			e.errs.AddHint(blk.Span, fmt.Sprintf("name this block's results: %s ... as %s_2", strings.Fields(blk.Span.Text())[0], blk.Name),
+				"%s is already defined at %s", name, posText(old.Span, s.Src.File))
+			return
+		}
+		u, err := units.Parse(v.Unit)
+		if err != nil {
+			e.errs.Add(blk.Span, "internal: the engine gave %s an unknown unit %q", v.Symbol, v.Unit)
+			continue
+		}
+		y := &Symbol{
+			Name: name, Q: units.Quantity{V: v.V, Dim: u.Dim}, Unit: u, Decimals: -1,
+			Note: sheet.Str{Value: notes[v.Symbol]}, Span: headerSpan(blk.Span), Sheet: s,
+		}
+		s.local[name] = y
+		s.Symbols = append(s.Symbols, y)
+		blk.Results = append(blk.Results, y)
+	}
+}
+
+// headerSpan is the first line of a block (its fence and info string).
+func headerSpan(sp source.Span) source.Span {
+	t := sp.Text()
+	if i := strings.IndexByte(t, '\n'); i >= 0 {
+		sp.End = sp.Start + i
+	}
+	return sp
+}
+
+// addCheck enters an engine check into the sheet's checks.
+func (e *evaluator) addCheck(s *Sheet, blk *Block, text, op string, l, r units.Quantity, u units.Unit, util float64, ok bool, note string) {
+	c := &Check{
+		Text: text, Op: op, L: l, R: r, Unit: u, Util: util, OK: ok,
+		Note: sheet.Str{Value: note}, Span: headerSpan(blk.Span), Sheet: s,
+	}
+	s.Checks = append(s.Checks, c)
+	blk.Checks = append(blk.Checks, c)
+}
