@@ -93,3 +93,6 @@ func (l *Errors) checkLayer(where string, n int, param string, v, scale, min, ma
 		*l = append(*l, &RangeError{Where: where, Layer: n, Param: param, Value: d, Min: min, Max: max, Unit: unit})
 	}
 }
+
+// Unwrap lets errors.As and errors.Is reach each error of the list.
+func (l Errors) Unwrap() []error { return l }

@@ -1,0 +1,138 @@
+package settle
+
+import (
+	"fmt"
+	"math"
+
+	"plinth/calc/site"
+	"plinth/calc/solve"
+	"plinth/calc/trace"
+)
+
+// Try is one bearing pressure tried by Allowable and the settlement there.
+type Try struct {
+	Q, S float64 // Pa, m
+}
+
+// Allow is the allowable bearing pressure for a settlement limit.
+type Allow struct {
+	Q     float64 // allowable gross bearing pressure q_allow, Pa
+	QNet  float64 // q_allow − σ_v0, Pa
+	S     float64 // total settlement at q_allow, m
+	Limit float64 // the settlement limit, m
+	Iter  int     // Brent iterations
+	Tol   float64 // tolerance reached on q, Pa
+	Lo    float64 // bracket: q where s < limit (no net load), Pa
+	Hi    float64 // bracket: q where s > limit, Pa
+	Tries []Try   // every pressure tried (bracket search then Brent), in order
+
+	Result  *Result // the full calculation at q_allow
+	Trace   trace.Trace
+	Symbols []trace.Value // q_allow, q_net_allow, s_allow, s_lim
+}
+
+// AllowTol is the tolerance on q for Allowable: 1 Pa.
+const AllowTol = 1.0
+
+// Allowable finds the gross bearing pressure q_allow at which the total
+// settlement (immediate + consolidation + secondary at the design life)
+// of in equals sLim (m): it brackets the root upward from the pressure
+// that removes no net load (q = σ_v0 at the base), doubling the trial net
+// pressure from 100 kPa up to 20 MPa, then solves s_total(q) = s_lim by
+// Brent's method (Brent 1973, ch. 4) to AllowTol. in.Q and in.V are
+// ignored. The capacity block combines q_allow with the bearing
+// resistance and takes the lower.
+func Allowable(in Input, sLim float64) (*Allow, error) {
+	if !(sLim > 0) || sLim > 1 {
+		return nil, &site.RangeError{Where: in.Footing.Name, Param: "s_lim", Value: sLim * 1e3, Min: 0, Max: 1000, Unit: "mm"}
+	}
+	in.V = site.Opt{}
+	in.Limit = site.Some(sLim)
+	probe := in
+	probe.Q = site.Some(1e5)
+	if _, err := probe.validate(); err != nil {
+		return nil, err
+	}
+	sv := in.Ground.SigmaV(in.Footing.D)
+	a := &Allow{Limit: sLim}
+	f := func(q float64) (float64, error) {
+		x := in
+		x.Q = site.Some(q)
+		r, err := compute(x, false)
+		if err != nil {
+			return 0, err
+		}
+		a.Tries = append(a.Tries, Try{Q: q, S: r.Total})
+		return r.Total - sLim, nil
+	}
+	const qMax = 20e6
+	lo := math.Max(sv, 1)
+	flo, err := f(lo)
+	if err != nil {
+		return nil, err
+	}
+	if flo >= 0 {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "s_lim", Msg: fmt.Sprintf("the settlement with no net load (%.1f mm) already reaches the limit %.1f mm", (flo+sLim)*1e3, sLim*1e3)}
+	}
+	hi := 0.0
+	for step := 100e3; ; step *= 2 {
+		q := math.Min(sv+step, qMax)
+		fq, err := f(q)
+		if err != nil {
+			return nil, err
+		}
+		if fq >= 0 {
+			hi = q
+			break
+		}
+		lo = q
+		if q >= qMax {
+			return nil, &site.InputError{Where: in.Footing.Name, Param: "s_lim", Msg: fmt.Sprintf("the settlement stays below %.1f mm up to q = %g kPa", sLim*1e3, qMax/1e3)}
+		}
+	}
+	a.Lo, a.Hi = lo, hi
+	root, err := solve.Brent(f, lo, hi, solve.Options{Tol: AllowTol})
+	if err != nil {
+		return nil, err
+	}
+	a.Q, a.Iter, a.Tol = root.X, root.Iter, root.Tol
+	x := in
+	x.Q = site.Some(a.Q)
+	res, err := compute(x, true)
+	if err != nil {
+		return nil, err
+	}
+	a.Result = res
+	a.S = res.Total
+	a.QNet = res.QNet
+
+	t := &a.Trace
+	cs := "allowable pressure"
+	ref := trace.Ref{Source: Brent1973, Clause: "ch. 4, zero"}
+	add := func(sym string, fx trace.Expr, in []trace.Value, v float64, unit string, r trace.Ref, note string) {
+		t.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: in, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
+	}
+	add("s_lim", nil, nil, sLim, "mm", trace.Ref{}, "settlement limit")
+	add("q_lo", nil, nil, a.Lo, "kPa", trace.Ref{}, "bracket: settlement below the limit")
+	add("q_hi", nil, nil, a.Hi, "kPa", trace.Ref{}, "bracket: settlement above the limit (net pressure doubled from 100 kPa)")
+	add("q_allow", nil, nil, a.Q, "kPa", ref, fmt.Sprintf("s_total(q) = s_lim solved by Brent's method: %d iterations, %d settlement calculations, tolerance %.3g kPa", a.Iter, len(a.Tries), a.Tol/1e3))
+	add("q_net_allow", fSub(fS("q_allow"), fS("sigma_v0")), []trace.Value{val("q_allow", a.Q, "kPa"), val("sigma_v0", res.SigmaV0, "kPa")}, a.QNet, "kPa", trace.Ref{}, "allowable net bearing pressure")
+	add("s_allow", nil, nil, a.S, "mm", trace.Ref{}, "total settlement at q_allow (working below)")
+	u := res.Trace
+	for i := range u.Steps {
+		u.Steps[i].Case = prefix(u.Steps[i].Case)
+	}
+	for i := range u.Cautions {
+		u.Cautions[i].Case = prefix(u.Cautions[i].Case)
+	}
+	t.Append(u, "")
+	a.Symbols = []trace.Value{val("q_allow", a.Q, "kPa"), val("q_net_allow", a.QNet, "kPa"), val("s_allow", a.S, "mm"), val("s_lim", sLim, "mm")}
+	return a, nil
+}
+
+func prefix(c string) string {
+	if c == "" {
+		return "at q_allow"
+	}
+	return "at q_allow: " + c
+}

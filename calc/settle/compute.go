@@ -1,0 +1,251 @@
+package settle
+
+import (
+	"fmt"
+	"math"
+
+	"plinth/calc/stress"
+	"plinth/calc/trace"
+)
+
+// Compute runs one settlement calculation: stresses by sublayer, immediate,
+// consolidation and secondary settlement by layer, the settlement–time
+// curve, and the check against the limit, with the full working in
+// Result.Trace. Input errors are returned as *site.RangeError,
+// *site.InputError or site.Errors.
+func Compute(in Input) (*Result, error) { return compute(in, true) }
+
+func compute(in Input, full bool) (*Result, error) {
+	c, err := in.validate()
+	if err != nil {
+		return nil, err
+	}
+	r := &Result{Stress: c.Stress, Point: c.point, Q: c.q, Limit: c.limit, Depth: c.Depth.Rule}
+	k := &calc{c: c, g: c.Ground, f: c.Footing, r: r, full: full, t: &r.Trace, imm: map[int]string{}, con: map[int]string{}}
+	if full {
+		// room for the usual working: load, zone, ~25 steps a layer, time
+		r.Trace.Steps = make([]trace.Step, 0, 48+28*len(c.Ground.Layers)+8*len(c.Times))
+	}
+	k.so = stress.Options{Method: c.Stress, Point: c.point, Angle: c.angle}
+	if k.infl, err = stress.Func(k.f, k.so); err != nil {
+		return nil, err
+	}
+	k.load()
+	if c.rigidSet {
+		k.warn("load", "rigid", trace.SevNote, trace.Ref{Source: stress.Grasshoff1955, Clause: "characteristic point"},
+			"rigid footing: stresses and settlement are taken at the characteristic point, where a flexible footing settles as much as a rigid one")
+	}
+	r.QNet, r.SigmaV0, r.U0 = k.qn, k.sv, k.u
+	D := k.f.D
+	method := c.Method
+	if k.qn <= 0 {
+		if method == Auto {
+			method = Elastic
+		}
+		r.Method = method
+		r.ZInf = D
+		k.warn("load", "net-nonpositive", trace.SevNote, trace.Ref{}, "the net bearing pressure is not positive: the load adds no settlement (heave and recompression are not modelled)", val("q_net", k.qn, "kPa"))
+		k.finish()
+		return r, nil
+	}
+	var zinf float64
+	switch method {
+	case Auto, Elastic, Consolidation, Combined:
+		if zinf, err = k.depth(); err != nil {
+			return nil, err
+		}
+	}
+	if method == Auto {
+		method = k.resolve(zinf)
+	}
+	r.Method = method
+	switch method {
+	case Elastic, Consolidation, Combined:
+		if err := k.sublayers(D, zinf); err != nil {
+			return nil, err
+		}
+		if method != Consolidation {
+			k.elastic(method == Combined)
+		}
+		if method != Elastic {
+			if err := k.consolidation(method); err != nil {
+				return nil, err
+			}
+		}
+	case Schmertmann:
+		_, _, zmax, _, _ := k.schmGeom()
+		if err := k.sublayers(D, D+zmax); err != nil {
+			return nil, err
+		}
+		if err := k.schmertmann(); err != nil {
+			return nil, err
+		}
+	case BurlandBurbidge:
+		if err := k.burland(); err != nil {
+			return nil, err
+		}
+	}
+	k.layers()
+	if c.SkemptonBjerrum.Set {
+		k.skemptonBjerrum(c.SkemptonBjerrum.V)
+	}
+	k.totals(method)
+	k.timing()
+	k.finish()
+	return r, nil
+}
+
+// resolve chooses a method from the layers' data (method = auto).
+func (k *calc) resolve(zinf float64) Method {
+	g, f := k.g, k.f
+	D := f.D
+	over := func(i int, bot float64) bool { return g.Layers[i].Top < bot && g.Bottom(i) > D }
+	why := ""
+	var m Method
+	fine := false
+	for i, l := range g.Layers {
+		if over(i, zinf) && l.Fine() {
+			fine = true
+		}
+	}
+	_, _, zmax, _, _ := k.schmGeom()
+	allE, allN := true, true
+	for i, l := range g.Layers {
+		if over(i, D+zmax) && !l.E.Set && !l.Qc.Set {
+			allE = false
+		}
+		if over(i, D+math.Max(2*f.B, math.Pow(f.B, 0.763))) && !l.N.Set {
+			allN = false
+		}
+	}
+	switch {
+	case fine:
+		m, why = Combined, "a fine-grained layer lies within the zone of influence: immediate settlement by Steinbrenner (E_u, E′) plus consolidation of the fine layers"
+	case allE:
+		m, why = Schmertmann, "granular ground with E′ or q_c in every layer within the strain influence depth"
+	case allN:
+		m, why = BurlandBurbidge, "granular ground with SPT N in every layer within the depth of influence"
+	default:
+		m, why = Elastic, "granular ground without q_c or N throughout: elastic (Steinbrenner) with the E′ given"
+	}
+	k.warn("settlement", "auto-method", trace.SevNote, trace.Ref{}, "method chosen from the layers' data: "+m.String()+" ("+why+")")
+	return m
+}
+
+// layers builds the layer rows from the sublayer table.
+func (k *calc) layers() {
+	for _, lr := range k.layerRanges() {
+		l := k.g.Layers[lr.layer]
+		L := LayerResult{Layer: lr.layer, Name: k.layerName(lr.layer), Top: lr.top, Bot: lr.bot, Sublayers: lr.end - lr.first, Fine: l.Fine(), Mu: 1}
+		for j := lr.first; j < lr.end; j++ {
+			s := k.r.Sub[j]
+			L.Si += s.Si
+			L.SOed += s.Sc
+		}
+		L.Immediate = k.imm[lr.layer]
+		L.Consol = k.con[lr.layer]
+		if L.Immediate == "" && k.r.Schm != nil && L.Si > 0 {
+			L.Immediate = "I_z"
+		}
+		L.Sc = L.SOed
+		k.r.Layers = append(k.r.Layers, L)
+	}
+}
+
+// totals writes s_i and s_c.
+func (k *calc) totals(m Method) {
+	r := k.r
+	cs := "settlement"
+	if m != Schmertmann && m != BurlandBurbidge {
+		var fx trace.Expr
+		var in []trace.Value
+		var si float64
+		for _, L := range r.Layers {
+			si += L.Si
+			if L.Immediate != "" {
+				sym := ix("s_i,", L.Layer)
+				in = append(in, val(sym, L.Si, "mm"))
+				if fx == nil {
+					fx = fS(sym)
+				} else {
+					fx = fAdd(fx, fS(sym))
+				}
+			}
+		}
+		r.Si = si
+		if fx == nil {
+			k.add(cs, "s_i", nil, nil, 0, "mm", trace.Ref{}, "no immediate settlement computed")
+			if m == Consolidation {
+				k.warn(cs, "no-immediate", trace.SevNote, trace.Ref{}, "the consolidation method gives no immediate settlement; method = auto adds it from E_u and E′")
+			}
+		} else {
+			k.add(cs, "s_i", fx, in, si, "mm", trace.Ref{}, "immediate settlement")
+		}
+	}
+	var fx trace.Expr
+	var in []trace.Value
+	var sc float64
+	for _, L := range r.Layers {
+		sc += L.Sc
+		if L.Consol != "" {
+			sym := ix("s_c,", L.Layer)
+			in = append(in, val(sym, L.Sc, "mm"))
+			if fx == nil {
+				fx = fS(sym)
+			} else {
+				fx = fAdd(fx, fS(sym))
+			}
+		}
+	}
+	r.Sc = sc
+	if fx == nil {
+		k.add(cs, "s_c", nil, nil, 0, "mm", trace.Ref{}, "no consolidation settlement")
+	} else {
+		k.add(cs, "s_c", fx, in, sc, "mm", trace.Ref{}, "consolidation settlement (final)")
+	}
+}
+
+// finish writes s_sec, s_total and the limit check, and the symbols.
+func (k *calc) finish() {
+	r := k.r
+	cs := "settlement"
+	var fx trace.Expr
+	var in []trace.Value
+	var ssec float64
+	for _, L := range r.Layers {
+		if L.Ssec > 0 {
+			ssec += L.Ssec
+			sym := ix("s_sec,", L.Layer)
+			in = append(in, val(sym, L.Ssec, "mm"))
+			if fx == nil {
+				fx = fS(sym)
+			} else {
+				fx = fAdd(fx, fS(sym))
+			}
+		}
+	}
+	if k.sandSec > 0 {
+		ssec += k.sandSec
+		in = append(in, val("s_creep", k.sandSec, "mm"))
+		if fx == nil {
+			fx = fS("s_creep")
+		} else {
+			fx = fAdd(fx, fS("s_creep"))
+		}
+	}
+	r.Ssec = ssec
+	if fx == nil {
+		k.add(cs, "s_sec", nil, nil, 0, "mm", trace.Ref{}, "no secondary compression or creep")
+	} else {
+		k.add(cs, "s_sec", fx, in, ssec, "mm", trace.Ref{}, fmt.Sprintf("secondary compression and creep at the design life (%.4g yr)", k.c.life/Year))
+	}
+	r.Total = r.Si + r.Sc + r.Ssec
+	k.add(cs, "s_total", fAdd(fS("s_i"), fS("s_c"), fS("s_sec")), []trace.Value{val("s_i", r.Si, "mm"), val("s_c", r.Sc, "mm"), val("s_sec", r.Ssec, "mm")}, r.Total, "mm", trace.Ref{}, "total settlement")
+	r.Util = r.Total / r.Limit
+	k.add(cs, "util", fDiv(fS("s_total"), fS("s_lim")), []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, r.Util, "", trace.Ref{}, "settlement against the limit")
+	r.OK = r.Util <= 1
+	if !r.OK {
+		k.warn(cs, "limit", trace.SevCaution, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
+	}
+	r.symbols()
+}
