@@ -1,0 +1,216 @@
+package layout
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/layout/fonts"
+	"plinth/doc/source"
+)
+
+var noteStyle = textStyle{size: noteSize, lead: 1.3, color: muted}
+
+func (e *engine) statement(s *Statement, width float64) []*piece {
+	row := eqn.Row{s.Symbol}
+	for _, part := range []eqn.Node{s.Expr, s.Subst} {
+		if part != nil {
+			row = append(row, eqn.Op{Text: "="}, part)
+		}
+	}
+	if s.Result != nil {
+		row = append(row, eqn.Op{Text: "="}, eqn.Strong{X: s.Result})
+	}
+	if s.Symbol == nil {
+		e.probs.add(s.Pos, "statement has no symbol")
+		return nil
+	}
+	return e.calcLine("statement", s.Pos, row, noteRuns(s.Note, s.Ref), s.Anchor, width)
+}
+
+func (e *engine) input(in *Input, width float64) []*piece {
+	if in.Symbol == nil || in.Value == nil {
+		e.probs.add(in.Pos, "input needs a symbol and a value")
+		return nil
+	}
+	row := eqn.Row{in.Symbol, eqn.Op{Text: "="}, in.Value}
+	return e.calcLine("input", in.Pos, row, noteRuns(in.Note, in.Ref), in.Anchor, width)
+}
+
+// noteRuns appends a reference to a note, in brackets.
+func noteRuns(note []Run, ref string) []Run {
+	if ref = strings.TrimSpace(ref); ref == "" {
+		return note
+	}
+	if !strings.HasPrefix(ref, "[") {
+		ref = "[" + ref + "]"
+	}
+	out := append([]Run(nil), note...)
+	if len(out) > 0 {
+		ref = " " + ref
+	}
+	return append(out, Run{Text: ref, Style: Italic})
+}
+
+// formula is a broken formula stacked into lines.
+type formula struct {
+	items []draw.Item
+	h     float64
+	base  float64 // first baseline
+	w     float64
+	lines int
+}
+
+// stackFormula breaks row to width and stacks the lines.
+// The items are moved by (dx, dy).
+func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position) (formula, bool) {
+	st := eqn.Style{Size: bodySize, Color: ink}
+	lines, err := eqn.Break(row, width, st)
+	if err != nil {
+		e.probs.add(pos, "%v", err)
+		return formula{}, false
+	}
+	f := formula{lines: len(lines)}
+	y := 0.0
+	for i, b := range lines {
+		asc := math.Max(b.Ascent, 0.78*bodySize) + 1
+		desc := math.Max(b.Descent, 0.3*bodySize) + 1
+		if i == 0 {
+			f.base = y + asc
+		}
+		f.items = b.AppendItems(f.items, dx, dy+y+asc)
+		f.w = math.Max(f.w, b.W)
+		y += asc + desc
+		if i < len(lines)-1 {
+			y += 2
+		}
+	}
+	f.h = y
+	return f, true
+}
+
+// calcLine lays out a formula with its note beside it (right column), or
+// below it when the formula needs the whole width.
+func (e *engine) calcLine(kind string, pos source.Position, row eqn.Row, note []Run, anchor string, width float64) []*piece {
+	noteW := math.Min(0.34*width, 185)
+	const gap = 14.0
+	eqW := width
+	if len(note) > 0 {
+		eqW = width - noteW - gap
+	}
+	const pad = 1.5
+	f, ok := e.stackFormula(row, eqW, 0, pad, pos)
+	if !ok {
+		return nil
+	}
+	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
+	if !beside {
+		if f, ok = e.stackFormula(row, width, 0, pad, pos); !ok {
+			return nil
+		}
+	}
+	if f.w > width+float64(e.tpl.Margin.Right)-4 {
+		e.probs.add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
+	}
+	b := &Box{Kind: kind, Pos: pos, W: width, Items: f.items}
+	h := pad + f.h
+	if len(note) > 0 {
+		nw, x := noteW, width-noteW
+		if !beside {
+			nw, x = width-18, 18.0
+		}
+		lines := e.setText(note, nw, noteStyle, pos)
+		y := h + 1
+		if beside {
+			y = pad + f.base - lines[0].base
+		}
+		for _, ln := range lines {
+			b.Items = appendOffset(b.Items, ln.items, x, y)
+			y += ln.h
+		}
+		h = math.Max(h, y)
+	}
+	b.H = h + pad
+	if anchor != "" {
+		b.Items = append(b.Items, draw.Anchor{Name: anchor})
+	}
+	return []*piece{{box: b, before: calcGap, base: pad + f.base}}
+}
+
+var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥": "≥", "<": "<", ">": ">", "=": "=", "==": "="}
+
+func (e *engine) check(c *Check, width float64) []*piece {
+	rel, ok := relations[strings.TrimSpace(c.Rel)]
+	if !ok {
+		e.probs.add(c.Pos, "check relation %q: want ≤, ≥, <, > or =", c.Rel)
+		return nil
+	}
+	if c.Left == nil || c.Right == nil {
+		e.probs.add(c.Pos, "check needs both sides")
+		return nil
+	}
+	row := eqn.Row{c.Left}
+	if c.LeftValue != nil {
+		row = append(row, eqn.Op{Text: "="}, c.LeftValue)
+	}
+	row = append(row, eqn.Op{Text: rel}, c.Right)
+	if c.RightValue != nil {
+		row = append(row, eqn.Op{Text: "="}, c.RightValue)
+	}
+	const verdictW, pad = 128.0, 4.0
+	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos)
+	if !ok {
+		return nil
+	}
+	b := &Box{Kind: "check", Pos: c.Pos, W: width}
+	fill, word, wordInk := shade, "OK", okInk
+	if !c.OK {
+		fill, word, wordInk = badFill, "NOT OK", badInk
+	}
+	h := pad + f.h
+	var noteItems []draw.Item
+	if len(c.Note) > 0 {
+		y := h + 1
+		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
+			noteItems = appendOffset(noteItems, ln.items, pad, y)
+			y += ln.h
+		}
+		h = y
+	}
+	h += pad
+	base := pad + f.base
+	// the verdict: utilisation, then the word in a box
+	util := fmt.Sprintf("utilisation %.2f", c.Util)
+	if math.IsNaN(c.Util) || math.IsInf(c.Util, 0) {
+		e.probs.add(c.Pos, "check utilisation is %v", c.Util)
+		util = "utilisation —"
+	}
+	const wordSize = 8.6
+	wf := fonts.Get(fonts.Bold)
+	ww := wf.Width(word, wordSize) + 10
+	wx := width - pad - ww
+	cap := wf.CapHeight(wordSize)
+	b.Items = append(b.Items, draw.Rect{W: width, H: h, Paint: draw.Fill(fill)},
+		draw.Rect{W: 2, H: h, Paint: draw.Fill(wordInk)})
+	b.Items = append(b.Items, f.items...)
+	b.Items = append(b.Items, noteItems...)
+	b.Items = append(b.Items,
+		draw.Text{X: wx - 8, Y: base, Face: fonts.Regular, Size: noteSize, Color: muted, Align: draw.Right, Text: util},
+		draw.Rect{X: wx, Y: base - cap - 3.2, W: ww, H: cap + 6.4, Paint: draw.Paint{Stroke: wordInk, Width: 0.8, Fill: draw.Color{R: 255, G: 255, B: 255}, Filled: true}},
+		draw.Text{X: wx + 5, Y: base, Face: fonts.Bold, Size: wordSize, Color: wordInk, Text: word},
+	)
+	// resolve the right-aligned utilisation text
+	for i, it := range b.Items {
+		if t, ok := it.(draw.Text); ok && t.Align != draw.Left {
+			t.X, t.Align = t.Start(), draw.Left
+			b.Items[i] = t
+		}
+	}
+	b.H = h
+	if c.Anchor != "" {
+		b.Items = append(b.Items, draw.Anchor{Name: c.Anchor})
+	}
+	return []*piece{{box: b, before: calcGap + 2, base: base}}
+}

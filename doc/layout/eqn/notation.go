@@ -1,0 +1,44 @@
+package eqn
+
+import (
+	"strings"
+
+	"plinth/doc/expr"
+)
+
+// Parts is a symbol name taken apart by the sheet notation.
+type Parts struct {
+	Prefix string // block prefix before the last ".", without the dot
+	Base   string // base as printed (Greek applied)
+	Greek  bool   // base was a Greek name
+	Primes int    // primes, printed after the base
+	Sub    string // subscript as printed: parts joined by ",", Greek applied
+}
+
+// Split takes a sheet-notation name apart with the sheet language's own
+// rules (expr.SplitSymbol, expr.Greek): "F1.phi'_d_k" → {Prefix "F1",
+// Base "φ", Primes 1, Sub "d,k"}; primes ending the subscript belong to
+// the symbol too ("sigma_v'" → σ′ with subscript v).
+func Split(name string) Parts {
+	var p Parts
+	base, primes, sub := expr.SplitSymbol(name)
+	if i := strings.LastIndexByte(base, '.'); i >= 0 {
+		p.Prefix, base = base[:i], base[i+1:]
+	}
+	p.Primes = primes
+	if g, ok := expr.Greek(base); ok {
+		p.Base, p.Greek = g, true
+	} else {
+		p.Base = base
+	}
+	if sub != "" {
+		parts := strings.Split(sub, ",")
+		for i, s := range parts {
+			if g, ok := expr.Greek(s); ok {
+				parts[i] = g
+			}
+		}
+		p.Sub = strings.Join(parts, ",")
+	}
+	return p
+}

@@ -1,0 +1,47 @@
+package fonts_test
+
+import (
+	"testing"
+
+	"plinth/doc/layout/fonts"
+)
+
+func TestCoverage(t *testing.T) {
+	// Every character plinth's typesetting emits must be in every text face.
+	const need = "αβγδεζηθικλμνξοπρστυφχψωΓΔΘΛΞΠΣΦΨΩ≤≥≠×·−√′″°²³µ•–—±≈…→"
+	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
+		if r, ok := fonts.Get(f).Missing(need); ok {
+			t.Errorf("%s lacks %q (U+%04X)", f, r, r)
+		}
+	}
+}
+
+func TestWidth(t *testing.T) {
+	mono := fonts.Get(fonts.Mono)
+	if a, b := mono.Units("iiii"), mono.Units("MMMM"); a != b || a == 0 {
+		t.Errorf("mono widths %d %d", a, b)
+	}
+	reg := fonts.Get(fonts.Regular)
+	if reg.Width("MM", 10) <= reg.Width("ii", 10) {
+		t.Error("proportional widths")
+	}
+	if reg.Has('\u2A0D') {
+		t.Error("unexpected glyph")
+	}
+	if reg.Ascent(10) <= 0 || reg.Descent(10) <= 0 || reg.CapHeight(10) <= reg.XHeight(10) {
+		t.Errorf("metrics %v %v %v %v", reg.Ascent(10), reg.Descent(10), reg.CapHeight(10), reg.XHeight(10))
+	}
+}
+
+func TestInk(t *testing.T) {
+	f := fonts.Get(fonts.Regular)
+	a, d := f.Ink("x", 10)
+	if a < 4 || a > 6 || d > 0.2 {
+		t.Errorf("x ink %v %v", a, d)
+	}
+	a, d = f.Ink("(", 10)
+	if a < 7 || d < 1.2 {
+		t.Errorf("( ink %v %v", a, d)
+	}
+	t.Logf("asc %.2f desc %.2f cap %.2f x %.2f", f.Ascent(10), f.Descent(10), f.CapHeight(10), f.XHeight(10))
+}

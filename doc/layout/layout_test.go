@@ -1,0 +1,217 @@
+package layout_test
+
+import (
+	"bytes"
+	"errors"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"plinth/calc/trace"
+	"plinth/doc/layout"
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/layout/fonts"
+	"plinth/doc/source"
+)
+
+var update = flag.Bool("update", false, "rewrite golden files")
+
+func at(line int) source.Position { return source.Position{Path: "s.md", Line: line, Col: 1} }
+
+func txt(s string) layout.Run { return layout.Run{Text: s} }
+
+func para(line int, s string) *layout.Para {
+	return &layout.Para{Pos: at(line), Runs: []layout.Run{txt(s)}}
+}
+
+func sheet(blocks ...layout.Block) layout.Doc {
+	return layout.Doc{
+		Info: layout.Info{Title: "T", Fingerprint: "0123456789abcdef0123"},
+		Sheets: []layout.Sheet{{Pos: at(1), Fields: layout.Fields{Project: "Heron Quay", Title: "Test", Calc: "T-1", By: "AB"},
+			Blocks: blocks}},
+	}
+}
+
+func golden(t *testing.T, name string, p *layout.Pages) {
+	t.Helper()
+	var b bytes.Buffer
+	if err := p.Dump(&b); err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join("testdata", name+".golden")
+	if *update {
+		if err := os.WriteFile(path, b.Bytes(), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run with -update to create)", err)
+	}
+	if !bytes.Equal(b.Bytes(), want) {
+		got := strings.Split(b.String(), "\n")
+		exp := strings.Split(string(want), "\n")
+		for i := 0; i < len(got) && i < len(exp); i++ {
+			if got[i] != exp[i] {
+				t.Fatalf("%s differs at line %d:\n got: %s\nwant: %s\n(run with -update to accept)", path, i+1, got[i], exp[i])
+			}
+		}
+		t.Fatalf("%s differs in length: got %d lines, want %d", path, len(got), len(exp))
+	}
+}
+
+func TestGoldenBasic(t *testing.T) {
+	S, N := trace.S, trace.N
+	e := trace.Div(trace.Mul(S("q"), S("B")), trace.Fn("sqrt", trace.Add(S("E'"), N(1))))
+	doc := sheet(
+		&layout.Heading{Pos: at(2), Level: 1, Anchor: "top", Runs: []layout.Run{txt("Loads")}},
+		&layout.Para{Pos: at(3), Runs: []layout.Run{txt("Plain, "), {Text: "bold", Style: layout.Bold}, txt(", "),
+			{Text: "italic", Style: layout.Italic}, txt(" and "), {Text: "mono", Style: layout.Mono}, txt(" with a "), {Text: "link", Link: "top"},
+			txt(" and x"), {Text: "2", Shift: layout.Sup}, txt(".")}},
+		&layout.Statement{Pos: at(5), Symbol: eqn.Sym{Name: "s"}, Expr: eqn.FromExpr(e, eqn.Options{}), Result: eqn.Quantity("12.5", "mm"),
+			Note: []layout.Run{txt("settlement")}, Ref: "Ref 1"},
+		&layout.Check{Pos: at(6), Left: eqn.Sym{Name: "s"}, LeftValue: eqn.Quantity("12.5", "mm"), Rel: "<=", Right: eqn.Sym{Name: "s_lim"},
+			RightValue: eqn.Quantity("25", "mm"), Util: 0.5, OK: true, Anchor: "c1"},
+		&layout.Table{Pos: at(8), Header: []layout.Cell{{txt("a")}, {txt("b")}}, Align: []layout.Align{0, layout.AlignRight},
+			Rows: []layout.Row{{Pos: at(10), Cells: []layout.Cell{{txt("one")}, {txt("1.0")}}}}},
+		&layout.Caution{Pos: at(12), Severity: layout.SevWarning, Title: []layout.Run{txt("Watch")}, Body: []layout.Block{para(13, "Body text.")}},
+		&layout.Drawing{Pos: at(15), W: 100, H: 40, Items: []draw.Item{
+			draw.Line{X1: 0, Y1: 0, X2: 100, Y2: 40, Paint: draw.Paint{Stroke: draw.Gray(0), Width: 1, Dash: []float64{2, 1}}},
+			draw.Text{X: 50, Y: 20, Face: fonts.Regular, Size: 8, Align: draw.Center, Text: "mid"}}},
+	)
+	p, err := layout.Document(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	golden(t, "basic", p)
+}
+
+func TestTableSplitsWithHeader(t *testing.T) {
+	var rows []layout.Row
+	for i := 0; i < 120; i++ {
+		rows = append(rows, layout.Row{Pos: at(10 + i), Cells: []layout.Cell{{txt("row")}, {txt("a longer cell that wraps onto a second line when the column is narrow enough to need it")}}})
+	}
+	doc := sheet(&layout.Table{Pos: at(9), Header: []layout.Cell{{txt("Name")}, {txt("Text")}}, Rows: rows})
+	p, err := layout.Document(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(p.Pages) < 3 {
+		t.Fatalf("want the table over several pages, got %d", len(p.Pages))
+	}
+	for i, pg := range p.Pages {
+		var kinds []string
+		for _, b := range pg.Boxes {
+			kinds = append(kinds, b.Kind)
+		}
+		if kinds[2] != "table-header" {
+			t.Errorf("page %d starts with %v, want the header repeated", i+1, kinds[:4])
+		}
+		if i > 0 && pg.Boxes[2].Y > pg.Boxes[0].Y+pg.Boxes[0].H+30 {
+			t.Errorf("page %d: header at y %.1f, not at the top of the text", i+1, pg.Boxes[2].Y)
+		}
+	}
+	if p.Pages[0].Boxes[0].Kind != "title-block" {
+		t.Error("no title block")
+	}
+}
+
+func TestProblems(t *testing.T) {
+	tall := make([]eqn.Node, 0)
+	for i := 0; i < 500; i++ {
+		tall = append(tall, eqn.Frac{Num: eqn.Frac{Num: eqn.Num{Text: "1"}, Den: eqn.Num{Text: "2"}}, Den: eqn.Frac{Num: eqn.Num{Text: "3"}, Den: eqn.Num{Text: "4"}}}, eqn.Op{Text: "="})
+	}
+	doc := sheet(
+		para(3, "a missing glyph ⨍ here"),
+		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "dangling", Link: "nowhere"}}},
+		&layout.Anchor{Pos: at(5), Name: "twice"},
+		&layout.Anchor{Pos: at(6), Name: "twice"},
+		&layout.Statement{Pos: at(7), Symbol: eqn.Sym{Name: "x"}, Expr: eqn.Row(tall)},
+		&layout.Image{Pos: at(8), Data: []byte("GIF89a")},
+		&layout.Check{Pos: at(9), Left: eqn.Sym{Name: "a"}, Rel: "≪", Right: eqn.Sym{Name: "b"}},
+	)
+	_, err := layout.Document(doc)
+	var ps layout.Problems
+	if !errors.As(err, &ps) {
+		t.Fatalf("want Problems, got %v", err)
+	}
+	want := []string{
+		`s.md:3:1: character '⨍' (U+2A0D) in "a missing glyph ⨍ here" is not in font Go Regular`,
+		`s.md:4:1: link to "nowhere", which is not an anchor in this document`,
+		`s.md:6:1: anchor "twice" is defined twice (first at s.md:5:1)`,
+		`s.md:7:1: this calculation line is`,
+		`s.md:8:1: image is not a PNG or JPEG file`,
+		`s.md:9:1: check relation "≪"`,
+	}
+	if len(ps) != len(want) {
+		t.Fatalf("got %d problems:\n%v", len(ps), err)
+	}
+	for i, w := range want {
+		if !strings.HasPrefix(ps[i].Error(), w) {
+			t.Errorf("problem %d:\n got %s\nwant %s…", i, ps[i].Error(), w)
+		}
+	}
+}
+
+func TestKeepHeadingWithNext(t *testing.T) {
+	var bs []layout.Block
+	for i := 0; i < 52; i++ {
+		bs = append(bs, para(2+i, "Filler line."))
+	}
+	bs = append(bs, &layout.Heading{Pos: at(60), Level: 2, Runs: []layout.Run{txt("Kept")}}, para(61, "Follows the heading."))
+	p, err := layout.Document(sheet(bs...))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, pg := range p.Pages {
+		last := pg.Boxes[len(pg.Boxes)-1]
+		if last.Kind == "heading" {
+			t.Errorf("page %d ends with a heading", pg.Number)
+		}
+	}
+}
+
+func TestVariantAndNotChecked(t *testing.T) {
+	doc := sheet(para(2, "Body."))
+	doc.Info.Variant = []string{"c_u = 55 kPa", "B = 2.6 m"}
+	p, err := layout.Document(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	p.Dump(&b)
+	for _, s := range []string{`"VARIANT"`, `"inputs overridden: c_u = 55 kPa; B = 2.6 m"`, `"NOT CHECKED"`, `"inputs 0123456789ab"`, `"1 of 1"`} {
+		if !strings.Contains(b.String(), s) {
+			t.Errorf("dump lacks %s", s)
+		}
+	}
+}
+
+func TestLongWordBreaks(t *testing.T) {
+	long := strings.Repeat("abcdefghij/", 30)
+	p, err := layout.Document(sheet(para(2, "see "+long+" end")))
+	if err != nil {
+		t.Fatal(err)
+	}
+	tpl, _ := layout.BuiltinTemplate("a4")
+	limit := float64(tpl.Margin.Left) + tpl.BodyWidth() + 0.01
+	for _, b := range p.Pages[0].Boxes {
+		for _, it := range b.Items {
+			if tx, ok := it.(draw.Text); ok && b.Kind == "line" {
+				if r := tx.Bounds(); b.X+r.X+r.W > limit {
+					t.Errorf("text %q runs to %.1f, past %.1f", tx.Text, b.X+r.X+r.W, limit)
+				}
+				if strings.Contains(tx.Text, "abc") && !strings.HasSuffix(tx.Text, "/") && !strings.HasSuffix(tx.Text, "abcdefghij/") && !strings.Contains(tx.Text, "end") && tx.Text != long {
+					// every break inside the long word falls after a '/'
+					if !strings.HasSuffix(tx.Text, "/") {
+						t.Errorf("broke %q not at a slash", tx.Text)
+					}
+				}
+			}
+		}
+	}
+}

@@ -1,0 +1,281 @@
+package layout
+
+import (
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/layout/fonts"
+	"plinth/doc/source"
+)
+
+// Doc is a whole calculation package to lay out: one or more sheets, each
+// starting on a new page, under one page template.
+type Doc struct {
+	Info     Info
+	Template *Template // nil = the built-in A4 template
+	Sheets   []Sheet
+}
+
+// Info describes the package as a whole.
+type Info struct {
+	Title    string // PDF document title
+	Author   string // PDF author (the designer)
+	Subject  string // PDF subject
+	Keywords string // PDF keywords (the fingerprint is added)
+	// Fingerprint identifies the inputs (a hex digest, say). Every page
+	// footer prints its first 12 characters; the PDF information carries
+	// it whole.
+	Fingerprint string
+	// Variant lists the inputs a variant run overrode, as printed
+	// ("c_u = 55 kPa"). When set, every page says VARIANT and lists them.
+	Variant []string
+}
+
+// Fields fill a sheet's title block. A blank Checked prints NOT CHECKED.
+type Fields struct {
+	Project, Job, Client string
+	Title                string // sheet title
+	Calc                 string // calculation number
+	Rev                  string
+	By, Date             string // designer's initials and date
+	Checked, CheckedDate string // checker's initials and date
+	// Extra holds values for a firm template's own field names.
+	Extra map[string]string
+}
+
+// Sheet is one calc sheet: its title block fields and its body.
+type Sheet struct {
+	Pos      source.Position
+	Fields   Fields
+	Bookmark string // the sheet's PDF bookmark; "" = Calc and Title
+	Blocks   []Block
+}
+
+// Block is one piece of a sheet's body. Every block carries the source
+// position problems are reported at.
+type Block interface {
+	Position() source.Position
+	isBlock()
+}
+
+// Style is a text face: Regular, Bold, Italic, BoldItalic or Mono.
+type Style = fonts.Face
+
+// The text styles of a Run.
+const (
+	Regular    = fonts.Regular
+	Bold       = fonts.Bold
+	Italic     = fonts.Italic
+	BoldItalic = fonts.BoldItalic
+	Mono       = fonts.Mono
+)
+
+// Shift raises or lowers a run.
+type Shift uint8
+
+const (
+	Baseline Shift = iota
+	Sup            // superscript
+	Sub            // subscript
+)
+
+// Run is a stretch of inline content in one style: text, or inline math
+// when Math is set. Line breaks fall at spaces; "\n" forces one.
+type Run struct {
+	Text  string
+	Style Style
+	Shift Shift
+	Link  string   // name of the anchor this run links to; "" = none
+	Math  eqn.Node // inline formula; replaces Text
+}
+
+// Align is a table column's alignment.
+type Align uint8
+
+const (
+	AlignDefault Align = iota // left
+	AlignLeft
+	AlignCenter
+	AlignRight
+)
+
+// Heading is a numbered section heading, level 1 to 3. Number "" gets the
+// next number in the sheet (1, 1.1, 1.1.1); NoNumber prints none. A
+// heading is kept on the page with what follows it.
+type Heading struct {
+	Pos      source.Position
+	Level    int
+	Number   string
+	NoNumber bool
+	Anchor   string // optional anchor name at the heading
+	Runs     []Run
+}
+
+// Para is a paragraph of text.
+type Para struct {
+	Pos  source.Position
+	Runs []Run
+}
+
+// List is a bullet list, or a numbered one from Start (0 means 1). Each
+// item is a list of blocks; lists nest.
+type List struct {
+	Pos     source.Position
+	Ordered bool
+	Start   int
+	Items   [][]Block
+}
+
+// Cell is a table cell's content.
+type Cell = []Run
+
+// Row is a table body row.
+type Row struct {
+	Pos   source.Position
+	Cells []Cell
+}
+
+// Table is a table with one header row, which repeats at the top of each
+// page the table runs onto. Column widths follow the content; cell text
+// wraps. Align gives each column's alignment (missing = left).
+type Table struct {
+	Pos     source.Position
+	Header  []Cell
+	Rows    []Row
+	Align   []Align
+	Caption []Run // printed above the table; optional
+}
+
+// Image is a PNG or JPEG picture, scaled to fit the text width (and at
+// most Width points wide when Width > 0), with an optional caption below.
+type Image struct {
+	Pos     source.Position
+	Data    []byte
+	Width   float64
+	Caption []Run
+}
+
+// Code is preformatted text in the monospaced face on a shaded ground.
+type Code struct {
+	Pos  source.Position
+	Text string
+}
+
+// Statement is a calculation line:
+//
+//	Symbol = Expr = Subst = Result        Note  [Ref]
+//
+// Expr and Subst are optional (nil); the note sits to the right, or below
+// when the formula leaves no room. A statement never splits across pages;
+// a formula too wide for the column wraps at its top-level = or +.
+type Statement struct {
+	Pos    source.Position
+	Symbol eqn.Node
+	Expr   eqn.Node // the formula in symbols
+	Subst  eqn.Node // the formula with values substituted
+	Result eqn.Node // the value with its unit
+	Note   []Run
+	Ref    string // a reference, printed after the note
+	Anchor string // optional anchor name
+}
+
+// Input is a given value: Symbol = Value, with its note and reference.
+type Input struct {
+	Pos    source.Position
+	Symbol eqn.Node
+	Value  eqn.Node
+	Note   []Run
+	Ref    string
+	Anchor string
+}
+
+// Check is a design check: both sides with values, the comparison, the
+// utilisation and the verdict OK or NOT OK (in words; colour only
+// supports them). Rel is one of ≤ ≥ < > = (or <= >=).
+type Check struct {
+	Pos        source.Position
+	Left       eqn.Node // the left symbol, e.g. q_Ed
+	LeftValue  eqn.Node // its value with unit
+	Rel        string
+	Right      eqn.Node
+	RightValue eqn.Node
+	Util       float64 // utilisation, left over right for ≤
+	OK         bool
+	Note       []Run
+	Anchor     string // the check register links here
+}
+
+// Severity is a caution's heading word.
+type Severity uint8
+
+const (
+	SevNote Severity = iota
+	SevWarning
+	SevCaution
+)
+
+func (s Severity) String() string {
+	switch s {
+	case SevWarning:
+		return "WARNING"
+	case SevCaution:
+		return "CAUTION"
+	}
+	return "NOTE"
+}
+
+// Caution is a boxed caution: the word NOTE, WARNING or CAUTION, an
+// optional title, and body blocks. A long one may run onto the next page.
+type Caution struct {
+	Pos      source.Position
+	Severity Severity
+	Title    []Run
+	Body     []Block
+}
+
+// Drawing is a picture made of vector primitives (a chart, a sketch), W by
+// H points, items relative to its top-left corner. A drawing wider than
+// the text column is scaled down to fit (Template.BodyWidth tells a
+// component the width to draw at). It never splits across pages.
+type Drawing struct {
+	Pos     source.Position
+	W, H    float64
+	Items   []draw.Item
+	Caption []Run
+}
+
+// PageBreak starts a new page.
+type PageBreak struct{ Pos source.Position }
+
+// Anchor names the current place, for links.
+type Anchor struct {
+	Pos  source.Position
+	Name string
+}
+
+func (b *Heading) Position() source.Position   { return b.Pos }
+func (b *Para) Position() source.Position      { return b.Pos }
+func (b *List) Position() source.Position      { return b.Pos }
+func (b *Table) Position() source.Position     { return b.Pos }
+func (b *Image) Position() source.Position     { return b.Pos }
+func (b *Code) Position() source.Position      { return b.Pos }
+func (b *Statement) Position() source.Position { return b.Pos }
+func (b *Input) Position() source.Position     { return b.Pos }
+func (b *Check) Position() source.Position     { return b.Pos }
+func (b *Caution) Position() source.Position   { return b.Pos }
+func (b *Drawing) Position() source.Position   { return b.Pos }
+func (b *PageBreak) Position() source.Position { return b.Pos }
+func (b *Anchor) Position() source.Position    { return b.Pos }
+
+func (*Heading) isBlock()   {}
+func (*Para) isBlock()      {}
+func (*List) isBlock()      {}
+func (*Table) isBlock()     {}
+func (*Image) isBlock()     {}
+func (*Code) isBlock()      {}
+func (*Statement) isBlock() {}
+func (*Input) isBlock()     {}
+func (*Check) isBlock()     {}
+func (*Caution) isBlock()   {}
+func (*Drawing) isBlock()   {}
+func (*PageBreak) isBlock() {}
+func (*Anchor) isBlock()    {}

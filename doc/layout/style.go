@@ -1,0 +1,38 @@
+package layout
+
+import "plinth/doc/layout/draw"
+
+// The house design: sizes in points, colours restrained. One accent colour
+// (a dark slate blue) marks structure; red and green only ever support the
+// words NOT OK and OK.
+const (
+	bodySize    = 9.5
+	bodyLead    = 1.34 // line height / size
+	noteSize    = 8.2
+	tableSize   = 8.5
+	codeSize    = 8.2
+	captionSize = 8.2
+	paraGap     = 5.0 // space between paragraphs
+	calcGap     = 4.0 // space between calc lines
+)
+
+var headingSize = [4]float64{0, 12.5, 10.8, 9.8}
+var headingGap = [4]float64{0, 14, 10, 8}
+
+var (
+	ink      = draw.Color{R: 26, G: 26, B: 30}
+	muted    = draw.Color{R: 88, G: 92, B: 100}
+	accent   = draw.Color{R: 36, G: 64, B: 104}
+	linkInk  = draw.Color{R: 26, G: 78, B: 160}
+	ruleInk  = draw.Color{R: 150, G: 154, B: 162}
+	hairInk  = draw.Color{R: 208, G: 211, B: 216}
+	shade    = draw.Color{R: 242, G: 243, B: 245}
+	headFill = draw.Color{R: 232, G: 235, B: 240}
+	okInk    = draw.Color{R: 22, G: 110, B: 52}
+	badInk   = draw.Color{R: 190, G: 28, B: 28}
+	badFill  = draw.Color{R: 253, G: 236, B: 236}
+)
+
+// severity colours: NOTE, WARNING, CAUTION
+var sevInk = [3]draw.Color{{R: 52, G: 92, B: 140}, {R: 176, G: 112, B: 0}, {R: 180, G: 30, B: 30}}
+var sevFill = [3]draw.Color{{R: 240, G: 244, B: 250}, {R: 253, G: 247, B: 232}, {R: 252, G: 238, B: 238}}

@@ -1,0 +1,217 @@
+package layout
+
+import (
+	"math"
+
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/fonts"
+)
+
+const (
+	cellPadX = 4.5
+	cellPadY = 2.8
+)
+
+var (
+	cellStyle = textStyle{size: tableSize, lead: 1.26, color: ink}
+	headStyle = textStyle{size: tableSize, lead: 1.26, color: ink, bold: true}
+)
+
+// table lays out a table as one piece per row; the header row repeats at
+// the top of every page the table continues onto.
+func (e *engine) table(t *Table, width float64) []*piece {
+	ncol := len(t.Header)
+	for _, r := range t.Rows {
+		ncol = max(ncol, len(r.Cells))
+	}
+	if ncol == 0 {
+		return nil
+	}
+	// words of every cell, header first
+	type cellWords struct {
+		ws    []word
+		style textStyle
+	}
+	rows := make([][]cellWords, 0, len(t.Rows)+1)
+	all := [][]Cell{t.Header}
+	for _, r := range t.Rows {
+		all = append(all, r.Cells)
+	}
+	for ri, cells := range all {
+		if ri == 0 && len(cells) == 0 {
+			rows = append(rows, nil)
+			continue
+		}
+		pos := t.Pos
+		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
+			pos = t.Rows[ri-1].Pos
+		}
+		st := cellStyle
+		if ri == 0 {
+			st = headStyle
+		}
+		row := make([]cellWords, ncol)
+		for c := 0; c < ncol; c++ {
+			if c < len(cells) {
+				row[c] = cellWords{e.words(cells[c], st, pos), st}
+			} else {
+				row[c] = cellWords{style: st}
+			}
+		}
+		rows = append(rows, row)
+	}
+	// column widths from the content
+	minW := make([]float64, ncol)
+	maxW := make([]float64, ncol)
+	for _, row := range rows {
+		for c, cw := range row {
+			lo, hi := measureWords(cw.ws)
+			minW[c] = math.Max(minW[c], lo+2*cellPadX)
+			maxW[c] = math.Max(maxW[c], hi+2*cellPadX)
+		}
+	}
+	widths := columnWidths(minW, maxW, width)
+	total := 0.0
+	for _, w := range widths {
+		total += w
+	}
+	var out []*piece
+	var header, pristine *piece
+	if capRuns := t.Caption; len(capRuns) > 0 {
+		st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
+		lines := e.setText(capRuns, total, st, t.Pos)
+		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
+		for _, p := range ps {
+			p.keep = true
+		}
+		out = append(out, ps...)
+	}
+	for ri, row := range rows {
+		if row == nil {
+			continue
+		}
+		pos := t.Pos
+		kind := "table-header"
+		if ri > 0 {
+			kind = "row"
+			if t.Rows[ri-1].Pos.Line > 0 {
+				pos = t.Rows[ri-1].Pos
+			}
+		}
+		b := &Box{Kind: kind, Pos: pos, W: total}
+		var cells []draw.Item
+		h := 0.0
+		x := 0.0
+		for c, cw := range row {
+			inner := widths[c] - 2*cellPadX
+			lines := breakLines(append([]word(nil), cw.ws...), inner, cw.style)
+			y := cellPadY
+			for _, ln := range lines {
+				dx := cellPadX
+				align := AlignLeft
+				if c < len(t.Align) {
+					align = t.Align[c]
+				}
+				switch align {
+				case AlignRight:
+					dx += inner - ln.w
+				case AlignCenter:
+					dx += (inner - ln.w) / 2
+				}
+				cells = appendOffset(cells, ln.items, x+dx, y)
+				y += ln.h
+			}
+			h = math.Max(h, y+cellPadY)
+			x += widths[c]
+		}
+		b.H = h
+		if ri == 0 {
+			b.Items = append(b.Items,
+				draw.Rect{W: total, H: h, Paint: draw.Fill(headFill)},
+				draw.Line{X1: 0, Y1: 0, X2: total, Y2: 0, Paint: draw.Stroke(ruleInk, 0.8)},
+				draw.Line{X1: 0, Y1: h, X2: total, Y2: h, Paint: draw.Stroke(ruleInk, 0.8)})
+		} else if ri == len(rows)-1 {
+			b.Items = append(b.Items, draw.Line{X1: 0, Y1: h, X2: total, Y2: h, Paint: draw.Stroke(ruleInk, 0.8)})
+		} else {
+			b.Items = append(b.Items, draw.Line{X1: 0, Y1: h, X2: total, Y2: h, Paint: draw.Stroke(hairInk, 0.4)})
+		}
+		b.Items = append(b.Items, cells...)
+		p := &piece{box: b}
+		if ri == 0 {
+			header = p
+			p.keep = true
+			if len(out) == 0 {
+				p.before = paraGap + 2
+			}
+			pristine = clonePiece(p) // placing p moves it; repeats copy this
+			pristine.before, pristine.keep = 0, false
+		} else {
+			p.head = pristine
+		}
+		out = append(out, p)
+	}
+	if len(out) > 0 && out[0].before == 0 {
+		out[0].before = paraGap + 2
+	}
+	// keep the header with two rows, and the last two rows together
+	n, body := len(out), len(t.Rows)
+	if header != nil && body >= 3 {
+		for i, p := range out {
+			if p == header {
+				out[i+1].keep = true
+			}
+		}
+		out[n-2].keep = true
+	}
+	return out
+}
+
+// measureWords is the narrowest a cell can be without splitting a word
+// and its width set on one line.
+func measureWords(ws []word) (lo, hi float64) {
+	line := 0.0
+	for i, w := range ws {
+		lo = math.Max(lo, w.w)
+		line += w.w
+		if w.hard {
+			hi = math.Max(hi, line)
+			line = 0
+		} else if i < len(ws)-1 {
+			line += w.space
+		}
+	}
+	return lo, math.Max(hi, line)
+}
+
+// columnWidths shares width among columns: natural widths when they fit
+// (stretched to the full width when close to it), else each column its
+// minimum plus a share of the rest in proportion to how much more it
+// wants, else minimums scaled down (long words then break).
+func columnWidths(minW, maxW []float64, width float64) []float64 {
+	sumMin, sumMax := 0.0, 0.0
+	for i := range minW {
+		sumMin += minW[i]
+		sumMax += maxW[i]
+	}
+	out := make([]float64, len(minW))
+	switch {
+	case sumMax <= width:
+		f := 1.0
+		if sumMax > 0.7*width {
+			f = width / sumMax
+		}
+		for i := range out {
+			out[i] = maxW[i] * f
+		}
+	case sumMin <= width:
+		extra := width - sumMin
+		for i := range out {
+			out[i] = minW[i] + extra*(maxW[i]-minW[i])/(sumMax-sumMin)
+		}
+	default:
+		for i := range out {
+			out[i] = minW[i] * width / sumMin
+		}
+	}
+	return out
+}

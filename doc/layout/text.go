@@ -1,0 +1,382 @@
+package layout
+
+import (
+	"math"
+	"strings"
+	"unicode/utf8"
+
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/layout/fonts"
+	"plinth/doc/source"
+)
+
+// textStyle is how a run of text is set in a block.
+type textStyle struct {
+	size  float64
+	lead  float64 // line height over size
+	color draw.Color
+	bold  bool // set Regular as Bold and Italic as BoldItalic (headings)
+	face  fonts.Face
+}
+
+// frag is a stretch of one word in one face, or one inline formula.
+type frag struct {
+	text  string
+	face  fonts.Face
+	size  float64
+	rise  float64 // baseline shift, up
+	color draw.Color
+	link  string
+	w     float64
+	math  *eqn.Box
+}
+
+// word is what the line breaker moves: frags with no break opportunity
+// between them.
+type word struct {
+	frags []frag
+	w     float64
+	space float64 // width of the space after it; 0 = none
+	hard  bool    // a forced line break follows
+}
+
+// line is a set line: items relative to the left end of its baseline.
+type line struct {
+	w, h, base float64 // width, height, baseline from the top
+	items      []draw.Item
+}
+
+func (st textStyle) faceOf(s Style) fonts.Face {
+	f := s
+	if !f.Valid() || f == fonts.MonoBold {
+		f = st.face
+	}
+	if f == Regular {
+		f = st.face
+	}
+	if st.bold {
+		switch f {
+		case Regular:
+			f = Bold
+		case Italic:
+			f = BoldItalic
+		case Mono:
+			f = fonts.MonoBold
+		}
+	}
+	return f
+}
+
+// words cuts runs into words, checking every character against its font.
+func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
+	var ws []word
+	var cur word
+	open := false
+	end := func(space float64, hard bool) {
+		if open || hard {
+			cur.space, cur.hard = space, hard
+			if !open && len(ws) > 0 && hard { // a break right after a space
+				ws[len(ws)-1].hard = true
+			} else {
+				ws = append(ws, cur)
+			}
+		} else if space > 0 && len(ws) > 0 {
+			ws[len(ws)-1].space = space
+		}
+		cur, open = word{}, false
+	}
+	for _, r := range runs {
+		color := st.color
+		if r.Link != "" {
+			color = linkInk
+		}
+		if r.Math != nil {
+			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color})
+			if err != nil {
+				e.probs.add(pos, "%v", err)
+				continue
+			}
+			cur.frags = append(cur.frags, frag{math: b, w: b.W, size: st.size, link: r.Link, color: color})
+			cur.w += b.W
+			open = true
+			continue
+		}
+		face := st.faceOf(r.Style)
+		size, rise := st.size, 0.0
+		if face == Mono || face == fonts.MonoBold {
+			size *= 0.94
+		}
+		switch r.Shift {
+		case Sup:
+			size, rise = size*0.7, st.size*0.36
+		case Sub:
+			size, rise = size*0.7, -st.size*0.16
+		}
+		f := fonts.Get(face)
+		text := e.checkGlyphs(r.Text, face, pos)
+		spaceW := f.Width(" ", size)
+		start := 0
+		flush := func(i int) {
+			if i > start {
+				s := text[start:i]
+				w := f.Width(s, size)
+				cur.frags = append(cur.frags, frag{text: s, face: face, size: size, rise: rise, color: color, link: r.Link, w: w})
+				cur.w += w
+				open = true
+			}
+		}
+		for i, c := range text {
+			switch c {
+			case ' ', '\t', '\r':
+				flush(i)
+				end(spaceW, false)
+				start = i + 1
+			case '\n':
+				flush(i)
+				end(0, true)
+				start = i + 1
+			}
+		}
+		flush(len(text))
+	}
+	if open {
+		end(0, false)
+	}
+	return ws
+}
+
+// checkGlyphs reports each character the face lacks and drops it.
+func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) string {
+	f := fonts.Get(face)
+	r, bad := f.Missing(strings.Map(func(r rune) rune {
+		if r == '\n' || r == '\t' || r == '\r' {
+			return ' '
+		}
+		return r
+	}, s))
+	if !bad {
+		return s
+	}
+	e.probs.add(pos, "character %q (U+%04X) in %q is not in font %s", r, r, excerpt(s, r), face)
+	return strings.Map(func(c rune) rune {
+		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
+			return c
+		}
+		return -1
+	}, s)
+}
+
+// excerpt is up to 40 characters of s around the first r.
+func excerpt(s string, r rune) string {
+	i := strings.IndexRune(s, r)
+	start := max(0, i-20)
+	for start > 0 && !utf8.RuneStart(s[start]) {
+		start--
+	}
+	end := min(len(s), i+20)
+	for end < len(s) && !utf8.RuneStart(s[end]) {
+		end++
+	}
+	out := s[start:end]
+	if start > 0 {
+		out = "…" + out
+	}
+	if end < len(s) {
+		out += "…"
+	}
+	return out
+}
+
+// breakLines sets words into lines no wider than width: greedy, breaking
+// at spaces; a word longer than a line breaks after a '/' if it can, else
+// between characters.
+func breakLines(ws []word, width float64, st textStyle) []line {
+	var lines []line
+	var cur []word
+	x := 0.0
+	flush := func() {
+		lines = append(lines, setLine(cur, st))
+		cur, x = nil, 0
+	}
+	for i := 0; i < len(ws); i++ {
+		w := ws[i]
+		gap := 0.0
+		if len(cur) > 0 {
+			gap = cur[len(cur)-1].space
+		}
+		switch {
+		case x+gap+w.w <= width+1e-9:
+			cur = append(cur, w)
+			x += gap + w.w
+		case len(cur) > 0:
+			flush()
+			i--
+			continue
+		default: // alone and too long: split it
+			head, tail := splitWord(w, width)
+			cur = append(cur, head)
+			flush()
+			ws[i] = tail
+			i--
+			continue
+		}
+		if w.hard {
+			flush()
+		}
+	}
+	if len(cur) > 0 || len(lines) == 0 {
+		flush()
+	}
+	return lines
+}
+
+// splitWord cuts w so the head fits width: after the last '/' that fits,
+// else after the last character that fits (at least one character).
+func splitWord(w word, width float64) (head, tail word) {
+	type cut struct{ frag, off int }
+	var best, slash cut
+	found, foundSlash := false, false
+	x := 0.0
+	for fi, f := range w.frags {
+		if f.math != nil {
+			if x+f.w > width && found {
+				break
+			}
+			x += f.w
+			best, found = cut{fi + 1, 0}, true
+			continue
+		}
+		fo := fonts.Get(f.face)
+		for off, r := range f.text {
+			cw := float64(fo.Advance(r)) * f.size / 1000
+			if x+cw > width && found {
+				goto done
+			}
+			x += cw
+			best, found = cut{fi, off + utf8.RuneLen(r)}, true
+			if r == '/' {
+				slash, foundSlash = best, true
+			}
+		}
+	}
+done:
+	if foundSlash {
+		best = slash
+	}
+	for fi, f := range w.frags {
+		switch {
+		case fi < best.frag:
+			head.frags = append(head.frags, f)
+		case fi > best.frag:
+			tail.frags = append(tail.frags, f)
+		default:
+			if best.off > 0 {
+				h := f
+				h.text = f.text[:best.off]
+				h.w = fonts.Get(f.face).Width(h.text, f.size)
+				head.frags = append(head.frags, h)
+			}
+			if best.off < len(f.text) {
+				t := f
+				t.text = f.text[best.off:]
+				t.w = fonts.Get(f.face).Width(t.text, f.size)
+				tail.frags = append(tail.frags, t)
+			}
+		}
+	}
+	for _, f := range head.frags {
+		head.w += f.w
+	}
+	for _, f := range tail.frags {
+		tail.w += f.w
+	}
+	tail.space, tail.hard = w.space, w.hard
+	return head, tail
+}
+
+// setLine places words on a line and measures it. Items are relative to
+// the top-left of the line; the baseline is at ln.base.
+func setLine(ws []word, st textStyle) line {
+	f := fonts.Get(st.face)
+	asc, desc := f.Ascent(st.size), f.Descent(st.size)
+	leading := st.lead*st.size - asc - desc
+	textAsc := asc
+	for _, w := range ws { // inline formulas may make the line taller
+		for _, fr := range w.frags {
+			if fr.math != nil {
+				asc = math.Max(asc, fr.math.Ascent+0.12*st.size)
+				desc = math.Max(desc, fr.math.Descent+0.12*st.size)
+			}
+		}
+	}
+	var ln line
+	ln.h = math.Max(st.lead*st.size, asc+desc+leading)
+	ln.base = leading/2 + asc
+	base := ln.base
+	x := 0.0
+	var linkTarget string
+	var linkX float64
+	closeLink := func(at float64) {
+		if linkTarget != "" {
+			ln.items = append(ln.items, draw.Link{X: linkX, Y: base - textAsc, W: at - linkX, H: textAsc + f.Descent(st.size), Target: linkTarget})
+		}
+		linkTarget = ""
+	}
+	lastText := -1 // index in ln.items of a text item the next frag may extend
+	pending := ""  // the space between that item and the next frag
+	for i, w := range ws {
+		for _, fr := range w.frags {
+			if fr.link != linkTarget {
+				closeLink(x)
+				if fr.link != "" {
+					linkTarget, linkX = fr.link, x
+				}
+			}
+			if fr.math != nil {
+				ln.items = fr.math.AppendItems(ln.items, x, base)
+				lastText = -1
+			} else {
+				t := draw.Text{X: x, Y: base - fr.rise, Face: fr.face, Size: fr.size, Color: fr.color, Text: fr.text}
+				if lastText >= 0 {
+					prev := ln.items[lastText].(draw.Text)
+					if prev.Face == t.Face && prev.Size == t.Size && prev.Color == t.Color && prev.Y == t.Y {
+						prev.Text += pending + t.Text
+						ln.items[lastText] = prev
+						t.Text = ""
+					}
+				}
+				if t.Text != "" {
+					ln.items = append(ln.items, t)
+					lastText = len(ln.items) - 1
+				}
+				pending = ""
+			}
+			x += fr.w
+		}
+		if i < len(ws)-1 {
+			x += w.space
+			// a gap of exactly one space of the last face keeps the text
+			// item open; any other gap closes it
+			if lastText >= 0 {
+				prev := ln.items[lastText].(draw.Text)
+				if sp := fonts.Get(prev.Face).Width(" ", prev.Size); math.Abs(sp-w.space) < 1e-9 {
+					pending = " "
+				} else {
+					lastText = -1
+				}
+			}
+		}
+	}
+	closeLink(x)
+	ln.w = x
+	return ln
+}
+
+// setText breaks runs into lines of at most width.
+func (e *engine) setText(runs []Run, width float64, st textStyle, pos source.Position) []line {
+	return breakLines(e.words(runs, st, pos), width, st)
+}
+
+// plain is a single run of regular text.
+func plain(s string) []Run { return []Run{{Text: s}} }

@@ -1,0 +1,15 @@
+// Package pdf writes laid-out pages (layout.Pages) as a PDF. It is the only
+// package in plinth that imports the PDF library (github.com/signintech/gopdf).
+//
+// Output is deterministic: the same pages and options give the same bytes.
+// The creation and modification dates come from Options.Time, never the
+// clock; no document ID is written; fonts are embedded subsets of the Go
+// fonts under fixed names; images are keyed by a hash of their bytes.
+// Bookmarks are one level, one per sheet. Links are checked against the
+// anchors before anything is drawn, so a dangling link is an error rather
+// than a broken object. The document information carries the title,
+// author, subject, keywords and the full input fingerprint (in Keywords).
+//
+// Write draws into memory and copies the finished file to the writer; the
+// caller writes to a temporary file and renames it into place.
+package pdf

@@ -1,0 +1,184 @@
+package pdf
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"strings"
+	"time"
+
+	"github.com/signintech/gopdf"
+
+	"plinth/doc/layout"
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/fonts"
+)
+
+// Options control the file written.
+type Options struct {
+	// Time is the creation and modification date written into the
+	// document information; zero leaves both out.
+	Time time.Time
+	// Creator names the program that made the document ("plinth 0.3").
+	Creator string
+}
+
+// Write draws pages as a PDF to w.
+func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
+	defer func() {
+		if r := recover(); r != nil { // the PDF library must not take the caller down
+			err = fmt.Errorf("pdf: internal error: %v", r)
+		}
+	}()
+	if pages == nil || len(pages.Pages) == 0 {
+		return errors.New("pdf: no pages to write")
+	}
+	if err := checkLinks(pages); err != nil {
+		return err
+	}
+	first := pages.Pages[0]
+	gp := &gopdf.GoPdf{}
+	gp.Start(gopdf.Config{Unit: gopdf.UnitPT, PageSize: gopdf.Rect{W: first.W, H: first.H}})
+	gp.SetNoCompression() // content streams are compressed afterwards, by pack
+	info := pages.Info
+	gp.SetInfo(gopdf.PdfInfo{
+		Title:        info.Title,
+		Author:       info.Author,
+		Subject:      info.Subject,
+		Creator:      opt.Creator,
+		Producer:     "plinth",
+		CreationDate: opt.Time,
+	})
+	faces := usedFaces(pages)
+	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
+		if !faces[f] {
+			continue
+		}
+		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), gopdf.TtfOption{UseKerning: true}); err != nil {
+			return fmt.Errorf("pdf: embedding %s: %w", f, err)
+		}
+	}
+	marks := map[int][]layout.Bookmark{}
+	for _, b := range pages.Outline {
+		marks[b.Page] = append(marks[b.Page], b)
+	}
+	p := &painter{gp: gp}
+	for i, pg := range pages.Pages {
+		gp.AddPageWithOption(gopdf.PageOption{PageSize: &gopdf.Rect{W: pg.W, H: pg.H}})
+		p.reset()
+		for _, b := range marks[i] {
+			gp.SetY(b.Y + 20)
+			gp.AddOutlineWithPosition(b.Title)
+		}
+		for _, b := range pg.Boxes {
+			if err := p.box(b); err != nil {
+				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
+			}
+		}
+	}
+	var buf bytes.Buffer
+	buf.Grow(64<<10 + 56<<10*len(pages.Pages)) // spare the doublings of a growing buffer
+	if _, err := gp.WriteTo(&buf); err != nil {
+		return fmt.Errorf("pdf: %w", err)
+	}
+	out, err := pack(buf.Bytes())
+	if err != nil {
+		return err
+	}
+	if out, err = patchInfo(out, info, opt.Time); err != nil {
+		return err
+	}
+	_, err = w.Write(out)
+	return err
+}
+
+// checkLinks makes sure every link has its anchor.
+func checkLinks(pages *layout.Pages) error {
+	anchors := map[string]bool{}
+	var targets []string
+	for _, pg := range pages.Pages {
+		for _, b := range pg.Boxes {
+			b.Walk(func(b *layout.Box) {
+				for _, it := range b.Items {
+					switch it := it.(type) {
+					case draw.Anchor:
+						anchors[it.Name] = true
+					case draw.Link:
+						targets = append(targets, it.Target)
+					}
+				}
+			})
+		}
+	}
+	var missing []string
+	for _, t := range targets {
+		if !anchors[t] {
+			missing = append(missing, fmt.Sprintf("%q", t))
+		}
+	}
+	if len(missing) > 0 {
+		return fmt.Errorf("pdf: links to missing anchors: %s", strings.Join(missing, ", "))
+	}
+	return nil
+}
+
+func usedFaces(pages *layout.Pages) [fonts.NumFaces]bool {
+	var used [fonts.NumFaces]bool
+	for _, pg := range pages.Pages {
+		for _, b := range pg.Boxes {
+			b.Walk(func(b *layout.Box) {
+				for _, it := range b.Items {
+					if t, ok := it.(draw.Text); ok && t.Face.Valid() {
+						used[t.Face] = true
+					}
+				}
+			})
+		}
+	}
+	return used
+}
+
+// patchInfo adds Keywords (with the fingerprint) and ModDate to the
+// information dictionary gopdf writes into the trailer. The trailer comes
+// after the cross-reference table, so no offset moves.
+func patchInfo(pdf []byte, info layout.Info, t time.Time) ([]byte, error) {
+	kw := info.Keywords
+	if info.Fingerprint != "" {
+		kw = strings.TrimSpace(kw + " inputs:" + info.Fingerprint)
+	}
+	var add strings.Builder
+	if kw != "" {
+		fmt.Fprintf(&add, "/Keywords <FEFF%s>\n", utf16hex(kw))
+	}
+	if !t.IsZero() {
+		fmt.Fprintf(&add, "/ModDate(D:%s)\n", t.Format("20060102150405-07'00'"))
+	}
+	if add.Len() == 0 {
+		return pdf, nil
+	}
+	xref := bytes.LastIndex(pdf, []byte("\nxref\n"))
+	at := bytes.LastIndex(pdf, []byte("/Info <<\n"))
+	if xref < 0 || at < xref {
+		return nil, errors.New("pdf: cannot find the document information to complete")
+	}
+	at += len("/Info <<\n")
+	out := make([]byte, 0, len(pdf)+add.Len())
+	out = append(out, pdf[:at]...)
+	out = append(out, add.String()...)
+	return append(out, pdf[at:]...), nil
+}
+
+// utf16hex encodes s as UTF-16BE hex digits.
+func utf16hex(s string) string {
+	var b strings.Builder
+	for _, r := range s {
+		if r >= 0x10000 {
+			r -= 0x10000
+			fmt.Fprintf(&b, "%04X%04X", 0xD800+(r>>10), 0xDC00+(r&0x3FF))
+			continue
+		}
+		fmt.Fprintf(&b, "%04X", r)
+	}
+	return b.String()
+}
