@@ -3,13 +3,14 @@ package expr
 import "strings"
 
 // SplitSymbol splits a symbol for typesetting. The text before the first
-// "_" is the base, the rest the subscript with further "_" shown as commas;
-// primes are counted wherever they end the base or the subscript:
+// "_" is the base, the rest the subscript with further "_" shown as commas.
+// Primes ending the base are counted; primes ending the subscript stay in
+// it, so a partial factor on φ′ reads γ with subscript φ′:
 //
 //	gamma_sat  → ("gamma", 0, "sat")
 //	q_ult_net  → ("q", 0, "ult,net")
 //	phi'_d     → ("phi", 1, "d")
-//	sigma_v'   → ("sigma", 1, "v")
+//	gamma_phi' → ("gamma", 0, "phi'")
 //	B'         → ("B", 1, "")
 //
 // For a block result (F1.R_d) only the part after the last "." is split;
@@ -23,9 +24,7 @@ func SplitSymbol(name string) (base string, primes int, sub string) {
 	trimmed := strings.TrimRight(base, "'")
 	primes = len(base) - len(trimmed)
 	base = trimmed
-	trimmed = strings.TrimRight(sub, "'")
-	primes += len(sub) - len(trimmed)
-	sub = strings.ReplaceAll(trimmed, "_", ",")
+	sub = strings.ReplaceAll(sub, "_", ",")
 	return prefix + base, primes, sub
 }
 

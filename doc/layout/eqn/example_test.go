@@ -40,5 +40,5 @@ func ExampleSplit() {
 	// phi'_d: prefix "" base "φ" primes 1 sub "d"
 	// gamma_sat: prefix "" base "γ" primes 0 sub "sat"
 	// F1.R_d: prefix "F1" base "R" primes 0 sub "d"
-	// sigma_v': prefix "" base "σ" primes 1 sub "v"
+	// sigma_v': prefix "" base "σ" primes 0 sub "v′"
 }

@@ -34,9 +34,11 @@ func Split(name string) Parts {
 	if sub != "" {
 		parts := strings.Split(sub, ",")
 		for i, s := range parts {
-			if g, ok := expr.Greek(s); ok {
-				parts[i] = g
+			bare := strings.TrimRight(s, "'")
+			if g, ok := expr.Greek(bare); ok {
+				bare = g
 			}
+			parts[i] = bare + strings.Repeat("′", len(s)-len(strings.TrimRight(s, "'")))
 		}
 		p.Sub = strings.Join(parts, ",")
 	}
