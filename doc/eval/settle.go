@@ -1,18 +1,181 @@
 package eval
 
-import "plinth/doc/sheet"
+import (
+	"strconv"
 
-// SettleResult and CapacityResult hold the settlement and capacity
-// engines' results (see settlement.go).
-type SettleResult struct{}
-type CapacityResult struct{}
+	"plinth/calc/capacity"
+	"plinth/calc/design"
+	"plinth/calc/settle"
+	"plinth/calc/site"
+	"plinth/calc/stress"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
 
-func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bool {
-	e.errs.Add(headerSpan(b.Span), "settlement blocks are not evaluated yet")
-	return false
+// SettleResult is a settlement block's result: the serviceability load
+// (with its working in Load) and the engine's calculation.
+type SettleResult struct {
+	Service design.Service
+	Load    trace.Trace // the serviceability combination
+	*settle.Result
 }
 
+// CapacityResult is a capacity block's table.
+type CapacityResult = capacity.Result
+
+// settleNotes describe the settlement block's result symbols. Engine
+// names that would clash with a bearing block on the same footing are
+// renamed (util → util_s, q → q_SLS).
+var settleNotes = map[string]string{
+	"q_SLS": "gross bearing pressure, serviceability load", "q_net": "net bearing pressure (gross less overburden removed)",
+	"z_inf": "depth of the zone of influence below ground level", "s_i": "immediate settlement",
+	"s_c": "consolidation settlement", "s_sec": "secondary compression (creep) at the design life",
+	"s_total": "total settlement", "s_lim": "settlement limit", "util_s": "settlement utilisation s_total/s_lim",
+	"t_50": "time to 50 % consolidation", "t_90": "time to 90 % consolidation",
+	"C_1": "Schmertmann embedment factor", "C_2": "Schmertmann creep factor", "I_zp": "Schmertmann peak strain influence factor",
+	"N_bar": "Burland & Burbidge average SPT N over z_I", "I_c": "Burland & Burbidge compressibility index",
+	"z_I": "Burland & Burbidge depth of influence", "f_s": "Burland & Burbidge shape factor",
+	"f_l": "Burland & Burbidge thickness factor", "f_t": "Burland & Burbidge time factor",
+	"V_SLS": "serviceability vertical load",
+}
+
+var settleRename = map[string]string{"util": "util_s", "q": "q_SLS"}
+
+var capacityNotes = map[string]string{
+	"q_allow": "allowable bearing pressure at the footing's width", "q_a_b": "bearing-limited allowable pressure",
+	"q_a_s": "settlement-limited pressure",
+}
+
+func init() {
+	resultNames[sheet.KindSettlement] = []string{"V_SLS", "q_SLS", "q_net", "z_inf", "s_i", "s_c", "s_sec", "s_total", "s_lim", "util_s", "t_50", "t_90",
+		"C_1", "C_2", "I_zp", "N_bar", "I_c", "z_I", "f_s", "f_l", "f_t"}
+	resultNames[sheet.KindCapacity] = []string{"q_allow", "q_a_b", "q_a_s"}
+}
+
+// settleInput reads the settlement options shared by settlement and
+// capacity blocks.
+func (e *evaluator) settleInput(s *Sheet, blk *Block, o opts, methodKey string) (settle.Input, bool) {
+	in := settle.Input{Ground: blk.On.Model, Footing: blk.Of.Model}
+	ok := true
+	sc := scope{e: e, s: s}
+	if m := o.word(methodKey, ""); m != "" {
+		in.Method, _ = settle.ParseMethod(m)
+	}
+	in.Stress, _ = stress.ParseMethod(o.word("stress", "boussinesq"))
+	in.At, _ = stress.ParsePoint(o.word("at", "centre"))
+	in.Rigid = o.word("rigid", "no") == "yes"
+	if x := o["limit"]; x != nil {
+		q, qok := e.quantity(sc, x, units.Length, "a settlement limit")
+		ok = ok && qok
+		in.Limit = optOf(q.V)
+	}
+	if x := o["times"]; x != nil {
+		ts, tok := e.list(sc, x, units.Time, "a time")
+		ok = ok && tok
+		for _, t := range ts {
+			in.Times = append(in.Times, t.V)
+		}
+	}
+	if x := o["sublayers"]; x != nil {
+		n, err := strconv.Atoi(x.Value.Value)
+		if err != nil || n < 1 || n > 5000 {
+			e.errs.Add(x.Value.Span, "sublayers = %s: expected a whole number from 1 to 5000", x.Value.Value)
+			ok = false
+		}
+		in.Sublayers = n
+	}
+	return in, ok
+}
+
+func optOf(v float64) site.Opt { return site.Some(v) }
+
+// settlement runs the settlement engine for a block.
+func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bool {
+	in, ok := e.settleInput(s, blk, o, "method")
+	if !ok {
+		return false
+	}
+	kind, _ := design.ParseServiceKind(o.word("load", "characteristic"))
+	res := &SettleResult{}
+	fu := forceUnit(in.Footing)
+	svc, err := design.ServiceLoad(withSelfWeight(blk.Of, blk.On), kind, &res.Load, fu.Name)
+	if err != nil {
+		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		return false
+	}
+	res.Service = svc
+	in.V = optOf(svc.V)
+	r, err := settle.Compute(in)
+	if err != nil {
+		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		return false
+	}
+	res.Result = r
+	blk.Settle = res
+	blk.Cautions = append(append([]trace.Caution(nil), res.Load.Cautions...), r.Trace.Cautions...)
+	blk.Sources = mergeSources(res.Load.Sources, r.Trace.Sources)
+	vals := []trace.Value{{Symbol: "V_SLS", V: svc.V, Unit: fu.Name}}
+	for _, v := range r.Symbols {
+		if n, ok := settleRename[v.Symbol]; ok {
+			v.Symbol = n
+		}
+		vals = append(vals, v)
+	}
+	e.defineResults(s, blk, vals, settleNotes)
+	mm := units.MustParse("mm")
+	e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",
+		units.Quantity{V: r.Total, Dim: units.Length}, units.Quantity{V: r.Limit, Dim: units.Length}, mm,
+		r.Util, r.OK, "total settlement within the limit ("+r.Method.String()+")")
+	return true
+}
+
+// capacity runs the capacity table for a block.
 func (e *evaluator) capacity(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bool {
-	e.errs.Add(headerSpan(b.Span), "capacity blocks are not evaluated yet")
-	return false
+	if o["approach"] == nil {
+		o["approach"] = &sheet.Option{Name: sheet.Str{Value: "approach"}, Value: sheet.Str{Value: "FS(3.0)", Span: headerSpan(b.Span)}}
+	}
+	if o["widths"] == nil {
+		e.errs.AddHint(headerSpan(b.Span), "add a line such as widths = 1.0 m, 1.5 m, 2.0 m", "a capacity block needs widths")
+		return false
+	}
+	bin, bok := e.bearingInput(s, b, blk, o, "bearing_method")
+	sin, sok := e.settleInput(s, blk, o, "settlement_method")
+	widths, wok := e.list(scope{e: e, s: s}, o["widths"], units.Length, "a width")
+	if !bok || !sok || !wok {
+		return false
+	}
+	in := capacity.Input{Bearing: bin, Settle: sin, Limit: settle.DefaultLimit}
+	if sin.Limit.Set {
+		in.Limit = sin.Limit.V
+	}
+	for _, w := range widths {
+		in.Widths = append(in.Widths, w.V)
+	}
+	r, err := capacity.Table(in)
+	if err != nil {
+		at := headerSpan(b.Span)
+		if x := o["approach"]; x != nil && x.Value.Span.File != nil {
+			at = x.Value.Span
+		}
+		e.siteErrors(err, at, func(int, string) source.Span { return at })
+		return false
+	}
+	blk.Capacity = r
+	blk.Cautions = r.Trace.Cautions
+	blk.Sources = r.Trace.Sources
+	e.defineResults(s, blk, r.Values, capacityNotes)
+	return true
+}
+
+// mergeSources joins source lists, each source once, in order.
+func mergeSources(lists ...[]trace.Source) []trace.Source {
+	var t trace.Trace
+	for _, l := range lists {
+		for _, src := range l {
+			t.Cite(src)
+		}
+	}
+	return t.Sources
 }

@@ -1,0 +1,125 @@
+package capacity
+
+import (
+	"fmt"
+	"math"
+
+	"plinth/calc/bearing"
+	"plinth/calc/settle"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// Input is one capacity table.
+type Input struct {
+	Bearing bearing.Input // footing, ground and bearing options; Approach must be FS(x)
+	Settle  settle.Input  // settlement options (Ground and Footing are taken from Bearing)
+	Widths  []float64     // m, each (0, 100], at most 50
+	Limit   float64       // settlement limit, m, (0, 1]
+}
+
+// Row is the table row of one width. Pressures are gross, Pa.
+type Row struct {
+	B, L     float64 // width and length (L = 0 for a strip)
+	QBearing float64 // bearing-limited allowable pressure q_a,b
+	QSettle  float64 // pressure giving the settlement limit q_a,s
+	QAllow   float64 // the lower of the two
+	Governs  string  // "bearing" or "settlement"
+	Drainage string  // the drainage condition governing bearing
+	Iter     int     // Brent iterations of the settlement solve
+	Own      bool    // the footing's own width
+}
+
+// Result is the capacity table.
+type Result struct {
+	Approach string
+	Limit    float64
+	Rows     []Row // the widths asked for, in order, then the footing's own width if not among them
+	Own      int   // index of the footing's own width in Rows
+	Trace    trace.Trace
+	Values   []trace.Value // q_allow, q_a_b, q_a_s at the footing's own width
+}
+
+var refMin = trace.Ref{Source: Source, Clause: "allowable pressure = lower of bearing and settlement"}
+
+// Source names the practice the table follows.
+var Source = trace.Source{Key: "Tomlinson2001", Citation: "Tomlinson, M. J. (2001). Foundation Design and Construction, 7th ed. Prentice Hall, Harlow (allowable bearing pressure as the lower of the pressures limited by shear failure and by settlement; edition from memory)."}
+
+// Table computes the allowable pressure for every width.
+func Table(in Input) (*Result, error) {
+	ap := in.Bearing.Options.Approach
+	if !ap.Allowable() {
+		return nil, &site.InputError{Param: "approach", Msg: fmt.Sprintf("a capacity table compares service pressures: use an allowable-stress approach FS(x), not %s", ap.Name)}
+	}
+	if len(in.Widths) == 0 || len(in.Widths) > 50 {
+		return nil, &site.InputError{Param: "widths", Msg: fmt.Sprintf("give 1 to 50 widths, not %d", len(in.Widths))}
+	}
+	for _, b := range in.Widths {
+		if !(b > 0) || b > 100 {
+			return nil, &site.RangeError{Param: "widths", Value: b, Min: 0, Max: 100, Unit: "m"}
+		}
+	}
+	if !(in.Limit > 0) || in.Limit > 1 {
+		return nil, &site.RangeError{Param: "limit", Value: in.Limit * 1e3, Min: 0, Max: 1000, Unit: "mm"}
+	}
+	r := &Result{Approach: ap.Name, Limit: in.Limit, Own: -1}
+	f := in.Bearing.Footing
+	widths := append([]float64(nil), in.Widths...)
+	for i, b := range widths {
+		if b == f.B {
+			r.Own = i
+		}
+	}
+	if r.Own < 0 {
+		widths = append(widths, f.B)
+		r.Own = len(widths) - 1
+	}
+	r.Trace.Add(trace.Step{Symbol: "s_lim", Value: in.Limit, Unit: "mm", Note: "settlement limit"})
+	for i, b := range widths {
+		cp, err := bearing.CapacityAt(in.Bearing, b)
+		if err != nil {
+			return nil, err
+		}
+		sin := in.Settle
+		sin.Ground = in.Bearing.Ground
+		sin.Footing = f
+		if f.Shape == site.Rectangle && f.B > 0 {
+			sin.Footing.L = f.L / f.B * b
+		}
+		sin.Footing.B = b
+		al, err := settle.Allowable(sin, in.Limit)
+		if err != nil {
+			return nil, err
+		}
+		row := Row{B: b, L: cp.L, QBearing: cp.QRd, QSettle: al.Q, Drainage: cp.Drainage.String(), Iter: al.Iter, Own: i == r.Own}
+		row.QAllow, row.Governs = row.QBearing, "bearing"
+		if row.QSettle < row.QBearing {
+			row.QAllow, row.Governs = row.QSettle, "settlement"
+		}
+		if math.IsNaN(row.QAllow) || math.IsInf(row.QAllow, 0) {
+			return nil, fmt.Errorf("capacity: no finite allowable pressure at B = %g m", b)
+		}
+		cas := fmt.Sprintf("B = %.3g m", b)
+		qb := r.Trace.Add(trace.Step{Symbol: "q_a_b", Value: row.QBearing, Unit: "kPa", Case: cas,
+			Note: fmt.Sprintf("bearing-limited allowable pressure (%s, %s governs)", ap.Name, row.Drainage)})
+		qs := r.Trace.Add(trace.Step{Symbol: "q_a_s", Value: row.QSettle, Unit: "kPa", Case: cas,
+			Note: fmt.Sprintf("pressure giving s = s_lim (Brent, %d iterations, tolerance %g Pa)", al.Iter, al.Tol)})
+		r.Trace.Add(trace.Step{Symbol: "q_allow", Formula: trace.Fn("min", trace.S("q_a_b"), trace.S("q_a_s")),
+			Inputs: []trace.Value{{Symbol: "q_a_b", V: qb, Unit: "kPa"}, {Symbol: "q_a_s", V: qs, Unit: "kPa"}},
+			Value: row.QAllow, Unit: "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})
+		for _, s := range cp.Trace.Sources {
+			r.Trace.Cite(s)
+		}
+		for _, s := range al.Trace.Sources {
+			r.Trace.Cite(s)
+		}
+		r.Rows = append(r.Rows, row)
+	}
+	own := r.Rows[r.Own]
+	r.Values = []trace.Value{
+		{Symbol: "q_allow", V: own.QAllow, Unit: "kPa"},
+		{Symbol: "q_a_b", V: own.QBearing, Unit: "kPa"},
+		{Symbol: "q_a_s", V: own.QSettle, Unit: "kPa"},
+	}
+	return r, nil
+}

@@ -1,0 +1,154 @@
+package design
+
+import (
+	"fmt"
+
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// ServiceKind selects a serviceability combination (EN 1990 6.5.3).
+type ServiceKind int
+
+const (
+	// Characteristic: Σ G_k + Q_k,1 + Σ ψ0,i Q_k,i, EN 1990 eq. (6.14b),
+	// each variable action leading in turn, the largest V kept.
+	Characteristic ServiceKind = iota
+	// QuasiPermanent: Σ G_k + Σ ψ2,i Q_k,i, EN 1990 eq. (6.16b), for
+	// long-term effects such as consolidation settlement.
+	QuasiPermanent
+)
+
+func (k ServiceKind) String() string {
+	if k == QuasiPermanent {
+		return "quasi-permanent"
+	}
+	return "characteristic"
+}
+
+// ParseServiceKind reads "characteristic" or "quasi-permanent".
+func ParseServiceKind(s string) (ServiceKind, bool) {
+	switch s {
+	case "characteristic":
+		return Characteristic, true
+	case "quasi-permanent":
+		return QuasiPermanent, true
+	}
+	return 0, false
+}
+
+// DefaultPsi2 is ψ2 for a variable action that gives none: 1.0, treating
+// the whole variable action as permanent (conservative; common practice).
+const DefaultPsi2 = 1.0
+
+// Service is a serviceability load: the combined actions and the factor
+// applied to each (parallel to the actions).
+type Service struct {
+	Name    string // "characteristic · Imposed leading"
+	Kind    ServiceKind
+	Leading int // characteristic: the leading variable action, -1 if none
+	Factor  []float64
+	V       float64 // N (N/m for a strip)
+}
+
+var (
+	refChar = trace.Ref{Source: trace.EN1990, Clause: "6.5.3, eq. (6.14b)"}
+	refQP   = trace.Ref{Source: trace.EN1990, Clause: "6.5.3, eq. (6.16b)"}
+	refPsi2 = trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1 (ψ2)"}
+)
+
+// ServiceLoad combines the characteristic vertical actions for a
+// serviceability check and records the working in t (unitF is the force
+// display unit, "kN" or "kN/m"). Only vertical actions enter: settlement
+// is computed for the vertical load. It returns an error for no actions
+// or a combined load that is not downward.
+func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF string) (Service, error) {
+	if len(acts) == 0 {
+		return Service{}, &site.InputError{Param: "actions", Msg: "no actions given"}
+	}
+	tags := Tags(acts)
+	best := Service{Kind: kind, Leading: -1}
+	try := func(lead int) {
+		s := Service{Kind: kind, Leading: lead, Factor: make([]float64, len(acts))}
+		for i, a := range acts {
+			f := 1.0
+			if a.Kind == site.Variable {
+				switch {
+				case kind == QuasiPermanent:
+					f = a.Psi2.Or(DefaultPsi2)
+				case i != lead:
+					f = a.Psi0.Or(DefaultPsi0)
+				}
+			}
+			s.Factor[i] = f
+			s.V += f * a.V
+		}
+		if best.Factor == nil || s.V > best.V {
+			best = s
+		}
+	}
+	var vars []int
+	for i, a := range acts {
+		if a.Kind == site.Variable {
+			vars = append(vars, i)
+		}
+	}
+	if kind == Characteristic && len(vars) > 0 {
+		for _, i := range vars {
+			try(i)
+		}
+	} else {
+		try(-1)
+	}
+	best.Name = kind.String()
+	if best.Leading >= 0 {
+		best.Name += " · " + acts[best.Leading].Name + " leading"
+	}
+	ref := refChar
+	if kind == QuasiPermanent {
+		ref = refQP
+	}
+	var f trace.Expr
+	var in []trace.Value
+	for i, a := range acts {
+		if a.V == 0 || best.Factor[i] == 0 {
+			continue
+		}
+		vk := "V_k_" + tags[i]
+		in = append(in, trace.Value{Symbol: vk, V: a.V, Unit: unitF})
+		term := trace.S(vk)
+		if a.Kind == site.Variable && best.Factor[i] != 1 || a.Kind == site.Variable && kind == QuasiPermanent {
+			psi := "psi_0_" + tags[i]
+			pref, note := refPsi, "combination factor of "+a.Name
+			if kind == QuasiPermanent {
+				psi, pref, note = "psi_2_"+tags[i], refPsi2, "quasi-permanent factor of "+a.Name
+			}
+			given := a.Psi0.Set
+			if kind == QuasiPermanent {
+				given = a.Psi2.Set
+			}
+			if !given {
+				note += " (not given: default)"
+				t.Warn(trace.Caution{Code: "psi-default", Severity: trace.SevWarning, Ref: pref,
+					Message: fmt.Sprintf("%s gives no %s; %g is used", a.Name, map[bool]string{true: "ψ2", false: "ψ0"}[kind == QuasiPermanent], best.Factor[i])})
+			}
+			t.Add(trace.Step{Symbol: psi, Value: best.Factor[i], Ref: pref, Note: note})
+			in = append(in, trace.Value{Symbol: psi, V: best.Factor[i]})
+			term = trace.Mul(trace.S(psi), term)
+		}
+		if f == nil {
+			f = term
+		} else {
+			f = trace.Add(f, term)
+		}
+	}
+	if f == nil {
+		f = trace.N(0)
+	}
+	t.Add(trace.Step{Symbol: "V_SLS", Formula: f, Inputs: in, Value: best.V, Unit: unitF, Ref: ref,
+		Note: "serviceability vertical load, " + best.Name})
+	if best.V <= 0 {
+		return best, &site.InputError{Param: "V", Msg: fmt.Sprintf("the %s vertical load is %g kN, not downward: no settlement to compute", kind, best.V/1e3)}
+	}
+	return best, nil
+}
