@@ -106,7 +106,7 @@ func Table(in Input) (*Result, error) {
 			Note: fmt.Sprintf("pressure giving s = s_lim (Brent, %d iterations, tolerance %g Pa)", al.Iter, al.Tol)})
 		r.Trace.Add(trace.Step{Symbol: "q_allow", Formula: trace.Fn("min", trace.S("q_a_b"), trace.S("q_a_s")),
 			Inputs: []trace.Value{{Symbol: "q_a_b", V: qb, Unit: "kPa"}, {Symbol: "q_a_s", V: qs, Unit: "kPa"}},
-			Value: row.QAllow, Unit: "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})
+			Value:  row.QAllow, Unit: "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})
 		for _, s := range cp.Trace.Sources {
 			r.Trace.Cite(s)
 		}
