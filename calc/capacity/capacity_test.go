@@ -1,0 +1,103 @@
+package capacity_test
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"plinth/calc/bearing"
+	"plinth/calc/capacity"
+	"plinth/calc/design"
+	"plinth/calc/settle"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+const deg = math.Pi / 180
+
+func input() capacity.Input {
+	g := site.Ground{Water: site.Some(1.5), Layers: []site.Layer{
+		{Name: "Clay", Top: 0, Gamma: 19e3, GammaSat: site.Some(20e3), Cu: site.Some(75e3), Phi: site.Some(25 * deg),
+			C: site.Some(5e3), Mv: site.Some(0.1e-6), Cv: site.Some(3.0 / settle.Year), Eu: site.Some(30e6)},
+	}}
+	f := site.Footing{Name: "F", Shape: site.Square, B: 2, D: 1}
+	return capacity.Input{
+		Bearing: bearing.Input{Ground: g, Footing: f, Options: bearing.Options{Approach: design.FS(3)}},
+		Widths:  []float64{1, 2, 3, 4},
+		Limit:   0.025,
+	}
+}
+
+// Invariants (common practice): the allowable pressure is the lower of
+// the two limits; on a uniform clay the settlement-limited pressure falls
+// as the footing widens (a wider footing stresses deeper ground); the
+// footing's own width is in the table. Round trip: at q_a,s the settlement
+// engine gives s_lim to 0.1 % (the Brent tolerance is 1 Pa).
+func TestTable(t *testing.T) {
+	in := input()
+	r, err := capacity.Table(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := trace.Verify(r.Trace, 1e-9); err != nil {
+		t.Error(err)
+	}
+	if len(r.Rows) != 4 || !r.Rows[r.Own].Own || r.Rows[r.Own].B != 2 {
+		t.Fatalf("rows %+v own %d", r.Rows, r.Own)
+	}
+	for i, row := range r.Rows {
+		if row.QAllow != math.Min(row.QBearing, row.QSettle) {
+			t.Errorf("B = %g: q_allow %v is not the lower of %v and %v", row.B, row.QAllow, row.QBearing, row.QSettle)
+		}
+		if i > 0 && row.QSettle >= r.Rows[i-1].QSettle {
+			t.Errorf("q_a,s does not fall with width: %v then %v", r.Rows[i-1].QSettle, row.QSettle)
+		}
+		sin := in.Settle
+		sin.Ground, sin.Footing = in.Bearing.Ground, in.Bearing.Footing
+		sin.Footing.B = row.B
+		sin.Q = site.Some(row.QSettle)
+		s, err := settle.Compute(sin)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(s.Total-0.025) > 0.025e-3 {
+			t.Errorf("B = %g: s(q_a,s) = %v m, want 0.025", row.B, s.Total)
+		}
+	}
+	if v := r.Values[0]; v.Symbol != "q_allow" || v.V != r.Rows[r.Own].QAllow {
+		t.Errorf("values %+v", r.Values)
+	}
+}
+
+func TestErrors(t *testing.T) {
+	in := input()
+	in.Bearing.Options.Approach = design.DA1()
+	if _, err := capacity.Table(in); err == nil || !strings.Contains(err.Error(), "allowable-stress approach") {
+		t.Errorf("DA1: %v", err)
+	}
+	in = input()
+	in.Widths = []float64{-1}
+	if _, err := capacity.Table(in); err == nil {
+		t.Error("negative width accepted")
+	}
+	in = input()
+	in.Limit = 0
+	if _, err := capacity.Table(in); err == nil {
+		t.Error("zero limit accepted")
+	}
+}
+
+// Undrained bearing at the footing's width, by hand from EN 1997-1:2004
+// Annex D (D.3) with the FS approach: q_ult,net = (π + 2)·c_u·s_c with
+// s_c = 1.2 (square) = 5.1416 × 75 × 1.2 = 462.7 kPa; q_a = 462.7/3 +
+// σ_v0 (1 m × 19 kPa) = 173.2 kPa. Tolerance 0.1 kPa.
+func TestUndrainedHand(t *testing.T) {
+	r, err := capacity.Table(input())
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := (math.Pi+2)*75e3*1.2/3 + 19e3
+	if got := r.Rows[r.Own].QBearing; math.Abs(got-want) > 100 {
+		t.Errorf("q_a,b = %.1f kPa, want %.1f kPa", got/1e3, want/1e3)
+	}
+}

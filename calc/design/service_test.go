@@ -1,0 +1,53 @@
+package design_test
+
+import (
+	"math"
+	"testing"
+
+	"plinth/calc/design"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// Serviceability combinations worked by hand from EN 1990:2002 eqs.
+// (6.14b) and (6.16b): G = 950 kN, imposed Q1 = 400 kN (ψ0 0.7, ψ2 0.3),
+// snow Q2 = 120 kN (ψ0 0.5, ψ2 0). Characteristic, imposed leading:
+// 950 + 400 + 0.5·120 = 1410 kN; snow leading: 950 + 120 + 0.7·400 =
+// 1350 kN; the larger governs. Quasi-permanent: 950 + 0.3·400 + 0 = 1070
+// kN. Tolerance 1e-9 relative.
+func TestServiceLoad(t *testing.T) {
+	acts := []site.Action{
+		{Name: "Dead", Kind: site.Permanent, V: 950e3},
+		{Name: "Imposed", Kind: site.Variable, V: 400e3, Psi0: site.Some(0.7), Psi2: site.Some(0.3)},
+		{Name: "Snow", Kind: site.Variable, V: 120e3, Psi0: site.Some(0.5), Psi2: site.Some(0)},
+	}
+	for _, c := range []struct {
+		kind design.ServiceKind
+		want float64
+		name string
+	}{
+		{design.Characteristic, 1410e3, "characteristic · Imposed leading"},
+		{design.QuasiPermanent, 1070e3, "quasi-permanent"},
+	} {
+		var tr trace.Trace
+		s, err := design.ServiceLoad(acts, c.kind, &tr, "kN")
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(s.V-c.want) > 1e-9*c.want || s.Name != c.name {
+			t.Errorf("%v: V = %v (%s), want %v (%s)", c.kind, s.V, s.Name, c.want, c.name)
+		}
+		if err := trace.Verify(tr, 1e-9); err != nil {
+			t.Error(err)
+		}
+	}
+	// ψ2 not given: the whole variable action counts (conservative) with a caution.
+	var tr trace.Trace
+	s, err := design.ServiceLoad([]site.Action{{Name: "G", V: 100e3}, {Name: "Q", Kind: site.Variable, V: 50e3}}, design.QuasiPermanent, &tr, "kN")
+	if err != nil || s.V != 150e3 || len(tr.Cautions) != 1 {
+		t.Errorf("default ψ2: V = %v, cautions %v, err %v", s.V, tr.Cautions, err)
+	}
+	if _, err := design.ServiceLoad([]site.Action{{Name: "Uplift", V: -10e3}}, design.Characteristic, &tr, "kN"); err == nil {
+		t.Error("an upward load gave no error")
+	}
+}
