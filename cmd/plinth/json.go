@@ -1,7 +1,9 @@
 package main
 
 import (
+	"fmt"
 	"math"
+	"strings"
 
 	"plinth/calc/units"
 	"plinth/doc/eval"
@@ -15,7 +17,44 @@ type jsonReport struct {
 	Overrides []jsonOverride `json:"overrides"`
 	Symbols   []jsonSymbol   `json:"symbols"`
 	Checks    []jsonCheck    `json:"checks"`
+	Blocks    []jsonBlock    `json:"blocks"`
 	Errors    []jsonError    `json:"errors"`
+}
+
+// jsonBlock is one ground, footing, bearing, settlement or capacity block.
+// Values are SI (N, Pa, m, s, rad).
+type jsonBlock struct {
+	Kind      string             `json:"kind"`
+	Name      string             `json:"name"`
+	File      string             `json:"file"`
+	Line      int                `json:"line"`
+	Cases     []jsonCase         `json:"cases"`
+	Governing *jsonCase          `json:"governing"`
+	Cautions  []jsonCaution      `json:"cautions"`
+	Results   map[string]float64 `json:"results"`
+}
+
+// jsonCase is one checked case: a bearing or sliding case (one design
+// combination under one drainage condition), or one width of a capacity
+// table.
+type jsonCase struct {
+	Name        string             `json:"name"`
+	Check       string             `json:"check"` // bearing, sliding, capacity
+	Drainage    string             `json:"drainage,omitempty"`
+	Combination string             `json:"combination,omitempty"`
+	VD          float64            `json:"V_d"`
+	HD          float64            `json:"H_d"`
+	RD          float64            `json:"R_d"`
+	Util        float64            `json:"util"`
+	OK          bool               `json:"ok"`
+	Factors     map[string]float64 `json:"factors"`
+}
+
+type jsonCaution struct {
+	Code     string `json:"code"`
+	Severity string `json:"severity"`
+	Message  string `json:"message"`
+	Case     string `json:"case"`
 }
 
 type jsonOverride struct {
@@ -60,7 +99,7 @@ type jsonError struct {
 
 // report builds the JSON object for a run.
 func report(res *eval.Result, diags source.List) jsonReport {
-	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Errors: []jsonError{}}
+	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Blocks: []jsonBlock{}, Errors: []jsonError{}}
 	for _, d := range diags {
 		if d.Severity != source.Error {
 			continue
@@ -106,5 +145,80 @@ func report(res *eval.Result, diags source.List) jsonReport {
 		}
 		r.Checks = append(r.Checks, jc)
 	}
+	for _, s := range res.Sheets {
+		for _, b := range s.Blocks() {
+			r.Blocks = append(r.Blocks, blockJSON(b))
+		}
+	}
 	return r
+}
+
+// blockJSON converts an evaluated block.
+func blockJSON(b *eval.Block) jsonBlock {
+	p := b.Span.Pos()
+	jb := jsonBlock{Kind: b.Kind.String(), Name: b.Name, File: p.Path, Line: p.Line,
+		Cases: []jsonCase{}, Cautions: []jsonCaution{}, Results: map[string]float64{}}
+	switch {
+	case b.Ground != nil:
+		for _, l := range b.Ground.Layers {
+			for _, y := range l.Cells {
+				if y != nil {
+					jb.Results[y.Name] = y.Q.V
+				}
+			}
+		}
+		if b.Ground.Water != nil {
+			jb.Results[b.Ground.Water.Name] = b.Ground.Water.Q.V
+		}
+	case b.Footing != nil:
+		for _, row := range b.Footing.Rows {
+			for _, y := range row {
+				if y != nil {
+					jb.Results[y.Name] = y.Q.V
+				}
+			}
+		}
+	}
+	if br := b.Bearing; br != nil {
+		for i, c := range br.Cases {
+			jc := jsonCase{Name: c.Name, Check: "bearing", Drainage: c.Drainage.String(), Combination: c.Combination,
+				VD: c.V, HD: c.H, RD: c.R, Util: c.Util, OK: c.OK, Factors: c.Factors}
+			if jc.Factors == nil {
+				jc.Factors = map[string]float64{}
+			}
+			jb.Cases = append(jb.Cases, jc)
+			if i == br.Governing {
+				g := jc
+				jb.Governing = &g
+			}
+		}
+		for _, c := range br.Sliding {
+			jb.Cases = append(jb.Cases, jsonCase{Name: c.Name, Check: "sliding", Drainage: c.Drainage.String(), Combination: c.Combination,
+				VD: c.V, HD: c.H, RD: c.R, Util: c.Util, OK: c.OK, Factors: map[string]float64{}})
+		}
+	}
+	if sr := b.Settle; sr != nil {
+		jc := jsonCase{Name: "total settlement, " + sr.Service.Name, Check: "settlement", VD: sr.Service.V,
+			Util: sr.Util, OK: sr.OK, Factors: map[string]float64{"s_i": sr.Si, "s_c": sr.Sc, "s_sec": sr.Ssec, "s_total": sr.Total, "s_lim": sr.Limit}}
+		jb.Cases = append(jb.Cases, jc)
+		jb.Governing = &jc
+	}
+	if cr := b.Capacity; cr != nil {
+		for i, row := range cr.Rows {
+			jc := jsonCase{Name: fmt.Sprintf("B = %g m", row.B), Check: "capacity", Drainage: row.Drainage,
+				RD: row.QAllow, OK: true, Factors: map[string]float64{"B": row.B, "L": row.L, "q_a_b": row.QBearing, "q_a_s": row.QSettle, "q_allow": row.QAllow}}
+			jb.Cases = append(jb.Cases, jc)
+			if i == cr.Own {
+				g := jc
+				jb.Governing = &g
+			}
+		}
+	}
+	for _, c := range b.Cautions {
+		jb.Cautions = append(jb.Cautions, jsonCaution{Code: c.Code, Severity: c.Severity.String(), Message: c.Message, Case: c.Case})
+	}
+	for _, y := range b.Results {
+		jb.Results[strings.TrimPrefix(y.Name, b.Name+".")] = y.Q.V
+	}
+	return jb
 }
