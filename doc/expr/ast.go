@@ -198,14 +198,23 @@ func Inspect(n Node, f func(Node) bool) { Walk(inspector(f), n) }
 
 // Idents returns every symbol occurrence in n in source order (repeats
 // included, pi excluded).
-func Idents(n Node) []Ident {
-	var out []Ident
-	Inspect(n, func(n Node) bool {
-		if id, ok := n.(*Ident); ok {
-			out = append(out, *id)
+func Idents(n Node) []Ident { return appendIdents(nil, n) }
+
+func appendIdents(out []Ident, n Node) []Ident {
+	switch n := n.(type) {
+	case *Ident:
+		out = append(out, *n)
+	case *Unary:
+		out = appendIdents(out, n.X)
+	case *Binary:
+		out = appendIdents(appendIdents(out, n.L), n.R)
+	case *Paren:
+		out = appendIdents(out, n.X)
+	case *Call:
+		for _, a := range n.Args {
+			out = appendIdents(out, a)
 		}
-		return true
-	})
+	}
 	return out
 }
 

@@ -21,6 +21,11 @@ func Eval(n Node, env Env) (units.Quantity, []Error) {
 	if len(errs) > 0 {
 		return units.Quantity{}, errs
 	}
+	return evalDim(n, env, d)
+}
+
+// evalDim is Eval for a tree whose dimension d is already known.
+func evalDim(n Node, env Env, d units.Dim) (units.Quantity, []Error) {
 	ev := evaluator{env: env}
 	ref, err := ev.value(n)
 	if err != nil {
@@ -42,10 +47,11 @@ func Eval(n Node, env Env) (units.Quantity, []Error) {
 // EvalAssign evaluates an assignment: StmtDims (so a display unit that
 // does not fit is an error) and then Eval of its expression.
 func EvalAssign(a *Assign, env Env) (units.Quantity, []Error) {
-	if _, errs := StmtDims(a, env); len(errs) > 0 {
+	d, errs := StmtDims(a, env)
+	if len(errs) > 0 {
 		return units.Quantity{}, errs
 	}
-	return Eval(a.X, env)
+	return evalDim(a.X, env, d)
 }
 
 // CheckValue is an evaluated check line.
@@ -57,11 +63,12 @@ type CheckValue struct {
 // EvalCheck evaluates both sides of a check, whose dimensions must agree,
 // and whether the comparison holds.
 func EvalCheck(c *Check, env Env) (CheckValue, []Error) {
-	if _, errs := StmtDims(c, env); len(errs) > 0 {
+	d, errs := StmtDims(c, env)
+	if len(errs) > 0 {
 		return CheckValue{}, errs
 	}
-	l, errs := Eval(c.L, env)
-	r, rerrs := Eval(c.R, env)
+	l, errs := evalDim(c.L, env, d)
+	r, rerrs := evalDim(c.R, env, d)
 	if errs = append(errs, rerrs...); len(errs) > 0 {
 		return CheckValue{}, errs
 	}
