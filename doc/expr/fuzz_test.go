@@ -3,6 +3,8 @@ package expr_test
 import (
 	"bufio"
 	"os"
+	"path/filepath"
+	"strings"
 	"testing"
 
 	"plinth/calc/units"
@@ -23,6 +25,17 @@ func seedLines(f *testing.F) {
 	sc := bufio.NewScanner(file)
 	for sc.Scan() {
 		f.Add(sc.Text(), 0)
+	}
+	// Every line of the example sheets (statements, table rows, prose).
+	sheets, _ := filepath.Glob("../../examples/*/*.md")
+	for _, path := range sheets {
+		data, err := os.ReadFile(path)
+		if err != nil {
+			f.Fatal(err)
+		}
+		for _, l := range strings.Split(string(data), "\n") {
+			f.Add(l, 100)
+		}
 	}
 	for _, s := range []string{"", "(", ")", "x = ((((", "check", "check =", "x = 2 m*", "x = 1e", "x = 3 -> :", "{", "x = φ′", "x = \xff", "x = 2^-^2", "x = min(,)"} {
 		f.Add(s, 17)
