@@ -114,6 +114,9 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 		}
 		p.setText(v.Color)
 		p.gp.SetXY(v.Start()+dx, v.Y+dy)
+		// gopdf writes the text colour as the fill colour ("rg") inside
+		// the text object, so the fill we last set no longer holds.
+		p.hasFill = false
 		return p.gp.Text(v.Text)
 	case draw.Line:
 		if v.Width <= 0 {

@@ -1,0 +1,296 @@
+package chart_test
+
+import (
+	"errors"
+	"flag"
+	"fmt"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"plinth/doc/chart"
+	"plinth/doc/layout/draw"
+)
+
+var update = flag.Bool("update", false, "rewrite golden files")
+
+// Dump writes items one a line, positions rounded to 0.01 pt.
+func Dump(items []draw.Item) string {
+	var b strings.Builder
+	f := func(v float64) string {
+		s := fmt.Sprintf("%.2f", v)
+		if s == "-0.00" {
+			s = "0.00"
+		}
+		return s
+	}
+	paint := func(p draw.Paint) string {
+		s := ""
+		if p.Width > 0 {
+			s += fmt.Sprintf(" stroke %s %s", p.Stroke, f(p.Width))
+			if p.Dash != nil {
+				s += fmt.Sprintf(" dash %v", p.Dash)
+			}
+		}
+		if p.Filled {
+			s += " fill " + p.Fill.String()
+		}
+		return s
+	}
+	for _, it := range items {
+		switch v := it.(type) {
+		case draw.Text:
+			fmt.Fprintf(&b, "text %s %s %s %s %s %d %q\n", f(v.X), f(v.Y), v.Face, f(v.Size), v.Color, v.Align, v.Text)
+		case draw.Line:
+			fmt.Fprintf(&b, "line %s %s %s %s%s\n", f(v.X1), f(v.Y1), f(v.X2), f(v.Y2), paint(v.Paint))
+		case draw.Rect:
+			fmt.Fprintf(&b, "rect %s %s %s %s%s\n", f(v.X), f(v.Y), f(v.W), f(v.H), paint(v.Paint))
+		case draw.Poly:
+			fmt.Fprintf(&b, "poly closed=%v%s:", v.Closed, paint(v.Paint))
+			for _, p := range v.Points {
+				fmt.Fprintf(&b, " %s,%s", f(p.X), f(p.Y))
+			}
+			b.WriteByte('\n')
+		default:
+			fmt.Fprintf(&b, "%T\n", it)
+		}
+	}
+	return b.String()
+}
+
+func golden(t *testing.T, name, got string) {
+	t.Helper()
+	path := filepath.Join("testdata", name+".golden")
+	if *update {
+		if err := os.MkdirAll("testdata", 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run with -update to create)", err)
+	}
+	if got != string(want) {
+		g, w := strings.Split(got, "\n"), strings.Split(string(want), "\n")
+		for i := 0; i < len(g) && i < len(w); i++ {
+			if g[i] != w[i] {
+				t.Fatalf("%s differs at line %d:\n got: %s\nwant: %s\n(run with -update to accept)", path, i+1, g[i], w[i])
+			}
+		}
+		t.Fatalf("%s differs in length: %d lines, want %d", path, len(g), len(w))
+	}
+}
+
+var demos = []struct {
+	name string
+	c    func() chart.Chart
+}{
+	{"stress-depth", stressDepth}, {"settlement-time", settlementTime}, {"capacity", capacity},
+	{"many", many}, {"single", single}, {"opposite", opposite},
+}
+
+// TestGolden draws the demo charts and compares text dumps of the items.
+func TestGolden(t *testing.T) {
+	for _, d := range demos {
+		c := d.c()
+		items, err := c.Draw()
+		if err != nil {
+			t.Fatalf("%s: %v", d.name, err)
+		}
+		golden(t, d.name, Dump(items))
+	}
+}
+
+// TestInside checks every item of every demo lies within W × H, with no
+// NaN anywhere, and that drawing twice gives the same items.
+func TestInside(t *testing.T) {
+	for _, d := range demos {
+		c := d.c()
+		items, _ := c.Draw()
+		again, _ := c.Draw()
+		if Dump(items) != Dump(again) {
+			t.Errorf("%s: two draws differ", d.name)
+		}
+		for _, it := range items {
+			r := it.Bounds()
+			for _, v := range []float64{r.X, r.Y, r.W, r.H} {
+				if math.IsNaN(v) || math.IsInf(v, 0) {
+					t.Fatalf("%s: %#v has a non-finite coordinate", d.name, it)
+				}
+			}
+			if r.X < -1e-9 || r.Y < -1e-9 || r.X+r.W > c.W+1e-9 || r.Y+r.H > c.H+1e-9 {
+				t.Errorf("%s: %T at %.2f,%.2f %.2f×%.2f leaves the %g × %g chart", d.name, it, r.X, r.Y, r.W, r.H, c.W, c.H)
+			}
+		}
+	}
+}
+
+// TestTextsApart checks no two texts of a demo chart overlap.
+func TestTextsApart(t *testing.T) {
+	for _, d := range demos {
+		c := d.c()
+		items, _ := c.Draw()
+		var ts []draw.Text
+		for _, it := range items {
+			if x, ok := it.(draw.Text); ok {
+				ts = append(ts, x)
+			}
+		}
+		for i := range ts {
+			for j := i + 1; j < len(ts); j++ {
+				a, b := ts[i].Bounds(), ts[j].Bounds()
+				if a.X < b.X+b.W && b.X < a.X+a.W && a.Y < b.Y+b.H && b.Y < a.Y+a.H {
+					t.Errorf("%s: %q and %q overlap", d.name, ts[i].Text, ts[j].Text)
+				}
+			}
+		}
+	}
+}
+
+func TestErrors(t *testing.T) {
+	pts := []float64{1, 2}
+	ok := chart.Series{X: pts, Y: pts}
+	for _, c := range []struct {
+		name string
+		c    chart.Chart
+		want string
+	}{
+		{"no size", chart.Chart{Series: []chart.Series{ok}}, "W × H = 0 × 0 must be positive"},
+		{"no data", chart.Chart{W: 300, H: 200}, "X axis: data is empty"},
+		{"lengths differ", chart.Chart{W: 300, H: 200, Series: []chart.Series{{X: pts, Y: []float64{1}}}}, "series 1: len(X), len(Y) = 2, 1 must be equal"},
+		{"no points", chart.Chart{W: 300, H: 200, Series: []chart.Series{{Name: "s"}}}, `series 1 "s": X, Y has no points`},
+		{"NaN", chart.Chart{W: 300, H: 200, Series: []chart.Series{{X: pts, Y: []float64{1, math.NaN()}}}}, "Y[1] = NaN must be a finite number"},
+		{"zero on a log axis", chart.Chart{W: 300, H: 200, X: chart.Axis{Log: true}, Series: []chart.Series{{X: []float64{0, 1}, Y: pts}}}, "X[0] = 0 must be > 0 on a log axis"},
+		{"negative on a log axis", chart.Chart{W: 300, H: 200, Y: chart.Axis{Log: true}, Series: []chart.Series{{X: pts, Y: []float64{3, -1}}}}, "Y[1] = -1 must be > 0 on a log axis"},
+		{"log reference line at zero", chart.Chart{W: 300, H: 200, Y: chart.Axis{Log: true}, Series: []chart.Series{ok}, Guides: []chart.Guide{{OnY: true, Value: 0}}}, `guide 1 "": Value = 0 must be > 0`},
+		{"Min above Max", chart.Chart{W: 300, H: 200, Y: chart.Axis{Min: chart.At(3), Max: chart.At(1)}, Series: []chart.Series{ok}}, "Y axis: Min = 3 must be less than Max = 1"},
+		{"region backwards", chart.Chart{W: 300, H: 200, Series: []chart.Series{ok}, Regions: []chart.Region{{From: 2, To: 1}}}, "From = 2 must be less than To = 1"},
+		{"too small", chart.Chart{W: 60, H: 200, Series: []chart.Series{ok}}, "too small for its labels"},
+		{"missing glyph", chart.Chart{W: 300, H: 200, Title: "a ⨍ b", Series: []chart.Series{ok}}, "which the fonts lack"},
+		{"label too long", chart.Chart{W: 120, H: 100, X: chart.Axis{Title: strings.Repeat("long ", 10)}, Series: []chart.Series{ok}}, "is 1"},
+		{"bad style", chart.Chart{W: 300, H: 200, Series: []chart.Series{{X: pts, Y: pts, Style: 9}}}, "must be one of the package's constants"},
+	} {
+		items, err := c.c.Draw()
+		var e *chart.Error
+		if !errors.As(err, &e) {
+			t.Errorf("%s: got %v (%d items), want a *chart.Error", c.name, err, len(items))
+			continue
+		}
+		if !strings.Contains(err.Error(), c.want) {
+			t.Errorf("%s: %q does not say %q", c.name, err, c.want)
+		}
+	}
+}
+
+// TestDegenerate draws charts with little in them: each must draw.
+func TestDegenerate(t *testing.T) {
+	for _, c := range []chart.Chart{
+		{W: 200, H: 140, Series: []chart.Series{{X: []float64{2}, Y: []float64{3}}}},
+		{W: 200, H: 140, Series: []chart.Series{{X: []float64{1, 2, 3}, Y: []float64{4, 4, 4}}}},
+		{W: 200, H: 140, Series: []chart.Series{{X: []float64{0, 0}, Y: []float64{0, 0}}}},
+		{W: 200, H: 140, X: chart.Axis{Log: true}, Y: chart.Axis{Log: true}, Series: []chart.Series{{X: []float64{7, 7}, Y: []float64{1e-9, 1e-9}}}},
+		{W: 200, H: 140, X: chart.Axis{Min: chart.At(0), Max: chart.At(1)}, Y: chart.Axis{Min: chart.At(0), Max: chart.At(1)}},
+		{W: 200, H: 140, Y: chart.Axis{Min: chart.At(0), Max: chart.At(1)}, Series: []chart.Series{{X: []float64{0, 1, 2}, Y: []float64{-5, 0.5, 9}}}},
+	} {
+		items, err := c.Draw()
+		if err != nil {
+			t.Errorf("%+v: %v", c.Series, err)
+			continue
+		}
+		for _, it := range items {
+			r := it.Bounds()
+			if math.IsNaN(r.X+r.Y+r.W+r.H) || r.Y < 0 || r.Y+r.H > c.H+1e-9 {
+				t.Errorf("%+v: item %#v", c.Series, it)
+			}
+		}
+	}
+}
+
+// TestLegendClear checks the inside legend covers no curve.
+func TestLegendClear(t *testing.T) {
+	c := capacity()
+	items, _ := c.Draw()
+	var legend *draw.Rect
+	for _, it := range items {
+		if r, ok := it.(draw.Rect); ok && r.Filled {
+			legend = &r
+		}
+	}
+	if legend == nil {
+		t.Fatal("no legend box")
+	}
+	for _, it := range items {
+		p, ok := it.(draw.Poly)
+		if !ok || p.Closed {
+			continue
+		}
+		for _, q := range p.Points {
+			if q.X > legend.X && q.X < legend.X+legend.W && q.Y > legend.Y && q.Y < legend.Y+legend.H {
+				// the legend's own line samples are inside it
+				if q.Y > legend.Y+2 && q.X < legend.X+30 {
+					continue
+				}
+				t.Errorf("curve point %v under the legend %+v", q, legend.Bounds())
+			}
+		}
+	}
+}
+
+func TestLower(t *testing.T) {
+	a := chart.Series{Name: "bearing", X: []float64{1, 2, 3, 4}, Y: []float64{100, 200, 300, 400}}
+	b := chart.Series{Name: "settlement", X: []float64{1, 2, 3, 4}, Y: []float64{400, 300, 200, 100}}
+	env, regs, err := chart.Lower("lower", a, b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := fmt.Sprint(env.X, env.Y); got != "[1 2 2.5 3 4] [100 200 250 200 100]" {
+		t.Errorf("envelope %s", got)
+	}
+	if got := fmt.Sprint(regs); got != "[{1 2.5 bearing governs} {2.5 4 settlement governs}]" {
+		t.Errorf("regions %s", got)
+	}
+	// touching at a sample: the change of side is at the touch
+	b.Y = []float64{400, 200, 100, 50}
+	if _, regs, _ = chart.Lower("lower", a, b); fmt.Sprint(regs) != "[{1 2 bearing governs} {2 4 settlement governs}]" {
+		t.Errorf("touching: regions %v", regs)
+	}
+	// one governs throughout
+	b.Y = []float64{900, 900, 900, 900}
+	if _, regs, _ = chart.Lower("lower", a, b); fmt.Sprint(regs) != "[{1 4 bearing governs}]" {
+		t.Errorf("one side: regions %v", regs)
+	}
+	if _, _, err := chart.Lower("x", a, chart.Series{X: []float64{5, 6}, Y: []float64{1, 1}}); err == nil {
+		t.Error("ranges that do not overlap: no error")
+	}
+	if _, _, err := chart.Lower("x", a, chart.Series{X: []float64{2, 1}, Y: []float64{1, 1}}); err == nil {
+		t.Error("decreasing X: no error")
+	}
+}
+
+func ExampleLower() {
+	widths := []float64{1, 2, 3, 4}
+	bearing := chart.Series{Name: "bearing resistance", X: widths, Y: []float64{160, 220, 280, 340}}
+	settle := chart.Series{Name: "settlement 25 mm", X: widths, Y: []float64{610, 340, 240, 190}}
+	_, regions, _ := chart.Lower("governing", bearing, settle)
+	for _, r := range regions {
+		fmt.Printf("%.2f to %.2f m: %s\n", r.From, r.To, r.Label)
+	}
+	// Output:
+	// 1.00 to 2.75 m: bearing resistance governs
+	// 2.75 to 4.00 m: settlement 25 mm governs
+}
+
+func BenchmarkDraw(b *testing.B) {
+	c := stressDepth()
+	for b.Loop() {
+		if _, err := c.Draw(); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
