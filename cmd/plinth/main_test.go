@@ -183,3 +183,25 @@ func TestReadmeTutorial(t *testing.T) {
 		t.Errorf("status %d\n%s\n%s", code, out, errs)
 	}
 }
+
+// TestCheckGolden compares the readable "check" output on the example
+// with testdata/brackenfield.txt (-update rewrites it).
+func TestCheckGolden(t *testing.T) {
+	out, errs, code := runCmd("check", example)
+	if code != 0 {
+		t.Fatalf("status %d: %s", code, errs)
+	}
+	golden := filepath.Join("testdata", "brackenfield.txt")
+	if *update {
+		if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(golden)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if string(want) != out {
+		t.Errorf("check output differs from %s (run go test ./cmd/plinth -update and read the diff)", golden)
+	}
+}
