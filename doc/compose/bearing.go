@@ -1,0 +1,279 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/calc/bearing"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+)
+
+// methodWords names a bearing method for the reader.
+var methodWords = map[bearing.Method]string{
+	bearing.EC7:      "EN 1997-1:2004 Annex D",
+	bearing.Vesic:    "Vesić (1973, 1975)",
+	bearing.Meyerhof: "Meyerhof (1963)",
+	bearing.Hansen:   "Brinch Hansen (1970)",
+	bearing.Terzaghi: "Terzaghi (1943)",
+}
+
+// maxCaseCols is the most case columns a compact table holds before it
+// is split.
+const maxCaseCols = 6
+
+// bearing prints a bearing block: a summary of every case with the
+// governing one marked and the governing check, the working common to
+// all cases, the governing case in full, the other cases compactly (every
+// value, symbol by symbol), then sliding the same way.
+func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
+	r := b.Bearing
+	o := c.engineOut(s, b)
+	tr := &r.Trace
+	fu := forceUnit(b.Of.Model)
+	names, steps := groups(tr)
+
+	o.head(fmt.Sprintf("Bearing resistance of %s on %s", b.Of.Name, b.On.Name))
+	intro := fmt.Sprintf("Method: %s. Design approach %s", methodWords[r.Method], r.Approach)
+	if r.Source != "" {
+		intro += " (" + r.Source + ")"
+	}
+	intro += fmt.Sprintf(". %s checked", plural(len(r.Cases), "case"))
+	if len(b.Options) > 0 {
+		intro += "; options: " + strings.Join(b.Options, ", ")
+	}
+	o.para(txt(intro + "."))
+
+	// Summary of the cases and the governing check.
+	if len(r.Cases) > 0 {
+		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+			unitHeader("V_d", fu.Name), unitHeader("H_d", fu.Name), unitHeader("R_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
+			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
+			Caption: []layout.Run{txt("Bearing: every design combination and drainage condition; the governing case (highest utilisation) is marked.")}}
+		for i, cs := range r.Cases {
+			t.Rows = append(t.Rows, caseRow(i, r.Governing, cs.Combination, cs.Drainage.String(), cs.V, cs.H, cs.R, cs.Util, cs.OK, fu.Name))
+		}
+		o.add(t)
+	}
+	if ch := findCheck(b, "bearing"); ch != nil {
+		o.add(c.checkBlock(o.p, ch, "V_d", "R_d"))
+	}
+	o.rest(tr, "summary", func(ca trace.Caution) bool { return ca.Step < 0 && !isSliding(ca) })
+
+	// Working common to every case.
+	if idx := steps[""]; len(idx) > 0 {
+		o.head("Values common to every case")
+		o.steps(tr, idx, "common values")
+	}
+
+	// The governing case in full, the others compactly.
+	var bear []string
+	for _, cs := range r.Cases {
+		bear = append(bear, cs.Name)
+	}
+	if r.Governing >= 0 {
+		cs := r.Cases[r.Governing]
+		o.head(fmt.Sprintf("Governing case %d: %s", r.Governing+1, cs.Name))
+		o.steps(tr, steps[cs.Name], fmt.Sprintf("case %d (governing)", r.Governing+1))
+		if cs.TwoLayer != nil {
+			o.para(twoLayerWords(cs.TwoLayer)...)
+		}
+	}
+	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() })
+
+	// Sliding.
+	if len(r.Sliding) > 0 {
+		o.head(fmt.Sprintf("Sliding resistance of %s", b.Of.Name))
+		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+			unitHeader("H_d", fu.Name), unitHeader("V_d", fu.Name), unitHeader("R_h_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
+			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
+			Caption: richText("Sliding (EN 1997-1 6.5.3): every design combination; V_d is V′_d in drained cases; the governing case is marked.", layout.Regular)}
+		for i, sc := range r.Sliding {
+			row := caseRow(i, r.GoverningSliding, sc.Combination, sc.Drainage.String(), sc.H, sc.V, sc.R, sc.Util, sc.OK, fu.Name)
+			row.Cells[0] = layout.Cell{txt(fmt.Sprintf("S%d", i+1))}
+			if i == r.GoverningSliding {
+				row.Cells[0] = layout.Cell{bold(fmt.Sprintf("S%d", i+1))}
+			}
+			t.Rows = append(t.Rows, row)
+		}
+		o.add(t)
+		if ch := findCheck(b, "sliding"); ch != nil {
+			o.add(c.checkBlock(o.p, ch, "H_d", "R_h_d"))
+		}
+		o.rest(tr, "sliding summary", func(ca trace.Caution) bool { return ca.Step < 0 && isSliding(ca) })
+		var slide []string
+		for _, sc := range r.Sliding {
+			slide = append(slide, sc.Name)
+		}
+		if g := r.GoverningSliding; g >= 0 {
+			o.head(fmt.Sprintf("Governing sliding case S%d: %s", g+1, r.Sliding[g].Name))
+			o.steps(tr, steps[slide[g]], fmt.Sprintf("sliding case S%d (governing)", g+1))
+		}
+		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() })
+	}
+
+	// Any case the engine traced that is neither (none expected).
+	known := map[string]bool{"": true}
+	for _, n := range bear {
+		known[n] = true
+	}
+	for _, sc := range r.Sliding {
+		known[sc.Name] = true
+	}
+	for _, n := range names {
+		if !known[n] {
+			o.head(n)
+			o.steps(tr, steps[n], n)
+		}
+	}
+	o.rest(tr, "bearing", nil)
+	c.sources(b)
+	return o.blocks
+}
+
+// isSliding reports whether a caution concerns sliding.
+func isSliding(ca trace.Caution) bool {
+	return strings.Contains(ca.Case, "sliding") || strings.HasPrefix(ca.Message, "Sliding")
+}
+
+// caseRow is one row of a case summary; the governing row is in bold.
+func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, unit string) layout.Row {
+	verdict := txt("OK")
+	if !ok {
+		verdict = bold("NOT OK")
+	}
+	mark := func(s string) layout.Run {
+		if i == gov {
+			return bold(s)
+		}
+		return txt(s)
+	}
+	no := mark(fmt.Sprint(i + 1))
+	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(num(a, unit))}, {txt(num(b, unit))}, {txt(num(r, unit))},
+		{mark(fmt.Sprintf("%.3f", util))}, {verdict}}
+	if i == gov {
+		cells[2] = layout.Cell{txt(drainage), bold("  governing")}
+	}
+	return layout.Row{Cells: cells}
+}
+
+// compactCases prints the cases other than the governing one as tables,
+// one row per symbol and one column per case, grouped by drainage, so
+// every value of every case is on the page; the formulas are those of
+// the governing case's working. Cautions raised in these cases follow
+// the table.
+func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string) {
+	var order []string
+	byDrain := map[string][]int{}
+	for i := range cases {
+		if i == gov {
+			continue
+		}
+		d := drainage(i)
+		if _, ok := byDrain[d]; !ok {
+			order = append(order, d)
+		}
+		byDrain[d] = append(byDrain[d], i)
+	}
+	if len(order) == 0 {
+		return
+	}
+	o.head(title)
+	o.para(txt("Each column is one case (numbered as in the summary above); each row a value of its working, in the order computed, by the formulas shown for the governing case."))
+	for _, d := range order {
+		idx := byDrain[d]
+		for start := 0; start < len(idx); start += maxCaseCols {
+			chunk := idx[start:min(start+maxCaseCols, len(idx))]
+			o.add(o.caseTable(tr, cases, chunk, steps, prefix, d))
+		}
+		for _, i := range idx {
+			for j, ca := range tr.Cautions {
+				if ca.Step >= 0 && ca.Case == cases[i] {
+					o.cautionOf(tr, j, fmt.Sprintf("case %s%d", prefix, i+1))
+				}
+			}
+		}
+	}
+}
+
+// caseTable is one compact table: symbols down, cases across.
+func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix, drainage string) *layout.Table {
+	type rowKey struct {
+		sym string
+		n   int
+	}
+	var keys []rowKey
+	units := map[rowKey]string{}
+	vals := map[rowKey]map[int]float64{}
+	for _, i := range idx {
+		seen := map[string]int{}
+		at := 0 // where a symbol new to the table goes: after the last one of this case
+		for _, si := range steps[cases[i]] {
+			st := tr.Steps[si]
+			k := rowKey{st.Symbol, seen[st.Symbol]}
+			seen[st.Symbol]++
+			if vals[k] == nil {
+				vals[k] = map[int]float64{}
+				keys = append(keys[:at], append([]rowKey{k}, keys[at:]...)...)
+				units[k] = st.Unit
+			}
+			for p, q := range keys {
+				if q == k {
+					at = p + 1
+					break
+				}
+			}
+			vals[k][i] = st.Value
+		}
+	}
+	t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
+		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft},
+		Caption: []layout.Run{txt(fmt.Sprintf("%s cases (%s).", strings.ToUpper(drainage[:1])+drainage[1:], caseList(prefix, idx)))}}
+	for _, i := range idx {
+		t.Header = append(t.Header, layout.Cell{txt(fmt.Sprintf("%s%d", prefix, i+1))})
+		t.Align = append(t.Align, layout.AlignRight)
+	}
+	for _, k := range keys {
+		row := layout.Row{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: k.sym}}}, {txt(unitText(units[k]))}}}
+		for _, i := range idx {
+			v, ok := vals[k][i]
+			if !ok {
+				row.Cells = append(row.Cells, layout.Cell{txt("—")})
+				continue
+			}
+			row.Cells = append(row.Cells, layout.Cell{txt(num(v, units[k]))})
+		}
+		t.Rows = append(t.Rows, row)
+	}
+	return t
+}
+
+func caseList(prefix string, idx []int) string {
+	var s []string
+	for _, i := range idx {
+		s = append(s, fmt.Sprintf("%s%d", prefix, i+1))
+	}
+	return strings.Join(s, ", ")
+}
+
+// twoLayerWords describes the stronger-over-weaker check of a case.
+func twoLayerWords(tl *bearing.TwoLayer) []layout.Run {
+	kpa := units.MustParse("kPa")
+	p := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Pressure}, kpa, -1) }
+	s := fmt.Sprintf("Two-layer check (Meyerhof & Hanna 1978): upper layer %s thick below the base; q_t = %s (upper layer alone), q_b = %s (lower layer), punching q_u = %s",
+		valueText(units.Quantity{V: tl.H, Dim: units.Length}, units.MustParse("m"), -1), p(tl.QT), p(tl.QB), p(tl.QU))
+	if tl.Governs {
+		s += "; punching governs."
+	} else {
+		s += "; the upper layer's own resistance governs."
+	}
+	verdict := "OK"
+	if !tl.SpreadOK {
+		verdict = "NOT OK"
+	}
+	s += fmt.Sprintf(" Load spread to the lower layer: %s against %s (utilisation %.2f, %s).", p(tl.SpreadQEd), p(tl.SpreadQRd), tl.SpreadUtil, verdict)
+	return richText(s, layout.Regular)
+}

@@ -1,0 +1,101 @@
+package compose
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/doc/chart"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+)
+
+// capacity prints a capacity block: allowable pressure against width from
+// bearing and from settlement, the governing mechanism for each width,
+// the working at the footing's own width, and a chart.
+func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
+	r := b.Capacity
+	o := c.engineOut(s, b)
+	o.head(fmt.Sprintf("Allowable bearing pressure against width: %s on %s", b.Of.Name, b.On.Name))
+	intro := fmt.Sprintf("Bearing-limited pressure by %s; settlement-limited pressure for a settlement of %s. The allowable pressure is the lower of the two.",
+		r.Approach, f(r.Limit, mm)+" mm")
+	if len(b.Options) > 0 {
+		intro += " Options: " + strings.Join(b.Options, ", ") + "."
+	}
+	o.para(txt(intro))
+	tr := &r.Trace
+	names, steps := groups(tr)
+	if idx := steps[""]; len(idx) > 0 {
+		o.steps(tr, idx, "capacity")
+	}
+	t := &layout.Table{Pos: o.p,
+		Header:  []layout.Cell{unitHeader("B", "m"), unitHeader("L", "m"), unitHeader("q_a_b", "kPa"), unitHeader("q_a_s", "kPa"), unitHeader("q_allow", "kPa"), {txt("Governs")}, {txt("Bearing case")}},
+		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
+		Caption: []layout.Run{txt(fmt.Sprintf("Allowable pressure against width for %s; the footing's own width is marked.", b.Of.Name))}}
+	var xs, qb, qs, qa []float64
+	for i, row := range r.Rows {
+		l := "—"
+		if row.L > 0 {
+			l = f(row.L, mU)
+		}
+		cells := []layout.Cell{{txt(f(row.B, mU))}, {txt(l)}, {txt(f(row.QBearing, kPa))}, {txt(f(row.QSettle, kPa))}, {bold(f(row.QAllow, kPa))}, {txt(row.Governs)}, {txt(row.Drainage)}}
+		if i == r.Own {
+			cells[0] = layout.Cell{bold(f(row.B, mU))}
+			cells[5] = layout.Cell{txt(row.Governs), bold("  own width")}
+		}
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: cells})
+		if !row.Own || !contains(xs, row.B) {
+			xs = append(xs, row.B)
+			qb = append(qb, row.QBearing/1e3)
+			qs = append(qs, row.QSettle/1e3)
+			qa = append(qa, row.QAllow/1e3)
+		}
+	}
+	o.add(t)
+	for _, n := range names {
+		if r.Own >= 0 && r.Own < len(r.Rows) && strings.HasPrefix(n, "B = ") && n == "B = "+f(r.Rows[r.Own].B, mU)+" m" {
+			o.label("Working at the footing's own width, " + n)
+			o.steps(tr, steps[n], n)
+		}
+	}
+	o.rest(tr, "capacity table", nil)
+	if len(xs) > 1 {
+		sortByX(xs, qb, qs, qa)
+		ch := chart.Chart{W: math.Min(c.width, 400), H: 220,
+			X: chart.Axis{Title: "footing width B (m)"}, Y: chart.Axis{Title: "pressure (kPa)"},
+			Series: []chart.Series{{Name: "limited by bearing", X: xs, Y: qb, Dash: []float64{4, 2}},
+				{Name: "limited by settlement", X: xs, Y: qs, Dash: []float64{1.5, 1.5}},
+				{Name: "allowable (the lower)", X: xs, Y: qa}}}
+		if r.Own >= 0 && r.Own < len(r.Rows) {
+			ch.Guides = []chart.Guide{{Value: r.Rows[r.Own].B, Label: b.Of.Name + " B = " + f(r.Rows[r.Own].B, mU) + " m"}}
+		}
+		if d, err := ch.Drawing(o.p, []layout.Run{txt("Allowable bearing pressure against footing width.")}); err == nil {
+			o.add(d)
+		} else {
+			c.diags.Add(b.Span, "capacity chart: %v", err)
+		}
+	}
+	c.sources(b)
+	return o.blocks
+}
+
+func contains(xs []float64, x float64) bool {
+	for _, v := range xs {
+		if v == x {
+			return true
+		}
+	}
+	return false
+}
+
+// sortByX sorts the series by x (insertion sort: a handful of widths).
+func sortByX(x []float64, ys ...[]float64) {
+	for i := 1; i < len(x); i++ {
+		for j := i; j > 0 && x[j] < x[j-1]; j-- {
+			x[j], x[j-1] = x[j-1], x[j]
+			for _, y := range ys {
+				y[j], y[j-1] = y[j-1], y[j]
+			}
+		}
+	}
+}

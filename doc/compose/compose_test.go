@@ -1,0 +1,255 @@
+package compose_test
+
+import (
+	"bytes"
+	"flag"
+	"fmt"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+
+	"plinth/calc/units"
+	"plinth/doc/compose"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/load"
+	"plinth/doc/parse"
+	"plinth/doc/pdf"
+)
+
+var update = flag.Bool("update", false, "rewrite golden files")
+
+// golden is the folder of the render goldens (repository testdata).
+const golden = "../../testdata/render"
+
+// evaluate loads, parses and evaluates a package, failing on any error.
+func evaluate(t testing.TB, path string, sets ...string) *eval.Result {
+	t.Helper()
+	lp, d := load.Path(path)
+	if lp == nil {
+		t.Fatal(d)
+	}
+	pkg, pd := parse.Package(lp)
+	d.Append(pd)
+	if d.HasErrors() {
+		t.Fatal(d)
+	}
+	res, ed := eval.Package(pkg, eval.Options{Set: sets})
+	if ed.HasErrors() {
+		t.Fatal(ed)
+	}
+	return res
+}
+
+// render makes the PDF bytes of a result, as plinth render does.
+func render(t testing.TB, res *eval.Result) ([]byte, *layout.Pages) {
+	t.Helper()
+	pages, d := compose.Pages(res, compose.Options{})
+	if d.HasErrors() {
+		t.Fatal(d)
+	}
+	created, cd := compose.Created(res, "")
+	if cd.HasErrors() {
+		t.Fatal(cd)
+	}
+	var buf bytes.Buffer
+	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth"}); err != nil {
+		t.Fatal(err)
+	}
+	return buf.Bytes(), pages
+}
+
+func tool(t *testing.T, name string) string {
+	t.Helper()
+	p, err := exec.LookPath(name)
+	if err != nil {
+		t.Skipf("%s not installed (apt-get install -y poppler-utils qpdf)", name)
+	}
+	return p
+}
+
+// examples lists the example packages.
+func examples(t *testing.T) []string {
+	ents, err := os.ReadDir("../../examples")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []string
+	for _, e := range ents {
+		if e.IsDir() {
+			out = append(out, e.Name())
+		}
+	}
+	if len(out) == 0 {
+		t.Fatal("no examples")
+	}
+	return out
+}
+
+// TestExamples renders every example and the test package: qpdf finds the
+// file sound, every font is embedded, and the text holds the title block
+// fields, every page's "n of N", every symbol's value and every check's
+// verdict; the text is compared with its golden file.
+func TestExamples(t *testing.T) {
+	qpdf, pdffonts, pdftotext := tool(t, "qpdf"), tool(t, "pdffonts"), tool(t, "pdftotext")
+	dirs := map[string]string{}
+	for _, name := range examples(t) {
+		dirs[name] = filepath.Join("../../examples", name)
+	}
+	dirs["mini"] = filepath.Join(golden, "mini")
+	for name, dir := range dirs {
+		t.Run(name, func(t *testing.T) {
+			res := evaluate(t, dir)
+			data, pages := render(t, res)
+			file := filepath.Join(t.TempDir(), name+".pdf")
+			if err := os.WriteFile(file, data, 0o644); err != nil {
+				t.Fatal(err)
+			}
+			if out, err := exec.Command(qpdf, "--check", file).CombinedOutput(); err != nil {
+				t.Errorf("qpdf --check: %v\n%s", err, out)
+			}
+			out, err := exec.Command(pdffonts, file).Output()
+			if err != nil {
+				t.Fatal(err)
+			}
+			lines := strings.Split(strings.TrimSpace(string(out)), "\n")
+			if len(lines) < 3 {
+				t.Errorf("pdffonts lists no fonts:\n%s", out)
+			}
+			for _, l := range lines[2:] {
+				if f := strings.Fields(l); len(f) < 7 || f[len(f)-5] != "yes" {
+					t.Errorf("font not embedded: %s", l)
+				}
+			}
+			text, err := exec.Command(pdftotext, "-enc", "UTF-8", file, "-").Output()
+			if err != nil {
+				t.Fatal(err)
+			}
+			checkText(t, res, pages, string(text))
+			compareGolden(t, filepath.Join(golden, name+".txt"), text)
+		})
+	}
+}
+
+func compareGolden(t *testing.T, path string, got []byte) {
+	t.Helper()
+	if *update {
+		if err := os.WriteFile(path, got, 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run go test ./doc/compose -update to create it)", err)
+	}
+	if bytes.Equal(got, want) {
+		return
+	}
+	g, w := strings.Split(string(got), "\n"), strings.Split(string(want), "\n")
+	for i := 0; i < len(g) && i < len(w); i++ {
+		if g[i] != w[i] {
+			t.Fatalf("%s differs at line %d:\n got: %q\nwant: %q\n(run with -update to accept)", path, i+1, g[i], w[i])
+		}
+	}
+	t.Fatalf("%s differs in length: got %d lines, want %d (run with -update to accept)", path, len(g), len(w))
+}
+
+var space = regexp.MustCompile(`\s+`)
+
+// norm makes extracted text comparable: one space for any run of white
+// space, ASCII minus.
+func norm(s string) string {
+	return space.ReplaceAllString(strings.ReplaceAll(s, "−", "-"), " ")
+}
+
+// checkText checks what every calculation package must show.
+func checkText(t *testing.T, res *eval.Result, pages *layout.Pages, text string) {
+	t.Helper()
+	per := strings.Split(text, "\f")
+	n := len(pages.Pages)
+	for i := 0; i < n; i++ {
+		if i >= len(per) || !strings.Contains(norm(per[i]), fmt.Sprintf("%d of %d", i+1, n)) {
+			t.Errorf("page %d does not say %d of %d", i+1, i+1, n)
+		}
+	}
+	all := norm(text)
+	m := res.Src.Meta
+	for _, f := range []string{m.Project.Value, m.Job.Value, m.Client.Value} {
+		if f != "" && !strings.Contains(all, norm(f)) {
+			t.Errorf("title block field %q missing", f)
+		}
+	}
+	for _, s := range res.Sheets {
+		for _, f := range []string{s.Meta.Title.Value, s.Meta.Calc.Value} {
+			if f != "" && !strings.Contains(all, norm(f)) {
+				t.Errorf("%s: title block field %q missing", s.Name(), f)
+			}
+		}
+		for _, y := range s.Symbols {
+			v := norm(units.Format(y.Q.V, y.Unit, y.Decimals))
+			if !strings.Contains(all, v) {
+				t.Errorf("%s: %s = %s not printed", s.Name(), y.Name, v)
+			}
+			if u := strings.TrimRight(y.Unit.Name, "0123456789"); u != "" && u != "deg" && !strings.Contains(all, u) {
+				t.Errorf("%s: unit %s of %s not printed", s.Name(), y.Unit.Name, y.Name)
+			}
+		}
+	}
+	ok, bad := 0, 0
+	for _, c := range res.Checks {
+		if c.OK {
+			ok++
+		} else {
+			bad++
+		}
+	}
+	if got := strings.Count(all, "NOT OK"); got < 2*bad {
+		t.Errorf("NOT OK printed %d times, want at least %d (line and register)", got, 2*bad)
+	}
+	if got := strings.Count(all, "OK") - strings.Count(all, "NOT OK"); got < 2*ok {
+		t.Errorf("OK printed %d times, want at least %d (line and register)", got, 2*ok)
+	}
+	if fp := res.Fingerprint(); !strings.Contains(all, fp[:12]) {
+		t.Errorf("fingerprint %s not in the footers", fp[:12])
+	}
+}
+
+// TestDeterministic renders the example twice: the same bytes.
+func TestDeterministic(t *testing.T) {
+	for _, name := range examples(t) {
+		dir := filepath.Join("../../examples", name)
+		a, _ := render(t, evaluate(t, dir))
+		b, _ := render(t, evaluate(t, dir))
+		if !bytes.Equal(a, b) {
+			t.Errorf("%s: two renders differ (%d and %d bytes)", name, len(a), len(b))
+		}
+		if !bytes.Contains(a, []byte("/CreationDate")) {
+			t.Errorf("%s: no creation date (the latest revision date)", name)
+		}
+	}
+}
+
+// TestLayoutGolden dumps the laid-out pages of the test package's sheet
+// and of its cover and check register.
+func TestLayoutGolden(t *testing.T) {
+	res := evaluate(t, filepath.Join(golden, "mini"))
+	pages, d := compose.Pages(res, compose.Options{})
+	if d.HasErrors() {
+		t.Fatal(d)
+	}
+	keep := &layout.Pages{Info: pages.Info, Outline: pages.Outline}
+	for _, pg := range pages.Pages {
+		if pg.Sheet <= 2 { // cover, the sheet, the check register
+			keep.Pages = append(keep.Pages, pg)
+		}
+	}
+	var b bytes.Buffer
+	if err := keep.Dump(&b); err != nil {
+		t.Fatal(err)
+	}
+	compareGolden(t, filepath.Join(golden, "mini.golden"), b.Bytes())
+}

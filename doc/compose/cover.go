@@ -1,0 +1,289 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/draw"
+	"plinth/doc/layout/fonts"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// packageMeta is the package's settings: package.yaml, or the first
+// sheet's when the package has none.
+func (c *composer) packageMeta() sheet.Meta {
+	m := c.res.Src.Meta
+	if !m.Span.IsZero() || len(c.res.Sheets) == 0 {
+		return m
+	}
+	return c.res.Sheets[0].Meta
+}
+
+// matterPos is the position matter sheets report problems at.
+func (c *composer) matterPos() source.Position {
+	if f := c.res.Src.Meta.Span.File; f != nil {
+		return source.Position{Path: f.Path, Line: 1, Col: 1}
+	}
+	if len(c.res.Sheets) > 0 {
+		return source.Position{Path: c.res.Sheets[0].Src.File.Path, Line: 1, Col: 1}
+	}
+	return source.Position{Path: c.res.Src.Dir}
+}
+
+// matterSheet starts a sheet of package matter.
+func (c *composer) matterSheet(title, anchor string) layout.Sheet {
+	f := c.fields(c.packageMeta())
+	f.Title, f.Calc = title, c.packageCalc()
+	p := c.matterPos()
+	return layout.Sheet{Pos: p, Fields: f, Bookmark: title,
+		Blocks: []layout.Block{&layout.Anchor{Pos: p, Name: anchor}}}
+}
+
+func txt(s string) layout.Run  { return layout.Run{Text: s} }
+func bold(s string) layout.Run { return layout.Run{Text: s, Style: layout.Bold} }
+func cell(runs ...layout.Run) layout.Cell {
+	return layout.Cell(runs)
+}
+
+func heading(p source.Position, level int, text string) *layout.Heading {
+	return &layout.Heading{Pos: p, Level: level, NoNumber: true, Runs: []layout.Run{txt(text)}}
+}
+
+// packageCalc is the calc number the package's own sheets (cover,
+// registers) carry: what the sheets' numbers share ("2318-G" from
+// 2318-G-01 … 2318-G-06), else the job number.
+func (c *composer) packageCalc() string {
+	var prefix string
+	for i, s := range c.res.Sheets {
+		n := s.Meta.Calc.Value
+		if i == 0 {
+			prefix = n
+			continue
+		}
+		k := 0
+		for k < len(prefix) && k < len(n) && prefix[k] == n[k] {
+			k++
+		}
+		prefix = prefix[:k]
+	}
+	if i := strings.LastIndexAny(prefix, "-_./ "); i >= 0 {
+		prefix = prefix[:i] // back to the last separator: "2318-G-0" → "2318-G"
+	}
+	prefix = strings.TrimRight(prefix, "-_./ ")
+	if len(c.res.Sheets) < 2 || prefix == "" {
+		return c.packageMeta().Job.Value
+	}
+	return prefix
+}
+
+// cover is the cover sheet: project data, contents, a summary of the
+// checks, the revision history and the checker's sign-off.
+func (c *composer) cover() layout.Sheet {
+	m := c.packageMeta()
+	out := c.matterSheet("Cover sheet", "cover")
+	p := out.Pos
+	add := func(b ...layout.Block) { out.Blocks = append(out.Blocks, b...) }
+
+	title := "Calculation package"
+	if m.Project.Value != "" {
+		title = m.Project.Value
+	}
+	add(&layout.Heading{Pos: p, Level: 1, NoNumber: true, Runs: []layout.Run{txt(title)}})
+	data := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Package")), nil}}
+	row := func(k string, v ...layout.Run) {
+		if len(v) == 0 || len(v) == 1 && v[0].Text == "" && v[0].Math == nil {
+			return
+		}
+		k = strings.ReplaceAll(k, " ", "\u00a0") // keys do not wrap
+		data.Rows = append(data.Rows, layout.Row{Pos: p, Cells: []layout.Cell{cell(txt(k)), cell(v...)}})
+	}
+	row("Project", bold(m.Project.Value))
+	row("Job no.", txt(m.Job.Value))
+	row("Client", txt(m.Client.Value))
+	row("Sheets", txt(fmt.Sprintf("%s; numbered across the whole package, this cover included", plural(len(c.res.Sheets), "calculation sheet"))))
+	row("Designed by", txt(m.By.Value))
+	if strings.TrimSpace(m.Checked.Value) == "" {
+		row("Checked by", bold("NOT CHECKED"))
+	} else {
+		row("Checked by", txt(strings.TrimSpace(m.Checked.Value+"  "+m.CheckedDate.Value)))
+	}
+	if r, ok := latest(m.Revisions); ok {
+		row("Current revision", txt(strings.TrimSpace(r.Rev.Value+"  "+r.Date.Value+"  "+r.Note.Value)))
+	}
+	row("Page template", txt(c.tpl.Name))
+	row("National annex", txt(m.NationalAnnex.Value))
+	row("Partial factors", txt(m.Factors.Value))
+	row("Input fingerprint", layout.Run{Text: c.res.Fingerprint(), Style: layout.Mono})
+	if c.res.Variant() {
+		var list []string
+		for _, o := range c.res.Overrides {
+			list = append(list, "--set "+o.Arg)
+		}
+		row("Variant", bold("VARIANT"), txt(": inputs overridden on the command line ("+strings.Join(list, ", ")+"). A study, not the design record; every page says so."))
+	}
+	add(data)
+
+	add(heading(p, 2, "Contents"))
+	c.contents = &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
+		Align: []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft}}
+	for _, s := range c.res.Sheets {
+		f := c.fields(s.Meta)
+		title := f.Title
+		if title == "" {
+			title = s.Name()
+		}
+		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: pos(s.Src.Meta.Title.Span), Cells: []layout.Cell{
+			cell(txt("—")), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
+		}})
+	}
+	for _, mt := range matterTitles {
+		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(txt("—")), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
+		}})
+	}
+	add(c.contents)
+
+	add(heading(p, 2, "Checks"))
+	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
+
+	add(heading(p, 2, "Revision history"))
+	if len(m.Revisions) == 0 {
+		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("No revisions are recorded in package.yaml.")}})
+	} else {
+		rh := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Rev")), cell(txt("Date")), cell(txt("By")), cell(txt("Checked")), cell(txt("Description"))}}
+		for _, r := range m.Revisions {
+			rh.Rows = append(rh.Rows, layout.Row{Pos: pos(r.Span), Cells: []layout.Cell{
+				cell(txt(r.Rev.Value)), cell(txt(r.Date.Value)), cell(txt(r.By.Value)), cell(txt(r.Checked.Value)), cell(txt(r.Note.Value)),
+			}})
+		}
+		add(rh)
+	}
+
+	add(heading(p, 2, "Checker's sign-off"))
+	rev := ""
+	if r, ok := latest(m.Revisions); ok {
+		rev = " revision " + r.Rev.Value + ","
+	}
+	fp := c.res.Fingerprint()
+	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("I have checked this calculation package," + rev + " printed from inputs "),
+		{Text: fp[:12], Style: layout.Mono},
+		txt(", and I agree with its design basis, inputs, calculations and conclusions except where noted below or marked on the sheets.")}})
+	add(c.signOff(p))
+	return out
+}
+
+// signOff is the checker's box: name, signature, date and comments.
+func (c *composer) signOff(p source.Position) *layout.Drawing {
+	w, h := c.width, 54.0
+	d := &layout.Drawing{Pos: p, W: w, H: h}
+	line := draw.Stroke(draw.Gray(120), 0.6)
+	x := 0.0
+	for _, col := range []struct {
+		label string
+		frac  float64
+	}{{"Checker (name and initials)", 0.24}, {"Signature", 0.22}, {"Date", 0.14}, {"Comments and exceptions", 0.40}} {
+		cw := w * col.frac
+		d.Items = append(d.Items,
+			draw.Rect{X: x, Y: 0, W: cw, H: h, Paint: line},
+			draw.Text{X: x + 4, Y: 9, Face: fonts.Regular, Size: 6.5, Color: draw.Gray(90), Text: col.label})
+		x += cw
+	}
+	return d
+}
+
+// matterTitles are the end-matter sheets in order.
+var matterTitles = []struct{ title, anchor string }{
+	{"Check register", "check-register"},
+	{"Input register", "input-register"},
+	{"References", "references"},
+	{"Cautions", "cautions"},
+}
+
+// checkSummary is a sheet's checks in a few words: "2 OK", "1 NOT OK of 3".
+func checkSummary(checks []*eval.Check) []layout.Run {
+	if len(checks) == 0 {
+		return []layout.Run{txt("—")}
+	}
+	bad := 0
+	for _, ch := range checks {
+		if !ch.OK {
+			bad++
+		}
+	}
+	if bad == 0 {
+		return []layout.Run{txt(fmt.Sprintf("%d OK", len(checks)))}
+	}
+	return []layout.Run{bold(fmt.Sprintf("%d NOT OK", bad)), txt(fmt.Sprintf(" of %d", len(checks)))}
+}
+
+// checkTotals sums up the check register in a sentence, pointing to the
+// register when toRegister is set.
+func (c *composer) checkTotals(toRegister bool) []layout.Run {
+	n, bad := len(c.res.Checks), 0
+	var worst *eval.Check
+	for _, ch := range c.res.Checks {
+		if !ch.OK {
+			bad++
+		}
+		if ch.HasUtil() && (worst == nil || ch.Util > worst.Util) {
+			worst = ch
+		}
+	}
+	if n == 0 {
+		return []layout.Run{txt("The package states no checks.")}
+	}
+	var out []layout.Run
+	if bad == 0 {
+		out = append(out, txt(plural(n, "check")+": "), bold("all OK"), txt("."))
+	} else {
+		out = append(out, txt(plural(n, "check")+": "), bold(fmt.Sprintf("%d NOT OK", bad)), txt(fmt.Sprintf(", %d OK.", n-bad)))
+	}
+	if worst != nil {
+		out = append(out, txt(fmt.Sprintf(" Highest utilisation %.2f: ", worst.Util)))
+		out = append(out, c.checkMath(worst)...)
+		out = append(out, txt(" ("+sheetLabel(worst.Sheet)+")."))
+	}
+	if bad > 0 {
+		out = append(out, txt(" NOT OK: "))
+		k := 0
+		for _, ch := range c.res.Checks {
+			if ch.OK {
+				continue
+			}
+			if k > 0 {
+				out = append(out, txt("; "))
+			}
+			if k == 8 {
+				out = append(out, txt(fmt.Sprintf("and %d more", bad-k)))
+				break
+			}
+			out = append(out, c.checkMath(ch)...)
+			out = append(out, txt(" ("+sheetLabel(ch.Sheet)+")"))
+			k++
+		}
+		out = append(out, txt("."))
+	}
+	if toRegister {
+		out = append(out, txt(" Every check is listed in the "), layout.Run{Text: "check register", Link: "check-register"}, txt("."))
+	}
+	return out
+}
+
+// checkLabel is a check's condition as written.
+func checkLabel(ch *eval.Check) string {
+	return strings.Join(strings.Fields(ch.Text), " ")
+}
+
+// sheetLabel names a sheet by its calc number, else its file name.
+func sheetLabel(s *eval.Sheet) string {
+	if s == nil {
+		return ""
+	}
+	if v := s.Meta.Calc.Value; v != "" {
+		return v
+	}
+	return s.Name()
+}

@@ -1,0 +1,270 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/calc/site"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/sheet"
+	"plinth/doc/source"
+)
+
+// engineOut collects the blocks of one engine block's printout.
+type engineOut struct {
+	c      *composer
+	s      *eval.Sheet
+	b      *eval.Block
+	p      source.Position
+	blocks []layout.Block
+	shown  map[shownKey]bool // cautions already boxed
+}
+
+type shownKey struct {
+	tr *trace.Trace
+	i  int
+}
+
+func (c *composer) engineOut(s *eval.Sheet, b *eval.Block) *engineOut {
+	return &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+}
+
+func (o *engineOut) add(bs ...layout.Block) { o.blocks = append(o.blocks, bs...) }
+
+// para adds a paragraph.
+func (o *engineOut) para(runs ...layout.Run) { o.add(&layout.Para{Pos: o.p, Runs: runs}) }
+
+// head adds an unnumbered sub-heading one level below the sheet's
+// current heading.
+func (o *engineOut) head(text string) {
+	o.add(&layout.Heading{Pos: o.p, Level: min(o.c.level+1, 3), NoNumber: true, Runs: []layout.Run{txt(text)}})
+}
+
+// label adds a small label line above a group of calculation lines.
+func (o *engineOut) label(text string) {
+	o.add(&layout.Para{Pos: o.p, Runs: []layout.Run{{Text: text, Style: layout.BoldItalic}}})
+}
+
+// stepLine prints one engine step: a value taken as given prints as an
+// input; a computed one as symbol = formula = values substituted =
+// result, the note and the reference beside it.
+func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
+	sym := eqn.Sym{Name: st.Symbol}
+	var note []layout.Run
+	if st.Note != "" {
+		note = append(note, richText(st.Note, layout.Regular)...)
+	}
+	if ref := c.stepRef(st.Ref); ref != nil {
+		if len(note) > 0 {
+			note = append(note, txt(" "))
+		}
+		note = append(note, ref...)
+	}
+	res := siNode(st.Value, st.Unit)
+	if st.Formula == nil {
+		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note}
+	}
+	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note}
+	if _, lone := st.Formula.(trace.Sym); !lone && len(st.Inputs) > 0 {
+		vals := map[string]trace.Value{}
+		for _, in := range st.Inputs {
+			vals[in.Symbol] = in
+		}
+		stmt.Subst = eqn.FromExpr(st.Formula, eqn.Options{Number: constant, Subst: func(name string) (eqn.Node, bool) {
+			v, ok := vals[name]
+			if !ok {
+				return nil, false
+			}
+			return siNode(v.V, v.Unit), true
+		}})
+		if !c.fits(stmt.Subst) {
+			// Too wide to set even broken: list the values instead.
+			stmt.Subst = nil
+			stmt.Note = append(stmt.Note, txt("; with "))
+			for i, in := range st.Inputs {
+				if i > 0 {
+					stmt.Note = append(stmt.Note, txt(", "))
+				}
+				stmt.Note = append(stmt.Note, layout.Run{Math: eqn.Row{eqn.Sym{Name: in.Symbol}, eqn.Op{Text: "="}, siNode(in.V, in.Unit)}})
+			}
+		}
+	}
+	if !c.fits(stmt.Expr) {
+		stmt.Expr, stmt.Subst = nil, nil
+		stmt.Note = append(stmt.Note, txt(" (the formula is too long to set here: see the reference)"))
+	}
+	return stmt
+}
+
+// constant prints a number written into an engine formula: V is SI and
+// unit says how to show it ("" a plain number, "deg" degrees, "yr" …).
+func constant(v float64, unit string) eqn.Node {
+	if unit == "" {
+		return eqn.Number(v, 6)
+	}
+	return siNode(v, unit)
+}
+
+// fits reports whether a formula part can be set in the text column,
+// broken at its top-level relations and signs as the layout breaks it.
+func (c *composer) fits(n eqn.Node) bool {
+	if n == nil {
+		return true
+	}
+	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: 9.5})
+	if err != nil {
+		return true // the layout reports it
+	}
+	for _, l := range lines {
+		if l.W > c.width-12 {
+			return false
+		}
+	}
+	return true
+}
+
+// steps prints the steps of tr with the given indices, each caution boxed
+// after the step that raised it. where names the place for the cautions
+// summary ("case 7").
+func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
+	for _, i := range idx {
+		o.add(o.c.stepLine(o.p, tr.Steps[i]))
+		for j, ca := range tr.Cautions {
+			if ca.Step == i {
+				o.cautionOf(tr, j, where)
+			}
+		}
+	}
+}
+
+// cautionOf boxes caution j of tr unless it is already shown.
+func (o *engineOut) cautionOf(tr *trace.Trace, j int, where string) {
+	k := shownKey{tr, j}
+	if o.shown[k] {
+		return
+	}
+	o.shown[k] = true
+	o.caution(tr.Cautions[j], where)
+}
+
+// rest boxes the cautions of tr not shown yet: those of the calculation
+// as a whole, and those raised in steps not printed in full. where names
+// the place; a caution with a case says its case.
+func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution) bool) {
+	for j, ca := range tr.Cautions {
+		if only != nil && !only(ca) {
+			continue
+		}
+		w := where
+		if ca.Case != "" {
+			w = ca.Case
+		}
+		o.cautionOf(tr, j, w)
+	}
+}
+
+// caution boxes an engine caution and enters it in the cautions summary.
+func (o *engineOut) caution(ca trace.Caution, where string) {
+	a := o.c.anchor("caution")
+	sev := layout.Severity(ca.Severity)
+	if sev > layout.SevCaution {
+		sev = layout.SevCaution
+	}
+	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
+		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
+	body := richText(ca.Message, layout.Regular)
+	if ref := o.c.stepRef(ca.Ref); ref != nil {
+		body = append(body, txt(" "))
+		body = append(body, ref...)
+	}
+	o.add(&layout.Anchor{Pos: o.p, Name: a},
+		&layout.Caution{Pos: o.p, Severity: sev, Body: []layout.Block{&layout.Para{Pos: o.p, Runs: body}}})
+}
+
+// groups lists the case names of tr in order of first appearance, with
+// the indices of their steps.
+func groups(tr *trace.Trace) (names []string, steps map[string][]int) {
+	steps = map[string][]int{}
+	for i, st := range tr.Steps {
+		if _, ok := steps[st.Case]; !ok {
+			names = append(names, st.Case)
+		}
+		steps[st.Case] = append(steps[st.Case], i)
+	}
+	return names, steps
+}
+
+// sources cites every publication the block's engine used, so the list
+// carries them even when no printed step cites one.
+func (c *composer) sources(b *eval.Block) {
+	for _, src := range b.Sources {
+		c.engineRef(src)
+	}
+}
+
+// checkBlock prints an engine check (one that entered the check register)
+// with both sides, named by their symbols.
+func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
+	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: valueNode(ch.L, ch.Unit, -1), Rel: ch.Op,
+		Right: eqn.Sym{Name: right}, RightValue: valueNode(ch.R, ch.Unit, -1),
+		Util: ch.Util, OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
+}
+
+// findCheck returns the block's check whose text starts with prefix.
+func findCheck(b *eval.Block, kind string) *eval.Check {
+	for _, ch := range b.Checks {
+		if strings.HasPrefix(ch.Text, b.Name+" "+kind+":") {
+			return ch
+		}
+	}
+	return nil
+}
+
+// forceUnit is kN for a pad and kN/m for a strip.
+func forceUnit(f site.Footing) units.Unit {
+	if f.Shape == site.Strip {
+		return units.MustParse("kN/m")
+	}
+	return units.MustParse("kN")
+}
+
+// num formats an SI value in a unit, for table cells.
+func num(v float64, unit string) string {
+	u, err := units.Parse(unit)
+	if unit == "" || err != nil {
+		u = units.Dimensionless
+	}
+	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+}
+
+// unitHeader is a table header cell: a symbol over its unit.
+func unitHeader(symbol, unit string) layout.Cell {
+	c := layout.Cell{{Math: eqn.Sym{Name: symbol}}}
+	if unit != "" {
+		c = append(c, txt("\n"+unitText(unit)))
+	}
+	return c
+}
+
+// analysis dispatches a bearing, settlement or capacity block.
+func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []layout.Block {
+	if b == nil {
+		return nil
+	}
+	c.sources(b)
+	switch {
+	case b.Bearing != nil:
+		return c.bearing(s, b)
+	case b.Settle != nil:
+		return c.settlement(s, b)
+	case b.Capacity != nil:
+		return c.capacity(s, b)
+	}
+	o := c.engineOut(s, b)
+	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))
+	return o.blocks
+}

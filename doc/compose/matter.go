@@ -1,0 +1,206 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/source"
+)
+
+// endMatter is the check register, the input register, the references
+// list and the cautions, each a sheet of its own.
+func (c *composer) endMatter() []layout.Sheet {
+	return []layout.Sheet{c.checkRegister(), c.inputRegister(), c.references(), c.cautionSheet()}
+}
+
+// where prints a source place as "01-ground.md:16".
+func where(sp source.Span) string {
+	if sp.File == nil {
+		return ""
+	}
+	p := sp.Pos()
+	name := p.Path
+	if i := strings.LastIndexAny(name, `/\`); i >= 0 {
+		name = name[i+1:]
+	}
+	return fmt.Sprintf("%s:%d", name, p.Line)
+}
+
+// checkRegister lists every check of the package, linked to its line.
+func (c *composer) checkRegister() layout.Sheet {
+	out := c.matterSheet("Check register", "check-register")
+	p := out.Pos
+	out.Blocks = append(out.Blocks, heading(p, 1, "Check register"))
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: c.checkTotals(false)})
+	if len(c.res.Checks) == 0 {
+		return out
+	}
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check links to the line that states it. Utilisation is the demand over the capacity (left over right for ≤).")}})
+	t := &layout.Table{Pos: p,
+		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check")), cell(txt("Description")), cell(txt("Sheet")), cell(txt("Utilisation")), cell(txt("Verdict"))},
+		Align:  []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
+	for i, ch := range c.res.Checks {
+		util := "—"
+		if ch.HasUtil() {
+			util = fmt.Sprintf("%.2f", ch.Util)
+		}
+		verdict := txt("OK")
+		if !ch.OK {
+			verdict = bold("NOT OK")
+		}
+		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
+			cell(txt(fmt.Sprint(i + 1))),
+			cell(c.checkMath(ch)...),
+			cell(c.noteRuns(ch.Sheet, ch.Note)...),
+			cell(layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor}),
+			cell(txt(util)), cell(verdict),
+		}})
+	}
+	out.Blocks = append(out.Blocks, t)
+	return out
+}
+
+// checkMath prints a check's condition, linked to where it is stated.
+func (c *composer) checkMath(ch *eval.Check) []layout.Run {
+	if ch.Stmt == nil {
+		// an engine check: "P1 bearing: V_d <= R_d"
+		head, cond, ok := strings.Cut(ch.Text, ": ")
+		f := strings.Fields(cond)
+		if !ok || len(f) != 3 || relText[f[1]] == "" {
+			return []layout.Run{{Text: checkLabel(ch), Link: ch.Anchor}}
+		}
+		return []layout.Run{{Text: head + ": ", Link: ch.Anchor},
+			{Math: eqn.Row{eqn.Sym{Name: f[0]}, eqn.Op{Text: relText[f[1]]}, eqn.Sym{Name: f[2]}}, Link: ch.Anchor}}
+	}
+	l := newFormula(ch.Stmt.L, ch.Uses).symbolic()
+	r := newFormula(ch.Stmt.R, ch.Uses).symbolic()
+	return []layout.Run{{Math: eqn.Row{l, eqn.Op{Text: relText[ch.Op]}, r}, Link: ch.Anchor}}
+}
+
+// inputRegister lists every input with its value, note and place.
+func (c *composer) inputRegister() layout.Sheet {
+	out := c.matterSheet("Input register", "input-register")
+	p := out.Pos
+	out.Blocks = append(out.Blocks, heading(p, 1, "Input register"))
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{
+		txt("Every value the engineer gave (a number with its unit, not computed from other symbols), sheet by sheet, with its description and source, and the place it is defined (linked)."),
+	}})
+	for _, s := range c.res.Sheets {
+		var rows []layout.Row
+		for _, y := range s.Symbols {
+			if !y.Input {
+				continue
+			}
+			val := layout.Run{Math: valueNode(y.Q, y.Unit, y.Decimals)}
+			note := c.noteRuns(s, y.Note)
+			if y.Override != nil {
+				note = append([]layout.Run{bold("VARIANT (--set " + y.Override.Arg + ") ")}, note...)
+			}
+			at := layout.Run{Text: where(y.Span)}
+			if a := c.inputs[y]; a != "" {
+				at.Link = a
+			}
+			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+				cell(layout.Run{Math: eqn.Sym{Name: y.Name}}), cell(val), cell(note...), cell(at),
+			}})
+		}
+		if len(rows) == 0 {
+			continue
+		}
+		title := strings.TrimSpace(s.Meta.Calc.Value + "  " + s.Meta.Title.Value)
+		if title == "" {
+			title = s.Name()
+		}
+		out.Blocks = append(out.Blocks, &layout.Heading{Pos: p, Level: 2, NoNumber: true,
+			Runs: []layout.Run{{Text: title, Link: sheetAnchor(s.Index)}}})
+		out.Blocks = append(out.Blocks, &layout.Table{Pos: p,
+			Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("Description and source")), cell(txt("Defined at"))},
+			Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
+			Rows:   rows})
+	}
+	return out
+}
+
+// references prints the references list, numbered as cited.
+func (c *composer) references() layout.Sheet {
+	c.uncited()
+	out := c.matterSheet("References", "references")
+	p := out.Pos
+	out.Blocks = append(out.Blocks, heading(p, 1, "References"))
+	cited, pkgUncited := 0, 0
+	for _, r := range c.refs.list {
+		if r.cited {
+			cited++
+		} else {
+			pkgUncited++
+		}
+	}
+	intro := "References are numbered in the order they are first cited in this package"
+	if pkgUncited > 0 {
+		intro += fmt.Sprintf("; [%d]–[%d] are listed in the package settings but not cited", cited+1, len(c.refs.list))
+		if pkgUncited == 1 {
+			intro = fmt.Sprintf("References are numbered in the order they are first cited in this package; [%d] is listed in the package settings but not cited", cited+1)
+		}
+	}
+	intro += "."
+	for _, r := range c.refs.list {
+		if r.engine {
+			intro += " Entries marked “method” are the publications of the methods the engine used."
+			break
+		}
+	}
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(intro)}})
+	if len(c.refs.list) == 0 {
+		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("No references are cited or listed.")}})
+	}
+	for _, r := range c.refs.list {
+		runs := []layout.Run{bold(fmt.Sprintf("[%d]", r.n)), txt("  " + r.text)}
+		if r.engine {
+			runs = append(runs, layout.Run{Text: "  (method)", Style: layout.Italic})
+		} else {
+			runs = append(runs, layout.Run{Text: "  [" + r.key + "]", Style: layout.Italic})
+		}
+		out.Blocks = append(out.Blocks, &layout.Anchor{Pos: p, Name: r.anchor()}, &layout.Para{Pos: p, Runs: runs})
+	}
+	return out
+}
+
+// standing are the cautions every package carries.
+var standing = []string{
+	"This package supports, and does not replace, the judgement of a qualified engineer. The designer remains responsible for the ground model, the parameters chosen and whether each method applies to the case in hand.",
+	"Local codes of practice and national annexes govern. Partial factors, model factors and limits are those stated in each calculation (the recommended values of EN 1997-1 unless a national annex or factors file is named) and must be confirmed for the project.",
+	"Results are only as good as the inputs. Every input is listed in the input register with its source; check each against the ground investigation and the structural analysis it comes from.",
+	"The input fingerprint in every page footer identifies the inputs of this print. A print showing a different fingerprint was made from different inputs.",
+}
+
+// cautionSheet lists every engine caution with where it was raised, then
+// the standing cautions.
+func (c *composer) cautionSheet() layout.Sheet {
+	out := c.matterSheet("Cautions", "cautions")
+	p := out.Pos
+	out.Blocks = append(out.Blocks, heading(p, 1, "Cautions"))
+	out.Blocks = append(out.Blocks, heading(p, 2, "Cautions raised by the engine"))
+	if len(c.cautions) == 0 {
+		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
+	} else {
+		t := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution")), cell(txt("Raised at"))},
+			Align: []layout.Align{layout.AlignRight}}
+		for i, r := range c.cautions {
+			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+				cell(txt(fmt.Sprint(i + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...),
+				cell(layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}),
+			}})
+		}
+		out.Blocks = append(out.Blocks, t)
+	}
+	var items [][]layout.Block
+	for _, s := range standing {
+		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: []layout.Run{txt(s)}}})
+	}
+	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: layout.SevCaution, Title: []layout.Run{txt("Standing cautions")},
+		Body: []layout.Block{&layout.List{Pos: p, Items: items}}})
+	return out
+}

@@ -1,0 +1,105 @@
+package compose
+
+import (
+	"errors"
+	"fmt"
+	"unicode/utf8"
+
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/source"
+)
+
+// Pages composes the package and lays it out. The cover's contents list
+// gives each sheet's page numbers, so the layout runs a second time once
+// they are known (and again in the rare case that filling them in moves
+// a page break). Layout problems come back as diagnostics at the source
+// line they concern.
+func Pages(res *eval.Result, opt Options) (pages *layout.Pages, diags source.List) {
+	c := newComposer(res, opt)
+	defer func() {
+		if r := recover(); r != nil {
+			pages = nil
+			diags = append(c.diags, source.Diagnostic{Path: c.res.Src.Dir, Msg: fmt.Sprintf("compose: internal error: %v", r)})
+		}
+	}()
+	doc := c.document()
+	if c.diags.HasErrors() {
+		c.diags.Sort()
+		return nil, c.diags
+	}
+	for pass := 0; pass < 3; pass++ {
+		var err error
+		pages, err = layout.Document(doc)
+		if err != nil {
+			c.layoutErrors(err)
+			c.diags.Sort()
+			return nil, c.diags
+		}
+		if c.contents == nil || !c.fillPages(pages) {
+			break
+		}
+	}
+	c.diags.Sort()
+	return pages, c.diags
+}
+
+// fillPages writes each sheet's page range into the contents table and
+// reports whether anything changed.
+func (c *composer) fillPages(pages *layout.Pages) bool {
+	first := map[int]int{}
+	last := map[int]int{}
+	for i, pg := range pages.Pages {
+		if _, ok := first[pg.Sheet]; !ok {
+			first[pg.Sheet] = i + 1
+		}
+		last[pg.Sheet] = i + 1
+	}
+	changed := false
+	for ri := range c.contents.Rows {
+		sh := ri + 1 // the cover is layout sheet 0
+		a, ok := first[sh]
+		if !ok {
+			continue
+		}
+		text := fmt.Sprint(a)
+		if b := last[sh]; b != a {
+			text = fmt.Sprintf("%d–%d", a, b)
+		}
+		cell := c.contents.Rows[ri].Cells[0]
+		if len(cell) != 1 || cell[0].Text != text {
+			c.contents.Rows[ri].Cells[0] = layout.Cell{txt(text)}
+			changed = true
+		}
+	}
+	return changed
+}
+
+// layoutErrors turns layout problems into diagnostics.
+func (c *composer) layoutErrors(err error) {
+	var probs layout.Problems
+	if !errors.As(err, &probs) {
+		c.diags = append(c.diags, source.Diagnostic{Path: c.res.Src.Dir, Msg: err.Error()})
+		return
+	}
+	for _, p := range probs {
+		c.diags = append(c.diags, source.Diagnostic{Span: c.spanAt(p.Pos), Path: p.Pos.Path, Msg: p.Msg})
+	}
+}
+
+// spanAt finds the source span of a layout position (a zero-width span;
+// zero when the file is not one of the package's).
+func (c *composer) spanAt(p source.Position) source.Span {
+	for _, f := range c.res.Src.Files {
+		if f.Path != p.Path || p.Line < 1 || p.Line > f.LineCount() {
+			continue
+		}
+		off := f.LineStart(p.Line)
+		for col := 1; col < p.Col && off < len(f.Text); col++ {
+			_, n := utf8.DecodeRune(f.Text[off:])
+			off += n
+		}
+		return source.Span{File: f, Start: off, End: off}
+	}
+	return source.Span{}
+}

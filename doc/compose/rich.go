@@ -1,0 +1,79 @@
+package compose
+
+import (
+	"strings"
+	"unicode"
+	"unicode/utf8"
+
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+)
+
+// richText sets running text, printing each short symbol written in sheet
+// notation — a base of one or two letters, optional primes, "_" and a
+// subscript: c_u, N_γ, σ′_v0, q_2, V_d — as math (subscript lowered,
+// Greek and primes as the sheet notation prints them). Longer words with
+// underscores (local_shear, self_weight) stay as they are.
+func richText(s string, style layout.Style) []layout.Run {
+	var out []layout.Run
+	plain := 0
+	flush := func(end int) {
+		if end > plain {
+			out = append(out, layout.Run{Text: s[plain:end], Style: style})
+		}
+	}
+	for i := 0; i < len(s); {
+		r, n := utf8.DecodeRuneInString(s[i:])
+		if !wordRune(r) {
+			i += n
+			continue
+		}
+		j := i
+		for j < len(s) {
+			r2, n2 := utf8.DecodeRuneInString(s[j:])
+			if !wordRune(r2) {
+				break
+			}
+			j += n2
+		}
+		if name, ok := notation(s[i:j]); ok {
+			flush(i)
+			out = append(out, layout.Run{Math: eqn.Sym{Name: name}})
+			plain = j
+		}
+		i = j
+	}
+	flush(len(s))
+	return out
+}
+
+func wordRune(r rune) bool {
+	return unicode.IsLetter(r) || unicode.IsDigit(r) || r == '_' || r == '\'' || r == '′'
+}
+
+// notation reports whether w is a short symbol in sheet notation and
+// returns it with primes written as '.
+func notation(w string) (string, bool) {
+	base, sub, ok := strings.Cut(w, "_")
+	if !ok || sub == "" || strings.HasSuffix(sub, "_") {
+		return "", false
+	}
+	letters := strings.TrimRight(base, "'′")
+	if n := utf8.RuneCountInString(letters); n < 1 || n > 2 {
+		return "", false
+	}
+	for _, r := range letters {
+		if !unicode.IsLetter(r) {
+			return "", false
+		}
+	}
+	if utf8.RuneCountInString(strings.TrimRight(sub, "'′")) > 8 {
+		return "", false
+	}
+	for _, r := range sub {
+		if !(unicode.IsLetter(r) || unicode.IsDigit(r) || r == '_' || r == '\'' || r == '′') {
+			return "", false
+		}
+	}
+	return strings.ReplaceAll(w, "′", "'"), true
+}

@@ -1,0 +1,234 @@
+package compose
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"plinth/calc/settle"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/chart"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+)
+
+// settlement prints a settlement block: the serviceability load, the
+// engine's working group by group (representative sublayers in full), the
+// stress table by sublayer, the settlement by layer, the time curve with
+// t_50 and t_90, the charts, and the limit check.
+func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
+	st := b.Settle
+	r := st.Result
+	o := c.engineOut(s, b)
+	o.head(fmt.Sprintf("Settlement of %s on %s", b.Of.Name, b.On.Name))
+	intro := fmt.Sprintf("Method: %s. Stress increase: %s, at the %s of the footing. Load: %s. Limit: %s.",
+		r.Method, r.Stress, r.Point, st.Service.Name, valueText(units.Quantity{V: r.Limit, Dim: units.Length}, mm, -1))
+	if len(b.Options) > 0 {
+		intro += " Options: " + strings.Join(b.Options, ", ") + "."
+	}
+	o.para(txt(intro))
+
+	if len(st.Load.Steps) > 0 {
+		o.label("Serviceability load")
+		o.steps(&st.Load, indices(len(st.Load.Steps)), "serviceability load")
+	}
+	o.rest(&st.Load, "serviceability load", func(ca trace.Caution) bool { return ca.Step < 0 })
+	tr := &r.Trace
+	o.rest(tr, "settlement", func(ca trace.Caution) bool { return ca.Step < 0 })
+	names, steps := groups(tr)
+	shownTime := false
+	for _, n := range names {
+		if strings.HasPrefix(n, "t = ") {
+			if shownTime {
+				continue
+			}
+			shownTime = true
+			o.label("Time " + strings.TrimPrefix(n, "t = ") + " (the other times are in the time table below)")
+			o.steps(tr, steps[n], n)
+			continue
+		}
+		o.label(capital(n))
+		o.steps(tr, steps[n], orDefault(n, "settlement"))
+	}
+	o.rest(&st.Load, "serviceability load", nil)
+	o.rest(tr, "settlement", nil) // cautions of the times not printed in full
+
+	o.add(c.stressTable(o, r))
+	o.add(c.layerTable(o, r))
+	if tt := c.timeTable(o, r); tt != nil {
+		o.add(tt)
+	}
+	o.add(c.settleCharts(o, r)...)
+	if ch := findCheck(b, "settlement"); ch != nil {
+		o.add(c.checkBlock(o.p, ch, "s_total", "s_lim"))
+	}
+	c.sources(b)
+	return o.blocks
+}
+
+var (
+	mm  = units.MustParse("mm")
+	kPa = units.MustParse("kPa")
+	mU  = units.MustParse("m")
+	yr  = units.MustParse("yr")
+)
+
+// deltaHeader is the Δσ column header (Δ upright before σ).
+func deltaHeader(unit string) layout.Cell {
+	return layout.Cell{{Math: eqn.Row{eqn.Text{Text: "Δ"}, eqn.Sym{Name: "sigma"}}}, txt("\n" + unitText(unit))}
+}
+
+// niceCeil rounds v up to 1, 2 or 5 × 10ⁿ.
+func niceCeil(v float64) float64 {
+	if v <= 0 {
+		return 1
+	}
+	p := math.Pow(10, math.Floor(math.Log10(v)))
+	for _, m := range []float64{1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10} {
+		if m*p >= v {
+			return m * p
+		}
+	}
+	return 10 * p
+}
+
+func indices(n int) []int {
+	out := make([]int, n)
+	for i := range out {
+		out[i] = i
+	}
+	return out
+}
+
+func capital(s string) string {
+	if s == "" {
+		return "Settlement"
+	}
+	return strings.ToUpper(s[:1]) + s[1:]
+}
+
+func f(v float64, u units.Unit) string {
+	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+}
+
+// stressTable lists every sublayer: depth, stresses, how it settles.
+func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
+	t := &layout.Table{Pos: o.p,
+		Header: []layout.Cell{{txt("No.")}, {txt("Layer")}, unitHeader("z", "m"), unitHeader("h", "m"), unitHeader("sigma'_v0", "kPa"),
+			deltaHeader("kPa"), unitHeader("sigma'_f", "kPa"), {txt("Form")}, unitHeader("s_i", "mm"), unitHeader("s_c", "mm")},
+		Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight},
+		Caption: []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles.", r.Point))}}
+	for i, sl := range r.Sub {
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
+			{txt(fmt.Sprint(i + 1))}, {txt(sl.Name)}, {txt(f(sl.Z, mU))}, {txt(f(sl.H, mU))}, {txt(f(sl.SigmaV0Eff, kPa))},
+			{txt(f(sl.DSigma, kPa))}, {txt(f(sl.SigmaF, kPa))}, richText(orDefault(sl.Case, "—"), layout.Regular), {txt(f(sl.Si, mm))}, {txt(f(sl.Sc, mm))},
+		}})
+	}
+	return t
+}
+
+// layerTable gives the settlement of each layer and the total.
+func (c *composer) layerTable(o *engineOut, r *settle.Result) *layout.Table {
+	t := &layout.Table{Pos: o.p,
+		Header: []layout.Cell{{txt("Layer")}, {txt("Within the zone"), txt("\n(m)")}, {txt("Sublayers")}, unitHeader("s_i", "mm"),
+			unitHeader("s_oed", "mm"), unitHeader("mu", ""), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("t_50", "yr"), unitHeader("t_90", "yr")},
+		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
+		Caption: richText("Settlement by layer: immediate s_i, one-dimensional s_oed, consolidation s_c = μ s_oed, secondary s_sec; times to 50 % and 90 % consolidation.", layout.Regular)}
+	opt := func(set bool, v float64, u units.Unit) string {
+		if !set {
+			return "—"
+		}
+		return f(v, u)
+	}
+	for _, l := range r.Layers {
+		how := l.Immediate
+		if l.Consol != "" {
+			how = strings.TrimSpace(how + " " + l.Consol)
+		}
+		name := l.Name
+		if how != "" {
+			name += " (" + how + ")"
+		}
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
+			{txt(name)}, {txt(f(l.Top, mU) + "–" + f(l.Bot, mU))}, {txt(fmt.Sprint(l.Sublayers))}, {txt(f(l.Si, mm))},
+			{txt(f(l.SOed, mm))}, {txt(f(l.Mu, units.Dimensionless))}, {txt(f(l.Sc, mm))}, {txt(f(l.Ssec, mm))},
+			{txt(opt(l.T50.Set, l.T50.V, yr))}, {txt(opt(l.T90.Set, l.T90.V, yr))},
+		}})
+	}
+	t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
+		{bold("Total")}, nil, nil, {bold(f(r.Si, mm))}, nil, nil, {bold(f(r.Sc, mm))}, {bold(f(r.Ssec, mm))},
+		{txt(opt(r.T50.Set, r.T50.V, yr))}, {txt(opt(r.T90.Set, r.T90.V, yr))},
+	}})
+	return t
+}
+
+// timeTable is the settlement–time curve as a table.
+func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
+	if len(r.Curve) == 0 {
+		return nil
+	}
+	t := &layout.Table{Pos: o.p,
+		Header:  []layout.Cell{unitHeader("t", "yr"), unitHeader("U", ""), unitHeader("s_i", "mm"), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("s", "mm")},
+		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
+		Caption: richText(fmt.Sprintf("Settlement with time after loading: U is the average degree of consolidation; total s = s_i + s_c + s_sec (final %s).", valueText(units.Quantity{V: r.Total, Dim: units.Length}, mm, -1)), layout.Regular)}
+	for _, p := range r.Curve {
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
+			{txt(f(p.T, yr))}, {txt(fmt.Sprintf("%.3f", p.U))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
+		}})
+	}
+	return t
+}
+
+// settleCharts draws the stress–depth chart and, when there is a time
+// curve, the settlement–time chart.
+func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
+	var out []layout.Block
+	w := math.Min(c.width, 400)
+	if len(r.Sub) > 1 {
+		var z, s0, ds, sf []float64
+		for _, sl := range r.Sub {
+			z = append(z, sl.Z)
+			s0 = append(s0, sl.SigmaV0Eff/1e3)
+			ds = append(ds, sl.DSigma/1e3)
+			sf = append(sf, sl.SigmaF/1e3)
+		}
+		ch := chart.Chart{W: w, H: 240,
+			X: chart.Axis{Title: "vertical stress (kPa)"}, Y: chart.Axis{Title: "depth below ground level (m)", Reverse: true},
+			Series: []chart.Series{{Name: "effective stress before loading", X: s0, Y: z}, {Name: "stress increase from the footing", X: ds, Y: z, Dash: []float64{4, 2}}, {Name: "effective stress after loading", X: sf, Y: z}},
+			Guides: []chart.Guide{{Value: r.ZInf, OnY: true, Label: "zone of influence " + f(r.ZInf, mU) + " m"}}}
+		if d, err := ch.Drawing(o.p, []layout.Run{txt("Vertical stresses with depth below the footing.")}); err == nil {
+			out = append(out, d)
+		} else {
+			c.diags.Add(o.b.Span, "stress chart: %v", err)
+		}
+	}
+	if len(r.Curve) > 1 {
+		var t, s []float64
+		for _, p := range r.Curve {
+			if p.T <= 0 {
+				continue
+			}
+			t = append(t, p.T/yr.Factor)
+			s = append(s, p.S*1e3)
+		}
+		top := r.Limit * 1e3
+		for _, v := range s {
+			top = math.Max(top, v)
+		}
+		ch := chart.Chart{W: w, H: 200,
+			X: chart.Axis{Title: "time after loading (yr)", Log: true}, Y: chart.Axis{Title: "settlement (mm)", Reverse: true, Min: chart.At(0), Max: chart.At(niceCeil(1.15 * top))},
+			Series: []chart.Series{{Name: "total settlement", X: t, Y: s}},
+			Guides: []chart.Guide{{Value: r.Limit * 1e3, OnY: true, Label: "limit " + f(r.Limit, mm) + " mm"}}}
+		if r.T90.Set {
+			ch.Guides = append(ch.Guides, chart.Guide{Value: r.T90.V / yr.Factor, Label: "90 % at " + f(r.T90.V, yr) + " yr"})
+		}
+		if d, err := ch.Drawing(o.p, []layout.Run{txt("Settlement against time after loading.")}); err == nil {
+			out = append(out, d)
+		} else {
+			c.diags.Add(o.b.Span, "settlement–time chart: %v", err)
+		}
+	}
+	return out
+}

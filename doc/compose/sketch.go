@@ -1,0 +1,97 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"plinth/calc/site"
+	"plinth/calc/units"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/sketch"
+)
+
+// sketch draws the footing's section (doc/sketch) on the ground of the
+// first analysis that uses it, with the characteristic actions summed as
+// given and, when a bearing block checks it, the effective width of the
+// governing case. A footing no analysis uses is drawn on no ground.
+func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
+	f := b.Footing
+	m := f.Model
+	sk := sketch.Footing{Shape: m.Shape.String(), B: m.B, L: m.L, D: m.D}
+	if f.SelfWeight {
+		sk.Thickness = f.H
+	}
+	var on *eval.Ground
+	var gov *eval.Block
+	for _, t := range c.res.Sheets {
+		for _, x := range t.Blocks() {
+			if x.Of != f {
+				continue
+			}
+			if on == nil {
+				on = x.On
+			}
+			if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
+				gov = x
+			}
+		}
+	}
+	if on != nil {
+		g := on.Model
+		if g.Water.Set {
+			w := g.Water.V
+			sk.Water = &w
+		}
+		layers := g.Layers
+		if len(layers) > 1 && strings.Contains(strings.ToLower(layers[0].Name), "platform") && m.D < layers[1].Top {
+			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: layers[1].Top}
+			layers = layers[1:]
+		}
+		for _, l := range layers {
+			sk.Layers = append(sk.Layers, sketch.Layer{Name: l.Name, Top: l.Top})
+		}
+	}
+	for _, a := range f.Actions {
+		sk.V += a.V
+		sk.H += a.HB
+		sk.M += a.MB
+	}
+	fu := forceUnit(m)
+	mu := units.MustParse("kNm")
+	if m.Shape == site.Strip {
+		mu = units.MustParse("kNm/m")
+	}
+	if sk.V != 0 {
+		sk.VLabel = "ΣV = " + valueText(units.Quantity{V: sk.V, Dim: fu.Dim}, fu, -1)
+	}
+	if sk.H != 0 {
+		sk.HLabel = "ΣH = " + valueText(units.Quantity{V: sk.H, Dim: fu.Dim}, fu, -1)
+	}
+	if sk.M != 0 {
+		sk.MLabel = "ΣM = " + valueText(units.Quantity{V: sk.M, Dim: mu.Dim}, mu, -1)
+	}
+	// the sketch takes kN and kNm
+	sk.V, sk.H, sk.M = sk.V/1e3, sk.H/1e3, sk.M/1e3
+	if gov != nil {
+		cs := gov.Bearing.Cases[gov.Bearing.Governing]
+		if cs.B > 0 && cs.B < m.B {
+			bp := cs.B
+			sk.BEff = &bp
+		}
+	}
+	items, err := sketch.Draw(sk, c.width, 230)
+	if err != nil {
+		c.diags.Warn(b.Span, "footing %s: no section sketch: %v", f.Name, err)
+		return nil
+	}
+	caption := fmt.Sprintf("Footing %s: section through B", f.Name)
+	if on != nil {
+		caption += " on ground model " + on.Name
+	}
+	caption += "; characteristic actions as given, all rows added"
+	if sk.BEff != nil {
+		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
+	}
+	return []layout.Block{&layout.Drawing{Pos: pos(b.Span), W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+}
