@@ -134,15 +134,16 @@ func build(acts []site.Action, tags []string, ap Approach, ci int, c Combination
 	return l
 }
 
-// Tags returns each action's name reduced to ASCII letters and digits, for
-// use in symbols (V_k_Dead); an empty or repeated tag becomes G1, Q2, ...
-// by kind and position.
+// Tags returns the first word of each action's name reduced to ASCII
+// letters and digits, for use in symbols (V_k_Dead for "Dead load"); an
+// empty or repeated tag becomes G1, Q2, ... by kind and position.
 func Tags(acts []site.Action) []string {
 	out := make([]string, len(acts))
 	seen := map[string]bool{}
 	for i, a := range acts {
 		var b strings.Builder
-		for _, r := range a.Name {
+		first, _, _ := strings.Cut(strings.TrimSpace(a.Name), " ")
+		for _, r := range first {
 			if r < 128 && (r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9') {
 				b.WriteRune(r)
 			}

@@ -173,7 +173,7 @@ func TestLoads(t *testing.T) {
 	if got := design.PsiDefaulted(acts); len(got) != 1 || got[0] != "Wind" {
 		t.Errorf("PsiDefaulted = %q", got)
 	}
-	if got := design.Tags([]site.Action{{Name: "Dead load"}, {Name: "Dead-load"}, {Name: ""}, {Name: "2nd", Kind: site.Variable}}); strings.Join(got, ",") != "Deadload,G2,G3,Q4" {
+	if got := design.Tags([]site.Action{{Name: "Dead load"}, {Name: "Dead-load"}, {Name: ""}, {Name: "2nd", Kind: site.Variable}}); strings.Join(got, ",") != "Dead,Deadload,G3,Q4" {
 		t.Errorf("Tags = %q", got)
 	}
 	// a single permanent action: one load per combination, no G inf

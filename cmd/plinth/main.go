@@ -26,7 +26,8 @@ package.yaml) or a single sheet.
   --set name=value        override an input for a variant run (repeatable);
                           sheet.md:name=value where several sheets define name
   --json                  (check) print one JSON object instead of tables
-  -o, --output FILE       (render) the PDF to write (default: PATH.pdf)
+  -o, --output FILE       (render) the PDF to write (default: <folder>.pdf
+                          beside a package folder, <sheet>.pdf beside a sheet)
 
 Exit status: 0 all checks OK, 1 a check is NOT OK, 2 input errors.
 `

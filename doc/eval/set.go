@@ -5,6 +5,7 @@ import (
 	"encoding/binary"
 	"encoding/hex"
 	"fmt"
+	"path/filepath"
 	"strings"
 
 	"plinth/calc/units"
@@ -153,8 +154,10 @@ func dimWords(d units.Dim) string {
 }
 
 // Fingerprint is the SHA-256 of the package's source files in order (each
-// as its path, length and bytes) followed by the --set arguments in force.
-// A printed document carries its first 12 hex digits on every page.
+// as its file name, length and bytes) followed by the --set arguments in
+// force. File names, not paths, enter it, so the same package gives the
+// same fingerprint wherever it lies and however its path was typed. A
+// printed document carries its first 12 hex digits on every page.
 func (r *Result) Fingerprint() string {
 	h := sha256.New()
 	var n [8]byte
@@ -164,7 +167,7 @@ func (r *Result) Fingerprint() string {
 		h.Write(b)
 	}
 	for _, f := range r.Src.Files {
-		put([]byte(f.Path))
+		put([]byte(filepath.Base(f.Path)))
 		put(f.Text)
 	}
 	for _, o := range r.Overrides {

@@ -31,7 +31,7 @@ func ExampleOptions_subst() {
 }
 
 func ExampleSplit() {
-	for _, name := range []string{"q_ult_net", "phi'_d", "gamma_sat", "F1.R_d", "sigma_v'"} {
+	for _, name := range []string{"q_ult_net", "phi'_d", "gamma_sat", "F1.R_d", "sigma_v'", "gamma_phi'", "Delta_sigma'_v"} {
 		p := eqn.Split(name)
 		fmt.Printf("%s: prefix %q base %q primes %d sub %q\n", name, p.Prefix, p.Base, p.Primes, p.Sub)
 	}
@@ -41,4 +41,6 @@ func ExampleSplit() {
 	// gamma_sat: prefix "" base "γ" primes 0 sub "sat"
 	// F1.R_d: prefix "F1" base "R" primes 0 sub "d"
 	// sigma_v': prefix "" base "σ" primes 0 sub "v′"
+	// gamma_phi': prefix "" base "γ" primes 0 sub "φ′"
+	// Delta_sigma'_v: prefix "" base "Δσ" primes 1 sub "v"
 }

@@ -18,7 +18,8 @@ type Parts struct {
 // Split takes a sheet-notation name apart with the sheet language's own
 // rules (expr.SplitSymbol, expr.Greek): "F1.phi'_d_k" → {Prefix "F1",
 // Base "φ", Primes 1, Sub "d,k"}; primes ending the subscript belong to
-// the symbol too ("sigma_v'" → σ′ with subscript v).
+// the subscript ("sigma_v'" → σ with subscript v′). An increment reads
+// as one symbol: "Delta_sigma'_v" → Δσ′ with subscript v.
 func Split(name string) Parts {
 	var p Parts
 	base, primes, sub := expr.SplitSymbol(name)
@@ -26,9 +27,17 @@ func Split(name string) Parts {
 		p.Prefix, base = base[:i], base[i+1:]
 	}
 	p.Primes = primes
-	if g, ok := expr.Greek(base); ok {
+	switch g, ok := expr.Greek(base); {
+	case base == "Delta" && primes == 0 && sub != "":
+		first, rest, _ := strings.Cut(sub, ",")
+		bare := strings.TrimRight(first, "'")
+		if gb, ok := expr.Greek(bare); ok {
+			bare = gb
+		}
+		p.Base, p.Greek, p.Primes, sub = "Δ"+bare, true, len(first)-len(strings.TrimRight(first, "'")), rest
+	case ok:
 		p.Base, p.Greek = g, true
-	} else {
+	default:
 		p.Base = base
 	}
 	if sub != "" {
