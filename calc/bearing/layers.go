@@ -111,6 +111,7 @@ func (c *calc) localShear() {
 	ln := layerName(c.g, c.fi)
 	loose, trans := false, false
 	var why string
+	looseWord, transWord := "loose", "medium dense"
 	var vals []trace.Value
 	ref := trace.Ref{Source: SrcISO14688, Clause: "Table 4"}
 	switch {
@@ -119,6 +120,7 @@ func (c *calc) localShear() {
 		vals = append(vals, val("c_u_k", l.Cu.V, "kPa"))
 		loose = l.Cu.V < 40*kPa
 		trans = !loose && l.Cu.V < 75*kPa
+		looseWord, transWord = "of low strength (soft)", "of medium strength (firm)"
 		why = fmt.Sprintf("c_u = %.0f kPa", l.Cu.V/kPa)
 	case l.Dr.Set:
 		vals = append(vals, val("I_D", l.Dr.V, ""))
@@ -138,16 +140,16 @@ func (c *calc) localShear() {
 		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used for "+ln+".")
 	case No:
 		if loose {
-			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s of %s indicates loose or soft ground where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln), vals...)
+			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
 		}
 	default:
 		switch {
 		case loose:
 			c.local = true
-			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s of %s is loose or soft (EN ISO 14688-2) — in the local/punching shear region of Vesić's (1973) chart — so Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used.", why, ln), vals...)
+			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used.", why, ln, looseWord), vals...)
 			c.t.Cite(ref.Source)
 		case trans:
-			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s of %s is medium dense or medium strength: Vesić (1973) places this between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln), vals...)
+			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)
 			c.t.Cite(ref.Source)
 		case why == "" && !l.Fine():
 			c.warn("density-unknown", trace.SevNote, refMode, "local_shear = auto: no density (I_D or N) is given for "+ln+", so general shear is assumed.")
