@@ -103,7 +103,7 @@ func Table(in Input) (*Result, error) {
 		qb := r.Trace.Add(trace.Step{Symbol: "q_a_b", Value: row.QBearing, Unit: "kPa", Case: cas,
 			Note: fmt.Sprintf("bearing-limited allowable pressure (%s, %s governs)", ap.Name, row.Drainage)})
 		qs := r.Trace.Add(trace.Step{Symbol: "q_a_s", Value: row.QSettle, Unit: "kPa", Case: cas,
-			Note: fmt.Sprintf("pressure giving s = s_lim (Brent, %d iterations, tolerance %g Pa)", al.Iter, al.Tol)})
+			Note: fmt.Sprintf("pressure giving s = s_lim (Brent, %d iterations, tolerance %.2g Pa)", al.Iter, al.Tol)})
 		r.Trace.Add(trace.Step{Symbol: "q_allow", Formula: trace.Fn("min", trace.S("q_a_b"), trace.S("q_a_s")),
 			Inputs: []trace.Value{{Symbol: "q_a_b", V: qb, Unit: "kPa"}, {Symbol: "q_a_s", V: qs, Unit: "kPa"}},
 			Value:  row.QAllow, Unit: "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})

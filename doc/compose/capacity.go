@@ -61,11 +61,18 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o.rest(tr, "capacity table", nil)
 	if len(xs) > 1 {
 		sortByX(xs, qb, qs, qa)
-		ch := chart.Chart{W: math.Min(c.width, 400), H: 220,
-			X: chart.Axis{Title: "footing width B (m)"}, Y: chart.Axis{Title: "pressure (kPa)"},
-			Series: []chart.Series{{Name: "limited by bearing", X: xs, Y: qb, Dash: []float64{4, 2}},
-				{Name: "limited by settlement", X: xs, Y: qs, Dash: []float64{1.5, 1.5}},
-				{Name: "allowable (the lower)", X: xs, Y: qa}}}
+		bear := chart.Series{Name: "bearing", X: xs, Y: qb, Dash: chart.Dashed}
+		sett := chart.Series{Name: "settlement", X: xs, Y: qs, Dash: chart.Dotted}
+		ch := chart.Chart{W: math.Min(c.width, 400), H: 230,
+			X: chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
+			Y: chart.Axis{Title: "allowable pressure (kPa)"},
+			Series: []chart.Series{bear, sett}}
+		if low, regions, err := chart.Lower("allowable (the lower)", bear, sett); err == nil {
+			ch.Series = append([]chart.Series{low}, ch.Series...)
+			ch.Regions = regions
+		} else {
+			ch.Series = append(ch.Series, chart.Series{Name: "allowable (the lower)", X: xs, Y: qa, Emphasis: true})
+		}
 		if r.Own >= 0 && r.Own < len(r.Rows) {
 			ch.Guides = []chart.Guide{{Value: r.Rows[r.Own].B, Label: b.Of.Name + " B = " + f(r.Rows[r.Own].B, mU) + " m"}}
 		}
