@@ -114,3 +114,14 @@ func BenchmarkRender100(b *testing.B) {
 	b.ReportMetric(float64(size)/1e6, "MB-pdf")
 	b.ReportMetric(float64(ms.HeapSys)/1e6, "MB-heap-sys")
 }
+
+// BenchmarkRenderDemo renders the example package end to end, as plinth
+// render does: load, parse, evaluate (with the engine), compose, layout
+// and the PDF. Target: under 300 ms.
+func BenchmarkRenderDemo(b *testing.B) {
+	b.ReportAllocs()
+	for b.Loop() {
+		res := evaluate(b, "../../examples/brackenfield")
+		render(b, res)
+	}
+}
