@@ -209,35 +209,20 @@ func (c *calc) overburden() {
 	var f trace.Expr
 	var in []trace.Value
 	var parts []string
-	k := 0
-	for i, l := range g.Layers {
-		top, bot := l.Top, math.Min(g.Bottom(i), D)
-		if top >= D {
-			break
+	for k, st := range g.Strata(D) {
+		gs, hs := fmt.Sprintf("gamma_s%d", k+1), fmt.Sprintf("h_s%d", k+1)
+		term := mul(sym(gs), sym(hs))
+		if f == nil {
+			f = term
+		} else {
+			f = add(f, term)
 		}
-		for _, seg := range []struct {
-			a, b, gam float64
-			wet       bool
-		}{{top, math.Min(bot, c.zw), l.Gamma, false}, {math.Max(top, c.zw), bot, l.GammaSatOr(), true}} {
-			h := seg.b - seg.a
-			if h <= 0 {
-				continue
-			}
-			k++
-			gs, hs := fmt.Sprintf("gamma_s%d", k), fmt.Sprintf("h_s%d", k)
-			term := mul(sym(gs), sym(hs))
-			if f == nil {
-				f = term
-			} else {
-				f = add(f, term)
-			}
-			in = append(in, val(gs, seg.gam, "kN/m3"), val(hs, h, "m"))
-			w := ""
-			if seg.wet {
-				w = ", below water"
-			}
-			parts = append(parts, fmt.Sprintf("%d: %s%s", k, layerName(g, i), w))
+		in = append(in, val(gs, st.Gamma, "kN/m3"), val(hs, st.H(), "m"))
+		w := ""
+		if st.Wet {
+			w = ", below water"
 		}
+		parts = append(parts, fmt.Sprintf("%d: %s%s", k+1, layerName(g, st.Layer), w))
 	}
 	ref := trace.Ref{}
 	note := "total vertical stress at the base (common practice)"

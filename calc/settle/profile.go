@@ -162,30 +162,18 @@ func ix(prefix string, i int) string { return prefix + strconv.Itoa(i+1) }
 // and returns σ_v0, u_0 and σ′_v0 (Pa). The table uses the same values.
 func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 	g := k.g
-	w := math.Inf(1)
-	if g.Water.Set {
-		w = g.Water.V
-	}
 	var terms []trace.Expr
 	var in []trace.Value
-	for i, l := range g.Layers {
-		top, bot := l.Top, math.Min(g.Bottom(i), z)
-		if top >= z {
-			break
-		}
-		dry := math.Max(0, math.Min(bot, w)-top)
-		wet := (bot - top) - dry
-		fd, fw, gsym, hsym, gssym, hwsym := layerSyms(i)
-		if dry > 0 {
-			terms = append(terms, fd)
-			in = append(in, val(gsym, l.Gamma, "kN/m3"), val(hsym, dry, "m"))
-			sv += l.Gamma * dry
-		}
-		if wet > 0 {
+	for _, st := range g.Strata(z) {
+		fd, fw, gsym, hsym, gssym, hwsym := layerSyms(st.Layer)
+		if st.Wet {
 			terms = append(terms, fw)
-			in = append(in, val(gssym, l.GammaSatOr(), "kN/m3"), val(hwsym, wet, "m"))
-			sv += l.GammaSatOr() * wet
+			in = append(in, val(gssym, st.Gamma, "kN/m3"), val(hwsym, st.H(), "m"))
+		} else {
+			terms = append(terms, fd)
+			in = append(in, val(gsym, st.Gamma, "kN/m3"), val(hsym, st.H(), "m"))
 		}
+		sv += st.Gamma * st.H()
 	}
 	if k.full {
 		if len(terms) == 0 {

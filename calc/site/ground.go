@@ -166,23 +166,49 @@ func (g Ground) Bottom(i int) float64 {
 	return math.Inf(1)
 }
 
-// SigmaV returns the total vertical stress at depth z (Pa): the sum of
-// γ·thickness above the water table and γ_sat·thickness below it, layer by
-// layer (common practice).
-func (g Ground) SigmaV(z float64) float64 {
-	var s float64
+// Stratum is a slice of ground of one unit weight: part of a layer above
+// or below the water table.
+type Stratum struct {
+	Layer    int     // index into Layers
+	Top, Bot float64 // depths below ground level, m
+	Wet      bool    // below the water table (saturated unit weight)
+	Gamma    float64 // unit weight used, N/m³: γ above the water table, γ_sat below
+}
+
+// H is the stratum's thickness.
+func (s Stratum) H() float64 { return s.Bot - s.Top }
+
+// Strata splits the ground from ground level down to depth z into strata
+// of one unit weight each, in order: every layer above z, cut at the water
+// table. Strata of no thickness are left out.
+func (g Ground) Strata(z float64) []Stratum {
 	w := math.Inf(1)
 	if g.Water.Set {
 		w = g.Water.V
 	}
+	var out []Stratum
 	for i, l := range g.Layers {
 		top, bot := l.Top, math.Min(g.Bottom(i), z)
 		if top >= z {
 			break
 		}
-		dry := math.Max(0, math.Min(bot, w)-top)
-		wet := (bot - top) - dry
-		s += dry*l.Gamma + wet*l.GammaSatOr()
+		if cut := math.Min(bot, w); cut > top {
+			out = append(out, Stratum{Layer: i, Top: top, Bot: cut, Gamma: l.Gamma})
+		}
+		if cut := math.Max(top, w); bot > cut {
+			out = append(out, Stratum{Layer: i, Top: cut, Bot: bot, Wet: true, Gamma: l.GammaSatOr()})
+		}
+	}
+	return out
+}
+
+// SigmaV returns the total vertical stress at depth z (Pa): the sum of
+// γ·thickness above the water table and γ_sat·thickness below it over the
+// strata above z (common practice).
+func (g Ground) SigmaV(z float64) float64 {
+	var s float64
+	for _, st := range g.Strata(z) {
+		s += st.Gamma * st.H()
 	}
 	return s
 }

@@ -74,3 +74,22 @@ func TestValidate(t *testing.T) {
 		}
 	}
 }
+
+// Strata of the clay() ground down to 3 m (common practice): made ground
+// 0–0.6 m dry, clay 0.6–2.0 m dry, clay 2.0–3.0 m below water.
+func TestStrata(t *testing.T) {
+	got := clay().Strata(3)
+	want := []site.Stratum{
+		{Layer: 0, Top: 0, Bot: 0.6, Gamma: 18 * kN},
+		{Layer: 1, Top: 0.6, Bot: 2, Gamma: 19 * kN},
+		{Layer: 1, Top: 2, Bot: 3, Wet: true, Gamma: 20 * kN},
+	}
+	if len(got) != len(want) {
+		t.Fatalf("Strata = %+v", got)
+	}
+	for i := range want {
+		if got[i] != want[i] {
+			t.Errorf("stratum %d = %+v, want %+v", i, got[i], want[i])
+		}
+	}
+}
