@@ -85,7 +85,13 @@ func TestJSONGolden(t *testing.T) {
 			t.Errorf("%d %s blocks, want %d", kinds[k], k, n)
 		}
 	}
-	golden := filepath.Join("testdata", "brackenfield.json")
+	compareGolden(t, "brackenfield.json", out)
+}
+
+// compareGolden compares out with testdata/name; -update rewrites it.
+func compareGolden(t *testing.T, name, out string) {
+	t.Helper()
+	golden := filepath.Join("testdata", name)
 	if *update {
 		if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
 			t.Fatal(err)
@@ -96,7 +102,7 @@ func TestJSONGolden(t *testing.T) {
 		t.Fatal(err)
 	}
 	if string(want) != out {
-		t.Errorf("check --json differs from %s (run go test ./cmd/plinth -update and read the diff)", golden)
+		t.Errorf("output differs from %s (run go test ./cmd/plinth -update and read the diff)", golden)
 	}
 }
 
@@ -191,17 +197,5 @@ func TestCheckGolden(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("status %d: %s", code, errs)
 	}
-	golden := filepath.Join("testdata", "brackenfield.txt")
-	if *update {
-		if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatal(err)
-	}
-	if string(want) != out {
-		t.Errorf("check output differs from %s (run go test ./cmd/plinth -update and read the diff)", golden)
-	}
+	compareGolden(t, "brackenfield.txt", out)
 }

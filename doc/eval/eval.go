@@ -170,19 +170,25 @@ func blockPrefix(b sheet.Block) string {
 	return ""
 }
 
-// blockStmts lists the statements of a plinth block.
-func blockStmts(b sheet.Block) []*sheet.Stmt {
-	var lines []sheet.Line
+// blockLines lists the lines of a plinth block (nil for prose).
+func blockLines(b sheet.Block) []sheet.Line {
 	switch b := b.(type) {
 	case *sheet.Calc:
-		lines = b.Lines
+		return b.Lines
 	case *sheet.Ground:
-		lines = b.Lines
+		return b.Lines
 	case *sheet.Footing:
-		lines = b.Lines
+		return b.Lines
+	case *sheet.Analysis:
+		return b.Lines
 	}
+	return nil
+}
+
+// blockStmts lists the statements of a plinth block.
+func blockStmts(b sheet.Block) []*sheet.Stmt {
 	var out []*sheet.Stmt
-	for _, l := range lines {
+	for _, l := range blockLines(b) {
 		if st, ok := l.(*sheet.Stmt); ok {
 			out = append(out, st)
 		}

@@ -137,16 +137,12 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		e.errs.AddHint(b.Name.Span, "add a pipe table with action, type and V columns", "footing %s has no table of actions", f.Name)
 		return
 	}
-	t := e.tables[b.Table]
-	if t == nil || !t.ok {
+	t, cells, rowOK, columns := e.blockTable(s, b.Table, prefix)
+	if t == nil {
 		return
 	}
-	cells, rowOK := e.evalCells(scope{e: e, s: s, prefix: prefix}, t)
 	ok = ok && allTrue(rowOK)
-	for _, c := range b.Table.Columns {
-		f.Columns = append(f.Columns, c.Name.Value)
-	}
-	f.Units, f.Rows = t.units, cells
+	f.Columns, f.Units, f.Rows = columns, t.units, cells
 	strip := f.Model.Shape == site.Strip
 	for i, row := range cells {
 		a := site.Action{Name: t.text(i, "action")}

@@ -87,16 +87,12 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 		e.errs.Add(b.Span, "ground %s has no layer table: add a pipe table with top and gamma columns", g.Name)
 		return
 	}
-	t := e.tables[b.Table]
-	if t == nil || !t.ok {
+	t, cells, rowOK, columns := e.blockTable(s, b.Table, prefix)
+	if t == nil {
 		return
 	}
-	cells, rowOK := e.evalCells(scope{e: e, s: s, prefix: prefix}, t)
 	ok = ok && allTrue(rowOK)
-	for _, c := range b.Table.Columns {
-		g.Columns = append(g.Columns, c.Name.Value)
-	}
-	g.Units = t.units
+	g.Columns, g.Units = columns, t.units
 	for i := range b.Table.Rows {
 		gl := GroundLayer{Name: t.text(i, "layer"), Type: t.text(i, "type"), Cells: cells[i]}
 		gl.Source, _ = t.textCell(i, "source")

@@ -92,19 +92,8 @@ func (e *evaluator) prose(s *Sheet) {
 // lineNotes are the notes of a block's options and comments (statement
 // notes are checked when the statement is evaluated).
 func lineNotes(b sheet.Block) []sheet.Str {
-	var lines []sheet.Line
-	switch b := b.(type) {
-	case *sheet.Calc:
-		lines = b.Lines
-	case *sheet.Ground:
-		lines = b.Lines
-	case *sheet.Footing:
-		lines = b.Lines
-	case *sheet.Analysis:
-		lines = b.Lines
-	}
 	var out []sheet.Str
-	for _, l := range lines {
+	for _, l := range blockLines(b) {
 		switch l := l.(type) {
 		case *sheet.Option:
 			out = append(out, l.Note)

@@ -299,3 +299,19 @@ func allTrue(b []bool) bool {
 	}
 	return true
 }
+
+// blockTable evaluates the table of a ground or footing block: the table
+// read at collection time, every cell's symbol by row and column, whether
+// each row evaluated, and the column names as written. It returns nil for
+// a table whose header could not be read (already reported).
+func (e *evaluator) blockTable(s *Sheet, g *sheet.Grid, prefix string) (t *table, cells [][]*Symbol, rowOK []bool, columns []string) {
+	t = e.tables[g]
+	if t == nil || !t.ok {
+		return nil, nil, nil, nil
+	}
+	cells, rowOK = e.evalCells(scope{e: e, s: s, prefix: prefix}, t)
+	for _, c := range g.Columns {
+		columns = append(columns, c.Name.Value)
+	}
+	return t, cells, rowOK, columns
+}
