@@ -13,15 +13,7 @@ import (
 // Delta_sigma ...), labels the steps with caseName, and returns Δσ (Pa).
 // It gives the same value as q_net · Influence(f, o, zb).
 func Explain(t *trace.Trace, f site.Footing, o Options, zb, qn float64, caseName string) (float64, error) {
-	if err := f.Validate(); err != nil {
-		return 0, err
-	}
-	var errs site.Errors
-	errs = checkDepth(errs, zb)
-	if o.Method == Spread {
-		errs = checkAngle(errs, o.angle())
-	}
-	if err := one(errs); err != nil {
+	if err := validPoint(f, o, zb); err != nil {
 		return 0, err
 	}
 	e := explainer{t: t, c: caseName, f: f, zb: zb, qn: qn}

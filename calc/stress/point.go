@@ -121,18 +121,23 @@ func Offset(f site.Footing, p Point) (x, y float64) {
 // f, at the point and by the method in o. The spread method gives the
 // average stress over the spread area whatever the point.
 func Influence(f site.Footing, o Options, zb float64) (float64, error) {
-	if err := f.Validate(); err != nil {
+	if err := validPoint(f, o, zb); err != nil {
 		return 0, err
+	}
+	return influence(f, o, zb), nil
+}
+
+// validPoint checks the footing, the depth below it and the spread angle.
+func validPoint(f site.Footing, o Options, zb float64) error {
+	if err := f.Validate(); err != nil {
+		return err
 	}
 	var errs site.Errors
 	errs = checkDepth(errs, zb)
 	if o.Method == Spread {
 		errs = checkAngle(errs, o.angle())
 	}
-	if err := one(errs); err != nil {
-		return 0, err
-	}
-	return influence(f, o, zb), nil
+	return one(errs)
 }
 
 // influence assumes valid input.
