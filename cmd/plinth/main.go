@@ -2,6 +2,7 @@
 //
 //	plinth check PATH [--set name=value]... [--json]
 //	plinth render PATH [-o FILE] [--set name=value]...
+//	plinth init DIR
 //
 // Exit status: 0 when every check is OK, 1 when a check is NOT OK, 2 for
 // input errors (every error of the run is listed as path:line:col: message).
@@ -18,6 +19,7 @@ const usage = `plinth — calculation packages for shallow foundations
 Usage:
   plinth check PATH [--set name=value]... [--json]
   plinth render PATH [-o FILE] [--set name=value]...
+  plinth init DIR         write a starter package (ground model and a pad) to DIR
   plinth help
 
 PATH is a package folder (sheets *.md in file-name order, optional
@@ -58,6 +60,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return check(rest, stdout, stderr)
 	case "render":
 		return render(rest, stdout, stderr)
+	case "init":
+		return initPackage(rest, stdout, stderr)
 	}
 	fmt.Fprintf(stderr, "plinth: unknown command %q\n\n%s", cmd, usage)
 	return exitErrors

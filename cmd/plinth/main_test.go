@@ -199,3 +199,18 @@ func TestCheckGolden(t *testing.T) {
 	}
 	compareGolden(t, "brackenfield.txt", out)
 }
+
+// TestInit writes the starter package, which must check clean, and
+// refuses to write over it a second time.
+func TestInit(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "job")
+	if out, errs, code := runCmd("init", dir); code != 0 || !strings.Contains(out, "02-pad.md") {
+		t.Fatalf("init: status %d\n%s%s", code, out, errs)
+	}
+	if out, errs, code := runCmd("check", dir); code != 0 {
+		t.Errorf("the starter package does not check clean: status %d\n%s%s", code, out, errs)
+	}
+	if _, errs, code := runCmd("init", dir); code != 2 || !strings.Contains(errs, "already exists") {
+		t.Errorf("second init: status %d, %s", code, errs)
+	}
+}
