@@ -81,12 +81,14 @@
 // with q_b the lower layer's resistance at its top (shape and inclination
 // factors of the method, no depth factor) and q_t the upper layer's own.
 // K_s is read as K_s tanφ′_1 = K_p tanδ from BR 470 (2004) Table A2
-// (35°: 3.1, 40°: 5.5, 45°: 10.0; interpolated log-linearly in φ′,
-// extrapolated with a warning outside 35°–45°): these values sit on the
-// low, conservative side of Meyerhof & Hanna's chart (as for q_2/q_1 → 0).
+// (35°: 3.1, 40°: 5.5, 45°: 10.0, confirmed against public reproductions
+// of the table; interpolated log-linearly in φ′, extrapolated with a
+// warning outside 35°–45°); plinth takes these values to sit on the low,
+// conservative side of Meyerhof & Hanna's chart (as for q_2/q_1 → 0).
 // c_a/c_1 is read from Meyerhof & Hanna's chart as the straight line
-// 0.6 + 0.4·(q_2/q_1). Both readings are from memory of the publications
-// and may be replaced by Options.Ks and Options.CaRatio. For inclined
+// 0.6 + 0.4·(q_2/q_1): that reading is still from memory (a published
+// worked example suggests it is on the low, safe side; see CaRatio). Both
+// may be replaced by Options.Ks and Options.CaRatio. For inclined
 // loads the punching terms are multiplied by i_p = (1 − β/90°)² (plinth's
 // simplification, with a note). Beside it, the lower layer is checked
 // under the load spread through the upper layer at SpreadTan (default

@@ -10,8 +10,10 @@ import (
 
 func TestEvalAndVerify(t *testing.T) {
 	// N_q = e^(π tan φ′) tan²(45° + φ′/2), EN 1997-1:2004 Annex D, D.4.
-	// For φ′ = 30°, N_q = 18.40 (EN 1997-1 formula evaluated; Bond & Harris,
-	// Decoding Eurocode 7, 2008, Table 13.3 lists 18.40 — from memory).
+	// For φ′ = 30°, N_q = 18.40 (EN 1997-1 formula evaluated independently:
+	// 18.4011; Smith, Elements of Soil Mechanics, Annex D example prints
+	// 18.4; that Bond & Harris, Decoding Eurocode 7, 2008, Table 13.3 lists
+	// 18.40 is from memory).
 	phi := 30 * math.Pi / 180
 	f := trace.Mul(trace.Fn("exp", trace.Mul(trace.S("pi"), trace.Fn("tan", trace.S("phi'")))),
 		trace.Pow(trace.Fn("tan", trace.Add(trace.Deg(45), trace.Div(trace.S("phi'"), trace.N(2)))), trace.N(2)))

@@ -16,9 +16,13 @@ import (
 // prefixes), Table 6 (units accepted for use with the SI), §7.10.2
 // (percent) and Appendix B.8 (factors for units listed alphabetically).
 // The B.8 factors below are as recalled from that table (from memory: the
-// document itself could not be opened while these tests were written); the
-// exact ones (day, hour, minute, metric ton, stokes) are printed in bold
-// there, degree is given to seven figures.
+// document itself could not be opened while these tests were written, nor
+// in the verification pass, which found only its title page); the exact
+// ones (day, hour, minute, metric ton, stokes) are printed in bold there,
+// degree is given to seven figures. Their values are in any case the
+// definitions of these units accepted for use with the SI (min = 60 s,
+// h = 3600 s, d = 86 400 s, t = 1000 kg, ° = (π/180) rad = 0.017 453 29 rad;
+// St = cm²/s = 1E-04 m²/s by the CGS definition), checked independently.
 //
 // Tolerance: 1e-12 relative unless the row says otherwise.
 var factorRows = []struct {
