@@ -43,6 +43,16 @@ func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts
 		ok = ok && qok
 		in.Options.Interface.Delta = site.Some(q.V)
 	}
+	for _, x := range []struct {
+		name string
+		dst  *site.Opt
+	}{{"K_s", &in.Options.Ks}, {"r_a", &in.Options.CaRatio}} {
+		if opt := o[x.name]; opt != nil {
+			q, qok := e.quantity(scope{e: e, s: s}, opt, units.None, "a pure number")
+			ok = ok && qok
+			*x.dst = site.Some(q.V)
+		}
+	}
 	ap, aok := e.approach(s, o)
 	in.Options.Approach = ap
 	return in, ok && aok

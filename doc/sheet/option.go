@@ -37,6 +37,8 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "two_layer", Words: []string{"auto", "no"}, Default: "auto"},
 		{Name: "interface", Words: []string{"cast", "precast"}, Default: "cast (delta = phi'; precast: 2/3 phi')"},
 		{Name: "delta", Form: "an angle (interface friction for sliding)", Default: "from interface"},
+		{Name: "K_s", Form: "a number: the two-layer punching coefficient read from Meyerhof & Hanna's chart", Default: "from BR 470 Table A2"},
+		{Name: "r_a", Form: "a number from 0 to 1: the two-layer adhesion ratio c_a/c_1", Default: "0.6 + 0.4 q_2/q_1"},
 	},
 	KindSettlement: {
 		{Name: "method", Words: []string{"elastic", "consolidation", "schmertmann", "burland-burbidge"}, Default: "chosen from the layers' data"},
