@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 	"unicode"
 	"unicode/utf8"
 )
@@ -129,9 +130,20 @@ const maxPower = 9
 // "" and "-" are dimensionless; "%" is 0.01. Surrounding spaces are ignored;
 // spaces inside a unit are an error.
 func Parse(s string) (Unit, error) {
+	if u, ok := parsed.Load(s); ok {
+		return u.(Unit), nil
+	}
 	p := uparser{s: s}
-	return p.parse()
+	u, err := p.parse()
+	if err == nil && len(s) <= 32 {
+		parsed.Store(s, u)
+	}
+	return u, err
 }
+
+// parsed caches the units read so far: a sheet writes the same few units
+// many times. Units are values, so sharing them is safe.
+var parsed sync.Map
 
 // MustParse is Parse for tables and tests; it panics on a bad unit.
 func MustParse(s string) Unit {
