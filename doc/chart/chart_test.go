@@ -16,49 +16,6 @@ import (
 
 var update = flag.Bool("update", false, "rewrite golden files")
 
-// Dump writes items one a line, positions rounded to 0.01 pt.
-func Dump(items []draw.Item) string {
-	var b strings.Builder
-	f := func(v float64) string {
-		s := fmt.Sprintf("%.2f", v)
-		if s == "-0.00" {
-			s = "0.00"
-		}
-		return s
-	}
-	paint := func(p draw.Paint) string {
-		s := ""
-		if p.Width > 0 {
-			s += fmt.Sprintf(" stroke %s %s", p.Stroke, f(p.Width))
-			if p.Dash != nil {
-				s += fmt.Sprintf(" dash %v", p.Dash)
-			}
-		}
-		if p.Filled {
-			s += " fill " + p.Fill.String()
-		}
-		return s
-	}
-	for _, it := range items {
-		switch v := it.(type) {
-		case draw.Text:
-			fmt.Fprintf(&b, "text %s %s %s %s %s %d %q\n", f(v.X), f(v.Y), v.Face, f(v.Size), v.Color, v.Align, v.Text)
-		case draw.Line:
-			fmt.Fprintf(&b, "line %s %s %s %s%s\n", f(v.X1), f(v.Y1), f(v.X2), f(v.Y2), paint(v.Paint))
-		case draw.Rect:
-			fmt.Fprintf(&b, "rect %s %s %s %s%s\n", f(v.X), f(v.Y), f(v.W), f(v.H), paint(v.Paint))
-		case draw.Poly:
-			fmt.Fprintf(&b, "poly closed=%v%s:", v.Closed, paint(v.Paint))
-			for _, p := range v.Points {
-				fmt.Fprintf(&b, " %s,%s", f(p.X), f(p.Y))
-			}
-			b.WriteByte('\n')
-		default:
-			fmt.Fprintf(&b, "%T\n", it)
-		}
-	}
-	return b.String()
-}
 
 func golden(t *testing.T, name, got string) {
 	t.Helper()
@@ -103,7 +60,7 @@ func TestGolden(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", d.name, err)
 		}
-		golden(t, d.name, Dump(items))
+		golden(t, d.name, draw.Dump(items))
 	}
 }
 
@@ -114,7 +71,7 @@ func TestInside(t *testing.T) {
 		c := d.c()
 		items, _ := c.Draw()
 		again, _ := c.Draw()
-		if Dump(items) != Dump(again) {
+		if draw.Dump(items) != draw.Dump(again) {
 			t.Errorf("%s: two draws differ", d.name)
 		}
 		for _, it := range items {

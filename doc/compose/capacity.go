@@ -64,8 +64,8 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 		bear := chart.Series{Name: "bearing", X: xs, Y: qb, Dash: chart.Dashed}
 		sett := chart.Series{Name: "settlement", X: xs, Y: qs, Dash: chart.Dotted}
 		ch := chart.Chart{W: math.Min(c.width, 400), H: 230,
-			X: chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
-			Y: chart.Axis{Title: "allowable pressure (kPa)"},
+			X:      chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
+			Y:      chart.Axis{Title: "allowable pressure (kPa)"},
 			Series: []chart.Series{bear, sett}}
 		if low, regions, err := chart.Lower("allowable (the lower)", bear, sett); err == nil {
 			ch.Series = append([]chart.Series{low}, ch.Series...)

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"strconv"
-	"strings"
 
 	"plinth/doc/layout/draw"
 )
@@ -41,66 +40,11 @@ func (d *dumper) box(b *Box, indent string) {
 	d.printf("%sbox %s %s [%s %s %s %s]\n", indent, b.Kind, b.Pos, num(b.X), num(b.Y), num(b.W), num(b.H))
 	in := indent + "  "
 	for _, it := range b.Items {
-		d.printf("%s%s\n", in, ItemString(it))
+		d.printf("%s%s\n", in, draw.String(it))
 	}
 	for _, k := range b.Kids {
 		d.box(k, in)
 	}
-}
-
-// ItemString describes one primitive on a line, positions rounded to
-// 0.01 pt.
-func ItemString(it draw.Item) string {
-	switch v := it.(type) {
-	case draw.Text:
-		al := ""
-		if v.Align != draw.Left {
-			al = []string{"", " center", " right"}[v.Align]
-		}
-		return fmt.Sprintf("text %s %s %q %s %s%s %q", num(v.X), num(v.Y), v.Face.String(), num(v.Size), v.Color, al, v.Text)
-	case draw.Line:
-		return fmt.Sprintf("line %s %s %s %s%s", num(v.X1), num(v.Y1), num(v.X2), num(v.Y2), paint(v.Paint))
-	case draw.Poly:
-		var b strings.Builder
-		for i, p := range v.Points {
-			if i > 0 {
-				b.WriteByte(' ')
-			}
-			b.WriteString(num(p.X) + "," + num(p.Y))
-		}
-		kind := "polyline"
-		if v.Closed || v.Filled {
-			kind = "polygon"
-		}
-		return fmt.Sprintf("%s [%s]%s", kind, b.String(), paint(v.Paint))
-	case draw.Rect:
-		return fmt.Sprintf("rect %s %s %s %s%s", num(v.X), num(v.Y), num(v.W), num(v.H), paint(v.Paint))
-	case draw.Image:
-		return fmt.Sprintf("image %s %s %s %s (%d bytes)", num(v.X), num(v.Y), num(v.W), num(v.H), len(v.Data))
-	case draw.Link:
-		return fmt.Sprintf("link %s %s %s %s -> %q", num(v.X), num(v.Y), num(v.W), num(v.H), v.Target)
-	case draw.Anchor:
-		return fmt.Sprintf("anchor %q %s %s", v.Name, num(v.X), num(v.Y))
-	}
-	return fmt.Sprintf("%T", it)
-}
-
-func paint(p draw.Paint) string {
-	s := ""
-	if p.Width > 0 {
-		s += " stroke " + p.Stroke.String() + " " + num(p.Width)
-		if len(p.Dash) > 0 {
-			ds := make([]string, len(p.Dash))
-			for i, x := range p.Dash {
-				ds[i] = num(x)
-			}
-			s += " dash " + strings.Join(ds, ",")
-		}
-	}
-	if p.Filled {
-		s += " fill " + p.Fill.String()
-	}
-	return s
 }
 
 // num prints x to 0.01, without a negative zero.

@@ -41,49 +41,6 @@ var cases = []struct {
 		V:      250000, M: 40000, BEff: ptr(17.7)}, 480, 280},
 }
 
-// Dump writes items one a line, positions rounded to 0.01 pt.
-func Dump(items []draw.Item) string {
-	var b strings.Builder
-	f := func(v float64) string {
-		s := fmt.Sprintf("%.2f", v)
-		if s == "-0.00" {
-			s = "0.00"
-		}
-		return s
-	}
-	paint := func(p draw.Paint) string {
-		s := ""
-		if p.Width > 0 {
-			s += fmt.Sprintf(" stroke %s %s", p.Stroke, f(p.Width))
-			if p.Dash != nil {
-				s += fmt.Sprintf(" dash %v", p.Dash)
-			}
-		}
-		if p.Filled {
-			s += " fill " + p.Fill.String()
-		}
-		return s
-	}
-	for _, it := range items {
-		switch v := it.(type) {
-		case draw.Text:
-			fmt.Fprintf(&b, "text %s %s %s %s %s %d %q\n", f(v.X), f(v.Y), v.Face, f(v.Size), v.Color, v.Align, v.Text)
-		case draw.Line:
-			fmt.Fprintf(&b, "line %s %s %s %s%s\n", f(v.X1), f(v.Y1), f(v.X2), f(v.Y2), paint(v.Paint))
-		case draw.Rect:
-			fmt.Fprintf(&b, "rect %s %s %s %s%s\n", f(v.X), f(v.Y), f(v.W), f(v.H), paint(v.Paint))
-		case draw.Poly:
-			fmt.Fprintf(&b, "poly closed=%v%s:", v.Closed, paint(v.Paint))
-			for _, p := range v.Points {
-				fmt.Fprintf(&b, " %s,%s", f(p.X), f(p.Y))
-			}
-			b.WriteByte('\n')
-		default:
-			fmt.Fprintf(&b, "%T\n", it)
-		}
-	}
-	return b.String()
-}
 
 func TestGolden(t *testing.T) {
 	for _, c := range cases {
@@ -91,7 +48,7 @@ func TestGolden(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", c.name, err)
 		}
-		got := Dump(items)
+		got := draw.Dump(items)
 		path := filepath.Join("testdata", c.name+".golden")
 		if *update {
 			if err := os.MkdirAll("testdata", 0o755); err != nil {
@@ -124,7 +81,7 @@ func TestInside(t *testing.T) {
 	for _, c := range cases {
 		items, _ := sketch.Draw(c.f, c.w, c.h)
 		again, _ := sketch.Draw(c.f, c.w, c.h)
-		if Dump(items) != Dump(again) {
+		if draw.Dump(items) != draw.Dump(again) {
 			t.Errorf("%s: two draws differ", c.name)
 		}
 		var ts []draw.Text
