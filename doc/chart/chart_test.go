@@ -16,7 +16,6 @@ import (
 
 var update = flag.Bool("update", false, "rewrite golden files")
 
-
 func golden(t *testing.T, name, got string) {
 	t.Helper()
 	path := filepath.Join("testdata", name+".golden")

@@ -64,4 +64,3 @@ func TestDemoPDF(t *testing.T) {
 		}
 	}
 }
-

@@ -41,7 +41,6 @@ var cases = []struct {
 		V:      250000, M: 40000, BEff: ptr(17.7)}, 480, 280},
 }
 
-
 func TestGolden(t *testing.T) {
 	for _, c := range cases {
 		items, err := sketch.Draw(c.f, c.w, c.h)
