@@ -6,6 +6,7 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
+	"plinth/internal/golden"
 	"sort"
 	"strings"
 	"testing"
@@ -85,25 +86,7 @@ func TestJSONGolden(t *testing.T) {
 			t.Errorf("%d %s blocks, want %d", kinds[k], k, n)
 		}
 	}
-	compareGolden(t, "brackenfield.json", out)
-}
-
-// compareGolden compares out with testdata/name; -update rewrites it.
-func compareGolden(t *testing.T, name, out string) {
-	t.Helper()
-	golden := filepath.Join("testdata", name)
-	if *update {
-		if err := os.WriteFile(golden, []byte(out), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatal(err)
-	}
-	if string(want) != out {
-		t.Errorf("output differs from %s (run go test ./cmd/plinth -update and read the diff)", golden)
-	}
+	golden.Compare(t, filepath.Join("testdata", "brackenfield.json"), []byte(out), *update)
 }
 
 // TestSetChangesDependents changes one ground parameter with --set and
@@ -197,7 +180,7 @@ func TestCheckGolden(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("status %d: %s", code, errs)
 	}
-	compareGolden(t, "brackenfield.txt", out)
+	golden.Compare(t, filepath.Join("testdata", "brackenfield.txt"), []byte(out), *update)
 }
 
 // TestInit writes the starter package, which must check clean, and

@@ -5,8 +5,8 @@ import (
 	"flag"
 	"fmt"
 	"math"
-	"os"
 	"path/filepath"
+	"plinth/internal/golden"
 	"strings"
 	"testing"
 
@@ -15,33 +15,6 @@ import (
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
-
-func golden(t *testing.T, name, got string) {
-	t.Helper()
-	path := filepath.Join("testdata", name+".golden")
-	if *update {
-		if err := os.MkdirAll("testdata", 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run with -update to create)", err)
-	}
-	if got != string(want) {
-		g, w := strings.Split(got, "\n"), strings.Split(string(want), "\n")
-		for i := 0; i < len(g) && i < len(w); i++ {
-			if g[i] != w[i] {
-				t.Fatalf("%s differs at line %d:\n got: %s\nwant: %s\n(run with -update to accept)", path, i+1, g[i], w[i])
-			}
-		}
-		t.Fatalf("%s differs in length: %d lines, want %d", path, len(g), len(w))
-	}
-}
 
 var demos = []struct {
 	name string
@@ -59,7 +32,7 @@ func TestGolden(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", d.name, err)
 		}
-		golden(t, d.name, draw.Dump(items))
+		golden.Compare(t, filepath.Join("testdata", d.name+".golden"), []byte(draw.Dump(items)), *update)
 	}
 }
 

@@ -18,12 +18,13 @@ import (
 	"plinth/doc/load"
 	"plinth/doc/parse"
 	"plinth/doc/pdf"
+	"plinth/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
 
-// golden is the folder of the render goldens (repository testdata).
-const golden = "../../testdata/render"
+// goldenDir is the folder of the render goldens (repository testdata).
+const goldenDir = "../../testdata/render"
 
 // evaluate loads, parses and evaluates a package, failing on any error.
 func evaluate(t testing.TB, path string, sets ...string) *eval.Result {
@@ -99,7 +100,7 @@ func TestExamples(t *testing.T) {
 	for _, name := range examples(t) {
 		dirs[name] = filepath.Join("../../examples", name)
 	}
-	dirs["mini"] = filepath.Join(golden, "mini")
+	dirs["mini"] = filepath.Join(goldenDir, "mini")
 	for name, dir := range dirs {
 		t.Run(name, func(t *testing.T) {
 			res := evaluate(t, dir)
@@ -129,33 +130,9 @@ func TestExamples(t *testing.T) {
 				t.Fatal(err)
 			}
 			checkText(t, res, pages, string(text))
-			compareGolden(t, filepath.Join(golden, name+".txt"), text)
+			golden.Compare(t, filepath.Join(goldenDir, name+".txt"), text, *update)
 		})
 	}
-}
-
-func compareGolden(t *testing.T, path string, got []byte) {
-	t.Helper()
-	if *update {
-		if err := os.WriteFile(path, got, 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run go test ./doc/compose -update to create it)", err)
-	}
-	if bytes.Equal(got, want) {
-		return
-	}
-	g, w := strings.Split(string(got), "\n"), strings.Split(string(want), "\n")
-	for i := 0; i < len(g) && i < len(w); i++ {
-		if g[i] != w[i] {
-			t.Fatalf("%s differs at line %d:\n got: %q\nwant: %q\n(run with -update to accept)", path, i+1, g[i], w[i])
-		}
-	}
-	t.Fatalf("%s differs in length: got %d lines, want %d (run with -update to accept)", path, len(g), len(w))
 }
 
 var space = regexp.MustCompile(`\s+`)
@@ -236,7 +213,7 @@ func TestDeterministic(t *testing.T) {
 // TestLayoutGolden dumps the laid-out pages of the test package's sheet
 // and of its cover and check register.
 func TestLayoutGolden(t *testing.T) {
-	res := evaluate(t, filepath.Join(golden, "mini"))
+	res := evaluate(t, filepath.Join(goldenDir, "mini"))
 	pages, d := compose.Pages(res, compose.Options{})
 	if d.HasErrors() {
 		t.Fatal(d)
@@ -251,5 +228,5 @@ func TestLayoutGolden(t *testing.T) {
 	if err := keep.Dump(&b); err != nil {
 		t.Fatal(err)
 	}
-	compareGolden(t, filepath.Join(golden, "mini.golden"), b.Bytes())
+	golden.Compare(t, filepath.Join(goldenDir, "mini.golden"), b.Bytes(), *update)
 }

@@ -4,7 +4,6 @@ import (
 	"bytes"
 	"errors"
 	"flag"
-	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -15,6 +14,7 @@ import (
 	"plinth/doc/layout/eqn"
 	"plinth/doc/layout/fonts"
 	"plinth/doc/source"
+	"plinth/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
@@ -35,33 +35,13 @@ func sheet(blocks ...layout.Block) layout.Doc {
 	}
 }
 
-func golden(t *testing.T, name string, p *layout.Pages) {
+func goldenPages(t *testing.T, name string, p *layout.Pages) {
 	t.Helper()
 	var b bytes.Buffer
 	if err := p.Dump(&b); err != nil {
 		t.Fatal(err)
 	}
-	path := filepath.Join("testdata", name+".golden")
-	if *update {
-		if err := os.WriteFile(path, b.Bytes(), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run with -update to create)", err)
-	}
-	if !bytes.Equal(b.Bytes(), want) {
-		got := strings.Split(b.String(), "\n")
-		exp := strings.Split(string(want), "\n")
-		for i := 0; i < len(got) && i < len(exp); i++ {
-			if got[i] != exp[i] {
-				t.Fatalf("%s differs at line %d:\n got: %s\nwant: %s\n(run with -update to accept)", path, i+1, got[i], exp[i])
-			}
-		}
-		t.Fatalf("%s differs in length: got %d lines, want %d", path, len(got), len(exp))
-	}
+	golden.Compare(t, filepath.Join("testdata", name+".golden"), b.Bytes(), *update)
 }
 
 func TestGoldenBasic(t *testing.T) {
@@ -87,7 +67,7 @@ func TestGoldenBasic(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	golden(t, "basic", p)
+	goldenPages(t, "basic", p)
 }
 
 func TestTableSplitsWithHeader(t *testing.T) {

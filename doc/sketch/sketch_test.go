@@ -5,8 +5,8 @@ import (
 	"flag"
 	"fmt"
 	"math"
-	"os"
 	"path/filepath"
+	"plinth/internal/golden"
 	"strings"
 	"testing"
 
@@ -48,29 +48,7 @@ func TestGolden(t *testing.T) {
 			t.Fatalf("%s: %v", c.name, err)
 		}
 		got := draw.Dump(items)
-		path := filepath.Join("testdata", c.name+".golden")
-		if *update {
-			if err := os.MkdirAll("testdata", 0o755); err != nil {
-				t.Fatal(err)
-			}
-			if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-				t.Fatal(err)
-			}
-			continue
-		}
-		want, err := os.ReadFile(path)
-		if err != nil {
-			t.Fatalf("%v (run with -update to create)", err)
-		}
-		if got != string(want) {
-			g, w := strings.Split(got, "\n"), strings.Split(string(want), "\n")
-			for i := 0; i < len(g) && i < len(w); i++ {
-				if g[i] != w[i] {
-					t.Fatalf("%s differs at line %d:\n got: %s\nwant: %s\n(run with -update to accept)", path, i+1, g[i], w[i])
-				}
-			}
-			t.Fatalf("%s differs in length: %d lines, want %d", path, len(g), len(w))
-		}
+		golden.Compare(t, filepath.Join("testdata", c.name+".golden"), []byte(got), *update)
 	}
 }
 
