@@ -58,6 +58,13 @@ func printTables(w io.Writer, res *eval.Result) {
 		}
 		fmt.Fprintf(w, "VARIANT: %s\n\n", strings.Join(sets, ", "))
 	}
+	if len(res.Context) > 0 {
+		var names []string
+		for _, t := range res.Context {
+			names = append(names, t.Name())
+		}
+		fmt.Fprintf(w, "context (used, not listed): %s\n\n", strings.Join(names, ", "))
+	}
 	for _, s := range res.Sheets {
 		title := s.Meta.Title.Value
 		if title != "" {

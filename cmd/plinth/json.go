@@ -19,6 +19,9 @@ type jsonReport struct {
 	Checks    []jsonCheck    `json:"checks"`
 	Blocks    []jsonBlock    `json:"blocks"`
 	Errors    []jsonError    `json:"errors"`
+	// Context lists the sheets evaluated only because a single sheet
+	// given alone uses them (their symbols are not listed).
+	Context []string `json:"context"`
 }
 
 // jsonBlock is one ground, footing, bearing, settlement or capacity block.
@@ -99,7 +102,7 @@ type jsonError struct {
 
 // report builds the JSON object for a run.
 func report(res *eval.Result, diags source.List) jsonReport {
-	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Blocks: []jsonBlock{}, Errors: []jsonError{}}
+	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Blocks: []jsonBlock{}, Errors: []jsonError{}, Context: []string{}}
 	for _, d := range diags {
 		if d.Severity != source.Error {
 			continue
@@ -115,6 +118,9 @@ func report(res *eval.Result, diags source.List) jsonReport {
 		return r
 	}
 	r.Variant = res.Variant()
+	for _, t := range res.Context {
+		r.Context = append(r.Context, t.Name())
+	}
 	for _, o := range res.Overrides {
 		r.Overrides = append(r.Overrides, jsonOverride{Arg: o.Arg, Sheet: o.Target.Sheet.Name(), Name: o.Target.Name})
 	}

@@ -20,13 +20,18 @@ func evaluate(path string, sets []string) (*eval.Result, source.List) {
 	}
 	pkg, pd := parse.Package(lp)
 	diags.Append(pd)
-	if pkg == nil || diags.HasErrors() {
+	if pkg == nil {
 		diags.Sort()
 		return nil, diags
 	}
-	res, ed := eval.Package(pkg, eval.Options{Set: sets})
+	// Evaluate even after parse errors, so every independent error of the
+	// run is listed at once; eval leaves the lines parse reported alone.
+	res, ed := eval.Package(pkg, eval.Options{Set: sets, Prior: diags})
 	diags.Append(ed)
 	diags.Sort()
+	if diags.HasErrors() {
+		return nil, diags
+	}
 	return res, diags
 }
 

@@ -104,6 +104,13 @@ func (c *composer) cover() layout.Sheet {
 	row("Job no.", txt(m.Job.Value))
 	row("Client", txt(m.Client.Value))
 	row("Sheets", txt(fmt.Sprintf("%s; numbered across the whole package, this cover included", plural(len(c.res.Sheets), "calculation sheet"))))
+	if len(c.res.Context) > 0 {
+		var names []string
+		for _, t := range c.res.Context {
+			names = append(names, t.Name())
+		}
+		row("Context", txt(strings.Join(names, ", ")+": used by this sheet, evaluated as they stand in its folder but not printed here (their inputs enter the fingerprint); the package's own issue prints them"))
+	}
 	row("Designed by", txt(m.By.Value))
 	if strings.TrimSpace(m.Checked.Value) == "" {
 		row("Checked by", bold("NOT CHECKED"))

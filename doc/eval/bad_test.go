@@ -12,7 +12,8 @@ import (
 
 // TestBad runs the evaluation-stage cases of testdata/bad/eval (see
 // testdata/bad/README.md): the input parses, and evaluation must report
-// exactly the annotated diagnostics.
+// exactly the annotated diagnostics. Like plinth itself, it evaluates
+// after parse errors too, so each case lists every error of the run.
 func TestBad(t *testing.T) {
 	n := badcase.Run(t, "../../testdata/bad/eval", func(path string) source.List {
 		p, diags := load.Path(path)
@@ -21,10 +22,7 @@ func TestBad(t *testing.T) {
 		}
 		pkg, d := parse.Package(p)
 		diags.Append(d)
-		if diags.HasErrors() {
-			return diags
-		}
-		_, d = eval.Package(pkg, eval.Options{})
+		_, d = eval.Package(pkg, eval.Options{Prior: diags})
 		return append(diags, d...)
 	})
 	if n < 2 {

@@ -16,13 +16,20 @@ import (
 type Options struct {
 	// Set holds --set arguments: "name=value" or "sheet.md:name=value".
 	Set []string
+	// Prior holds the diagnostics of the earlier stages (load, parse), so
+	// that a package with parse errors is still evaluated and every
+	// independent error of the run is listed: a statement on a line with
+	// a prior error is not evaluated (its name counts as failed, so its
+	// uses are not reported again), and no evaluation diagnostic is added
+	// on a line that already has one.
+	Prior source.List
 }
 
 // Package evaluates every sheet of p. It returns the result even when
 // there are errors, so a caller can list every problem of the run; a
 // result with errors must not be rendered.
 func Package(p *sheet.Package, opt Options) (*Result, source.List) {
-	e := &evaluator{pkg: p, res: &Result{Src: p, byName: map[string]*Sheet{}}}
+	e := &evaluator{pkg: p, res: &Result{Src: p, byName: map[string]*Sheet{}}, prior: opt.Prior.Lines()}
 	for i, s := range p.Sheets {
 		es := &Sheet{
 			Src: s, Meta: p.Effective(s), Index: i,
@@ -47,12 +54,28 @@ func Package(p *sheet.Package, opt Options) (*Result, source.List) {
 	for _, s := range e.order() {
 		e.sheet(s)
 	}
+	e.splitContext()
 	e.register()
 	for _, s := range e.res.Sheets {
 		e.prose(s)
 	}
+	e.errs = e.errs.Without(opt.Prior)
 	e.errs.Sort()
 	return e.res, e.errs
+}
+
+// splitContext moves the context sheets (pulled in by uses for a
+// single-sheet run) out of the printed sheets.
+func (e *evaluator) splitContext() {
+	var printed []*Sheet
+	for _, s := range e.res.Sheets {
+		if s.Src.Context {
+			e.res.Context = append(e.res.Context, s)
+		} else {
+			printed = append(printed, s)
+		}
+	}
+	e.res.Sheets = printed
 }
 
 // def is a name defined on a sheet, found before evaluation.
@@ -72,6 +95,15 @@ type evaluator struct {
 	tables     map[*sheet.Grid]*table
 	blockNames []map[string][]string // per sheet: "ground"/"footing" → names defined
 	annexes    map[string]annexEntry
+	prior      map[source.Line]bool // lines with an earlier stage's error
+}
+
+// spoilt reports whether the line at sp holds an earlier stage's error.
+func (e *evaluator) spoilt(sp source.Span) bool {
+	if len(e.prior) == 0 || sp.File == nil {
+		return false
+	}
+	return e.prior[source.LineOf(sp)]
 }
 
 // collect finds every name a sheet defines, reporting redefinitions.

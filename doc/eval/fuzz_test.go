@@ -27,11 +27,12 @@ func FuzzEval(f *testing.F) {
 	}
 	f.Fuzz(func(t *testing.T, data []byte) {
 		file := source.NewFile("f.md", data)
-		s, diags := parse.Sheet(file)
-		if s == nil || diags.HasErrors() {
+		s, prior := parse.Sheet(file)
+		if s == nil {
 			return
 		}
-		_, diags = eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{file}}, eval.Options{Set: []string{"B=2m"}})
+		// Evaluated after parse errors too, as plinth does.
+		_, diags := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{file}}, eval.Options{Set: []string{"B=2m"}, Prior: prior})
 		for _, d := range diags {
 			if d.Span.File == nil {
 				continue

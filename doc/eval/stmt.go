@@ -13,6 +13,16 @@ func (e *evaluator) sheet(s *Sheet) {
 		for _, st := range blockStmts(b) {
 			e.stmt(s, prefix, st)
 		}
+		if e.spoilt(b.Where()) {
+			// The block's header has an earlier error: its names may be
+			// wrong, so it is not evaluated and its results count as failed.
+			if a, ok := b.(*sheet.Analysis); ok {
+				for _, n := range resultNames[a.Kind] {
+					e.fail(s, a.ResultPrefix().Value+"."+n)
+				}
+			}
+			continue
+		}
 		switch b := b.(type) {
 		case *sheet.Ground:
 			e.ground(s, b)
@@ -26,6 +36,12 @@ func (e *evaluator) sheet(s *Sheet) {
 
 func (e *evaluator) stmt(s *Sheet, prefix string, st *sheet.Stmt) {
 	sc := scope{e: e, s: s, prefix: prefix}
+	if e.spoilt(st.Span) {
+		if a, ok := st.X.(*expr.Assign); ok {
+			e.fail(s, prefix+a.Sym.Name)
+		}
+		return
+	}
 	switch x := st.X.(type) {
 	case *expr.Assign:
 		name := prefix + x.Sym.Name

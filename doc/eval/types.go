@@ -12,7 +12,8 @@ import (
 // Result is an evaluated package.
 type Result struct {
 	Src       *sheet.Package
-	Sheets    []*Sheet    // in file-name order (the printing order)
+	Sheets    []*Sheet    // the printed sheets, in file-name order (the printing order)
+	Context   []*Sheet    // sheets evaluated only for the symbols a printed sheet uses (sheet.Sheet.Context)
 	Checks    []*Check    // the check register, in printing order
 	Overrides []*Override // the --set values in force (a variant run when any)
 

@@ -23,6 +23,10 @@ type Package struct {
 	Config *source.File   // package.yaml; nil when absent
 	Sheets []*source.File // in file-name order
 	Single bool           // a single sheet was named rather than a folder
+	// Context holds, for a single-sheet run, the folder's other sheets in
+	// file-name order: doc/parse pulls in those the sheet uses (directly or
+	// through another used sheet) as context, evaluated but not printed.
+	Context []*source.File
 }
 
 // Files returns every source file: package.yaml first when present, then
@@ -63,7 +67,7 @@ func Path(p string) (*Package, source.List) {
 		return nil, diags
 	}
 	pkg := &Package{Dir: filepath.Clean(p)}
-	var names []string
+	var names, others []string
 	if info.IsDir() {
 		entries, err := os.ReadDir(p)
 		if err != nil {
@@ -91,6 +95,7 @@ func Path(p string) (*Package, source.List) {
 		pkg.Dir = filepath.Dir(pkg.Dir)
 		pkg.Single = true
 		names = []string{filepath.Base(p)}
+		others = siblings(pkg.Dir, names[0])
 	}
 	if root, err := filepath.Abs(pkg.Dir); err == nil {
 		if real, err := filepath.EvalSymlinks(root); err == nil {
@@ -125,8 +130,36 @@ func Path(p string) (*Package, source.List) {
 		}
 		pkg.Sheets = append(pkg.Sheets, source.NewFile(join(name), text))
 	}
+	for _, name := range others {
+		// A sibling that cannot be read is reported only if the sheet uses
+		// it (doc/parse finds it missing from Context).
+		if text, err := os.ReadFile(join(name)); err == nil {
+			pkg.Context = append(pkg.Context, source.NewFile(join(name), text))
+		}
+	}
 	diags.Sort()
 	return pkg, diags
+}
+
+// siblings lists the other sheets of dir (see IsSheet), in file-name
+// order, leaving out the sheet named self.
+func siblings(dir, self string) []string {
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		return nil
+	}
+	var out []string
+	for _, e := range entries {
+		if !IsSheet(e.Name()) || e.Name() == self {
+			continue
+		}
+		if t := e.Type(); t.IsDir() || !(t.IsRegular() || t&fs.ModeSymlink != 0) {
+			continue
+		}
+		out = append(out, e.Name())
+	}
+	sort.Strings(out)
+	return out
 }
 
 // ErrOutside is the error (wrapped) for a path that is absolute or leads

@@ -29,6 +29,9 @@ func Package(p *load.Package) (*sheet.Package, source.List) {
 		pkg.Sheets = append(pkg.Sheets, s)
 		diags.Append(d)
 	}
+	if p.Single {
+		diags.Append(pullContext(p, pkg))
+	}
 	ck := checker{p: p, pkg: pkg, diags: &diags}
 	ck.meta(&pkg.Meta)
 	for _, s := range pkg.Sheets {
@@ -38,6 +41,38 @@ func Package(p *load.Package) (*sheet.Package, source.List) {
 	}
 	diags.Sort()
 	return pkg, diags
+}
+
+// pullContext adds to a single-sheet package the sheets of its folder that
+// it uses, directly or through another used sheet, marked as context
+// (evaluated, not printed), and their files to pkg.Files so they enter
+// the fingerprint. A uses entry naming no sheet of the folder is left for
+// the uses check to report.
+func pullContext(p *load.Package, pkg *sheet.Package) source.List {
+	var diags source.List
+	byName := map[string]*source.File{}
+	for _, f := range p.Context {
+		byName[(&sheet.Sheet{File: f}).Name()] = f
+	}
+	have := map[string]bool{}
+	for _, s := range pkg.Sheets {
+		have[s.Name()] = true
+	}
+	for i := 0; i < len(pkg.Sheets); i++ {
+		for _, u := range pkg.Sheets[i].Meta.Uses {
+			f := byName[u.Value]
+			if f == nil || have[u.Value] {
+				continue
+			}
+			have[u.Value] = true
+			s, d := Sheet(f)
+			s.Context = true
+			pkg.Sheets = append(pkg.Sheets, s)
+			pkg.Files = append(pkg.Files, f)
+			diags.Append(d)
+		}
+	}
+	return diags
 }
 
 type checker struct {
@@ -111,8 +146,11 @@ func (ck *checker) uses(s *sheet.Sheet) {
 			ck.diags.Add(u.Span, "%q is listed twice in uses (first at line %d)", u.Value, seen[u.Value])
 		case contains(names, u.Value):
 		case ck.p.Single:
-			ck.diags.AddHint(u.Span, "render the package folder to use other sheets",
-				"%q is not part of this run: a single sheet was given", u.Value)
+			hint := "uses lists file names of the other sheets in this sheet's folder"
+			if near, ok := sheet.Nearest(u.Value, contextNames(ck.p)); ok {
+				hint = "did you mean " + quote(near) + "?"
+			}
+			ck.diags.AddHint(u.Span, hint, "no sheet %q in this sheet's folder", u.Value)
 		default:
 			hint := "uses lists file names of the package's other sheets: " + strings.Join(others, ", ")
 			if contains(others, u.Value+".md") {
@@ -126,6 +164,14 @@ func (ck *checker) uses(s *sheet.Sheet) {
 			seen[u.Value] = u.Span.Pos().Line
 		}
 	}
+}
+
+func contextNames(p *load.Package) []string {
+	var out []string
+	for _, f := range p.Context {
+		out = append(out, (&sheet.Sheet{File: f}).Name())
+	}
+	return out
 }
 
 // images checks every figure's path, in nested blocks too.

@@ -27,6 +27,10 @@ type Sheet struct {
 	File *source.File
 	Meta Meta    // the front matter (zero Span when there is none)
 	Body []Block // prose and plinth blocks in order
+	// Context marks a sheet pulled in by uses for a single-sheet run: it is
+	// evaluated, so the sheet that uses it can read its symbols, but it is
+	// not printed and its checks do not enter the register.
+	Context bool
 }
 
 // Name is the sheet's file name without its folder ("01-ground.md"), the

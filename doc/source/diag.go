@@ -136,3 +136,41 @@ func (l List) Err() error {
 	}
 	return nil
 }
+
+// Line names one line of one file, for matching diagnostics by line.
+type Line struct {
+	File *File
+	Line int
+}
+
+// LineOf is the line a span starts on.
+func LineOf(sp Span) Line { return Line{File: sp.File, Line: sp.Pos().Line} }
+
+// Lines is the set of lines holding an error of l.
+func (l List) Lines() map[Line]bool {
+	out := map[Line]bool{}
+	for _, d := range l {
+		if d.Severity == Error && d.Span.File != nil {
+			out[LineOf(d.Span)] = true
+		}
+	}
+	return out
+}
+
+// Without returns the diagnostics of l that lie on no line holding an
+// error of prior: a later stage's diagnostics where an earlier stage has
+// already reported the line would only repeat it in other words.
+func (l List) Without(prior List) List {
+	bad := prior.Lines()
+	if len(bad) == 0 {
+		return l
+	}
+	var out List
+	for _, d := range l {
+		if d.Span.File != nil && bad[LineOf(d.Span)] {
+			continue
+		}
+		out = append(out, d)
+	}
+	return out
+}
