@@ -5,6 +5,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"plinth/internal/tools"
 	"strings"
 	"testing"
 
@@ -16,10 +17,7 @@ import (
 // must be printed, in its display unit, on the pages of the sheet that
 // holds the block, and every check's verdict must be in the register.
 func TestPDFMatchesJSON(t *testing.T) {
-	pdftotext, err := exec.LookPath("pdftotext")
-	if err != nil {
-		t.Skip("pdftotext not installed (apt-get install poppler-utils)")
-	}
+	pdftotext := tools.Need(t, "pdftotext")
 	out, errs, code := runCmd("check", "--json", example)
 	if code != 0 {
 		t.Fatalf("check: status %d: %s", code, errs)

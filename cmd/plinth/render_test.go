@@ -5,6 +5,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"plinth/internal/tools"
 	"strings"
 	"testing"
 )
@@ -174,7 +175,7 @@ func TestRenderNotOKAndVariant(t *testing.T) {
 	if _, err := os.Stat(o); err != nil {
 		t.Fatalf("a NOT OK render must still write the PDF: %v", err)
 	}
-	if p, err := exec.LookPath("pdftotext"); err == nil {
+	if p := tools.Need(t, "pdftotext"); p != "" {
 		text, err := exec.Command(p, o, "-").Output()
 		if err != nil {
 			t.Fatal(err)

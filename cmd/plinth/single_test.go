@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"os/exec"
 	"path/filepath"
+	"plinth/internal/tools"
 	"strings"
 	"testing"
 )
@@ -49,11 +50,7 @@ func TestSingleSheetWithUses(t *testing.T) {
 	if _, errs, code := runCmd("render", sheet, "-o", o); code != exitOK {
 		t.Fatalf("render: status %d\n%s", code, errs)
 	}
-	p, err := exec.LookPath("pdftotext")
-	if err != nil {
-		t.Skip("pdftotext not installed")
-	}
-	text, err := exec.Command(p, o, "-").Output()
+	text, err := exec.Command(tools.Need(t, "pdftotext"), o, "-").Output()
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -7,6 +7,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"plinth/internal/tools"
 	"regexp"
 	"strings"
 	"testing"
@@ -65,11 +66,7 @@ func render(t testing.TB, res *eval.Result) ([]byte, *layout.Pages) {
 
 func tool(t *testing.T, name string) string {
 	t.Helper()
-	p, err := exec.LookPath(name)
-	if err != nil {
-		t.Skipf("%s not installed (apt-get install -y poppler-utils qpdf)", name)
-	}
-	return p
+	return tools.Need(t, name)
 }
 
 // examples lists the example packages.

@@ -6,6 +6,7 @@ import (
 	"io"
 	"os"
 	"os/exec"
+	"plinth/internal/tools"
 	"strings"
 	"testing"
 	"time"
@@ -43,10 +44,8 @@ func TestDemo(t *testing.T) {
 	if err := os.WriteFile(path, out, 0o644); err != nil {
 		t.Fatal(err)
 	}
-	if _, err := exec.LookPath("qpdf"); err == nil {
-		if out, err := exec.Command("qpdf", "--check", path).CombinedOutput(); err != nil {
-			t.Errorf("qpdf --check: %v\n%s", err, out)
-		}
+	if out, err := exec.Command(tools.Need(t, "qpdf"), "--check", path).CombinedOutput(); err != nil {
+		t.Errorf("qpdf --check: %v\n%s", err, out)
 	}
 }
 
@@ -61,10 +60,7 @@ func TestDeterministic(t *testing.T) {
 
 func tool(t *testing.T, name string, args ...string) string {
 	t.Helper()
-	if _, err := exec.LookPath(name); err != nil {
-		t.Skipf("%s not installed", name)
-	}
-	out, err := exec.Command(name, args...).CombinedOutput()
+	out, err := exec.Command(tools.Need(t, name), args...).CombinedOutput()
 	if err != nil {
 		t.Fatalf("%s %v: %v\n%s", name, args, err, out)
 	}
