@@ -28,8 +28,16 @@ type Options struct {
 // Package evaluates every sheet of p. It returns the result even when
 // there are errors, so a caller can list every problem of the run; a
 // result with errors must not be rendered.
-func Package(p *sheet.Package, opt Options) (*Result, source.List) {
+func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 	e := &evaluator{pkg: p, res: &Result{Src: p, byName: map[string]*Sheet{}}, prior: opt.Prior.Lines()}
+	defer func() {
+		// A defect of plinth's own must not take the caller down: it
+		// becomes an error at the block or statement being evaluated.
+		if r := recover(); r != nil {
+			diags = append(e.errs, internalError(e.at, p.Dir, r))
+			res = e.res
+		}
+	}()
 	for i, s := range p.Sheets {
 		es := &Sheet{
 			Src: s, Meta: p.Effective(s), Index: i,
@@ -96,6 +104,18 @@ type evaluator struct {
 	blockNames []map[string][]string // per sheet: "ground"/"footing" → names defined
 	annexes    map[string]annexEntry
 	prior      map[source.Line]bool // lines with an earlier stage's error
+	at         source.Span          // the block or statement being evaluated, for internal errors
+}
+
+// internalError is the diagnostic for a panic inside plinth: it names the
+// input being processed and asks for a report, since no input should
+// cause one.
+func internalError(at source.Span, dir string, r any) source.Diagnostic {
+	d := source.Diagnostic{Span: at, Path: dir, Msg: fmt.Sprintf("internal error while evaluating this (please report): %v", r)}
+	if at.File != nil {
+		d.Span.End = d.Span.Start
+	}
+	return d
 }
 
 // spoilt reports whether the line at sp holds an earlier stage's error.

@@ -11,7 +11,14 @@ func (e *evaluator) sheet(s *Sheet) {
 	for _, b := range s.Src.Body {
 		prefix := blockPrefix(b)
 		for _, st := range blockStmts(b) {
+			e.at = st.Span
 			e.stmt(s, prefix, st)
+		}
+		if sp := b.Where(); sp.File != nil {
+			e.at = headerSpan(sp)
+		}
+		if testHook != nil {
+			testHook(b)
 		}
 		if e.spoilt(b.Where()) {
 			// The block's header has an earlier error: its names may be
@@ -67,6 +74,10 @@ func (e *evaluator) stmt(s *Sheet, prefix string, st *sheet.Stmt) {
 		}
 	}
 }
+
+// testHook, when set by a test, is called before each block is
+// evaluated (to drive the internal-error path).
+var testHook func(sheet.Block)
 
 func (e *evaluator) fail(s *Sheet, name string) {
 	if e.failed == nil {

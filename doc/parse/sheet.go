@@ -2,6 +2,7 @@ package parse
 
 import (
 	"bytes"
+	"fmt"
 	"unicode/utf8"
 
 	"plinth/doc/sheet"
@@ -10,9 +11,15 @@ import (
 
 // Sheet parses one sheet file. It always returns a sheet (possibly empty)
 // and every problem found, sorted by position.
-func Sheet(f *source.File) (*sheet.Sheet, source.List) {
-	var diags source.List
-	s := &sheet.Sheet{File: f}
+func Sheet(f *source.File) (s *sheet.Sheet, diags source.List) {
+	s = &sheet.Sheet{File: f}
+	defer func() {
+		// A defect of plinth's own must not take the caller down.
+		if r := recover(); r != nil {
+			s = &sheet.Sheet{File: f}
+			diags = append(diags, source.Diagnostic{Span: source.Span{File: f}, Msg: fmt.Sprintf("internal error while parsing this sheet (please report): %v", r)})
+		}
+	}()
 	text := f.Text
 	if !checkText(f, &diags) {
 		return s, diags
