@@ -101,7 +101,7 @@
 // a parameter "[#0]" (govaluate cannot read 1e3 and a formatted float would
 // be rounded), unary minus as "(-(x))", powers as "(a ** b)" — and runs
 // Direct as well: Direct places domain errors (division by zero, sqrt of
-// a negative, ln 0, asin 2, overflow) at the node where they happen and
+// a negative, ln 0, asin 2, tan 90°, overflow) at the node where they happen and
 // also catches an infinity that govaluate would let vanish (1/(1/0) = 0).
 // A disagreement beyond 1e-9 relative is a KindInternal error. No panic
 // escapes: govaluate runs under recover.

@@ -216,6 +216,12 @@ func (e *evaluator) call(n *Call) (float64, *Error) {
 		if x <= 0 {
 			return 0, domain(n, "%s needs a positive value; got %s", n.Fn, fmtNum(x))
 		}
+	case "tan":
+		// At an odd multiple of 90° the tangent is infinite; math.Tan
+		// returns about 1.6e16 there because π/2 is not exact in binary.
+		if math.Abs(math.Cos(x)) < 1e-12 {
+			return 0, domain(n, "tan is infinite at an odd multiple of 90°; got %s°", fmtNum(x*180/math.Pi))
+		}
 	case "asin", "acos":
 		if x < -1 || x > 1 {
 			return 0, domain(n, "%s needs a value from -1 to 1; got %s", n.Fn, fmtNum(x))

@@ -238,6 +238,8 @@ func TestDomainErrors(t *testing.T) {
 		{"sqrt(-4)", 0, 8, "sqrt of a negative value (-4)"},
 		{"ln(0)", 0, 5, "ln needs a positive value; got 0"},
 		{"log10(-x)", 0, 9, "log10 needs a positive value; got -3"},
+		{"tan(90 deg)", 0, 11, "tan is infinite at an odd multiple of 90°; got 90°"},
+		{"tan(-270 deg)", 0, 13, "tan is infinite at an odd multiple of 90°; got -270°"},
 		{"asin(2)", 0, 7, "asin needs a value from -1 to 1; got 2"},
 		{"acos(-x)", 0, 8, "acos needs a value from -1 to 1"},
 		{"(-8)^(1/3)", 0, 10, "a negative base (-8) to a fractional power"},
