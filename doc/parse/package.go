@@ -5,6 +5,7 @@ import (
 	"io/fs"
 	"net/url"
 	"strings"
+	"time"
 
 	"plinth/doc/load"
 	"plinth/doc/sheet"
@@ -92,6 +93,28 @@ func (ck *checker) meta(m *sheet.Meta) {
 	}
 	if f := m.Factors; f.IsSet() {
 		ck.file(f, "factors file", "")
+	}
+	ck.date(m.Date, "date")
+	ck.date(m.CheckedDate, "checked_date")
+	for _, r := range m.Revisions {
+		ck.date(r.Date, "revision date")
+	}
+}
+
+// date checks that a date field, when written and not blank, is a real
+// calendar date written YYYY-MM-DD (ISO 8601), so check refuses what
+// render would: 2026-13-45 and 2026-02-30 are errors.
+func (ck *checker) date(s sheet.Str, what string) {
+	v := strings.TrimSpace(s.Value)
+	if !s.IsSet() || v == "" {
+		return
+	}
+	if _, err := time.Parse("2006-01-02", v); err != nil {
+		msg := "is not a date"
+		if len(v) == 10 && v[4] == '-' && v[7] == '-' {
+			msg = "is not a calendar date"
+		}
+		ck.diags.AddHint(s.Span, "write dates as YYYY-MM-DD (ISO 8601), e.g. 2026-11-23", "%s %q %s", what, v, msg)
 	}
 }
 
