@@ -4,6 +4,7 @@ import (
 	"errors"
 	"io/fs"
 	"net/url"
+	"path/filepath"
 	"strings"
 	"time"
 
@@ -35,10 +36,20 @@ func Package(p *load.Package) (*sheet.Package, source.List) {
 	}
 	ck := checker{p: p, pkg: pkg, diags: &diags}
 	ck.meta(&pkg.Meta)
+	calcs := map[string]sheet.Str{}
 	for _, s := range pkg.Sheets {
 		ck.meta(&s.Meta)
 		ck.uses(s)
 		ck.images(s.Body)
+		if c := s.Meta.Calc; strings.TrimSpace(c.Value) != "" {
+			v := strings.TrimSpace(c.Value)
+			if first, dup := calcs[v]; dup {
+				ck.diags.AddHint(c.Span, "give each sheet its own calculation number",
+					"calc %q is already the number of %s (line %d)", v, filepath.Base(first.Span.File.Path), first.Span.Pos().Line)
+			} else {
+				calcs[v] = c
+			}
+		}
 	}
 	diags.Sort()
 	return pkg, diags
