@@ -1,6 +1,7 @@
 package parse
 
 import (
+	"plinth/doc/expr"
 	"regexp"
 	"strings"
 
@@ -70,6 +71,9 @@ func (c *conv) fenced(n *ast.FencedCodeBlock) sheet.Block {
 		if near := nearKind(lang); near != "" {
 			c.diags.AddHint(c.span(ws[0].start, ws[0].end), "did you mean "+quote(near)+"?",
 				"unknown block %q", lang)
+		} else if lang == "" && looksPlinth(c.linesText(n)) {
+			c.diags.AddHint(c.span(start, start+fl), "name it ```calc to evaluate it, or give it a language (```text) to keep it as code",
+				"this unnamed code block holds plinth statements, which would be printed as code and not evaluated")
 		}
 		return &sheet.CodeBlock{Span: sp, Lang: lang, Text: c.linesText(n)}
 	}
@@ -121,6 +125,24 @@ func nearKind(w string) string {
 		}
 	}
 	return ""
+}
+
+// looksPlinth reports whether the text of an unnamed code block reads as
+// plinth statements: every line that is not blank or a # comment parses
+// as a statement, and there is at least one.
+func looksPlinth(text string) bool {
+	n := 0
+	for _, line := range strings.Split(text, "\n") {
+		t := strings.TrimSpace(line)
+		if t == "" || strings.HasPrefix(t, "#") {
+			continue
+		}
+		if st, errs := expr.ParseLine(t, 0); st == nil || len(errs) > 0 {
+			return false
+		}
+		n++
+	}
+	return n > 0
 }
 
 func quote(s string) string { return `"` + s + `"` }

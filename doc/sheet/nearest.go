@@ -35,9 +35,14 @@ func Nearest(name string, candidates []string) (string, bool) {
 	return best, best != ""
 }
 
-// Distance is the Levenshtein edit distance between a and b, on runes.
+// Distance is the edit distance between a and b, on runes, counting an
+// insertion, a deletion, a substitution or a transposition of two
+// neighbouring runes as one edit (the optimal-string-alignment form of
+// the Damerau–Levenshtein distance), so "clac" is one edit from "calc".
 func Distance(a, b string) int {
 	ra, rb := []rune(a), []rune(b)
+	// rows i-2, i-1 and i of the table
+	pp := make([]int, len(rb)+1)
 	prev := make([]int, len(rb)+1)
 	cur := make([]int, len(rb)+1)
 	for j := range prev {
@@ -51,8 +56,11 @@ func Distance(a, b string) int {
 				cost = 0
 			}
 			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			if i > 1 && j > 1 && ra[i-1] == rb[j-2] && ra[i-2] == rb[j-1] {
+				cur[j] = min(cur[j], pp[j-2]+1)
+			}
 		}
-		prev, cur = cur, prev
+		pp, prev, cur = prev, cur, pp
 	}
 	return prev[len(rb)]
 }

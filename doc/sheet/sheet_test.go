@@ -28,6 +28,18 @@ func TestNearest(t *testing.T) {
 	if d := sheet.Distance("γ_w", "g_w"); d != 1 {
 		t.Errorf("Distance counts bytes, not runes: %d", d)
 	}
+	// Optimal string alignment: a transposition is one edit (hand-counted).
+	for _, c := range []struct {
+		a, b string
+		d    int
+	}{
+		{"clac", "calc", 1}, {"cehck", "check", 1}, {"grund", "ground", 1},
+		{"ca", "abc", 3}, {"kitten", "sitting", 3}, {"", "abc", 3}, {"abc", "abc", 0},
+	} {
+		if d := sheet.Distance(c.a, c.b); d != c.d {
+			t.Errorf("Distance(%q, %q) = %d, want %d", c.a, c.b, d, c.d)
+		}
+	}
 }
 
 func TestOptions(t *testing.T) {
