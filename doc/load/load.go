@@ -113,7 +113,9 @@ func Path(p string) (*Package, source.List) {
 		}
 		return filepath.Join(pkg.Dir, name)
 	}
-	if text, err := os.ReadFile(join(ConfigName)); err == nil {
+	// Every file is read through ReadInside: a sheet or package.yaml that
+	// is a symbolic link to a file outside the package folder is refused.
+	if text, err := pkg.ReadInside(ConfigName); err == nil {
 		pkg.Config = source.NewFile(join(ConfigName), text)
 	} else if !errors.Is(err, fs.ErrNotExist) {
 		fail(join(ConfigName), "cannot read: %s", describe(err))
@@ -123,7 +125,7 @@ func Path(p string) (*Package, source.List) {
 			Msg: "package.yml is not read: the package settings file is named package.yaml"})
 	}
 	for _, name := range names {
-		text, err := os.ReadFile(join(name))
+		text, err := pkg.ReadInside(name)
 		if err != nil {
 			fail(join(name), "cannot read: %s", describe(err))
 			continue
@@ -133,7 +135,7 @@ func Path(p string) (*Package, source.List) {
 	for _, name := range others {
 		// A sibling that cannot be read is reported only if the sheet uses
 		// it (doc/parse finds it missing from Context).
-		if text, err := os.ReadFile(join(name)); err == nil {
+		if text, err := pkg.ReadInside(name); err == nil {
 			pkg.Context = append(pkg.Context, source.NewFile(join(name), text))
 		}
 	}
@@ -214,6 +216,9 @@ func (p *Package) ReadInside(rel string) ([]byte, error) {
 
 // describe shortens an os error to its cause ("no such file or directory").
 func describe(err error) string {
+	if errors.Is(err, ErrOutside) {
+		return err.Error() + "; plinth reads only files inside the package folder"
+	}
 	var pe *fs.PathError
 	if errors.As(err, &pe) {
 		return pe.Err.Error()

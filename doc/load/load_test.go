@@ -160,3 +160,37 @@ func TestReadInside(t *testing.T) {
 		t.Error("an in-memory package read a file")
 	}
 }
+
+// TestLinkedSheetOutside: a sheet or package.yaml that is a symbolic link
+// to a file outside the package folder is refused, naming the link; one
+// pointing inside is read.
+func TestLinkedSheetOutside(t *testing.T) {
+	base := t.TempDir()
+	dir := filepath.Join(base, "pkg")
+	must := func(err error) {
+		t.Helper()
+		if err != nil {
+			t.Fatal(err)
+		}
+	}
+	must(os.MkdirAll(filepath.Join(dir, "drafts"), 0o755))
+	must(os.WriteFile(filepath.Join(base, "outside.md"), []byte("# x\n"), 0o644))
+	must(os.WriteFile(filepath.Join(base, "p.yaml"), []byte("project: X\n"), 0o644))
+	must(os.WriteFile(filepath.Join(dir, "drafts", "in.md"), []byte("# y\n"), 0o644))
+	must(os.Symlink("../outside.md", filepath.Join(dir, "01-out.md")))
+	must(os.Symlink("drafts/in.md", filepath.Join(dir, "02-in.md")))
+	must(os.Symlink("../p.yaml", filepath.Join(dir, "package.yaml")))
+	p, diags := load.Path(dir)
+	if p == nil || len(p.Sheets) != 1 || !strings.HasSuffix(p.Sheets[0].Path, "02-in.md") {
+		t.Fatalf("sheets %v", p)
+	}
+	if p.Config != nil {
+		t.Error("package.yaml outside the folder was read")
+	}
+	got := diags.Error()
+	for _, want := range []string{"01-out.md: cannot read: 01-out.md is a link to", "package.yaml: cannot read: package.yaml is a link to", "outside the package folder"} {
+		if !strings.Contains(got, want) {
+			t.Errorf("diagnostics %q lack %q", got, want)
+		}
+	}
+}
