@@ -285,11 +285,12 @@ func Tags(acts []site.Action) []string {
 
 // PsiDefaulted lists the names of variable actions that give no ψ0 and
 // so take the approach's default when not leading (only where there is
-// more than one variable action, since a lone one always leads).
+// more than one variable action, since a lone one always leads; one
+// marked favourable is never in a load and does not count).
 func PsiDefaulted(acts []site.Action) []string {
 	var vars, out []string
 	for _, a := range acts {
-		if a.Kind == site.Variable {
+		if a.Kind == site.Variable && !a.Favourable {
 			vars = append(vars, a.Name)
 			if !a.Psi0.Set {
 				out = append(out, a.Name)

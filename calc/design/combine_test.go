@@ -170,3 +170,16 @@ func TestLoadsBounded(t *testing.T) {
 		}
 	}
 }
+
+// A variable action marked favourable is never in a load, so its missing
+// ψ0 is not reported as defaulted (common practice).
+func TestPsiDefaultedFavourable(t *testing.T) {
+	acts := []site.Action{
+		{Name: "Dead", V: 100e3},
+		{Name: "Imposed", Kind: site.Variable, V: 50e3},
+		{Name: "Ballast", Kind: site.Variable, V: 10e3, Favourable: true},
+	}
+	if got := design.PsiDefaulted(acts); len(got) != 0 {
+		t.Errorf("PsiDefaulted = %q, want none (one variable action in the loads)", got)
+	}
+}
