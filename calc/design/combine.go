@@ -123,9 +123,10 @@ func uses(a site.Action, gsup bool, net [NComp]float64) [NComp]Use {
 // moment or an upward V, the least vertical load ("G inf": downward
 // effects favourable, upward ones, horizontal actions and moments
 // unfavourable; "G inf on V" where a permanent action's horizontal
-// component or moment is then at a γ_G,sup above γ_G,inf). In each family every variable
-// action with an unfavourable effect leads in turn (the others at γ_Q·ψ0);
-// variable effects that are favourable in the family are left out, so an
+// component or moment is then at a γ_G,sup above γ_G,inf). In each
+// family every variable action with an unfavourable effect leads in turn
+// (the others at γ_Q·ψ0); variable effects that are favourable in the
+// family are left out, so an
 // action whose effects differ (a surcharge whose V resists sliding and
 // whose H drives it) is split: its V is left out of the least-V family
 // while its H stays. The cases per combination are at most twice the

@@ -45,7 +45,8 @@ func checkLoads(t *testing.T, what string, acts []site.Action, ap design.Approac
 // A1.2(B) note 3 (unfavourable permanent effects at γ_G,sup, favourable
 // at γ_G,inf; variable effects at γ_Q where unfavourable, 0 where
 // favourable) with the factors of EN 1997-1:2004 Table A.3 (A1: 1.35,
-// 1.0, 1.5; A2: 1.0, 1.0, 1.3). Invented characteristic actions at the
+// 1.0, 1.5, as EN 1990 Table A1.2(B); A2: 1.0, 1.0, 1.3, as Table
+// A1.2(C)); DA2 and DA3 use A1 and give the C1 values. Invented characteristic actions at the
 // centre of the base: wall and base G_w: V 150; soil over the heel G_s:
 // V 200; earth thrust G_t: H_B 80, M_B 120 (at 1.5 m); surcharge of
 // 10 kPa on the 3 m heel Q_s (ψ0 0.7): V 30 on the heel and its thrust
@@ -87,6 +88,14 @@ func TestLoadsWall(t *testing.T) {
 		{"DA1-C2 · Surcharge leading · G inf · left out as favourable: Surcharge V", 318.8, 106, 120},
 		{"DA1-C2 · Uplift leading · G inf · left out as favourable: Surcharge V", 298, 98.2, 120},
 	})
+	for _, ap := range []design.Approach{design.DA2(), design.DA3()} {
+		n := ap.CombinationName(0)
+		checkLoads(t, "wall "+n, acts, ap, []wantLoad{
+			{n + " · Surcharge leading · G sup · left out as favourable: Uplift", 517.5, 138, 162},
+			{n + " · Surcharge leading · G inf on V · left out as favourable: Surcharge V", 314, 138, 162},
+			{n + " · Uplift leading · G inf on V · left out as favourable: Surcharge V", 290, 129, 162},
+		})
+	}
 	// the split is printed in the working of the case
 	l := design.Loads(acts, design.DA1())[1]
 	var tr trace.Trace
