@@ -21,8 +21,10 @@
 // # Cases
 //
 // design.Loads combines the actions for each combination of the approach
-// (each variable action leading in turn; γ_G,inf combinations where
-// horizontal load or moment is present). Each load is checked under each
+// (each variable action leading in turn, each effect factored by whether
+// it is unfavourable, a greatest-V and a least-V family; see its
+// documentation). Bearing and sliding are each governed by their case of
+// highest utilisation among all loads. Each load is checked under each
 // drainage condition that applies: undrained (short term: fine-grained
 // layers with c_u act undrained, in total stress; coarse layers drained)
 // and drained (long term, effective stress). Auto gives both when the

@@ -8,68 +8,147 @@ import (
 	"plinth/calc/trace"
 )
 
+// Components of an action's effect, the index into Load.Use and
+// Load.Gamma: vertical, horizontal along B and L, moments along B and L.
+const (
+	CV = iota
+	CHB
+	CHL
+	CMB
+	CML
+	NComp
+)
+
+// CompNames are the components' names as printed ("V", "H_B", ...).
+var CompNames = [NComp]string{"V", "H_B", "H_L", "M_B", "M_L"}
+
+// Comp returns component k of a.
+func Comp(a site.Action, k int) float64 {
+	return [NComp]float64{a.V, a.HB, a.HL, a.MB, a.ML}[k]
+}
+
+// Use says how one component of one action enters a design load.
+type Use int8
+
+const (
+	Out  Use = iota // left out: zero, or a favourable variable effect (γ_Q = 0)
+	GSup            // permanent, unfavourable: γ_G,sup
+	GInf            // permanent, favourable: γ_G,inf
+	Q               // variable, unfavourable: γ_Q (·ψ0 when accompanying)
+)
+
 // Load is one design combination of a footing's actions.
 type Load struct {
-	Name        string      // "DA1-C2 · Imposed leading · G sup"
-	Combination string      // "DA1-C2"
+	Name        string      // "DA1-C1 · Wind leading · G inf on V · left out as favourable: Imposed"
+	Combination string      // "DA1-C1"
 	Index       int         // index of the combination in the approach
 	Set         Combination // the partial factors
 	Leading     int         // index of the leading variable action, -1 if none
-	GSup        bool        // permanent actions at γ_G,sup (else γ_G,inf)
-	// Per action, parallel to the actions: Gamma is the partial factor
-	// applied (0 = left out as favourable), Psi the combination factor
-	// (1 for permanent and leading actions), Factor = Gamma·Psi.
-	Gamma, Psi, Factor []float64
-	V, HB, HL, MB, ML  float64 // design values, N and N·m (per metre for a strip)
+	// GSup is the family: true for the greatest vertical load (downward
+	// effects unfavourable), false for the least (downward effects
+	// favourable: sliding, uplift, eccentricity, inclination).
+	GSup bool
+	// Per action, parallel to the actions, and per component (CV ...):
+	// Use is how the effect enters, Gamma the partial factor applied
+	// (0 = left out), Factor = Gamma·Psi. Psi is the combination factor
+	// of the action (1 for permanent and leading actions).
+	Use           [][NComp]Use
+	Gamma, Factor [][NComp]float64
+	Psi           []float64
+	// LeftOut names what was left out as favourable, as printed in the
+	// name: an action ("Imposed") or one component of it ("Surcharge V").
+	LeftOut           []string
+	V, HB, HL, MB, ML float64 // design values, N and N·m (per metre for a strip)
 }
 
-// Pure reports whether an action only pushes down: no horizontal load and
-// no moment. Such a variable action is favourable where a lower vertical
-// load is more onerous.
-func pure(a site.Action) bool {
-	return a.HB == 0 && a.HL == 0 && a.MB == 0 && a.ML == 0 && a.V >= 0
-}
-
-func hasHM(acts []site.Action) bool {
+// nets returns the net characteristic value of each component (every
+// action at factor 1). A horizontal action or moment of the net's sign
+// (either sign where the net is zero) is unfavourable; one against it is
+// favourable.
+func nets(acts []site.Action) [NComp]float64 {
+	var n [NComp]float64
 	for _, a := range acts {
-		if a.HB != 0 || a.HL != 0 || a.MB != 0 || a.ML != 0 {
-			return true
+		for k := range NComp {
+			n[k] += Comp(a, k)
 		}
 	}
-	return false
+	return n
 }
 
-// Loads returns the design loads of every combination of ap, in order:
-// for each combination, each variable action leading in turn with the
-// permanent actions at γ_G,sup; then, where any action carries horizontal
-// load or moment, each such variable action leading with the permanent
-// actions at γ_G,inf and the purely vertical variable actions left out.
-// With no variable action the single "permanent only" load is used.
+// adverse reports whether component k of a is unfavourable in the family
+// of the greatest vertical load (gsup) or of the least (!gsup): a
+// downward V is unfavourable only in the first, an upward V only in the
+// second; a horizontal action or moment with the net's sign in both.
+func adverse(a site.Action, k int, gsup bool, net [NComp]float64) bool {
+	v := Comp(a, k)
+	switch {
+	case v == 0:
+		return false
+	case k == CV:
+		return (v > 0) == gsup
+	}
+	return net[k] == 0 || (v > 0) == (net[k] > 0)
+}
+
+// uses returns how each component of a enters a load of the family gsup
+// (EN 1990:2002 6.4.3.2(3), Table A1.2(B)): permanent effects at γ_G,sup
+// where unfavourable and γ_G,inf where favourable (always γ_G,inf for an
+// action marked favourable); variable effects at γ_Q where unfavourable
+// and left out (γ_Q = 0) where favourable (always, for one marked
+// favourable).
+func uses(a site.Action, gsup bool, net [NComp]float64) [NComp]Use {
+	var u [NComp]Use
+	for k := range NComp {
+		if Comp(a, k) == 0 {
+			continue
+		}
+		bad := adverse(a, k, gsup, net) && !a.Favourable
+		switch {
+		case a.Kind == site.Permanent && bad:
+			u[k] = GSup
+		case a.Kind == site.Permanent:
+			u[k] = GInf
+		case bad:
+			u[k] = Q
+		}
+	}
+	return u
+}
+
+// Loads returns the design loads of every combination of ap by EN
+// 1990:2002 eq. (6.10), each effect factored by whether it is
+// unfavourable (Table A1.2(B), 6.4.3.2(3)). For each combination there
+// are two families: the greatest vertical load ("G sup": downward effects
+// unfavourable) and, where any action has a horizontal component, a
+// moment or an upward V, the least vertical load ("G inf": downward
+// effects favourable, upward ones, horizontal actions and moments
+// unfavourable; "G inf on V" where a permanent action's horizontal
+// component or moment is then at a γ_G,sup above γ_G,inf). In each
+// family every variable action with an unfavourable effect leads in turn
+// (the others at γ_Q·ψ0); variable effects that are favourable in the
+// family are left out, so an
+// action whose effects differ (a surcharge whose V resists sliding and
+// whose H drives it) is split: its V is left out of the least-V family
+// while its H stays. The cases per combination are at most twice the
+// number of variable actions, whatever their number. With no variable
+// action the single "permanent only" load of each family is used.
 // Identical loads within a combination are listed once.
 func Loads(acts []site.Action, ap Approach) []Load {
-	var vars, hm []int
-	for i, a := range acts {
-		if a.Kind == site.Variable {
-			vars = append(vars, i)
-			if !pure(a) {
-				hm = append(hm, i)
-			}
-		}
+	net := nets(acts)
+	least := false
+	for _, a := range acts {
+		least = least || a.V < 0 || a.HB != 0 || a.HL != 0 || a.MB != 0 || a.ML != 0
 	}
-	sup := vars
-	if len(sup) == 0 {
-		sup = []int{-1}
-	}
-	inf := hm
-	if len(inf) == 0 {
-		inf = []int{-1}
+	fams := []bool{true}
+	if least {
+		fams = append(fams, false)
 	}
 	tags := Tags(acts)
 	var out []Load
 	for ci, c := range ap.Combinations {
 		start := len(out)
 		add := func(lead int, gsup bool) {
-			l := build(acts, tags, ap, ci, c, lead, gsup)
+			l := build(acts, tags, net, ap, ci, c, lead, gsup)
 			for _, o := range out[start:] {
 				if o.V == l.V && o.HB == l.HB && o.HL == l.HL && o.MB == l.MB && o.ML == l.ML {
 					return
@@ -77,61 +156,104 @@ func Loads(acts []site.Action, ap Approach) []Load {
 			}
 			out = append(out, l)
 		}
-		for _, lead := range sup {
-			add(lead, true)
-		}
-		if hasHM(acts) {
-			for _, lead := range inf {
-				add(lead, false)
+		for _, gsup := range fams {
+			n := 0
+			for i, a := range acts {
+				if a.Kind != site.Variable {
+					continue
+				}
+				u := uses(a, gsup, net)
+				for k := range NComp {
+					if u[k] == Q {
+						add(i, gsup)
+						n++
+						break
+					}
+				}
+			}
+			if n == 0 {
+				add(-1, gsup)
 			}
 		}
 	}
 	return out
 }
 
-func build(acts []site.Action, tags []string, ap Approach, ci int, c Combination, lead int, gsup bool) Load {
+func build(acts []site.Action, tags []string, net [NComp]float64, ap Approach, ci int, c Combination, lead int, gsup bool) Load {
 	n := len(acts)
 	l := Load{
 		Combination: ap.CombinationName(ci), Index: ci, Set: c, Leading: lead, GSup: gsup,
-		Gamma: make([]float64, n), Psi: make([]float64, n), Factor: make([]float64, n),
+		Use: make([][NComp]Use, n), Gamma: make([][NComp]float64, n), Factor: make([][NComp]float64, n),
+		Psi: make([]float64, n),
 	}
+	as := c.Actions
+	supH := false
 	for i, a := range acts {
-		g, psi := 0.0, 1.0
-		switch {
-		case a.Kind == site.Permanent && (a.Favourable || !gsup):
-			g = c.Actions.GammaGInf
-		case a.Kind == site.Permanent:
-			g = c.Actions.GammaGSup
-		case i == lead:
-			g = c.Actions.GammaQ
-		case !gsup && pure(a):
-			g = 0 // favourable variable action left out
-		default:
-			g = c.Actions.GammaQ
+		u := uses(a, gsup, net)
+		psi := 1.0
+		if a.Kind == site.Variable && i != lead {
 			psi = a.Psi0.Or(ap.Psi0())
 		}
-		l.Gamma[i], l.Psi[i], l.Factor[i] = g, psi, g*psi
-		f := g * psi
-		l.V += f * a.V
-		l.HB += f * a.HB
-		l.HL += f * a.HL
-		l.MB += f * a.MB
-		l.ML += f * a.ML
+		l.Use[i], l.Psi[i] = u, psi
+		var out []string
+		all := true
+		for k := range NComp {
+			g, p := 0.0, 1.0
+			switch u[k] {
+			case GSup:
+				g = as.GammaGSup
+				supH = supH || k != CV && as.GammaGSup != as.GammaGInf
+			case GInf:
+				g = as.GammaGInf
+			case Q:
+				g, p = as.GammaQ, psi
+			}
+			if a.Kind == site.Variable && Comp(a, k) != 0 {
+				if u[k] == Out {
+					out = append(out, CompNames[k])
+				} else {
+					all = false
+				}
+			}
+			l.Gamma[i][k], l.Factor[i][k] = g, g*p
+		}
+		l.V += l.Factor[i][CV] * a.V
+		l.HB += l.Factor[i][CHB] * a.HB
+		l.HL += l.Factor[i][CHL] * a.HL
+		l.MB += l.Factor[i][CMB] * a.MB
+		l.ML += l.Factor[i][CML] * a.ML
+		switch {
+		case len(out) == 0:
+		case all:
+			l.LeftOut = append(l.LeftOut, name(acts, tags, i))
+		default:
+			l.LeftOut = append(l.LeftOut, name(acts, tags, i)+" "+strings.Join(out, ", "))
+		}
 	}
 	lead2 := "permanent only"
 	if lead >= 0 {
-		name := acts[lead].Name
-		if name == "" {
-			name = tags[lead]
-		}
-		lead2 = name + " leading"
+		lead2 = name(acts, tags, lead) + " leading"
 	}
 	g := "G sup"
-	if !gsup {
+	switch {
+	case !gsup && supH:
+		g = "G inf on V"
+	case !gsup:
 		g = "G inf"
 	}
 	l.Name = l.Combination + " · " + lead2 + " · " + g
+	if len(l.LeftOut) > 0 {
+		l.Name += " · left out as favourable: " + strings.Join(l.LeftOut, "; ")
+	}
 	return l
+}
+
+// name is the action's name, or its tag where it has none.
+func name(acts []site.Action, tags []string, i int) string {
+	if acts[i].Name == "" {
+		return tags[i]
+	}
+	return acts[i].Name
 }
 
 // Tags returns the first word of each action's name reduced to ASCII
@@ -164,11 +286,12 @@ func Tags(acts []site.Action) []string {
 
 // PsiDefaulted lists the names of variable actions that give no ψ0 and
 // so take the approach's default when not leading (only where there is
-// more than one variable action, since a lone one always leads).
+// more than one variable action, since a lone one always leads; one
+// marked favourable is never in a load and does not count).
 func PsiDefaulted(acts []site.Action) []string {
 	var vars, out []string
 	for _, a := range acts {
-		if a.Kind == site.Variable {
+		if a.Kind == site.Variable && !a.Favourable {
 			vars = append(vars, a.Name)
 			if !a.Psi0.Set {
 				out = append(out, a.Name)
@@ -186,41 +309,66 @@ var (
 	refA3   = trace.Ref{Source: trace.EN1997, Clause: "Annex A, Table A.3"}
 	refPsi  = trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1 (ψ0)"}
 	refComb = trace.Ref{Source: trace.EN1990, Clause: "6.4.3.2, eq. (6.10)"}
+	refFav  = trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.2(B) note; 6.4.3.2(3)"}
 )
 
+// gammaSym is the symbol of the factor of a use.
+var gammaSym = [...]string{Out: "", GSup: "gamma_G_sup", GInf: "gamma_G_inf", Q: "gamma_Q"}
+
 // Record appends the working of l to t under case name cas: the partial
-// factors used, the ψ0 of non-leading variable actions, and the design
-// values V_d, H_B_d, H_L_d, M_B_d, M_L_d. unitF and unitM are the display
-// units of forces and moments ("kN", "kNm"; "kN/m", "kNm/m" for a strip).
+// factors used, what was left out as favourable (γ_Q = 0) and what of a
+// split action stayed, the ψ0 of non-leading variable actions, and the
+// design values V_d, H_B_d, H_L_d, M_B_d, M_L_d. unitF and unitM are the
+// display units of forces and moments ("kN", "kNm"; "kN/m", "kNm/m" for
+// a strip).
 func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM string) {
 	tags := Tags(acts)
-	var usedSup, usedInf, usedQ bool
-	for i, a := range acts {
-		if l.Gamma[i] == 0 {
-			continue
-		}
-		if a.Kind == site.Permanent {
-			if a.Favourable || !l.GSup {
-				usedInf = true
-			} else {
-				usedSup = true
-			}
-		} else {
-			usedQ = true
+	var used [4]bool
+	for i := range acts {
+		for k := range NComp {
+			used[l.Use[i][k]] = true
 		}
 	}
 	as := l.Set.Actions
-	if usedSup {
+	if used[GSup] {
 		t.Add(trace.Step{Symbol: "gamma_G_sup", Value: as.GammaGSup, Ref: refA3, Note: "partial factor, permanent unfavourable (" + as.Name + ")", Case: cas})
 	}
-	if usedInf {
+	if used[GInf] {
 		t.Add(trace.Step{Symbol: "gamma_G_inf", Value: as.GammaGInf, Ref: refA3, Note: "partial factor, permanent favourable (" + as.Name + ")", Case: cas})
 	}
-	if usedQ {
+	if used[Q] {
 		t.Add(trace.Step{Symbol: "gamma_Q", Value: as.GammaQ, Ref: refA3, Note: "partial factor, variable unfavourable (" + as.Name + ")", Case: cas})
 	}
+	if len(l.LeftOut) > 0 {
+		var parts []string
+		for i, a := range acts {
+			var out, in []string
+			for k := range NComp {
+				if a.Kind != site.Variable || Comp(a, k) == 0 {
+					continue
+				}
+				if l.Use[i][k] == Out {
+					out = append(out, CompNames[k])
+				} else {
+					in = append(in, CompNames[k])
+				}
+			}
+			if len(out) == 0 {
+				continue
+			}
+			p := name(acts, tags, i) + " " + strings.Join(out, ", ")
+			if a.Favourable {
+				p += " (marked favourable)"
+			}
+			if len(in) > 0 {
+				p += " (split: its " + strings.Join(in, ", ") + " at γ_Q)"
+			}
+			parts = append(parts, p)
+		}
+		t.Add(trace.Step{Symbol: "gamma_Q_inf", Value: 0, Ref: refFav, Note: "variable effects favourable here, left out: " + strings.Join(parts, "; "), Case: cas})
+	}
 	for i, a := range acts {
-		if a.Kind == site.Variable && l.Gamma[i] != 0 && i != l.Leading {
+		if a.Kind == site.Variable && l.uses(i, Q) && i != l.Leading {
 			note := "combination factor of " + a.Name
 			if !a.Psi0.Set {
 				note += " (not given: default)"
@@ -228,51 +376,50 @@ func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM strin
 			t.Add(trace.Step{Symbol: "psi_0_" + tags[i], Value: l.Psi[i], Ref: refPsi, Note: note, Case: cas})
 		}
 	}
-	comp := []struct {
-		sym, k, unit string
-		get          func(site.Action) float64
-		d            float64
-	}{
-		{"V_d", "V_k_", unitF, func(a site.Action) float64 { return a.V }, l.V},
-		{"H_B_d", "H_B_k_", unitF, func(a site.Action) float64 { return a.HB }, l.HB},
-		{"H_L_d", "H_L_k_", unitF, func(a site.Action) float64 { return a.HL }, l.HL},
-		{"M_B_d", "M_B_k_", unitM, func(a site.Action) float64 { return a.MB }, l.MB},
-		{"M_L_d", "M_L_k_", unitM, func(a site.Action) float64 { return a.ML }, l.ML},
-	}
-	for _, c := range comp {
+	syms := [NComp]string{"V_d", "H_B_d", "H_L_d", "M_B_d", "M_L_d"}
+	kSyms := [NComp]string{"V_k_", "H_B_k_", "H_L_k_", "M_B_k_", "M_L_k_"}
+	vals := [NComp]float64{l.V, l.HB, l.HL, l.MB, l.ML}
+	for k := range NComp {
+		unit := unitF
+		if k >= CMB {
+			unit = unitM
+		}
 		var f trace.Expr
 		var in []trace.Value
 		for i, a := range acts {
-			v := c.get(a)
-			if l.Gamma[i] == 0 || v == 0 {
+			v := Comp(a, k)
+			u := l.Use[i][k]
+			if u == Out || v == 0 {
 				continue
 			}
-			var g string
-			switch {
-			case a.Kind == site.Permanent && (a.Favourable || !l.GSup):
-				g = "gamma_G_inf"
-			case a.Kind == site.Permanent:
-				g = "gamma_G_sup"
-			default:
-				g = "gamma_Q"
-			}
-			term := trace.Mul(trace.S(g), trace.S(c.k+tags[i]))
-			in = append(in, trace.Value{Symbol: g, V: l.Gamma[i]})
-			if a.Kind == site.Variable && i != l.Leading {
+			g, ks := gammaSym[u], kSyms[k]+tags[i]
+			term := trace.Mul(trace.S(g), trace.S(ks))
+			in = append(in, trace.Value{Symbol: g, V: l.Gamma[i][k]})
+			if u == Q && i != l.Leading {
 				p := "psi_0_" + tags[i]
-				term = trace.Mul(trace.S(g), trace.S(p), trace.S(c.k+tags[i]))
+				term = trace.Mul(trace.S(g), trace.S(p), trace.S(ks))
 				in = append(in, trace.Value{Symbol: p, V: l.Psi[i]})
 			}
-			in = append(in, trace.Value{Symbol: c.k + tags[i], V: v, Unit: c.unit})
+			in = append(in, trace.Value{Symbol: ks, V: v, Unit: unit})
 			if f == nil {
 				f = term
 			} else {
 				f = trace.Add(f, term)
 			}
 		}
-		if f == nil && c.sym != "V_d" {
+		if f == nil && k != CV {
 			continue // a component no action has is left out of the working
 		}
-		t.Add(trace.Step{Symbol: c.sym, Formula: f, Inputs: in, Value: c.d, Unit: c.unit, Ref: refComb, Note: "design action effect", Case: cas})
+		t.Add(trace.Step{Symbol: syms[k], Formula: f, Inputs: in, Value: vals[k], Unit: unit, Ref: refComb, Note: "design action effect", Case: cas})
 	}
+}
+
+// uses reports whether any component of action i enters l as u.
+func (l Load) uses(i int, u Use) bool {
+	for k := range NComp {
+		if l.Use[i][k] == u {
+			return true
+		}
+	}
+	return false
 }

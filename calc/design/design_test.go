@@ -130,8 +130,9 @@ func TestValidateRanges(t *testing.T) {
 // 0.7). Hand calculation of DA1-C1: Q leading, G sup: V = 1.35·1000 +
 // 1.5·400 = 1950; H_B = 1.35·50 + 1.5·0.7·80 = 151.5; W leading, G sup:
 // V = 1350 + 1.5·0.7·400 = 1770, H_B = 67.5 + 120 = 187.5; W leading,
-// G inf (Q left out as favourable): V = 1000, H_B = 50 + 120 = 170,
-// M_B = 100 + 300 = 400.
+// least V (Q left out as favourable, G's V at γ_G,inf, its H_B and M_B
+// unfavourable at γ_G,sup): V = 1000, H_B = 67.5 + 120 = 187.5, M_B =
+// 135 + 300 = 435. In DA1-C2 γ_G,sup = γ_G,inf = 1, so "G inf".
 func TestLoads(t *testing.T) {
 	acts := []site.Action{
 		{Name: "G", V: 1000e3, HB: 50e3, MB: 100e3},
@@ -145,10 +146,10 @@ func TestLoads(t *testing.T) {
 	}{
 		{"DA1-C1 · Imposed leading · G sup", 1950, 151.5, 1.35*100 + 1.5*0.7*200},
 		{"DA1-C1 · Wind leading · G sup", 1770, 187.5, 135 + 300},
-		{"DA1-C1 · Wind leading · G inf", 1000, 170, 400},
+		{"DA1-C1 · Wind leading · G inf on V · left out as favourable: Imposed", 1000, 187.5, 435},
 		{"DA1-C2 · Imposed leading · G sup", 1000 + 1.3*400, 50 + 1.3*0.7*80, 100 + 1.3*0.7*200},
 		{"DA1-C2 · Wind leading · G sup", 1000 + 1.3*0.7*400, 50 + 1.3*80, 100 + 1.3*200},
-		{"DA1-C2 · Wind leading · G inf", 1000, 50 + 1.3*80, 100 + 1.3*200},
+		{"DA1-C2 · Wind leading · G inf · left out as favourable: Imposed", 1000, 50 + 1.3*80, 100 + 1.3*200},
 	}
 	if len(loads) != len(want) {
 		var ns []string

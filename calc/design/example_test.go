@@ -20,10 +20,10 @@ func ExampleLoads() {
 	// Output:
 	// DA1-C1 · Imposed leading · G sup: V_d 1882.5 kN, H_B_d 26.25 kN
 	// DA1-C1 · Wind leading · G sup: V_d 1702.5 kN, H_B_d 52.50 kN
-	// DA1-C1 · Wind leading · G inf: V_d 950.0 kN, H_B_d 52.50 kN
+	// DA1-C1 · Wind leading · G inf on V · left out as favourable: Imposed: V_d 950.0 kN, H_B_d 52.50 kN
 	// DA1-C2 · Imposed leading · G sup: V_d 1470.0 kN, H_B_d 22.75 kN
 	// DA1-C2 · Wind leading · G sup: V_d 1314.0 kN, H_B_d 45.50 kN
-	// DA1-C2 · Wind leading · G inf: V_d 950.0 kN, H_B_d 45.50 kN
+	// DA1-C2 · Wind leading · G inf · left out as favourable: Imposed: V_d 950.0 kN, H_B_d 45.50 kN
 }
 
 func ExampleLoad_Record() {

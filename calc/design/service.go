@@ -2,6 +2,7 @@ package design
 
 import (
 	"fmt"
+	"strings"
 
 	"plinth/calc/site"
 	"plinth/calc/trace"
@@ -57,10 +58,18 @@ var (
 	refPsi2 = trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1 (ψ2)"}
 )
 
+// favourableSLS reports whether a variable action is left out of a
+// serviceability load: marked favourable, or upward (it reduces the
+// settlement; EN 1990:2002 6.5.3 with the rule of 6.4.3.2(3)).
+func favourableSLS(a site.Action) bool {
+	return a.Kind == site.Variable && (a.Favourable || a.V < 0)
+}
+
 // ServiceLoad combines the characteristic vertical actions for a
 // serviceability check and records the working in t (unitF is the force
 // display unit, "kN" or "kN/m"). Only vertical actions enter: settlement
-// is computed for the vertical load. It returns an error for no actions
+// is computed for the vertical load, and a variable action that is
+// upward or marked favourable is left out (with a note). It returns an error for no actions
 // or a combined load that is not downward.
 func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF string) (Service, error) {
 	if len(acts) == 0 {
@@ -74,6 +83,8 @@ func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF str
 			f := 1.0
 			if a.Kind == site.Variable {
 				switch {
+				case favourableSLS(a):
+					f = 0
 				case kind == QuasiPermanent:
 					f = a.Psi2.Or(DefaultPsi2)
 				case i != lead:
@@ -88,10 +99,19 @@ func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF str
 		}
 	}
 	var vars []int
+	var out []string
 	for i, a := range acts {
-		if a.Kind == site.Variable {
+		switch {
+		case a.Kind != site.Variable:
+		case favourableSLS(a):
+			out = append(out, a.Name)
+		default:
 			vars = append(vars, i)
 		}
+	}
+	if len(out) > 0 {
+		t.Warn(trace.Caution{Code: "sls-favourable", Severity: trace.SevNote, Ref: refFav,
+			Message: fmt.Sprintf("Left out of the serviceability load as favourable (upward, or marked favourable): %s.", strings.Join(out, ", "))})
 	}
 	if kind == Characteristic && len(vars) > 0 {
 		for _, i := range vars {

@@ -51,3 +51,33 @@ func TestServiceLoad(t *testing.T) {
 		t.Error("an upward load gave no error")
 	}
 }
+
+// An upward variable action and one marked favourable are left out of
+// the serviceability load, with a note (hand calculation, EN 1990:2002
+// eq. (6.14b) with 6.4.3.2(3)): G = 500 kN, Q = 100 kN, uplift −80 kN,
+// a favourable 30 kN: characteristic 500 + 100 = 600 kN, not 520 kN.
+// Exact.
+func TestServiceLoadFavourable(t *testing.T) {
+	acts := []site.Action{
+		{Name: "Dead", V: 500e3},
+		{Name: "Uplift", Kind: site.Variable, V: -80e3, Psi0: site.Some(0.6), Psi2: site.Some(0)},
+		{Name: "Imposed", Kind: site.Variable, V: 100e3, Psi0: site.Some(0.7), Psi2: site.Some(0.3)},
+		{Name: "Ballast", Kind: site.Variable, V: 30e3, Favourable: true, Psi0: site.Some(0.7), Psi2: site.Some(1)},
+	}
+	for _, c := range []struct {
+		kind design.ServiceKind
+		want float64
+	}{{design.Characteristic, 600e3}, {design.QuasiPermanent, 530e3}} {
+		var tr trace.Trace
+		s, err := design.ServiceLoad(acts, c.kind, &tr, "kN")
+		if err != nil || s.V != c.want {
+			t.Errorf("%v: V = %v, want %v (%v)", c.kind, s.V, c.want, err)
+		}
+		if len(tr.Cautions) != 1 || tr.Cautions[0].Code != "sls-favourable" {
+			t.Errorf("%v: cautions %+v", c.kind, tr.Cautions)
+		}
+		if err := trace.Verify(tr, 1e-9); err != nil {
+			t.Error(err)
+		}
+	}
+}

@@ -20,7 +20,7 @@ var (
 		{name: "M_L", dims: momentDims, what: "moment moving the resultant along L"},
 		{name: "psi_0", dims: []units.Dim{units.None}, what: "combination factor ψ0"},
 		{name: "psi_2", dims: []units.Dim{units.None}, what: "quasi-permanent factor ψ2"},
-		{name: "favourable", text: true, what: "yes for a permanent action that always helps"},
+		{name: "favourable", text: true, what: "yes: always favourable (permanent at γ_G,inf, variable left out); no or empty: decided per effect"},
 		{name: "source", text: true, what: "where the action comes from"},
 	}
 )
@@ -161,15 +161,12 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		switch fav := t.text(i, "favourable"); fav {
 		case "", "no":
 		case "yes":
+			// permanent: γ_G,inf in every combination; variable: left
+			// out (γ_Q = 0) of every combination, named in each case
 			a.Favourable = true
-			if a.Kind == site.Variable {
-				c, _ := t.textCell(i, "favourable")
-				e.errs.Add(c.Span, "only a permanent action can be marked favourable; a favourable variable action is left out")
-				ok = false
-			}
 		default:
 			c, _ := t.textCell(i, "favourable")
-			e.errs.Add(c.Span, "favourable %q: expected yes or no", fav)
+			e.errs.AddHint(c.Span, "yes: always favourable (a permanent action at γ_G,inf, a variable one left out); no or empty: each effect factored by whether it is unfavourable", "favourable %q: expected yes or no", fav)
 			ok = false
 		}
 		for j, y := range row {
