@@ -7,6 +7,7 @@ import (
 	"os"
 	"path/filepath"
 	"strings"
+	"time"
 
 	"plinth/doc/compose"
 	"plinth/doc/pdf"
@@ -96,6 +97,34 @@ func defaultOutput(path string) string {
 	return clean + ".pdf"
 }
 
+// staleAge is how old a temporary file of an earlier render must be for
+// removeStale to take it for the leftover of a killed run rather than a
+// render still under way.
+const staleAge = time.Minute
+
+// removeStale removes the temporary files that a killed render of the
+// same output left in dir (".NAME.pdf.*.tmp", older than staleAge).
+func removeStale(dir, base string) {
+	names, _ := filepath.Glob(filepath.Join(dir, "."+globEscape(base)+".*.tmp"))
+	for _, n := range names {
+		if fi, err := os.Lstat(n); err == nil && fi.Mode().IsRegular() && time.Since(fi.ModTime()) > staleAge {
+			os.Remove(n)
+		}
+	}
+}
+
+// globEscape quotes the characters filepath.Match treats specially.
+func globEscape(s string) string {
+	var b strings.Builder
+	for _, r := range s {
+		if strings.ContainsRune(`*?[\`, r) {
+			b.WriteByte('\\')
+		}
+		b.WriteRune(r)
+	}
+	return b.String()
+}
+
 // writeAtomic writes data to path through a temporary file in the same
 // folder: written, flushed to disk, closed, then renamed over path. On
 // any failure the temporary file is removed and path is left as it was.
@@ -107,6 +136,7 @@ func writeAtomic(path string, data []byte) (err error) {
 	if fi, e := os.Stat(path); e == nil && fi.IsDir() {
 		return fmt.Errorf("cannot write %s: it is a folder", path)
 	}
+	removeStale(dir, base)
 	tmp, err := os.CreateTemp(dir, "."+base+".*.tmp")
 	if err != nil {
 		return fmt.Errorf("cannot write %s: %v", path, describe(err))

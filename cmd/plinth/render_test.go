@@ -8,6 +8,7 @@ import (
 	"plinth/internal/tools"
 	"strings"
 	"testing"
+	"time"
 )
 
 // copyPackage copies the example package into a fresh folder and returns
@@ -208,5 +209,38 @@ func TestRenderWriteErrors(t *testing.T) {
 	_, errs, code := runCmd("render", example, "--json")
 	if code != exitErrors || !strings.Contains(errs, "unknown flag --json") {
 		t.Errorf("render --json: status %d, %q", code, errs)
+	}
+}
+
+// TestRenderRemovesStaleTemp: the temporary file a killed render left
+// beside the output is removed by the next render of the same output; a
+// fresh one (a render under way) is left alone.
+func TestRenderRemovesStaleTemp(t *testing.T) {
+	dir := t.TempDir()
+	o := filepath.Join(dir, "out.pdf")
+	stale := filepath.Join(dir, ".out.pdf.123.tmp")
+	fresh := filepath.Join(dir, ".out.pdf.456.tmp")
+	other := filepath.Join(dir, ".other.pdf.789.tmp")
+	for _, p := range []string{stale, fresh, other} {
+		if err := os.WriteFile(p, []byte("%PDF-half"), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	old := time.Now().Add(-time.Hour)
+	for _, p := range []string{stale, other} {
+		if err := os.Chtimes(p, old, old); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if _, errs, code := runCmd("render", example, "-o", o); code != exitOK {
+		t.Fatalf("status %d\n%s", code, errs)
+	}
+	if l := leftovers(t, dir, "out.pdf", ".out.pdf.456.tmp", ".other.pdf.789.tmp"); len(l) > 0 {
+		t.Errorf("left behind: %v", l)
+	}
+	for _, p := range []string{fresh, other} {
+		if _, err := os.Stat(p); err != nil {
+			t.Errorf("%s was removed: %v", filepath.Base(p), err)
+		}
 	}
 }
