@@ -6,6 +6,7 @@ import (
 	_ "image/jpeg" // image formats accepted
 	_ "image/png"
 	"math"
+	"plinth/doc/media"
 	"strconv"
 	"strings"
 
@@ -205,13 +206,9 @@ func (e *engine) caption(runs []Run, width float64, pos source.Position) (items 
 }
 
 func (e *engine) image(im *Image, width float64) []*piece {
-	cfg, format, err := image.DecodeConfig(bytes.NewReader(im.Data))
-	if err != nil || (format != "png" && format != "jpeg") {
-		e.probs.add(im.Pos, "image is not a PNG or JPEG file")
-		return nil
-	}
-	if cfg.Width == 0 || cfg.Height == 0 {
-		e.probs.add(im.Pos, "image has no pixels")
+	cfg, err := media.Check(im.Data)
+	if err != nil {
+		e.probs.add(im.Pos, "image %v", err)
 		return nil
 	}
 	w := float64(cfg.Width) * 0.75 // 96 px per inch

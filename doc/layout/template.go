@@ -4,9 +4,9 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
-	"image"
 	_ "image/jpeg" // logo formats
 	_ "image/png"
+	"plinth/doc/media"
 	"regexp"
 	"strconv"
 	"strings"
@@ -179,8 +179,8 @@ func LoadTemplate(data []byte, readFile func(path string) ([]byte, error)) (*Tem
 		if err != nil {
 			return nil, fmt.Errorf("page template %s: logo: %v", t.Name, err)
 		}
-		if _, _, err := image.DecodeConfig(bytes.NewReader(b)); err != nil {
-			return nil, fmt.Errorf("page template %s: logo %s is not a PNG or JPEG image: %v", t.Name, lg.Path, err)
+		if _, err := media.Check(b); err != nil {
+			return nil, fmt.Errorf("page template %s: logo %s %v", t.Name, lg.Path, err)
 		}
 		t.Logo = b
 	}

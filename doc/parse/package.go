@@ -5,6 +5,7 @@ import (
 	"io/fs"
 	"net/url"
 	"path/filepath"
+	"plinth/doc/media"
 	"strings"
 	"time"
 
@@ -129,26 +130,46 @@ func (ck *checker) date(s sheet.Str, what string) {
 	}
 }
 
-// file checks that s names a file inside the package folder.
-func (ck *checker) file(s sheet.Str, what, hint string) {
+// image reads a figure the sheet names and checks it is a whole PNG or
+// JPEG of a size plinth accepts (doc/media), so check refuses what render
+// would.
+func (ck *checker) image(s sheet.Str) {
+	data, err := ck.p.ReadInside(unescapePath(s.Value))
+	if err != nil {
+		ck.diags.Add(s.Span, "image %q: %v", s.Value, err)
+		return
+	}
+	if _, err := media.Check(data); err != nil {
+		ck.diags.Add(s.Span, "image %q %v", s.Value, err)
+	}
+}
+
+// unescapePath decodes %-escapes in a path written as a Markdown link target.
+func unescapePath(rel string) string {
+	if strings.Contains(rel, "%") {
+		if u, err := url.PathUnescape(rel); err == nil {
+			return u
+		}
+	}
+	return rel
+}
+
+// file checks that s names a file inside the package folder, and reports
+// whether it does.
+func (ck *checker) file(s sheet.Str, what, hint string) bool {
 	if s.Value == "" {
 		ck.diags.Add(s.Span, "%s: expected a path inside the package folder", what)
-		return
+		return false
 	}
 	if strings.Contains(s.Value, "://") || strings.HasPrefix(s.Value, "data:") {
 		ck.diags.AddHint(s.Span, "copy the file into the package folder and name it by its path there",
 			"%s %q: files load from inside the package folder, not from the web", what, s.Value)
-		return
+		return false
 	}
-	rel := s.Value
-	if strings.Contains(rel, "%") {
-		if u, err := url.PathUnescape(rel); err == nil {
-			rel = u
-		}
-	}
-	_, err := ck.p.Resolve(rel)
+	_, err := ck.p.Resolve(unescapePath(s.Value))
 	switch {
 	case err == nil:
+		return true
 	case errors.Is(err, load.ErrOutside):
 		ck.diags.AddHint(s.Span, "files a sheet names must lie inside the package folder",
 			"%s %q lies outside the package folder", what, s.Value)
@@ -160,6 +181,7 @@ func (ck *checker) file(s sheet.Str, what, hint string) {
 	default:
 		ck.diags.Add(s.Span, "%s %q: %v", what, s.Value, err)
 	}
+	return false
 }
 
 // uses checks that each uses entry names another sheet of the package.
@@ -213,7 +235,9 @@ func (ck *checker) images(blocks []sheet.Block) {
 	for _, b := range blocks {
 		switch b := b.(type) {
 		case *sheet.Image:
-			ck.file(b.Path, "image", "")
+			if ck.file(b.Path, "image", "") {
+				ck.image(b.Path)
+			}
 		case *sheet.List:
 			for _, it := range b.Items {
 				ck.images(it.Blocks)
