@@ -12,6 +12,7 @@ require (
 )
 
 require (
+	github.com/go-fonts/dejavu v0.3.2 // indirect
 	github.com/phpdave11/gofpdi v1.0.14-0.20211212211723-1f10f9844311 // indirect
 	github.com/pkg/errors v0.8.1 // indirect
 )

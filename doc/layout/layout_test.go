@@ -106,7 +106,7 @@ func TestProblems(t *testing.T) {
 		tall = append(tall, eqn.Frac{Num: eqn.Frac{Num: eqn.Num{Text: "1"}, Den: eqn.Num{Text: "2"}}, Den: eqn.Frac{Num: eqn.Num{Text: "3"}, Den: eqn.Num{Text: "4"}}}, eqn.Op{Text: "="})
 	}
 	doc := sheet(
-		para(3, "a missing glyph ⨍ here"),
+		para(3, "a missing glyph 漢 here"),
 		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "dangling", Link: "nowhere"}}},
 		&layout.Anchor{Pos: at(5), Name: "twice"},
 		&layout.Anchor{Pos: at(6), Name: "twice"},
@@ -120,7 +120,7 @@ func TestProblems(t *testing.T) {
 		t.Fatalf("want Problems, got %v", err)
 	}
 	want := []string{
-		`s.md:3:1: character '⨍' (U+2A0D) in "a missing glyph ⨍ here" is not in font Go Regular`,
+		`s.md:3:1: character '漢' (U+6F22) in "a missing glyph 漢 here" is not in font DejaVu Serif`,
 		`s.md:4:1: link to "nowhere", which is not an anchor in this document`,
 		`s.md:6:1: anchor "twice" is defined twice (first at s.md:5:1)`,
 		`s.md:7:1: this calculation line is`,
