@@ -195,3 +195,43 @@ func TestLongWordBreaks(t *testing.T) {
 		}
 	}
 }
+
+// TestOwnText: plinth's own text is spelled for the fonts (⅔ as 2/3), and
+// a character still missing is an internal error of plinth with no
+// position of the user's, while the same character in the user's text is
+// an error at the user's line.
+func TestOwnText(t *testing.T) {
+	doc := sheet(
+		&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}},
+		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "engine 漢", Own: true}}},
+		para(5, "user 漢"),
+	)
+	_, err := layout.Document(doc)
+	var ps layout.Problems
+	if !errors.As(err, &ps) || len(ps) != 2 {
+		t.Fatalf("want 2 problems, got %v", err)
+	}
+	if p := ps[0]; p.Pos.Path != "" || !strings.Contains(p.Msg, "internal error in plinth") || !strings.Contains(p.Msg, "s.md:4:1") {
+		t.Errorf("own text problem = %q at %v", p.Msg, p.Pos)
+	}
+	if p := ps[1]; p.Pos.Line != 5 || strings.Contains(p.Msg, "plinth") {
+		t.Errorf("user text problem = %q at %v", p.Msg, p.Pos)
+	}
+	pages, err := layout.Document(sheet(&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var text []string
+	for _, b := range pages.Pages[0].Boxes {
+		b.Walk(func(b *layout.Box) {
+			for _, it := range b.Items {
+				if x, ok := it.(draw.Text); ok {
+					text = append(text, x.Text)
+				}
+			}
+		})
+	}
+	if s := strings.Join(text, " "); !strings.Contains(s, "2/3c") || strings.Contains(s, "⅔") {
+		t.Errorf("own text set as %q", s)
+	}
+}

@@ -86,6 +86,12 @@ type Run struct {
 	Shift Shift
 	Link  string   // name of the anchor this run links to; "" = none
 	Math  eqn.Node // inline formula; replaces Text
+	// Own marks text plinth wrote (engine notes, cautions, references,
+	// fixed wording) rather than the user. It is spelled with
+	// fonts.Spell (⅔ as 2/3); a character still missing from the fonts
+	// is plinth's defect, reported as an internal error that names
+	// plinth, never at the user's line.
+	Own bool
 }
 
 // Align is a table column's alignment.

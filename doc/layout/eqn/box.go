@@ -467,7 +467,14 @@ func (c *ctx) fn(f Func) *Box {
 	if nm == "log10" {
 		nm, sub = "log", Num{"10"}
 	}
-	name := c.text(nm, c.face(false))
+	var name *Box
+	if strings.ContainsAny(nm, "_'") && f.Sup == nil && sub == nil {
+		// a function named in sheet notation (T_v, the time factor as a
+		// function of U) is set as its symbol
+		name = c.layout(Sym{Name: nm})
+	} else {
+		name = c.text(nm, c.face(false))
+	}
 	b.place(name, 0, 0)
 	if f.Sup != nil || sub != nil {
 		sc := c.script()

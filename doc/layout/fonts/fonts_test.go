@@ -52,3 +52,19 @@ func TestInk(t *testing.T) {
 	}
 	t.Logf("asc %.2f desc %.2f cap %.2f x %.2f", f.Ascent(10), f.Descent(10), f.CapHeight(10), f.XHeight(10))
 }
+
+func TestSpell(t *testing.T) {
+	for _, c := range []struct{ in, want string }{
+		{"c* = ⅔c", "c* = 2/3c"}, // vulgar fractions always, every face has them or not
+		{"½ and ¾", "1/2 and 3/4"},
+		{"σ′ ≤ 3 m²", "σ′ ≤ 3 m²"}, // in the face: kept
+		{"漢", "漢"},                 // no spelling: left for the caller to report
+	} {
+		if got := fonts.Spell(c.in, fonts.Regular); got != c.want {
+			t.Errorf("Spell(%q) = %q, want %q", c.in, got, c.want)
+		}
+	}
+	if got := fonts.Spell("x′²", fonts.Math); got != "x′^2" {
+		t.Errorf("Spell in the math face = %q", got)
+	}
+}
