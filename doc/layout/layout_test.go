@@ -205,16 +205,19 @@ func TestOwnText(t *testing.T) {
 		&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}},
 		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "engine 漢", Own: true}}},
 		para(5, "user 漢"),
+		&layout.Statement{Pos: at(6), Symbol: eqn.Sym{Name: "x"}, Expr: eqn.Text{Text: "漢"}, Own: true},
 	)
 	_, err := layout.Document(doc)
 	var ps layout.Problems
-	if !errors.As(err, &ps) || len(ps) != 2 {
-		t.Fatalf("want 2 problems, got %v", err)
+	if !errors.As(err, &ps) || len(ps) != 3 {
+		t.Fatalf("want 3 problems, got %v", err)
 	}
-	if p := ps[0]; p.Pos.Path != "" || !strings.Contains(p.Msg, "internal error in plinth") || !strings.Contains(p.Msg, "s.md:4:1") {
-		t.Errorf("own text problem = %q at %v", p.Msg, p.Pos)
+	for i, line := range []string{"s.md:6:1", "s.md:4:1"} { // sorted by message
+		if p := ps[i]; p.Pos.Path != "" || !strings.Contains(p.Msg, "internal error in plinth") || !strings.Contains(p.Msg, line) {
+			t.Errorf("own text problem %d = %q at %v", i, p.Msg, p.Pos)
+		}
 	}
-	if p := ps[1]; p.Pos.Line != 5 || strings.Contains(p.Msg, "plinth") {
+	if p := ps[2]; p.Pos.Line != 5 || strings.Contains(p.Msg, "plinth") {
 		t.Errorf("user text problem = %q at %v", p.Msg, p.Pos)
 	}
 	pages, err := layout.Document(sheet(&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}}))

@@ -182,6 +182,7 @@ type Statement struct {
 	Note   []Run
 	Ref    string // a reference, printed after the note
 	Anchor string // optional anchor name
+	Own    bool   // plinth's own line (an engine step): see Run.Own
 }
 
 // Input is a given value: Symbol = Value, with its note and reference.
@@ -192,6 +193,7 @@ type Input struct {
 	Note   []Run
 	Ref    string
 	Anchor string
+	Own    bool // plinth's own line (an engine step): see Run.Own
 }
 
 // Check is a design check: both sides with values, the comparison, the

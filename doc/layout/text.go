@@ -94,7 +94,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 		if r.Math != nil {
 			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color})
 			if err != nil {
-				e.probs.add(pos, "%v", err)
+				e.mathProblem(pos, r.Own, err)
 				continue
 			}
 			cur.frags = append(cur.frags, frag{math: b, w: b.W, size: st.size, link: r.Link, color: color})
@@ -198,6 +198,20 @@ func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) strin
 		}
 		return -1
 	}, s)
+}
+
+// mathProblem reports a formula that cannot be set: at pos, or, for
+// plinth's own formula, as an internal error of plinth.
+func (e *engine) mathProblem(pos source.Position, own bool, err error) {
+	if !own {
+		e.probs.add(pos, "%v", err)
+		return
+	}
+	where := ""
+	if p := pos.String(); p != "" {
+		where = " (in the printout of " + p + ")"
+	}
+	e.probs.add(source.Position{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
 }
 
 // excerpt is up to 40 characters of s around the first r.
