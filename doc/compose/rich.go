@@ -5,13 +5,15 @@ import (
 	"unicode"
 	"unicode/utf8"
 
+	"plinth/doc/expr"
 	"plinth/doc/layout"
 	"plinth/doc/layout/eqn"
 )
 
 // richText sets running text, printing each short symbol written in sheet
-// notation — a base of one or two letters, optional primes, "_" and a
-// subscript: c_u, N_γ, σ′_v0, q_2, V_d — as math (subscript lowered,
+// notation — a base of one or two letters or a Greek name, optional
+// primes, "_" and a subscript (c_u, N_γ, σ′_v0, q_2, V_d, gamma_w), or a
+// base with ASCII primes (E', phi') — as math (subscript lowered,
 // Greek and primes as the sheet notation prints them). Longer words with
 // underscores (local_shear, self_weight: option words of the sheet
 // language) print in the code face, as written. The runs are
@@ -75,17 +77,21 @@ func wordRune(r rune) bool {
 // returns it with primes written as '.
 func notation(w string) (string, bool) {
 	base, sub, ok := strings.Cut(w, "_")
-	if !ok || sub == "" || strings.HasSuffix(sub, "_") {
-		return "", false
-	}
 	letters := strings.TrimRight(base, "'′")
-	if n := utf8.RuneCountInString(letters); n < 1 || n > 2 {
+	_, greek := expr.Greek(letters)
+	if n := utf8.RuneCountInString(letters); !greek && (n < 1 || n > 2) {
 		return "", false
 	}
 	for _, r := range letters {
 		if !unicode.IsLetter(r) {
 			return "", false
 		}
+	}
+	if !ok && strings.HasSuffix(w, "'") && strings.TrimRight(w, "'") == letters {
+		return w, true // a primed symbol: E', phi'
+	}
+	if !ok || sub == "" || strings.HasSuffix(sub, "_") {
+		return "", false
 	}
 	if utf8.RuneCountInString(strings.TrimRight(sub, "'′")) > 8 {
 		return "", false
