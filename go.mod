@@ -4,6 +4,7 @@ go 1.26.0
 
 require (
 	github.com/Knetic/govaluate v3.0.0+incompatible
+	github.com/go-fonts/dejavu v0.3.2
 	github.com/signintech/gopdf v0.38.1
 	github.com/yuin/goldmark v1.8.7
 	go.yaml.in/yaml/v3 v3.0.6

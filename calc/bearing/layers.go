@@ -137,7 +137,7 @@ func (c *calc) localShear() {
 	switch c.opt.LocalShear {
 	case Yes:
 		c.local = true
-		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used for "+ln+".")
+		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used for "+ln+".")
 	case No:
 		if loose {
 			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
@@ -146,7 +146,7 @@ func (c *calc) localShear() {
 		switch {
 		case loose:
 			c.local = true
-			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used.", why, ln, looseWord), vals...)
+			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used.", why, ln, looseWord), vals...)
 			c.t.Cite(ref.Source)
 		case trans:
 			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)

@@ -101,7 +101,7 @@ func TestErrors(t *testing.T) {
 		{"Min above Max", chart.Chart{W: 300, H: 200, Y: chart.Axis{Min: chart.At(3), Max: chart.At(1)}, Series: []chart.Series{ok}}, "Y axis: Min = 3 must be less than Max = 1"},
 		{"region backwards", chart.Chart{W: 300, H: 200, Series: []chart.Series{ok}, Regions: []chart.Region{{From: 2, To: 1}}}, "From = 2 must be less than To = 1"},
 		{"too small", chart.Chart{W: 60, H: 200, Series: []chart.Series{ok}}, "too small for its labels"},
-		{"missing glyph", chart.Chart{W: 300, H: 200, Title: "a ⨍ b", Series: []chart.Series{ok}}, "which the fonts lack"},
+		{"missing glyph", chart.Chart{W: 300, H: 200, Title: "a 漢 b", Series: []chart.Series{ok}}, "which the fonts lack"},
 		{"label too long", chart.Chart{W: 120, H: 100, X: chart.Axis{Title: strings.Repeat("long ", 10)}, Series: []chart.Series{ok}}, "is 1"},
 		{"bad style", chart.Chart{W: 300, H: 200, Series: []chart.Series{{X: pts, Y: pts, Style: 9}}}, "must be one of the package's constants"},
 	} {

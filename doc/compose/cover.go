@@ -42,8 +42,19 @@ func (c *composer) matterSheet(title, anchor string) layout.Sheet {
 		Blocks: []layout.Block{&layout.Anchor{Pos: p, Name: anchor}}}
 }
 
-func txt(s string) layout.Run  { return layout.Run{Text: s} }
-func bold(s string) layout.Run { return layout.Run{Text: s, Style: layout.Bold} }
+// txt and bold are plinth's own wording (layout.Run.Own); user and
+// userBold carry the user's text (titles, names, fields), whose
+// characters are checked against the fonts at the user's line.
+func txt(s string) layout.Run      { return layout.Run{Text: s, Own: true} }
+func bold(s string) layout.Run     { return layout.Run{Text: s, Style: layout.Bold, Own: true} }
+func user(s string) layout.Run     { return layout.Run{Text: s} }
+func userBold(s string) layout.Run { return layout.Run{Text: s, Style: layout.Bold} }
+func users(rs []layout.Run) []layout.Run {
+	for i := range rs {
+		rs[i].Own = false
+	}
+	return rs
+}
 func cell(runs ...layout.Run) layout.Cell {
 	return layout.Cell(runs)
 }
@@ -91,7 +102,7 @@ func (c *composer) cover() layout.Sheet {
 	if m.Project.Value != "" {
 		title = m.Project.Value
 	}
-	add(&layout.Heading{Pos: p, Level: 1, NoNumber: true, Runs: []layout.Run{txt(title)}})
+	add(&layout.Heading{Pos: p, Level: 1, NoNumber: true, Runs: []layout.Run{user(title)}})
 	data := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Package")), nil}}
 	row := func(k string, v ...layout.Run) {
 		if len(v) == 0 || len(v) == 1 && v[0].Text == "" && v[0].Math == nil {
@@ -100,9 +111,9 @@ func (c *composer) cover() layout.Sheet {
 		k = strings.ReplaceAll(k, " ", "\u00a0") // keys do not wrap
 		data.Rows = append(data.Rows, layout.Row{Pos: p, Cells: []layout.Cell{cell(txt(k)), cell(v...)}})
 	}
-	row("Project", bold(m.Project.Value))
-	row("Job no.", txt(m.Job.Value))
-	row("Client", txt(m.Client.Value))
+	row("Project", userBold(m.Project.Value))
+	row("Job no.", user(m.Job.Value))
+	row("Client", user(m.Client.Value))
 	row("Sheets", txt(fmt.Sprintf("%s; numbered across the whole package, this cover included", plural(len(c.res.Sheets), "calculation sheet"))))
 	if len(c.res.Context) > 0 {
 		var names []string
@@ -111,18 +122,18 @@ func (c *composer) cover() layout.Sheet {
 		}
 		row("Context", txt(strings.Join(names, ", ")+": used by this sheet, evaluated as they stand in its folder but not printed here (their inputs enter the fingerprint); the package's own issue prints them"))
 	}
-	row("Designed by", txt(m.By.Value))
+	row("Designed by", user(m.By.Value))
 	if strings.TrimSpace(m.Checked.Value) == "" {
 		row("Checked by", bold("NOT CHECKED"))
 	} else {
-		row("Checked by", txt(strings.TrimSpace(m.Checked.Value+"  "+m.CheckedDate.Value)))
+		row("Checked by", user(strings.TrimSpace(m.Checked.Value+"  "+m.CheckedDate.Value)))
 	}
 	if r, ok := latest(m.Revisions); ok {
-		row("Current revision", txt(strings.TrimSpace(r.Rev.Value+"  "+r.Date.Value+"  "+r.Note.Value)))
+		row("Current revision", user(strings.TrimSpace(r.Rev.Value+"  "+r.Date.Value+"  "+r.Note.Value)))
 	}
-	row("Page template", txt(c.tpl.Name))
-	row("National annex", txt(m.NationalAnnex.Value))
-	row("Partial factors", txt(m.Factors.Value))
+	row("Page template", user(c.tpl.Name))
+	row("National annex", user(m.NationalAnnex.Value))
+	row("Partial factors", user(m.Factors.Value))
 	row("Input fingerprint", layout.Run{Text: c.res.Fingerprint(), Style: layout.Mono})
 	if c.res.Variant() {
 		var list []string
@@ -163,7 +174,7 @@ func (c *composer) cover() layout.Sheet {
 		rh := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Rev")), cell(txt("Date")), cell(txt("By")), cell(txt("Checked")), cell(txt("Description"))}}
 		for _, r := range m.Revisions {
 			rh.Rows = append(rh.Rows, layout.Row{Pos: pos(r.Span), Cells: []layout.Cell{
-				cell(txt(r.Rev.Value)), cell(txt(r.Date.Value)), cell(txt(r.By.Value)), cell(txt(r.Checked.Value)), cell(txt(r.Note.Value)),
+				cell(user(r.Rev.Value)), cell(user(r.Date.Value)), cell(user(r.By.Value)), cell(user(r.Checked.Value)), cell(user(r.Note.Value)),
 			}})
 		}
 		add(rh)

@@ -66,9 +66,9 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	}
 	res := siNode(st.Value, st.Unit)
 	if st.Formula == nil {
-		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note}
+		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
-	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note}
+	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note, Own: true}
 	if _, lone := st.Formula.(trace.Sym); !lone && len(st.Inputs) > 0 {
 		vals := map[string]trace.Value{}
 		for _, in := range st.Inputs {
@@ -89,7 +89,7 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 				if i > 0 {
 					stmt.Note = append(stmt.Note, txt(", "))
 				}
-				stmt.Note = append(stmt.Note, layout.Run{Math: eqn.Row{eqn.Sym{Name: in.Symbol}, eqn.Op{Text: "="}, siNode(in.V, in.Unit)}})
+				stmt.Note = append(stmt.Note, layout.Run{Math: eqn.Row{eqn.Sym{Name: in.Symbol}, eqn.Op{Text: "="}, siNode(in.V, in.Unit)}, Own: true})
 			}
 		}
 	}

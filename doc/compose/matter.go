@@ -157,7 +157,11 @@ func (c *composer) references() layout.Sheet {
 		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("No references are cited or listed.")}})
 	}
 	for _, r := range c.refs.list {
-		runs := []layout.Run{bold(fmt.Sprintf("[%d]", r.n)), txt("  " + r.text)}
+		text := user("  " + r.text) // the package's own references are the user's text
+		if r.engine {
+			text = txt(text.Text)
+		}
+		runs := []layout.Run{bold(fmt.Sprintf("[%d]", r.n)), text}
 		if r.engine {
 			runs = append(runs, layout.Run{Text: "  (method)", Style: layout.Italic})
 		} else {

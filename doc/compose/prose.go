@@ -118,7 +118,7 @@ func (c *composer) inlines(s *eval.Sheet, in []sheet.Inline) []layout.Run {
 			if st := c.style(x.Style); st == layout.Mono {
 				out = append(out, layout.Run{Text: x.Value, Style: st})
 			} else {
-				out = append(out, richText(x.Value, st)...)
+				out = append(out, users(richText(x.Value, st))...)
 			}
 		case *sheet.Break:
 			if x.Hard {
@@ -140,7 +140,7 @@ func (c *composer) inlines(s *eval.Sheet, in []sheet.Inline) []layout.Run {
 			out = append(out, layout.Run{Math: valueNode(y.Q, it.Unit, dec)})
 		case *sheet.Cite:
 			if r := c.sheetRef(s, x.Key.Value, true); r != nil {
-				out = append(out, c.citeRun(r, ""))
+				out = append(out, c.citeRun(r))
 			} else {
 				out = append(out, layout.Run{Text: "[" + x.Key.Value + "]"})
 			}

@@ -58,16 +58,24 @@ func (c *composer) engineRef(src trace.Source) *ref {
 }
 
 // citeRun prints a citation of r: "[n]", linked to the list.
-func (c *composer) citeRun(r *ref, clause string) layout.Run {
-	text := fmt.Sprintf("[%d]", r.n)
+func (c *composer) citeRun(r *ref) layout.Run {
+	return c.cite(r, "")[0]
+}
+
+// cite prints a citation of r, "[n]" or "[n, clause]", linked to the
+// list; symbols in the clause (C_1, m_v) are typeset as in formulas.
+func (c *composer) cite(r *ref, clause string) []layout.Run {
+	out := []layout.Run{txt(fmt.Sprintf("[%d]", r.n))}
 	if clause != "" {
-		text = fmt.Sprintf("[%d, %s]", r.n, clause)
+		out = append([]layout.Run{txt(fmt.Sprintf("[%d, ", r.n))}, richText(clause, layout.Regular)...)
+		out = append(out, txt("]"))
 	}
-	run := layout.Run{Text: text}
 	if c.refs.linked {
-		run.Link = r.anchor()
+		for i := range out {
+			out[i].Link = r.anchor()
+		}
 	}
-	return run
+	return out
 }
 
 // noteRuns prints a note, its [KEY] citations as numbered references.
@@ -95,7 +103,7 @@ func (c *composer) citedText(s *eval.Sheet, note sheet.Str, style layout.Style) 
 		if i > at {
 			out = append(out, layout.Run{Text: v[at:i], Style: style})
 		}
-		out = append(out, c.citeRun(r, ""))
+		out = append(out, c.citeRun(r))
 		at = j
 	}
 	if at < len(v) {
@@ -109,7 +117,7 @@ func (c *composer) stepRef(r trace.Ref) []layout.Run {
 	if r.Source.Key == "" {
 		return nil
 	}
-	return []layout.Run{c.citeRun(c.engineRef(r.Source), r.Clause)}
+	return c.cite(c.engineRef(r.Source), r.Clause)
 }
 
 // uncited adds the package's references never cited, in the order

@@ -5,21 +5,25 @@ import (
 	"unicode"
 	"unicode/utf8"
 
+	"plinth/doc/expr"
 	"plinth/doc/layout"
 	"plinth/doc/layout/eqn"
 )
 
 // richText sets running text, printing each short symbol written in sheet
-// notation — a base of one or two letters, optional primes, "_" and a
-// subscript: c_u, N_γ, σ′_v0, q_2, V_d — as math (subscript lowered,
+// notation — a base of one or two letters or a Greek name, optional
+// primes, "_" and a subscript (c_u, N_γ, σ′_v0, q_2, V_d, gamma_w), or a
+// base with ASCII primes (E', phi') — as math (subscript lowered,
 // Greek and primes as the sheet notation prints them). Longer words with
-// underscores (local_shear, self_weight) stay as they are.
+// underscores (local_shear, self_weight: option words of the sheet
+// language) print in the code face, as written. The runs are
+// plinth's own text (layout.Run.Own); wrap the user's text in users.
 func richText(s string, style layout.Style) []layout.Run {
 	var out []layout.Run
 	plain := 0
 	flush := func(end int) {
 		if end > plain {
-			out = append(out, layout.Run{Text: s[plain:end], Style: style})
+			out = append(out, layout.Run{Text: s[plain:end], Style: style, Own: true})
 		}
 	}
 	for i := 0; i < len(s); {
@@ -38,13 +42,31 @@ func richText(s string, style layout.Style) []layout.Run {
 		}
 		if name, ok := notation(s[i:j]); ok {
 			flush(i)
-			out = append(out, layout.Run{Math: eqn.Sym{Name: name}})
+			out = append(out, layout.Run{Math: eqn.Sym{Name: name}, Own: true})
+			plain = j
+		} else if word(s[i:j]) {
+			flush(i)
+			out = append(out, layout.Run{Text: s[i:j], Style: layout.Mono, Own: true})
 			plain = j
 		}
 		i = j
 	}
 	flush(len(s))
 	return out
+}
+
+// word reports whether w is an option word of the sheet language: lower
+// case letters and digits joined by "_" (local_shear, two_layer).
+func word(w string) bool {
+	if !strings.Contains(w, "_") || strings.HasPrefix(w, "_") || strings.HasSuffix(w, "_") {
+		return false
+	}
+	for _, r := range w {
+		if !(r >= 'a' && r <= 'z' || r >= '0' && r <= '9' || r == '_') {
+			return false
+		}
+	}
+	return true
 }
 
 func wordRune(r rune) bool {
@@ -55,17 +77,21 @@ func wordRune(r rune) bool {
 // returns it with primes written as '.
 func notation(w string) (string, bool) {
 	base, sub, ok := strings.Cut(w, "_")
-	if !ok || sub == "" || strings.HasSuffix(sub, "_") {
-		return "", false
-	}
 	letters := strings.TrimRight(base, "'′")
-	if n := utf8.RuneCountInString(letters); n < 1 || n > 2 {
+	_, greek := expr.Greek(letters)
+	if n := utf8.RuneCountInString(letters); !greek && (n < 1 || n > 2) {
 		return "", false
 	}
 	for _, r := range letters {
 		if !unicode.IsLetter(r) {
 			return "", false
 		}
+	}
+	if !ok && strings.HasSuffix(w, "'") && strings.TrimRight(w, "'") == letters {
+		return w, true // a primed symbol: E', phi'
+	}
+	if !ok || sub == "" || strings.HasSuffix(sub, "_") {
+		return "", false
 	}
 	if utf8.RuneCountInString(strings.TrimRight(sub, "'′")) > 8 {
 		return "", false

@@ -122,7 +122,7 @@ func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
 		Caption: []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles.", r.Point))}}
 	for i, sl := range r.Sub {
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(fmt.Sprint(i + 1))}, {txt(sl.Name)}, {txt(f(sl.Z, mU))}, {txt(f(sl.H, mU))}, {txt(f(sl.SigmaV0Eff, kPa))},
+			{txt(fmt.Sprint(i + 1))}, {user(sl.Name)}, {txt(f(sl.Z, mU))}, {txt(f(sl.H, mU))}, {txt(f(sl.SigmaV0Eff, kPa))},
 			{txt(f(sl.DSigma, kPa))}, {txt(f(sl.SigmaF, kPa))}, richText(orDefault(sl.Case, "—"), layout.Regular), {txt(f(sl.Si, mm))}, {txt(f(sl.Sc, mm))},
 		}})
 	}
@@ -147,12 +147,12 @@ func (c *composer) layerTable(o *engineOut, r *settle.Result) *layout.Table {
 		if l.Consol != "" {
 			how = strings.TrimSpace(how + " " + l.Consol)
 		}
-		name := l.Name
+		name := layout.Cell{user(l.Name)}
 		if how != "" {
-			name += " (" + how + ")"
+			name = append(name, richText(" ("+how+")", layout.Regular)...)
 		}
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(name)}, {txt(f(l.Top, mU) + "–" + f(l.Bot, mU))}, {txt(fmt.Sprint(l.Sublayers))}, {txt(f(l.Si, mm))},
+			name, {txt(f(l.Top, mU) + "–" + f(l.Bot, mU))}, {txt(fmt.Sprint(l.Sublayers))}, {txt(f(l.Si, mm))},
 			{txt(f(l.SOed, mm))}, {txt(f(l.Mu, units.Dimensionless))}, {txt(f(l.Sc, mm))}, {txt(f(l.Ssec, mm))},
 			{txt(opt(l.T50.Set, l.T50.V, yr))}, {txt(opt(l.T90.Set, l.T90.V, yr))},
 		}})

@@ -27,7 +27,7 @@ func (e *engine) statement(s *Statement, width float64) []*piece {
 		e.probs.add(s.Pos, "statement has no symbol")
 		return nil
 	}
-	return e.calcLine("statement", s.Pos, row, noteRuns(s.Note, s.Ref), s.Anchor, width)
+	return e.calcLine("statement", s.Pos, s.Own, row, noteRuns(s.Note, s.Ref), s.Anchor, width)
 }
 
 func (e *engine) input(in *Input, width float64) []*piece {
@@ -36,7 +36,7 @@ func (e *engine) input(in *Input, width float64) []*piece {
 		return nil
 	}
 	row := eqn.Row{in.Symbol, eqn.Op{Text: "="}, in.Value}
-	return e.calcLine("input", in.Pos, row, noteRuns(in.Note, in.Ref), in.Anchor, width)
+	return e.calcLine("input", in.Pos, in.Own, row, noteRuns(in.Note, in.Ref), in.Anchor, width)
 }
 
 // noteRuns appends a reference to a note, in brackets.
@@ -64,12 +64,12 @@ type formula struct {
 }
 
 // stackFormula breaks row to width and stacks the lines.
-// The items are moved by (dx, dy).
-func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position) (formula, bool) {
+// The items are moved by (dx, dy); own marks plinth's own formula.
+func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position, own bool) (formula, bool) {
 	st := eqn.Style{Size: bodySize, Color: ink}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
-		e.probs.add(pos, "%v", err)
+		e.mathProblem(pos, own, err)
 		return formula{}, false
 	}
 	f := formula{lines: len(lines)}
@@ -93,7 +93,7 @@ func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Po
 
 // calcLine lays out a formula with its note beside it (right column), or
 // below it when the formula needs the whole width.
-func (e *engine) calcLine(kind string, pos source.Position, row eqn.Row, note []Run, anchor string, width float64) []*piece {
+func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
 	noteW := math.Min(0.34*width, 185)
 	const gap = 14.0
 	eqW := width
@@ -101,13 +101,13 @@ func (e *engine) calcLine(kind string, pos source.Position, row eqn.Row, note []
 		eqW = width - noteW - gap
 	}
 	const pad = 1.5
-	f, ok := e.stackFormula(row, eqW, 0, pad, pos)
+	f, ok := e.stackFormula(row, eqW, 0, pad, pos, own)
 	if !ok {
 		return nil
 	}
 	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
 	if !beside {
-		if f, ok = e.stackFormula(row, width, 0, pad, pos); !ok {
+		if f, ok = e.stackFormula(row, width, 0, pad, pos, own); !ok {
 			return nil
 		}
 	}
@@ -160,7 +160,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 		row = append(row, eqn.Op{Text: "="}, c.RightValue)
 	}
 	const verdictW, pad = 128.0, 4.0
-	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos)
+	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos, false)
 	if !ok {
 		return nil
 	}

@@ -106,7 +106,7 @@ func TestProblems(t *testing.T) {
 		tall = append(tall, eqn.Frac{Num: eqn.Frac{Num: eqn.Num{Text: "1"}, Den: eqn.Num{Text: "2"}}, Den: eqn.Frac{Num: eqn.Num{Text: "3"}, Den: eqn.Num{Text: "4"}}}, eqn.Op{Text: "="})
 	}
 	doc := sheet(
-		para(3, "a missing glyph ⨍ here"),
+		para(3, "a missing glyph 漢 here"),
 		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "dangling", Link: "nowhere"}}},
 		&layout.Anchor{Pos: at(5), Name: "twice"},
 		&layout.Anchor{Pos: at(6), Name: "twice"},
@@ -120,7 +120,7 @@ func TestProblems(t *testing.T) {
 		t.Fatalf("want Problems, got %v", err)
 	}
 	want := []string{
-		`s.md:3:1: character '⨍' (U+2A0D) in "a missing glyph ⨍ here" is not in font Go Regular`,
+		`s.md:3:1: character '漢' (U+6F22) in "a missing glyph 漢 here" is not in font DejaVu Serif`,
 		`s.md:4:1: link to "nowhere", which is not an anchor in this document`,
 		`s.md:6:1: anchor "twice" is defined twice (first at s.md:5:1)`,
 		`s.md:7:1: this calculation line is`,
@@ -193,5 +193,48 @@ func TestLongWordBreaks(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// TestOwnText: plinth's own text is spelled for the fonts (⅔ as 2/3), and
+// a character still missing is an internal error of plinth with no
+// position of the user's, while the same character in the user's text is
+// an error at the user's line.
+func TestOwnText(t *testing.T) {
+	doc := sheet(
+		&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}},
+		&layout.Para{Pos: at(4), Runs: []layout.Run{{Text: "engine 漢", Own: true}}},
+		para(5, "user 漢"),
+		&layout.Statement{Pos: at(6), Symbol: eqn.Sym{Name: "x"}, Expr: eqn.Text{Text: "漢"}, Own: true},
+	)
+	_, err := layout.Document(doc)
+	var ps layout.Problems
+	if !errors.As(err, &ps) || len(ps) != 3 {
+		t.Fatalf("want 3 problems, got %v", err)
+	}
+	for i, line := range []string{"s.md:6:1", "s.md:4:1"} { // sorted by message
+		if p := ps[i]; p.Pos.Path != "" || !strings.Contains(p.Msg, "internal error in plinth") || !strings.Contains(p.Msg, line) {
+			t.Errorf("own text problem %d = %q at %v", i, p.Msg, p.Pos)
+		}
+	}
+	if p := ps[2]; p.Pos.Line != 5 || strings.Contains(p.Msg, "plinth") {
+		t.Errorf("user text problem = %q at %v", p.Msg, p.Pos)
+	}
+	pages, err := layout.Document(sheet(&layout.Para{Pos: at(3), Runs: []layout.Run{{Text: "c* = ⅔c", Own: true}}}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var text []string
+	for _, b := range pages.Pages[0].Boxes {
+		b.Walk(func(b *layout.Box) {
+			for _, it := range b.Items {
+				if x, ok := it.(draw.Text); ok {
+					text = append(text, x.Text)
+				}
+			}
+		})
+	}
+	if s := strings.Join(text, " "); !strings.Contains(s, "2/3c") || strings.Contains(s, "⅔") {
+		t.Errorf("own text set as %q", s)
 	}
 }

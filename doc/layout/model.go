@@ -86,6 +86,12 @@ type Run struct {
 	Shift Shift
 	Link  string   // name of the anchor this run links to; "" = none
 	Math  eqn.Node // inline formula; replaces Text
+	// Own marks text plinth wrote (engine notes, cautions, references,
+	// fixed wording) rather than the user. It is spelled with
+	// fonts.Spell (⅔ as 2/3); a character still missing from the fonts
+	// is plinth's defect, reported as an internal error that names
+	// plinth, never at the user's line.
+	Own bool
 }
 
 // Align is a table column's alignment.
@@ -176,6 +182,7 @@ type Statement struct {
 	Note   []Run
 	Ref    string // a reference, printed after the note
 	Anchor string // optional anchor name
+	Own    bool   // plinth's own line (an engine step): see Run.Own
 }
 
 // Input is a given value: Symbol = Value, with its note and reference.
@@ -186,6 +193,7 @@ type Input struct {
 	Note   []Run
 	Ref    string
 	Anchor string
+	Own    bool // plinth's own line (an engine step): see Run.Own
 }
 
 // Check is a design check: both sides with values, the comparison, the

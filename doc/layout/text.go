@@ -94,7 +94,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 		if r.Math != nil {
 			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color})
 			if err != nil {
-				e.probs.add(pos, "%v", err)
+				e.mathProblem(pos, r.Own, err)
 				continue
 			}
 			cur.frags = append(cur.frags, frag{math: b, w: b.W, size: st.size, link: r.Link, color: color})
@@ -114,7 +114,12 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			size, rise = size*0.7, -st.size*0.16
 		}
 		f := fonts.Get(face)
-		text := e.checkGlyphs(r.Text, face, pos)
+		text := r.Text
+		if r.Own {
+			text = e.ownGlyphs(text, face, pos)
+		} else {
+			text = e.checkGlyphs(text, face, pos)
+		}
 		spaceW := f.Width(" ", size)
 		start := 0
 		flush := func(i int) {
@@ -165,6 +170,48 @@ func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) str
 		}
 		return -1
 	}, s)
+}
+
+// ownGlyphs spells plinth's own text for the face (fonts.Spell) and
+// reports any character still missing as an internal error of plinth,
+// naming the block only as the place it was printed for.
+func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) string {
+	s = fonts.Spell(s, face)
+	f := fonts.Get(face)
+	r, bad := f.Missing(strings.Map(func(r rune) rune {
+		if r == '\n' || r == '\t' || r == '\r' {
+			return ' '
+		}
+		return r
+	}, s))
+	if !bad {
+		return s
+	}
+	where := ""
+	if p := pos.String(); p != "" {
+		where = " (in the printout of " + p + ")"
+	}
+	e.probs.add(source.Position{}, "internal error in plinth: plinth's own text %q has character %q (U+%04X), which font %s lacks%s; this is a defect of plinth, not of the input", excerpt(s, r), r, r, face, where)
+	return strings.Map(func(c rune) rune {
+		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
+			return c
+		}
+		return -1
+	}, s)
+}
+
+// mathProblem reports a formula that cannot be set: at pos, or, for
+// plinth's own formula, as an internal error of plinth.
+func (e *engine) mathProblem(pos source.Position, own bool, err error) {
+	if !own {
+		e.probs.add(pos, "%v", err)
+		return
+	}
+	where := ""
+	if p := pos.String(); p != "" {
+		where = " (in the printout of " + p + ")"
+	}
+	e.probs.add(source.Position{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
 }
 
 // excerpt is up to 40 characters of s around the first r.

@@ -74,7 +74,7 @@ func TestToolsReadIt(t *testing.T) {
 	}
 	tool(t, "qpdf", "--check", path)
 	fonts := tool(t, "pdffonts", path)
-	for _, f := range []string{"PLNTAA+GoRegular", "PLNTAB+GoBold", "PLNTAC+GoItalic", "PLNTAE+GoMono"} {
+	for _, f := range []string{"PLNTAA+DejaVuSerif", "PLNTAB+DejaVuSerif-Bold", "PLNTAC+DejaVuSerif-Italic", "PLNTAE+GoMono"} {
 		if !strings.Contains(fonts, f) {
 			t.Errorf("pdffonts lacks %s:\n%s", f, fonts)
 		}

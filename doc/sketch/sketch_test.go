@@ -35,7 +35,7 @@ var cases = []struct {
 	{"square-bare", sketch.Footing{Shape: "square", B: 1.5, D: 0.6, Water: ptr(0.4),
 		Layers: []sketch.Layer{{Name: "Firm clay", Top: 0}}}, 360, 200},
 	{"surface-uplift", sketch.Footing{Shape: "square", B: 1.2, D: 0, Thickness: 0.4, V: -40, H: 15, M: 5,
-		VLabel: "uplift 40 kN", Layers: []sketch.Layer{{Name: "Chalk", Top: 1.5}}}, 320, 200},
+		VLabel: "uplift 40 kN", Layers: []sketch.Layer{{Name: "Chalk", Top: 1.5}}}, 360, 200},
 	{"raft", sketch.Footing{Shape: "rectangle", B: 18, L: 40, D: 1.5, Water: ptr(3.5),
 		Layers: []sketch.Layer{{Name: "Alluvium", Top: 0}, {Name: "Terrace gravel", Top: 6}, {Name: "London-type clay", Top: 14}},
 		V:      250000, M: 40000, BEff: ptr(17.7)}, 480, 280},
@@ -124,7 +124,7 @@ func TestErrors(t *testing.T) {
 		}), 400, 200, "Layers[2].Top = 2 m must be deeper than the layer above (3 m)"},
 		{"infinite load", mod(func(f *sketch.Footing) { f.M = math.Inf(-1) }), 400, 200, "M = -Inf must be a finite number"},
 		{"platform of no thickness", mod(func(f *sketch.Footing) { f.Platform = &sketch.Platform{} }), 400, 200, "Platform.Thickness = 0 m must be above 0"},
-		{"missing glyph", mod(func(f *sketch.Footing) { f.Layers = []sketch.Layer{{Name: "clay ⨍"}} }), 400, 200, "which the fonts lack"},
+		{"missing glyph", mod(func(f *sketch.Footing) { f.Layers = []sketch.Layer{{Name: "clay 漢"}} }), 400, 200, "which the fonts lack"},
 		{"too small", ok, 100, 60, "w × h = 100 × 60 must be at least 160 × 110 pt"},
 		{"no room", mod(func(f *sketch.Footing) {
 			f.Shape = "rectangle"

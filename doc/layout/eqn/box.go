@@ -118,6 +118,16 @@ func (c *ctx) face(italic bool) fonts.Face {
 	return fonts.Regular
 }
 
+// opFace is the face an operator is set in: the math face, drawn to
+// match the text face, when it has the glyphs and the formula is not
+// bold (the math face has no bold); else the text face.
+func (c *ctx) opFace(s string) fonts.Face {
+	if _, bad := fonts.Get(fonts.Math).Missing(s); !bad && !c.bold {
+		return fonts.Math
+	}
+	return c.face(false)
+}
+
 // text sets s in one face at the current size.
 func (c *ctx) text(s string, face fonts.Face) *Box {
 	f := fonts.Get(face)
@@ -241,7 +251,7 @@ func (c *ctx) boxes(nodes []Node) []*Box {
 	out := make([]*Box, len(nodes))
 	for i, n := range nodes {
 		if op, ok := n.(Op); ok {
-			out[i] = c.text(opGlyph(op.Text), c.face(false))
+			out[i] = c.text(opGlyph(op.Text), c.opFace(opGlyph(op.Text)))
 		} else {
 			out[i] = c.layout(n)
 		}
@@ -457,7 +467,14 @@ func (c *ctx) fn(f Func) *Box {
 	if nm == "log10" {
 		nm, sub = "log", Num{"10"}
 	}
-	name := c.text(nm, c.face(false))
+	var name *Box
+	if strings.ContainsAny(nm, "_'") && f.Sup == nil && sub == nil {
+		// a function named in sheet notation (T_v, the time factor as a
+		// function of U) is set as its symbol
+		name = c.layout(Sym{Name: nm})
+	} else {
+		name = c.text(nm, c.face(false))
+	}
 	b.place(name, 0, 0)
 	if f.Sup != nil || sub != nil {
 		sc := c.script()

@@ -1,5 +1,5 @@
 // Package eqn typesets plinth's formulas: a small box model in the spirit of
-// TeX's math lists, drawn with the embedded Go fonts.
+// TeX's math lists, drawn with the embedded fonts (layout/fonts).
 //
 // A formula is first a tree of Nodes — Row, Sym, Num, Text, Op, Script,
 // Frac, Sqrt, Fence, Func, Space — built by hand or converted from the

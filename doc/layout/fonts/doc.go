@@ -1,11 +1,17 @@
-// Package fonts holds the typefaces plinth embeds in every PDF — the Go
-// fonts from golang.org/x/image/font/gofont — and measures text set in them.
+// Package fonts holds the typefaces plinth embeds in every PDF and
+// measures text set in them: DejaVu Serif (regular, bold, italic, bold
+// italic; github.com/go-fonts/dejavu, Bitstream Vera licence with DejaVu
+// changes in the public domain) for text and the letters of formulas,
+// DejaVu Math TeX Gyre (the same licence; its math extensions are in the
+// public domain) for the operators and
+// relations of formulas, and Go Mono (golang.org/x/image/font/gofont) for
+// fingerprints and code. All are TrueType outlines, embedded as subsets.
 //
 // Widths are computed exactly as the PDF will place the glyphs: each glyph
 // advance is converted to thousandths of an em the way the PDF writer's
 // width array is written (truncated), and kerning pairs from a TrueType
-// 'kern' table (format 0) are applied when the font has one (the Go fonts
-// have none; the code is there for a firm's own fonts later). So a width
+// 'kern' table (format 0) are applied when the font has one (DejaVu
+// Serif has one; Go Mono and the math face have none). So a width
 // measured here is the width the reader draws, to the last thousandth of an
 // em.
 //

@@ -5,12 +5,13 @@ import (
 	"sync"
 	"unicode/utf8"
 
-	"golang.org/x/image/font/gofont/gobold"
-	"golang.org/x/image/font/gofont/gobolditalic"
-	"golang.org/x/image/font/gofont/goitalic"
+	"github.com/go-fonts/dejavu/dejavumathtexgyre"
+	"github.com/go-fonts/dejavu/dejavuserif"
+	"github.com/go-fonts/dejavu/dejavuserifbold"
+	"github.com/go-fonts/dejavu/dejavuserifbolditalic"
+	"github.com/go-fonts/dejavu/dejavuserifitalic"
 	"golang.org/x/image/font/gofont/gomono"
 	"golang.org/x/image/font/gofont/gomonobold"
-	"golang.org/x/image/font/gofont/goregular"
 )
 
 // Face is one of the embedded typefaces.
@@ -23,12 +24,14 @@ const (
 	BoldItalic
 	Mono
 	MonoBold
+	Math     // the math face: operators and relations in formulas
 	NumFaces // number of faces; not a face
 )
 
-var faceNames = [NumFaces]string{"Go Regular", "Go Bold", "Go Italic", "Go Bold Italic", "Go Mono", "Go Mono Bold"}
+var faceNames = [NumFaces]string{"DejaVu Serif", "DejaVu Serif Bold", "DejaVu Serif Italic",
+	"DejaVu Serif Bold Italic", "Go Mono", "Go Mono Bold", "DejaVu Math TeX Gyre"}
 
-// String is the face's human name ("Go Bold Italic").
+// String is the face's human name ("DejaVu Serif Bold Italic").
 func (f Face) String() string {
 	if f < NumFaces {
 		return faceNames[f]
@@ -43,24 +46,26 @@ func (f Face) Valid() bool { return f < NumFaces }
 func (f Face) TTF() []byte {
 	switch f {
 	case Bold:
-		return gobold.TTF
+		return dejavuserifbold.TTF
 	case Italic:
-		return goitalic.TTF
+		return dejavuserifitalic.TTF
 	case BoldItalic:
-		return gobolditalic.TTF
+		return dejavuserifbolditalic.TTF
 	case Mono:
 		return gomono.TTF
 	case MonoBold:
 		return gomonobold.TTF
+	case Math:
+		return dejavumathtexgyre.TTF
 	}
-	return goregular.TTF
+	return dejavuserif.TTF
 }
 
 // PDFName is the face's PostScript-style name in the PDF, with a fixed
 // six-letter subset tag (only the glyphs used are embedded).
 func (f Face) PDFName() string {
-	return [NumFaces]string{"PLNTAA+GoRegular", "PLNTAB+GoBold", "PLNTAC+GoItalic",
-		"PLNTAD+GoBoldItalic", "PLNTAE+GoMono", "PLNTAF+GoMonoBold"}[f%NumFaces]
+	return [NumFaces]string{"PLNTAA+DejaVuSerif", "PLNTAB+DejaVuSerif-Bold", "PLNTAC+DejaVuSerif-Italic",
+		"PLNTAD+DejaVuSerif-BoldItalic", "PLNTAE+GoMono", "PLNTAF+GoMonoBold", "PLNTAG+DejaVuMathTeXGyre"}[f%NumFaces]
 }
 
 // Font is a parsed face ready for measuring. Metrics are in thousandths of

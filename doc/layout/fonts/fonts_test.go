@@ -10,9 +10,16 @@ func TestCoverage(t *testing.T) {
 	// Every character plinth's typesetting emits must be in every text face.
 	const need = "αβγδεζηθικλμνξοπρστυφχψωΓΔΘΛΞΠΣΦΨΩ≤≥≠×·−√′″°²³µ•–—±≈…→"
 	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
+		if f == fonts.Math {
+			continue
+		}
 		if r, ok := fonts.Get(f).Missing(need); ok {
 			t.Errorf("%s lacks %q (U+%04X)", f, r, r)
 		}
+	}
+	// The math face sets the operators and relations of formulas.
+	if r, ok := fonts.Get(fonts.Math).Missing("+−×·/=<>≤≥≠≈±√()[]"); ok {
+		t.Errorf("%s lacks %q (U+%04X)", fonts.Math, r, r)
 	}
 }
 
@@ -25,7 +32,7 @@ func TestWidth(t *testing.T) {
 	if reg.Width("MM", 10) <= reg.Width("ii", 10) {
 		t.Error("proportional widths")
 	}
-	if reg.Has('\u2A0D') {
+	if reg.Has('\U0001F600') {
 		t.Error("unexpected glyph")
 	}
 	if reg.Ascent(10) <= 0 || reg.Descent(10) <= 0 || reg.CapHeight(10) <= reg.XHeight(10) {
@@ -44,4 +51,20 @@ func TestInk(t *testing.T) {
 		t.Errorf("( ink %v %v", a, d)
 	}
 	t.Logf("asc %.2f desc %.2f cap %.2f x %.2f", f.Ascent(10), f.Descent(10), f.CapHeight(10), f.XHeight(10))
+}
+
+func TestSpell(t *testing.T) {
+	for _, c := range []struct{ in, want string }{
+		{"c* = ⅔c", "c* = 2/3c"}, // vulgar fractions always, every face has them or not
+		{"½ and ¾", "1/2 and 3/4"},
+		{"σ′ ≤ 3 m²", "σ′ ≤ 3 m²"}, // in the face: kept
+		{"漢", "漢"},                 // no spelling: left for the caller to report
+	} {
+		if got := fonts.Spell(c.in, fonts.Regular); got != c.want {
+			t.Errorf("Spell(%q) = %q, want %q", c.in, got, c.want)
+		}
+	}
+	if got := fonts.Spell("x′²", fonts.Math); got != "x′^2" {
+		t.Errorf("Spell in the math face = %q", got)
+	}
 }
