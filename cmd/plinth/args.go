@@ -1,9 +1,14 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"strings"
 )
+
+// errHelp is returned by parseArgs for -h or --help: the command prints
+// its help on standard output and exits 0.
+var errHelp = errors.New("help asked")
 
 // options are the parsed command-line arguments. Flags may come before or
 // after PATH.
@@ -32,6 +37,9 @@ func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
 			continue
 		}
 		name = strings.TrimLeft(name, "-")
+		if name == "h" || name == "help" {
+			return o, errHelp
+		}
 		if name == "o" {
 			name = "output"
 		}

@@ -15,6 +15,10 @@ import (
 // check implements "plinth check".
 func check(args []string, stdout, stderr io.Writer) int {
 	o, err := parseArgs("check", args, "set", "json")
+	if err == errHelp {
+		fmt.Fprint(stdout, helps["check"])
+		return exitOK
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors

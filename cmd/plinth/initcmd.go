@@ -5,6 +5,7 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"strings"
 
 	"plinth/templates"
 )
@@ -13,6 +14,16 @@ import (
 // (a ground-model sheet and a pad sheet) into DIR, creating it, and never
 // overwrites a file that exists.
 func initPackage(args []string, stdout, stderr io.Writer) int {
+	for _, a := range args {
+		if a == "-h" || a == "--help" || a == "-help" {
+			fmt.Fprint(stdout, helps["init"])
+			return exitOK
+		}
+		if strings.HasPrefix(a, "-") {
+			fmt.Fprintf(stderr, "plinth: init: unknown flag %s (a folder name cannot start with -)\n", a)
+			return exitErrors
+		}
+	}
 	if len(args) != 1 {
 		fmt.Fprintln(stderr, "plinth: init takes one DIR, the folder to create the starter package in")
 		return exitErrors

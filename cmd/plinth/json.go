@@ -22,6 +22,8 @@ type jsonReport struct {
 	// Context lists the sheets evaluated only because a single sheet
 	// given alone uses them (their symbols are not listed).
 	Context []string `json:"context"`
+	// Version is the plinth that wrote the report (see Version).
+	Version string `json:"version"`
 }
 
 // jsonBlock is one ground, footing, bearing, settlement or capacity block.
@@ -102,7 +104,7 @@ type jsonError struct {
 
 // report builds the JSON object for a run.
 func report(res *eval.Result, diags source.List) jsonReport {
-	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Blocks: []jsonBlock{}, Errors: []jsonError{}, Context: []string{}}
+	r := jsonReport{Overrides: []jsonOverride{}, Symbols: []jsonSymbol{}, Checks: []jsonCheck{}, Blocks: []jsonBlock{}, Errors: []jsonError{}, Context: []string{}, Version: Version()}
 	for _, d := range diags {
 		if d.Severity != source.Error {
 			continue

@@ -20,7 +20,8 @@ Usage:
   plinth check PATH [--set name=value]... [--json]
   plinth render PATH [-o FILE] [--set name=value]...
   plinth init DIR         write a starter package (ground model and a pad) to DIR
-  plinth help
+  plinth version          print the version
+  plinth help [COMMAND]   this overview, or one command's flags (also COMMAND -h)
 
 PATH is a package folder (sheets *.md in file-name order, optional
 package.yaml) or a single sheet.
@@ -33,6 +34,57 @@ package.yaml) or a single sheet.
 
 Exit status: 0 all checks OK, 1 a check is NOT OK, 2 input errors.
 `
+
+// helps are the subcommands' own help texts (plinth help CMD, CMD -h).
+var helps = map[string]string{
+	"check": `Usage: plinth check PATH [flags]
+
+Evaluates every sheet of PATH (a package folder or one sheet) and prints
+every symbol and check, or one JSON object. Writes nothing.
+
+Flags (before or after PATH):
+  --set name=value   override an input for a variant run (repeatable);
+                     sheet.md:name=value where several sheets define name
+  --json             print one JSON object (documented in the README)
+  -h, --help         print this help
+
+Exit status: 0 all checks OK, 1 a check is NOT OK, 2 input errors.
+`,
+	"render": `Usage: plinth render PATH [flags]
+
+Evaluates PATH (a package folder or one sheet) and writes the calculation
+package as a PDF, through a temporary file renamed into place only when
+complete: a failed run leaves an earlier PDF untouched.
+
+Flags (before or after PATH):
+  -o, --output FILE  the PDF to write (default: <folder>.pdf beside a
+                     package folder, <sheet>.pdf beside a sheet)
+  --set name=value   override an input for a variant run (repeatable)
+  -h, --help         print this help
+
+Exit status: 0 all checks OK, 1 a check is NOT OK (the PDF is written),
+2 input errors (nothing is written).
+`,
+	"init": `Usage: plinth init DIR
+
+Writes a starter package (a ground-model sheet and a pad) into DIR,
+creating it. Never overwrites a file.
+
+Flags:
+  -h, --help         print this help
+
+Exit status: 0 written, 2 a file exists or cannot be written.
+`,
+	"version": `Usage: plinth version
+
+Prints plinth's version (also written into every PDF's document
+information and every check --json object).
+`,
+	"help": `Usage: plinth help [COMMAND]
+
+Prints the overview, or the help of one command.
+`,
+}
 
 // Exit statuses.
 const (
@@ -54,7 +106,19 @@ func run(args []string, stdout, stderr io.Writer) int {
 	cmd, rest := args[0], args[1:]
 	switch cmd {
 	case "help", "-h", "--help":
+		if len(rest) > 0 && cmd == "help" {
+			h, ok := helps[rest[0]]
+			if !ok {
+				fmt.Fprintf(stderr, "plinth: help: unknown command %q\n\n%s", rest[0], usage)
+				return exitErrors
+			}
+			fmt.Fprint(stdout, h)
+			return exitOK
+		}
 		fmt.Fprint(stdout, usage)
+		return exitOK
+	case "version", "-version", "--version":
+		fmt.Fprintf(stdout, "plinth %s\n", Version())
 		return exitOK
 	case "check":
 		return check(rest, stdout, stderr)

@@ -29,6 +29,10 @@ import (
 // SOURCE_DATE_EPOCH when set; the same inputs give the same bytes.
 func render(args []string, stdout, stderr io.Writer) int {
 	o, err := parseArgs("render", args, "set", "output")
+	if err == errHelp {
+		fmt.Fprint(stdout, helps["render"])
+		return exitOK
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors
@@ -48,7 +52,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		return exitErrors
 	}
 	var buf bytes.Buffer
-	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth"}); err != nil {
+	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version()}); err != nil {
 		printDiags(stderr, diags)
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors

@@ -1,0 +1,58 @@
+package main
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// TestHelpFlags: every subcommand answers -h and --help with its own
+// flags on stdout and status 0, and writes nothing (init -h once created
+// a folder named -h).
+func TestHelpFlags(t *testing.T) {
+	dir := t.TempDir()
+	wd, _ := os.Getwd()
+	if err := os.Chdir(dir); err != nil {
+		t.Fatal(err)
+	}
+	defer os.Chdir(wd)
+	for _, cmd := range []string{"check", "render", "init"} {
+		for _, flag := range []string{"-h", "--help"} {
+			out, errs, code := runCmd(cmd, flag)
+			if code != exitOK || !strings.HasPrefix(out, "Usage: plinth "+cmd) || errs != "" {
+				t.Errorf("%s %s: status %d, stdout %q, stderr %q", cmd, flag, code, out, errs)
+			}
+		}
+		out, _, code := runCmd("help", cmd)
+		if code != exitOK || out != helps[cmd] {
+			t.Errorf("help %s: status %d, %q", cmd, code, out)
+		}
+	}
+	if ents, _ := os.ReadDir(dir); len(ents) != 0 {
+		t.Errorf("help wrote files: %v", ents)
+	}
+	if _, errs, code := runCmd("init", "-x"); code != exitErrors || !strings.Contains(errs, "unknown flag -x") {
+		t.Errorf("init -x: status %d, %q", code, errs)
+	}
+	if _, _, code := runCmd("help", "nope"); code != exitErrors {
+		t.Errorf("help nope: status %d", code)
+	}
+	out, _, code := runCmd("version")
+	if code != exitOK || !strings.HasPrefix(out, "plinth ") {
+		t.Errorf("version: %d %q", code, out)
+	}
+}
+
+// TestFlagsAnyOrder: flags are read before or after PATH.
+func TestFlagsAnyOrder(t *testing.T) {
+	a, _, ca := runCmd("check", "--json", "--set", "P1.B=2.8m", example)
+	b, _, cb := runCmd("check", example, "--set=P1.B=2.8m", "--json")
+	if ca != cb || a != b || ca == exitErrors {
+		t.Errorf("statuses %d, %d; outputs equal: %v", ca, cb, a == b)
+	}
+	o := filepath.Join(t.TempDir(), "x.pdf")
+	if _, errs, code := runCmd("render", "-o", o, example); code == exitErrors {
+		t.Errorf("render -o FILE PATH: %s", errs)
+	}
+}
