@@ -16,6 +16,7 @@ type options struct {
 	path   string
 	sets   []string
 	json   bool
+	layout bool
 	output string
 }
 
@@ -57,11 +58,12 @@ func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
 			return args[i], nil
 		}
 		switch name {
-		case "json":
+		case "json", "layout":
 			if hasVal {
-				return o, fmt.Errorf("%s: --json takes no value", cmd)
+				return o, fmt.Errorf("%s: --%s takes no value", cmd, name)
 			}
-			o.json = true
+			o.json = o.json || name == "json"
+			o.layout = o.layout || name == "layout"
 		case "set":
 			v, err := value()
 			if err != nil {

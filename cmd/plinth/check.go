@@ -4,6 +4,8 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"os"
+	"plinth/doc/compose"
 	"strings"
 	"text/tabwriter"
 
@@ -14,7 +16,7 @@ import (
 
 // check implements "plinth check".
 func check(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs("check", args, "set", "json")
+	o, err := parseArgs("check", args, "set", "json", "layout")
 	if err == errHelp {
 		fmt.Fprint(stdout, helps["check"])
 		return exitOK
@@ -24,6 +26,15 @@ func check(args []string, stdout, stderr io.Writer) int {
 		return exitErrors
 	}
 	res, diags := evaluate(o.path, o.sets)
+	if res != nil {
+		// What render would refuse before laying out pages (page
+		// template, logo, fonts, dates) check refuses too; --layout also
+		// lays the pages out, without writing a PDF.
+		diags = documentErrors(res, diags, o.layout)
+		if diags.HasErrors() {
+			res = nil
+		}
+	}
 	if o.json {
 		enc := json.NewEncoder(stdout)
 		enc.SetIndent("", "  ")
@@ -38,6 +49,23 @@ func check(args []string, stdout, stderr io.Writer) int {
 		printDiags(stderr, diags)
 	}
 	return status(res, diags)
+}
+
+// documentErrors adds to diags the problems the document stages find in
+// res: compose always (page template, logo, the document date), layout
+// too when pages is set.
+func documentErrors(res *eval.Result, diags source.List, pages bool) source.List {
+	if pages {
+		_, cd := compose.Pages(res, compose.Options{})
+		diags.Append(cd)
+	} else {
+		_, cd := compose.Document(res, compose.Options{})
+		diags.Append(cd)
+	}
+	_, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
+	diags.Append(dd)
+	diags.Sort()
+	return diags
 }
 
 // status is the exit status for a run.

@@ -46,6 +46,8 @@ Flags (before or after PATH):
   --set name=value   override an input for a variant run (repeatable);
                      sheet.md:name=value where several sheets define name
   --json             print one JSON object (documented in the README)
+  --layout           also lay out every page (as render does, without
+                     writing a PDF), to find problems only layout can
   -h, --help         print this help
 
 Exit status: 0 all checks OK, 1 a check is NOT OK, 2 input errors.
