@@ -13,11 +13,12 @@ var errHelp = errors.New("help asked")
 // options are the parsed command-line arguments. Flags may come before or
 // after PATH.
 type options struct {
-	path   string
-	sets   []string
-	json   bool
-	layout bool
-	output string
+	path    string
+	sets    []string
+	json    bool
+	layout  bool
+	verbose bool
+	output  string
 }
 
 // parseArgs reads args for cmd; allowed names the flags the command takes.
@@ -44,6 +45,9 @@ func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
 		if name == "o" {
 			name = "output"
 		}
+		if name == "v" {
+			name = "verbose"
+		}
 		if !ok[name] {
 			return o, fmt.Errorf("%s: unknown flag %s", cmd, a)
 		}
@@ -58,12 +62,13 @@ func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
 			return args[i], nil
 		}
 		switch name {
-		case "json", "layout":
+		case "json", "layout", "verbose":
 			if hasVal {
 				return o, fmt.Errorf("%s: --%s takes no value", cmd, name)
 			}
 			o.json = o.json || name == "json"
 			o.layout = o.layout || name == "layout"
+			o.verbose = o.verbose || name == "verbose"
 		case "set":
 			v, err := value()
 			if err != nil {

@@ -5,7 +5,9 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"plinth/calc/trace"
 	"plinth/doc/compose"
+	"sort"
 	"strings"
 	"text/tabwriter"
 
@@ -16,7 +18,7 @@ import (
 
 // check implements "plinth check".
 func check(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs("check", args, "set", "json", "layout")
+	o, err := parseArgs("check", args, "set", "json", "layout", "verbose")
 	if err == errHelp {
 		fmt.Fprint(stdout, helps["check"])
 		return exitOK
@@ -45,6 +47,7 @@ func check(args []string, stdout, stderr io.Writer) int {
 	} else {
 		if !diags.HasErrors() {
 			printTables(stdout, res)
+			printCautions(stdout, res, o.verbose)
 		}
 		printDiags(stderr, diags)
 	}
@@ -139,6 +142,45 @@ func printTables(w io.Writer, res *eval.Result) {
 	}
 	tw.Flush()
 	fmt.Fprintf(w, "\n%d check%s: %d OK, %d NOT OK\n", len(res.Checks), plural(len(res.Checks)), len(res.Checks)-nok, nok)
+}
+
+// printCautions lists the engine's cautions after the checks, most severe
+// first and in document order within a severity: CAUTION and WARNING
+// always, NOTE only when verbose. Each names its block and file:line; a
+// caution raised in one case only names the case.
+func printCautions(w io.Writer, res *eval.Result, verbose bool) {
+	type row struct {
+		sev  trace.Severity
+		text string
+	}
+	var rows []row
+	notes := 0
+	for _, s := range res.Sheets {
+		for _, b := range s.Blocks() {
+			for _, c := range b.Cautions {
+				if c.Severity == trace.SevNote && !verbose {
+					notes++
+					continue
+				}
+				msg := c.Message
+				if c.Case != "" {
+					msg += " [" + c.Case + "]"
+				}
+				rows = append(rows, row{c.Severity, fmt.Sprintf("  %-8s %s %s (%s): %s", c.Severity, b.Kind, b.Name, where(b.Span), msg)})
+			}
+		}
+	}
+	sort.SliceStable(rows, func(i, j int) bool { return rows[i].sev > rows[j].sev })
+	if len(rows) == 0 && notes == 0 {
+		return
+	}
+	fmt.Fprintln(w, "\ncautions")
+	for _, r := range rows {
+		fmt.Fprintln(w, r.text)
+	}
+	if notes > 0 {
+		fmt.Fprintf(w, "  (%d NOTE%s not shown: plinth check -v lists them)\n", notes, plural(notes))
+	}
 }
 
 func where(sp source.Span) string {

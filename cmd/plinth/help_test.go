@@ -56,3 +56,28 @@ func TestFlagsAnyOrder(t *testing.T) {
 		t.Errorf("render -o FILE PATH: %s", errs)
 	}
 }
+
+// TestCheckCautions: plinth check lists the engine's WARNINGs and
+// CAUTIONs after the checks, each with its block and file:line; NOTEs
+// only with -v.
+func TestCheckCautions(t *testing.T) {
+	out, _, code := runCmd("check", example)
+	if code != exitOK {
+		t.Fatalf("status %d", code)
+	}
+	i := strings.Index(out, "\ncautions\n")
+	if i < 0 || i < strings.Index(out, "checks:") {
+		t.Fatalf("no cautions section after the checks:\n%s", out)
+	}
+	tail := out[i:]
+	if !strings.Contains(tail, "WARNING  bearing OR1 (../../examples/brackenfield/05-crane-platform.md:") {
+		t.Errorf("a warning lacks its block and position:\n%s", tail)
+	}
+	if strings.Contains(tail, "\n  NOTE ") || !strings.Contains(tail, "NOTEs not shown: plinth check -v lists them") {
+		t.Errorf("NOTEs listed without -v:\n%s", tail)
+	}
+	out, _, _ = runCmd("check", "-v", example)
+	if !strings.Contains(out, "\n  NOTE     settlement P1 (") {
+		t.Errorf("-v does not list NOTEs")
+	}
+}

@@ -48,6 +48,8 @@ Flags (before or after PATH):
   --json             print one JSON object (documented in the README)
   --layout           also lay out every page (as render does, without
                      writing a PDF), to find problems only layout can
+  -v, --verbose      list the engine's NOTEs too (CAUTIONs and WARNINGs
+                     are always listed after the checks)
   -h, --help         print this help
 
 Exit status: 0 all checks OK, 1 a check is NOT OK, 2 input errors.
