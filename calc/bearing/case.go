@@ -109,6 +109,10 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 	start := len(c.t.Steps)
 	ld.Record(c.t, c.acts, name, c.uF, c.uM)
 	if ld.V <= 0 {
+		if c.r.Uplift == 0 || ld.V > c.r.UpliftV {
+			c.r.UpliftV = ld.V
+		}
+		c.r.Uplift++
 		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}

@@ -42,3 +42,28 @@ func TestUpliftGoverning(t *testing.T) {
 		t.Errorf("sliding governed by %s, V'_d %g kN; want wind leading with the uplift in, 428 kN", s.Name, s.V/kN)
 	}
 }
+
+// TestAllUpliftNotVerified: when every design load lifts the base
+// (V_d ≤ 0), bearing is not verified: the result is NOT OK with the
+// reason, not "no checks, OK". Pad loaded by a net uplift of 100 kN
+// (invented); DA1: the least upward load is 1.0·(−100) = −100 kN (C1 and
+// C2, γ_G,inf = 1.0 on the upward permanent action in the G sup family;
+// hand calculation).
+func TestAllUpliftNotVerified(t *testing.T) {
+	in := bearing.Input{
+		Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(32 * math.Pi / 180)}),
+		Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
+		Actions: []site.Action{{Name: "Net uplift", V: -100e3}},
+		Options: bearing.Options{Drainage: bearing.Drained, Approach: design.DA1()},
+	}
+	r, err := bearing.Check(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.OK || len(r.Cases) != 0 || r.Uplift == 0 || r.Unverified == "" {
+		t.Fatalf("OK %v, %d cases, %d uplift loads, unverified %q", r.OK, len(r.Cases), r.Uplift, r.Unverified)
+	}
+	if r.UpliftV != -100e3 {
+		t.Errorf("largest V_d %g kN, want -100", r.UpliftV/kN)
+	}
+}

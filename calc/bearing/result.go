@@ -66,6 +66,14 @@ type Result struct {
 	Sliding           []SlideCase
 	GoverningSliding  int // -1 when sliding was not checked
 	OK                bool
+	// Uplift counts the design loads with V_d ≤ 0 (the base in tension
+	// or lifting), which bearing cannot check; UpliftV is the largest
+	// V_d among them. When every load lifts (Cases is empty), Unverified
+	// says so and OK is false: no bearing check passes for lack of a
+	// downward load.
+	Uplift     int
+	UpliftV    float64
+	Unverified string
 	// Values are the summary symbols the sheet names F1.R_d, F1.util, …
 	// in a fixed order (see the package documentation).
 	Values []trace.Value

@@ -147,6 +147,10 @@ func (c *calc) summarise() {
 	r := c.r
 	c.cas = ""
 	r.OK = len(r.Cases) > 0
+	if len(r.Cases) == 0 && r.Uplift > 0 {
+		r.Unverified = fmt.Sprintf("bearing not verified: V_d ≤ 0 in every design load (at most %.1f %s): the base is in tension or lifts, so tension piles or anchorage are needed", r.UpliftV/kN, c.uF)
+		c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "not-verified", Severity: trace.SevCaution, Message: r.Unverified, Values: []trace.Value{val("V_d", r.UpliftV, c.uF)}, Step: -1})
+	}
 	uu, ud := -1.0, -1.0
 	for i, cs := range r.Cases {
 		if r.Governing < 0 || cs.Util > r.Cases[r.Governing].Util {

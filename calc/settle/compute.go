@@ -3,6 +3,7 @@ package settle
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"plinth/calc/stress"
 	"plinth/calc/trace"
@@ -243,8 +244,11 @@ func (k *calc) finish() {
 	k.add(cs, "s_total", fAdd(fS("s_i"), fS("s_c"), fS("s_sec")), []trace.Value{val("s_i", r.Si, "mm"), val("s_c", r.Sc, "mm"), val("s_sec", r.Ssec, "mm")}, r.Total, "mm", trace.Ref{}, "total settlement")
 	r.Util = r.Total / r.Limit
 	k.add(cs, "util", fDiv(fS("s_total"), fS("s_lim")), []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, r.Util, "", trace.Ref{}, "settlement against the limit")
-	r.OK = r.Util <= 1
-	if !r.OK {
+	r.OK = r.Util <= 1 && len(r.Unverified) == 0
+	if len(r.Unverified) > 0 {
+		k.warn(cs, "not-verified", trace.SevCaution, trace.Ref{}, "settlement not verified: "+strings.Join(r.Unverified, "; ")+"; the total leaves that out, so the check is NOT OK until the data are given")
+	}
+	if r.Util > 1 {
 		k.warn(cs, "limit", trace.SevCaution, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
 	}
 	r.symbols()

@@ -34,6 +34,7 @@ func (k *calc) consolidation(mode Method) error {
 			switch {
 			case l.Fine():
 				k.warn(cs, "no-consolidation", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: fine-grained but no m_v or C_c given: its consolidation settlement is not computed", name))
+				k.unverified(fmt.Sprintf("%s is fine-grained with no m_v or C_c", name))
 			case mode == Consolidation:
 				k.warn(cs, "incompressible", trace.SevNote, trace.Ref{}, fmt.Sprintf("%s: coarse-grained with no m_v: taken as incompressible in the consolidation method", name))
 			}

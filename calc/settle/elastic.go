@@ -186,8 +186,10 @@ func (k *calc) elastic(combined bool) {
 				code, msg, sev = "no-eu", fmt.Sprintf("%s: no E_u given, so its immediate (undrained) settlement is not included", k.layerName(i)), trace.SevNote
 			case l.Fine() && combined:
 				code, msg = "no-stiffness", fmt.Sprintf("%s: no E_u, E′, m_v or C_c given: the layer adds no settlement", k.layerName(i))
+				k.unverified(fmt.Sprintf("%s has no E_u, E′, m_v or C_c", k.layerName(i)))
 			default:
 				code, msg = "no-stiffness", fmt.Sprintf("%s: no stiffness (E_u or E′) given: the layer adds no immediate settlement", k.layerName(i))
+				k.unverified(fmt.Sprintf("%s has no stiffness (E_u or E′)", k.layerName(i)))
 			}
 			k.add(cs, ix("s_i,", i), nil, nil, 0, "mm", trace.Ref{}, "no immediate settlement computed for this layer")
 			k.warn(cs, code, sev, trace.Ref{}, msg)

@@ -113,6 +113,17 @@ func (k *calc) warn(cs, code string, sev trace.Severity, ref trace.Ref, msg stri
 	k.t.Warn(trace.Caution{Code: code, Severity: sev, Message: msg, Values: vals, Ref: ref, Case: cs})
 }
 
+// unverified records that a layer lacks the data its method needs, so the
+// check cannot pass (Result.Unverified), whether or not the trace is kept.
+func (k *calc) unverified(reason string) {
+	for _, r := range k.r.Unverified {
+		if r == reason {
+			return
+		}
+	}
+	k.r.Unverified = append(k.r.Unverified, reason)
+}
+
 func (k *calc) layerName(i int) string {
 	if n := k.g.Layers[i].Name; n != "" {
 		return n

@@ -107,7 +107,13 @@ type Result struct {
 
 	Limit float64 // m
 	Util  float64 // Total/Limit
-	OK    bool
+	OK    bool    // Total ≤ Limit and nothing is Unverified
+	// Unverified lists why the settlement cannot be verified: a layer in
+	// the zone of influence without the data its method needs (no
+	// stiffness, no m_v or C_c for a fine layer, no c_v for a time curve
+	// asked for). Such a result is never OK: its total leaves that layer
+	// out.
+	Unverified []string
 
 	Schm *Schm // set for Schmertmann's method
 	BB   *BB   // set for Burland & Burbidge's method

@@ -109,6 +109,7 @@ func (k *calc) schmertmann() error {
 			E = kq * l.Qc.V
 		default:
 			k.warn(cs, "no-stiffness", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no E′ or q_c given: the layer adds no settlement", k.layerName(lr.layer)))
+			k.unverified(fmt.Sprintf("%s has no E′ or q_c for Schmertmann's method", k.layerName(lr.layer)))
 			continue
 		}
 		for j := lr.first; j < lr.end; j++ {

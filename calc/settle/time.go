@@ -125,6 +125,9 @@ func (k *calc) timing() {
 		name := lr.Name
 		cs := name + ": time"
 		if !l.Cv.Set {
+			if len(k.c.Times) > 0 {
+				k.unverified(fmt.Sprintf("%s has no c_v for the time curve asked for", name))
+			}
 			k.warn(cs, "no-cv", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no c_v given: its consolidation settlement is shown as complete at every time, and it has no t_50 or t_90", name))
 			continue
 		}

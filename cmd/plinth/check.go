@@ -141,6 +141,11 @@ func printTables(w io.Writer, res *eval.Result) {
 		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", c.Text, eval.Format(c.L, c.Unit, -1), c.Op, eval.Format(c.R, c.Unit, -1), util, c.Verdict(), where(c.Span))
 	}
 	tw.Flush()
+	for _, c := range res.Checks {
+		if c.Unverified != "" {
+			fmt.Fprintf(w, "  NOT OK %s (%s): %s\n", c.Text, where(c.Span), c.Unverified)
+		}
+	}
 	fmt.Fprintf(w, "\n%d check%s: %d OK, %d NOT OK\n", len(res.Checks), plural(len(res.Checks)), len(res.Checks)-nok, nok)
 }
 

@@ -81,3 +81,27 @@ func TestCheckCautions(t *testing.T) {
 		t.Errorf("-v does not list NOTEs")
 	}
 }
+
+// TestNoPassWithoutData: settlement on a layer without stiffness,
+// Schmertmann without E′ or q_c, and a footing that lifts in every load
+// are NOT OK with "not verified" reasons, and the run exits 1.
+func TestNoPassWithoutData(t *testing.T) {
+	out, errs, code := runCmd("check", "testdata/notverified")
+	if code != exitNotOK {
+		t.Fatalf("status %d, want 1\n%s%s", code, out, errs)
+	}
+	for _, want := range []string{
+		"0 OK, 3 NOT OK",
+		"F settlement: s_total <= s_lim (testdata/notverified/01-no-data.md:32): not verified: Clay has no E_u, E′, m_v or C_c",
+		"FS settlement: s_total <= s_lim (testdata/notverified/01-no-data.md:36): not verified: Sand has no E′ or q_c for Schmertmann's method",
+		"U bearing: V_d > 0 (testdata/notverified/01-no-data.md:50): bearing not verified: V_d ≤ 0 in every design load",
+	} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q", want)
+		}
+	}
+	js, _, _ := runCmd("check", "--json", "testdata/notverified")
+	if !strings.Contains(js, `"reason": "not verified: Clay has no E_u`) || !strings.Contains(js, `"utilisation": null`) {
+		t.Error("JSON lacks the reason or gives a utilisation")
+	}
+}

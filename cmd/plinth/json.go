@@ -93,6 +93,9 @@ type jsonCheck struct {
 	File        string   `json:"file"`
 	Line        int      `json:"line"`
 	Note        string   `json:"note"`
+	// Reason says why a NOT OK engine check could not be verified
+	// ("not verified: …"); empty otherwise.
+	Reason string `json:"reason,omitempty"`
 }
 
 type jsonError struct {
@@ -145,7 +148,7 @@ func report(res *eval.Result, diags source.List) jsonReport {
 		p := c.Span.Pos()
 		jc := jsonCheck{
 			Expr: c.Text, LHS: c.L.In(c.Unit), RHS: c.R.In(c.Unit), Unit: c.Unit.Name,
-			Op: c.Op, OK: c.OK, File: p.Path, Line: p.Line, Note: c.Note.Value,
+			Op: c.Op, OK: c.OK, File: p.Path, Line: p.Line, Note: c.Note.Value, Reason: c.Unverified,
 		}
 		if c.HasUtil() && !math.IsInf(c.Util, 0) {
 			u := c.Util

@@ -1,6 +1,7 @@
 package eval
 
 import (
+	"math"
 	"plinth/calc/bearing"
 	"plinth/calc/design"
 	"plinth/calc/site"
@@ -128,6 +129,12 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 		e.addCheck(s, blk, blk.Name+" bearing: V_d <= R_d", "<=",
 			units.Quantity{V: c.V, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
 			"bearing resistance, governing case: "+c.Name)
+	}
+	if res.Unverified != "" {
+		fu := forceUnit(in.Footing)
+		c := e.addCheck(s, blk, blk.Name+" bearing: V_d > 0", ">",
+			units.Quantity{V: res.UpliftV, Dim: fu.Dim}, units.Quantity{Dim: fu.Dim}, fu, math.NaN(), false, res.Unverified)
+		c.Unverified = res.Unverified
 	}
 	if res.GoverningSliding >= 0 {
 		c := res.Sliding[res.GoverningSliding]

@@ -185,11 +185,12 @@ func headerSpan(sp source.Span) source.Span {
 }
 
 // addCheck enters an engine check into the sheet's checks.
-func (e *evaluator) addCheck(s *Sheet, blk *Block, text, op string, l, r units.Quantity, u units.Unit, util float64, ok bool, note string) {
+func (e *evaluator) addCheck(s *Sheet, blk *Block, text, op string, l, r units.Quantity, u units.Unit, util float64, ok bool, note string) *Check {
 	c := &Check{
 		Text: text, Op: op, L: l, R: r, Unit: u, Util: util, OK: ok,
 		Note: sheet.Str{Value: note}, Span: headerSpan(blk.Span), Sheet: s,
 	}
 	s.Checks = append(s.Checks, c)
 	blk.Checks = append(blk.Checks, c)
+	return c
 }

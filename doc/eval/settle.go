@@ -1,7 +1,9 @@
 package eval
 
 import (
+	"math"
 	"strconv"
+	"strings"
 
 	"plinth/calc/capacity"
 	"plinth/calc/design"
@@ -125,9 +127,15 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	}
 	e.defineResults(s, blk, vals, settleNotes)
 	mm := units.MustParse("mm")
-	e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",
+	note := "total settlement within the limit (" + r.Method.String() + ")"
+	c := e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",
 		units.Quantity{V: r.Total, Dim: units.Length}, units.Quantity{V: r.Limit, Dim: units.Length}, mm,
-		r.Util, r.OK, "total settlement within the limit ("+r.Method.String()+")")
+		r.Util, r.OK, note)
+	if len(r.Unverified) > 0 {
+		c.Unverified = "not verified: " + strings.Join(r.Unverified, "; ")
+		c.OK, c.Util = false, math.NaN()
+		c.Note = sheet.Str{Value: c.Unverified + " (" + r.Method.String() + ")"}
+	}
 	return true
 }
 

@@ -115,10 +115,14 @@ type Check struct {
 	Anchor string // a unique name for links ("check-3"), by register order
 	Uses   []*Symbol
 	Cites  []string
+	// Unverified says why an engine check cannot be verified ("not
+	// verified: …": data its method needs are missing, or the base is in
+	// tension); such a check is never OK and has no utilisation.
+	Unverified string
 }
 
 // HasUtil reports whether the utilisation is defined.
-func (c *Check) HasUtil() bool { return !math.IsNaN(c.Util) }
+func (c *Check) HasUtil() bool { return !math.IsNaN(c.Util) && c.Unverified == "" }
 
 // Verdict is "OK" or "NOT OK".
 func (c *Check) Verdict() string {
