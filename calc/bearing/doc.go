@@ -122,8 +122,8 @@
 //	q_Ed     V_d/A′ (kPa)
 //	q_Rd     R_d/A′ (kPa)
 //	q_ult    ultimate bearing pressure used (two-layer: the lesser value) (kPa)
-//	V_d      design vertical action (kN)
-//	H_d      design horizontal action, resultant (kN)
+//	V_d      design vertical action of the governing bearing case (kN)
+//	H_d      design horizontal action, resultant, of the governing bearing case (kN)
 //	e_B      eccentricity along B (m)
 //	e_L      eccentricity along L (m) — not for a strip
 //	B'       effective width (m)
@@ -131,6 +131,8 @@
 //	A'       effective area (m2; m2/m strip)
 //	util_u   highest undrained utilisation — when an undrained case was checked
 //	util_dr  highest drained utilisation — when a drained case was checked
+//	H_d_h    design horizontal action of the governing sliding case — when sliding was checked
+//	V_d_h    its vertical action: V′_d drained (uplift deducted), V_d undrained
 //	R_h_d    design sliding resistance of the governing sliding case — when sliding was checked
 //	util_h   its utilisation H_d/R_h,d — when sliding was checked
 //

@@ -194,7 +194,7 @@ func (c *calc) summarise() {
 	}
 	if r.GoverningSliding >= 0 {
 		s := r.Sliding[r.GoverningSliding]
-		r.Values = append(r.Values, val("R_h_d", s.R, c.uF), val("util_h", s.Util, ""))
+		r.Values = append(r.Values, val("H_d_h", s.H, c.uF), val("V_d_h", s.V, c.uF), val("R_h_d", s.R, c.uF), val("util_h", s.Util, ""))
 		c.whole("governing-sliding", fmt.Sprintf("Sliding governed by %s: utilisation %.3f.", s.Name, s.Util), val("util_h", s.Util, ""))
 	}
 }

@@ -14,11 +14,12 @@ import (
 var bearingNotes = map[string]string{
 	"R_d": "design bearing resistance, governing case", "util": "bearing utilisation V_d/R_d, governing case",
 	"q_Ed": "design bearing pressure V_d/A'", "q_Rd": "design resistance pressure R_d/A'",
-	"q_ult": "ultimate bearing pressure used", "V_d": "design vertical action, governing case",
-	"H_d": "design horizontal action, governing case", "e_B": "eccentricity along B", "e_L": "eccentricity along L",
+	"q_ult": "ultimate bearing pressure used", "V_d": "design vertical action, governing bearing case",
+	"H_d": "design horizontal action, governing bearing case", "e_B": "eccentricity along B", "e_L": "eccentricity along L",
 	"B'": "effective width", "L'": "effective length", "A'": "effective area",
 	"util_u": "highest undrained (short-term) utilisation", "util_dr": "highest drained (long-term) utilisation",
-	"R_h_d": "design sliding resistance, governing case", "util_h": "sliding utilisation, governing case",
+	"R_h_d": "design sliding resistance, governing sliding case", "util_h": "sliding utilisation, governing sliding case",
+	"H_d_h": "design horizontal action, governing sliding case", "V_d_h": "design vertical action of the governing sliding case (V'_d drained, V_d undrained)",
 }
 
 // bearingInput builds the engine input shared by bearing and capacity
@@ -139,7 +140,7 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 	if res.GoverningSliding >= 0 {
 		c := res.Sliding[res.GoverningSliding]
 		fu := forceUnit(in.Footing)
-		e.addCheck(s, blk, blk.Name+" sliding: H_d <= R_h_d", "<=",
+		e.addCheck(s, blk, blk.Name+" sliding: H_d_h <= R_h_d", "<=",
 			units.Quantity{V: c.H, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
 			"sliding resistance, governing case: "+c.Name)
 	}

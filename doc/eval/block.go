@@ -53,7 +53,7 @@ func (s *Sheet) Blocks() []*Block {
 // resultNames lists the symbols each analysis kind may define, for
 // "used above its definition" messages before evaluation.
 var resultNames = map[sheet.Kind][]string{
-	sheet.KindBearing: {"R_d", "util", "q_Ed", "q_Rd", "q_ult", "V_d", "H_d", "e_B", "e_L", "B'", "L'", "A'", "util_u", "util_dr", "R_h_d", "util_h"},
+	sheet.KindBearing: {"R_d", "util", "q_Ed", "q_Rd", "q_ult", "V_d", "H_d", "e_B", "e_L", "B'", "L'", "A'", "util_u", "util_dr", "H_d_h", "V_d_h", "R_h_d", "util_h"},
 }
 
 // findFooting and findGround look a block name up on the sheet and the
