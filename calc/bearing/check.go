@@ -26,18 +26,22 @@ type calc struct {
 
 	uF, uM, uA string // display units of forces, moments, areas
 
-	fi    int     // founding layer
-	weak  int     // weakest lower layer within 2B below the base (-1 none)
-	zw    float64 // water depth (+Inf when none)
-	sv0   float64 // σ_v0 at the base
-	u0    float64
-	sv0e  float64
-	gEffK float64 // γ′ of the N_γ term, founding layer
-	local bool    // Terzaghi's local shear applies to the founding layer
-	hcLim bool    // the current undrained case has H_d > A′c_u,d
-	pf    [4]bool // partial factors γ_φ′, γ_c′, γ_cu, γ_γ recorded in this case
-	once  []string
-	lname []string // layer names as printed
+	fi   int // founding layer
+	weak int // weakest lower layer within 2B below the base (-1 none)
+	// weakCaution is the index of the weaker-layer caution (-1 none),
+	// completed with the governing case's r_q; weakName names the layer.
+	weakCaution int
+	weakName    string
+	zw          float64 // water depth (+Inf when none)
+	sv0         float64 // σ_v0 at the base
+	u0          float64
+	sv0e        float64
+	gEffK       float64 // γ′ of the N_γ term, founding layer
+	local       bool    // Terzaghi's local shear applies to the founding layer
+	hcLim       bool    // the current undrained case has H_d > A′c_u,d
+	pf          [4]bool // partial factors γ_φ′, γ_c′, γ_cu, γ_γ recorded in this case
+	once        []string
+	lname       []string // layer names as printed
 }
 
 // Check runs the bearing (and sliding) calculation of in: every design
@@ -87,7 +91,7 @@ func Check(in Input) (*Result, error) {
 func newCalc(in Input, opt Options) *calc {
 	c := &calc{
 		in: in, opt: opt, ap: opt.Approach, g: in.Ground, f: in.Footing, acts: in.Actions,
-		uF: "kN", uM: "kNm", uA: "m2", weak: -1,
+		uF: "kN", uM: "kNm", uA: "m2", weak: -1, weakCaution: -1,
 	}
 	if c.f.Shape == site.Strip {
 		c.uF, c.uM, c.uA = "kN/m", "kNm/m", "m2/m"

@@ -95,7 +95,12 @@ func (c *calc) layers() {
 			val("r_q", bestR, ""))
 		return
 	}
-	c.warn("weaker-layer", trace.SevWarning, refMH, fmt.Sprintf("%s (top %.2f m) within 2B below the base is weaker than the founding layer (characteristic q_2/q_1 = %.2f): checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", layerName(g, best), g.Layers[best].Top, bestR),
+	// The message is completed in summarise with the ratio r_q the
+	// governing case's working shows (design values), so the caution
+	// quotes the number printed beside it.
+	c.weakCaution = len(c.t.Cautions)
+	c.weakName = fmt.Sprintf("%s (top %.2f m)", layerName(g, best), g.Layers[best].Top)
+	c.warn("weaker-layer", trace.SevWarning, refMH, fmt.Sprintf("%s within 2B below the base is weaker than the founding layer: checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", c.weakName),
 		val("r_q", bestR, ""))
 }
 

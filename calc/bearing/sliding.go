@@ -172,6 +172,7 @@ func (c *calc) summarise() {
 	if r.Governing >= 0 {
 		g := r.Cases[r.Governing]
 		r.GoverningDrainage = g.Drainage
+		c.completeWeak(g.Name)
 		c.whole("governing", fmt.Sprintf("Bearing governed by %s: utilisation %.3f; the %s case governs.", g.Name, g.Util, g.Drainage), val("util", g.Util, ""))
 		strip := c.f.Shape == site.Strip
 		r.Values = append(r.Values,
@@ -197,6 +198,35 @@ func (c *calc) summarise() {
 		r.Values = append(r.Values, val("H_d_h", s.H, c.uF), val("V_d_h", s.V, c.uF), val("R_h_d", s.R, c.uF), val("util_h", s.Util, ""))
 		c.whole("governing-sliding", fmt.Sprintf("Sliding governed by %s: utilisation %.3f.", s.Name, s.Util), val("util_h", s.Util, ""))
 	}
+}
+
+// completeWeak rewrites the weaker-layer caution with the bearing capacity
+// ratio r_q = q_2/q_1 of the governing case, as its working prints it,
+// and the range over the cases.
+func (c *calc) completeWeak(governing string) {
+	if c.weakCaution < 0 || c.weakCaution >= len(c.t.Cautions) {
+		return
+	}
+	gov, lo, hi, n := 0.0, math.Inf(1), math.Inf(-1), 0
+	for _, s := range c.t.Steps {
+		if s.Symbol != "r_q" {
+			continue
+		}
+		if s.Case == governing {
+			gov = s.Value
+		}
+		lo, hi, n = math.Min(lo, s.Value), math.Max(hi, s.Value), n+1
+	}
+	if n == 0 {
+		return
+	}
+	ca := &c.t.Cautions[c.weakCaution]
+	span := ""
+	if hi-lo > 5e-4 {
+		span = fmt.Sprintf("; %.3f to %.3f over the cases", lo, hi)
+	}
+	ca.Message = fmt.Sprintf("%s within 2B below the base is weaker than the founding layer (q_2/q_1 = r_q = %.3f in the governing case%s, design values): checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", c.weakName, gov, span)
+	ca.Values = []trace.Value{val("r_q", gov, "")}
 }
 
 // whole records a note about the calculation as a whole (Step -1; Warn

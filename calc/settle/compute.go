@@ -177,7 +177,7 @@ func (k *calc) totals(m Method) {
 		if fx == nil {
 			k.add(cs, "s_i", nil, nil, 0, "mm", trace.Ref{}, "no immediate settlement computed")
 			if m == Consolidation {
-				k.warn(cs, "no-immediate", trace.SevNote, trace.Ref{}, "the consolidation method gives no immediate settlement; method = auto adds it from E_u and E′")
+				k.warn(cs, "no-immediate", trace.SevNote, trace.Ref{}, "the consolidation method gives no immediate settlement; without a method line (plinth then chooses elastic+consolidation from the layers' data) adds it from E_u and E′")
 			}
 		} else {
 			k.add(cs, "s_i", fx, in, si, "mm", trace.Ref{}, "immediate settlement")
