@@ -12,7 +12,7 @@ import (
 type Capacity struct {
 	B, L     float64  // width and length used (L = 0 for a strip)
 	QUlt     float64  // ultimate bearing pressure of the governing case, with its design parameters (characteristic for FS), Pa
-	QRd      float64  // design bearing resistance pressure R_d/A (allowable pressure q_a for an FS approach), Pa
+	QRd      float64  // design bearing resistance pressure R_d/A (allowable pressure q_a for an FS approach), gross total, Pa: a drained case's effective pressure plus u_0
 	Drainage Drainage // the drainage condition that governs
 	Case     string   // the governing case
 	Trace    trace.Trace
@@ -34,6 +34,7 @@ func CapacityAt(in Input, B float64) (*Capacity, error) {
 	in.Footing = f
 	in.Actions = []site.Action{{Name: "unit", Kind: site.Permanent, V: 1}}
 	in.Options.Sliding = No
+	in.gross = true
 	r, err := Check(in)
 	if err != nil {
 		return nil, err
@@ -45,12 +46,24 @@ func CapacityAt(in Input, B float64) (*Capacity, error) {
 		cp.L = B
 	}
 	for _, cs := range r.Cases {
-		if cs.QRd < cp.QRd {
-			cp.QRd, cp.QUlt, cp.Drainage, cp.Case = cs.QRd, cs.QUlt, cs.Drainage, cs.Name
+		// One convention with the settlement and the footing's own check:
+		// the table gives gross total pressures, so a drained (effective)
+		// resistance pressure gains the pore pressure at the base back:
+		// q_a = (q_ult − q′)/FS + q′ + u_0 = q_net/FS + σ_v0.
+		q := cs.QRd + cs.U0
+		if q < cp.QRd {
+			cp.QRd, cp.QUlt, cp.Drainage, cp.Case = q, cs.QUlt, cs.Drainage, cs.Name
 		}
 	}
 	if math.IsInf(cp.QRd, 1) {
 		cp.QRd = 0
+	}
+	for _, cs := range r.Cases {
+		if cs.Name == cp.Case && cs.U0 > 0 {
+			cp.Trace.Add(trace.Step{Symbol: "q_a", Formula: add(sym("q_Rd"), sym("u_0")), Value: cp.QRd, Unit: "kPa", Case: cs.Name,
+				Inputs: []trace.Value{val("q_Rd", cs.QRd, "kPa"), val("u_0", cs.U0, "kPa")}, Ref: ref6521,
+				Note: "gross allowable pressure: the effective resistance pressure with the pore pressure at the base added back (q_net/FS + σ_v0)"})
+		}
 	}
 	return cp, nil
 }

@@ -108,6 +108,10 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 	c.pf = [4]bool{}
 	start := len(c.t.Steps)
 	ld.Record(c.t, c.acts, name, c.uF, c.uM)
+	var u float64
+	if d == Drained && c.u0 > 0 && !c.in.gross {
+		ld.V, u = c.buoyant(start, ld.V)
+	}
 	if ld.V <= 0 {
 		if c.r.Uplift == 0 || ld.V > c.r.UpliftV {
 			c.r.UpliftV = ld.V
@@ -117,7 +121,10 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 		return
 	}
 	g, ok := c.geometry(ld, false)
-	cs := Case{Name: name, Combination: ld.Name, Drainage: d, V: ld.V, H: g.H, EB: g.eB, EL: g.eL}
+	cs := Case{Name: name, Combination: ld.Name, Drainage: d, V: ld.V, H: g.H, EB: g.eB, EL: g.eL, U: u}
+	if d == Drained {
+		cs.U0 = c.u0
+	}
 	if !ok {
 		cs.Util = c.take("util", UtilCap, "", trace.Ref{}, "no effective area: the check fails")
 		cs.Factors = c.factors(start)
@@ -224,6 +231,32 @@ func isFactor(s string) bool {
 		}
 	}
 	return false
+}
+
+// buoyant applies plinth's one convention for water below the base in a
+// drained (effective-stress) case: the water pressure on the base,
+// U = u_0·A_b, acts upward on the whole plan area and is deducted from the
+// design vertical action, V_d = V_d,tot − U, so the effective action is
+// compared with the effective-stress resistance (EN 1997-1:2004 2.4.2(4),
+// 6.5.2.1(1)P: actions include water pressures; Bond & Harris, Decoding
+// Eurocode 7 (2008), ch. 10, deduct the uplift for drained bearing as for
+// sliding, 6.5.3; clause numbers from memory). Groundwater pressures enter at their design level with
+// no factor (EN 1997-1 2.4.6.1(6)P, common practice). The recorded V_d of
+// the combination (from index start) is renamed V_d,tot; the new V_d
+// step is the effective action every later formula reads.
+func (c *calc) buoyant(start int, v float64) (float64, float64) {
+	for i := len(c.t.Steps) - 1; i >= start; i-- {
+		if c.t.Steps[i].Symbol == "V_d" {
+			c.t.Steps[i].Symbol = "V_d_tot"
+			c.t.Steps[i].Note = "design vertical action, total"
+			break
+		}
+	}
+	A := c.f.Area()
+	c.take("A_b", A, c.uA, trace.Ref{}, "plan area of the base")
+	U := c.step("U", mul(sym("u_0"), sym("A_b")), c.u0*A, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
+	vp := c.step("V_d", sub(sym("V_d_tot"), sym("U")), v-U, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
+	return vp, U
 }
 
 // geometry records H_d, the eccentricities and the effective dimensions

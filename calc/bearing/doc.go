@@ -97,6 +97,23 @@
 // 1H:2V, common practice) as a footing B_s × L_s at its top; a failing
 // spread check raises a CAUTION but does not change R_d.
 //
+// # Water pressure and net pressure (one convention)
+//
+// Drained cases are effective-stress checks throughout: where the
+// groundwater stands above the base, the water pressure on the base
+// U = u_0·A_b (design groundwater level, unfactored) is deducted from the
+// design vertical action, V_d = V_d,tot − U, before the eccentricity, the
+// inclination factors and q_Ed = V_d/A′ are found, as it is for sliding
+// (V′_d, 6.5.3); the trace records V_d,tot, U and V_d. Undrained cases are
+// total-stress checks and compare the total V_d. "Net pressure" means the
+// gross total pressure less the total overburden at founding level,
+// q_net = q − σ_v0, which in effective terms is the same number
+// q′ − σ′_v0; settlement uses it, the allowable-stress resistance is
+// q_net,ult/FS plus the overburden (q′ drained, effective; q undrained),
+// and the capacity table reports gross total pressures (a drained case's
+// effective pressure plus u_0), so the table, the footing's own check and
+// the settlement all compare like with like.
+//
 // # Local shear
 //
 // Terzaghi's (1943) c* = ⅔c, tan φ* = ⅔ tan φ are applied to the founding

@@ -130,6 +130,10 @@ type Input struct {
 	Footing site.Footing
 	Actions []site.Action // characteristic, at the underside of the footing
 	Options Options
+	// gross is set by CapacityAt: drained cases keep the unit load whole
+	// (no water pressure deducted), and the table adds u_0 back to the
+	// effective resistance pressure to give a gross one.
+	gross bool
 }
 
 const (

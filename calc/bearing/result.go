@@ -13,7 +13,9 @@ type Case struct {
 	Name        string   // "DA1-C2 · Imposed leading · G sup · drained"; the trace's Step.Case
 	Combination string   // the design load's name, "DA1-C2 · Imposed leading · G sup"
 	Drainage    Drainage // Undrained or Drained
-	V, H        float64  // V_d and resultant H_d
+	V, H        float64  // V_d and resultant H_d; drained: V_d less the water pressure on the base (see U)
+	U           float64  // drained: the water pressure on the base u_0·A_b deducted from V_d (0 when none)
+	U0          float64  // drained: the pore pressure u_0 at the base, Pa (0 undrained or dry)
 	EB, EL      float64  // eccentricities e_B, e_L
 	B, L, A     float64  // effective B′, L′ (0 for a strip: unbounded), A′ (m² per m for a strip)
 	QUlt        float64  // ultimate bearing pressure used (the lesser of single and two-layer values)

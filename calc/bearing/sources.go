@@ -29,6 +29,7 @@ var (
 	refD4     = trace.Ref{Source: trace.EN1997, Clause: "Annex D, D.4"}
 	ref652    = trace.Ref{Source: trace.EN1997, Clause: "6.5.2.1, eq. (6.1)"}
 	ref654    = trace.Ref{Source: trace.EN1997, Clause: "6.5.4(1)P"}
+	ref6521   = trace.Ref{Source: trace.EN1997, Clause: "2.4.2(4) (water pressures are actions), 6.5.2.1"}
 	refA4     = trace.Ref{Source: trace.EN1997, Clause: "Annex A, Table A.4"}
 	refA5     = trace.Ref{Source: trace.EN1997, Clause: "Annex A, Table A.5"}
 	refMat    = trace.Ref{Source: trace.EN1997, Clause: "2.4.6.2, eq. (2.2)"}

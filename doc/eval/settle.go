@@ -31,7 +31,7 @@ type CapacityResult = capacity.Result
 // names that would clash with a bearing block on the same footing are
 // renamed (util → util_s, q → q_SLS).
 var settleNotes = map[string]string{
-	"q_SLS": "gross bearing pressure, serviceability load", "q_net": "net bearing pressure (gross less overburden removed)",
+	"q_SLS": "gross bearing pressure, serviceability load", "q_net": "net bearing pressure q - sigma_v0 (gross less the total overburden at founding level)",
 	"z_inf": "depth of the zone of influence below ground level", "s_i": "immediate settlement",
 	"s_c": "consolidation settlement", "s_sec": "secondary compression (creep) at the design life",
 	"s_total": "total settlement", "s_lim": "settlement limit", "util_s": "settlement utilisation s_total/s_lim",
