@@ -3,6 +3,7 @@ package capacity
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"plinth/calc/bearing"
 	"plinth/calc/settle"
@@ -44,6 +45,49 @@ var refMin = trace.Ref{Source: Source, Clause: "allowable pressure = lower of be
 
 // Source names the practice the table follows.
 var Source = trace.Source{Key: "Tomlinson2001", Citation: "Tomlinson, M. J. (2001). Foundation Design and Construction, 7th ed. Prentice Hall, Harlow (allowable bearing pressure as the lower of the pressures limited by shear failure and by settlement; edition from memory)."}
+
+// Assumes is the load every row of the table assumes: the bearing-limited
+// pressures are for a vertical load at the centre of the base (no
+// inclination or eccentricity factors, the full area).
+const Assumes = "vertical, central load"
+
+// loadCaution warns when the footing's own characteristic actions are
+// inclined or eccentric, which the table does not allow for: its
+// pressures are then higher than the footing can carry, and the bearing
+// block's check of the footing (which applies the inclination factors and
+// the effective area) governs. The ratios are of the characteristic
+// resultant, Σ over the actions (common practice).
+func loadCaution(t *trace.Trace, in bearing.Input) {
+	var V, HB, HL, MB, ML float64
+	for _, a := range in.Actions {
+		V, HB, HL, MB, ML = V+a.V, HB+a.HB, HL+a.HL, MB+a.MB, ML+a.ML
+	}
+	H := math.Hypot(HB, HL)
+	if H == 0 && MB == 0 && ML == 0 {
+		return
+	}
+	f := in.Footing
+	var parts []string
+	vals := []trace.Value{}
+	if V > 0 && H > 0 {
+		parts = append(parts, fmt.Sprintf("inclined (H/V = %.3f)", H/V))
+		vals = append(vals, trace.Value{Symbol: "H/V", V: H / V})
+	}
+	if V > 0 && (MB != 0 || ML != 0) {
+		e := fmt.Sprintf("e_B/B = %.3f", math.Abs(MB)/V/f.B)
+		vals = append(vals, trace.Value{Symbol: "e_B/B", V: math.Abs(MB) / V / f.B})
+		if f.Shape != site.Strip && ML != 0 && f.L > 0 {
+			e += fmt.Sprintf(", e_L/L = %.3f", math.Abs(ML)/V/f.L)
+		}
+		parts = append(parts, "eccentric ("+e+")")
+	}
+	if len(parts) == 0 {
+		parts = append(parts, "not a downward central load")
+	}
+	t.Warn(trace.Caution{Code: "capacity-load", Severity: trace.SevWarning, Step: -1, Values: vals,
+		Message: "the allowable pressures assume a " + Assumes + "; the footing's own characteristic actions are " + strings.Join(parts, " and ") +
+			", so the footing cannot use the pressures tabulated: its bearing block, which applies the inclination factors and the effective area, governs."})
+}
 
 // Table computes the allowable pressure for every width.
 func Table(in Input) (*Result, error) {
@@ -115,6 +159,7 @@ func Table(in Input) (*Result, error) {
 		}
 		r.Rows = append(r.Rows, row)
 	}
+	loadCaution(&r.Trace, in.Bearing)
 	own := r.Rows[r.Own]
 	r.Values = []trace.Value{
 		{Symbol: "q_allow", V: own.QAllow, Unit: "kPa"},

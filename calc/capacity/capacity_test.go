@@ -1,6 +1,7 @@
 package capacity_test
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -99,5 +100,40 @@ func TestUndrainedHand(t *testing.T) {
 	want := (math.Pi+2)*75e3*1.2/3 + 19e3
 	if got := r.Rows[r.Own].QBearing; math.Abs(got-want) > 100 {
 		t.Errorf("q_a,b = %.1f kPa, want %.1f kPa", got/1e3, want/1e3)
+	}
+}
+
+// TestLoadAssumption: the table assumes a vertical, central load; when
+// the footing's own characteristic actions are inclined or eccentric a
+// warning says so with their ratios (hand calculation: H/V = 40/800 =
+// 0.050, e_B/B = (80/800)/B).
+func TestLoadAssumption(t *testing.T) {
+	in := input()
+	r, err := capacity.Table(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range r.Trace.Cautions {
+		if c.Code == "capacity-load" {
+			t.Fatalf("vertical central actions: unexpected %q", c.Message)
+		}
+	}
+	in.Bearing.Actions = []site.Action{{Name: "G", V: 800e3, HB: 40e3, MB: 80e3}}
+	r, err = capacity.Table(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	found := false
+	want := fmt.Sprintf("inclined (H/V = 0.050) and eccentric (e_B/B = %.3f)", 0.1/in.Bearing.Footing.B)
+	for _, c := range r.Trace.Cautions {
+		if c.Code == "capacity-load" {
+			found = true
+			if !strings.Contains(c.Message, want) || !strings.Contains(c.Message, capacity.Assumes) {
+				t.Errorf("message %q lacks %q", c.Message, want)
+			}
+		}
+	}
+	if !found {
+		t.Error("no capacity-load warning for inclined, eccentric actions")
 	}
 }

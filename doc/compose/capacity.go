@@ -3,6 +3,7 @@ package compose
 import (
 	"fmt"
 	"math"
+	"plinth/calc/capacity"
 	"strings"
 
 	"plinth/doc/chart"
@@ -17,8 +18,8 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 	r := b.Capacity
 	o := c.engineOut(s, b)
 	o.head(fmt.Sprintf("Allowable bearing pressure against width: %s on %s", b.Of.Name, b.On.Name))
-	intro := fmt.Sprintf("Bearing-limited pressure by %s; settlement-limited pressure for a settlement of %s. The allowable pressure is the lower of the two.",
-		r.Approach, f(r.Limit, mm)+" mm")
+	intro := fmt.Sprintf("Bearing-limited pressure by %s for a %s; settlement-limited pressure for a settlement of %s. The allowable pressure is the lower of the two.",
+		r.Approach, capacity.Assumes, f(r.Limit, mm)+" mm")
 	if len(b.Options) > 0 {
 		intro += " Options: " + strings.Join(b.Options, ", ") + "."
 	}
@@ -31,7 +32,7 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 	t := &layout.Table{Pos: o.p,
 		Header:  []layout.Cell{unitHeader("B", "m"), unitHeader("L", "m"), unitHeader("q_a_b", "kPa"), unitHeader("q_a_s", "kPa"), unitHeader("q_allow", "kPa"), {txt("Governs")}, {txt("Bearing case")}},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
-		Caption: []layout.Run{txt(fmt.Sprintf("Allowable pressure against width for %s; the footing's own width is marked.", b.Of.Name))}}
+		Caption: []layout.Run{txt(fmt.Sprintf("Allowable pressure against width for %s, %s; the footing's own width is marked.", b.Of.Name, capacity.Assumes))}}
 	var xs, qb, qs, qa []float64
 	for i, row := range r.Rows {
 		l := "—"
