@@ -85,6 +85,10 @@ func Check(in Input) (*Result, error) {
 		}
 	}
 	c.summarise()
+	c.r.MethodLine = opt.Method.Title()
+	if c.local {
+		c.r.MethodLine += " with Terzaghi's (1943) local-shear reduction"
+	}
 	return c.r, nil
 }
 

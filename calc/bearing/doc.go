@@ -116,14 +116,20 @@
 //
 // # Local shear
 //
-// Terzaghi's (1943) c* = ⅔c, tan φ* = ⅔ tan φ are applied to the founding
-// layer when local_shear = yes, or with auto when the layer is loose or
-// very loose (density index I_D < 0.35, EN ISO 14688-2:2004 Table 4; or,
-// without I_D, SPT N < 10, Terzaghi & Peck 1948) or of low or lower
-// undrained strength (c_u < 40 kPa, EN ISO 14688-2:2004 Table 5) — the
-// local and punching shear region of Vesić's (1973) failure-mode chart at
-// any embedment. Medium-dense sand (0.35 ≤ I_D < 0.65, 10 ≤ N < 30) and
-// medium clay (40–75 kPa) raise a warning (transitional).
+// Terzaghi's (1943) c* = 2c/3, tan φ* = (2/3) tan φ, for the founding layer.
+// Criteria: loose or very loose sand (density index I_D < 0.35, EN ISO
+// 14688-2 Table 4; without I_D, SPT N < 10, Terzaghi & Peck 1948), the
+// local and punching shear region of Vesić's (1973) failure modes against
+// relative density; soft clay (c_u < 40 kPa, low strength in EN ISO
+// 14688-2 Table 5), Terzaghi's (1943) own case for local shear. Vesić's
+// chart is not applied to c_u. With local_shear = auto and Terzaghi's
+// method, the reduction is applied where these say (his method carries
+// it); with any other method the method's own result is kept and a
+// CAUTION (local-shear-advised) recommends local_shear = yes: plinth never
+// changes a named method silently. local_shear = yes applies the reduction
+// with any method, and Result.MethodLine then reads "… with Terzaghi's
+// (1943) local-shear reduction". Medium-dense sand raises a WARNING
+// (transitional); a firm clay raises nothing.
 //
 // # Sliding
 //

@@ -55,6 +55,16 @@ func (m Method) String() string {
 	return fmt.Sprintf("Method(%d)", int(m))
 }
 
+var methodTitles = [...]string{"EN 1997-1:2004 Annex D", "Vesić (1973, 1975)", "Meyerhof (1963)", "Brinch Hansen (1970)", "Terzaghi (1943)"}
+
+// Title names the method for the reader ("EN 1997-1:2004 Annex D").
+func (m Method) Title() string {
+	if m >= 0 && int(m) < len(methodTitles) {
+		return methodTitles[m]
+	}
+	return m.String()
+}
+
 // ParseMethod reads a method option as written in a sheet.
 func ParseMethod(s string) (Method, bool) { return parseEnum[Method](s, methodNames[:]) }
 

@@ -244,7 +244,11 @@ func TestCapacityAt(t *testing.T) {
 // medium dense 35–65 %; N 4–10 loose, 10–30 medium dense), the c_u ones by
 // a reproduction of the BS 5930 / EN ISO 14688-2 terms (soft 20–40, firm
 // 40–75, stiff 75–150 kPa). Exact at the boundary: the lower class ends
-// below it.
+// below it. With a method other than Terzaghi's the result stays that
+// method's (a CAUTION, local-shear-advised, recommends the check); with
+// Terzaghi's own method auto applies his reduction (local-shear). The
+// transitional warning is for sands only: Vesić's chart is one of
+// relative density, and a firm clay raises nothing.
 func TestLocalShearAuto(t *testing.T) {
 	sand := func(dr, n site.Opt) site.Layer {
 		return site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(30 * deg), Dr: dr, N: n}
@@ -265,14 +269,35 @@ func TestLocalShearAuto(t *testing.T) {
 		{"N 10", sand(site.Opt{}, site.Some(10)), false, true},
 		{"N 30", sand(site.Opt{}, site.Some(30)), false, false},
 		{"c_u 39 kPa", clay(39e3), true, false},
-		{"c_u 40 kPa", clay(40e3), false, true},
+		{"c_u 40 kPa", clay(40e3), false, false},
 		{"c_u 75 kPa", clay(75e3), false, false},
 	} {
 		in := bearing.Input{Ground: oneLayer(r.l), Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
 			Actions: []site.Action{{Name: "G", V: 300e3}}, Options: bearing.Options{Approach: design.FS(3)}}
 		res := check(t, r.name, in)
-		if hasCaution(res, "local-shear") != r.local || hasCaution(res, "local-shear-transitional") != r.tran {
-			t.Errorf("%s: local %v transitional %v, want %v %v", r.name, hasCaution(res, "local-shear"), hasCaution(res, "local-shear-transitional"), r.local, r.tran)
+		if hasCaution(res, "local-shear-advised") != r.local || hasCaution(res, "local-shear") || hasCaution(res, "local-shear-transitional") != r.tran {
+			t.Errorf("%s (ec7): advised %v applied %v transitional %v, want %v false %v", r.name, hasCaution(res, "local-shear-advised"), hasCaution(res, "local-shear"), hasCaution(res, "local-shear-transitional"), r.local, r.tran)
+		}
+		if res.MethodLine != "EN 1997-1:2004 Annex D" {
+			t.Errorf("%s: method line %q", r.name, res.MethodLine)
+		}
+		// the named method's result is unchanged by auto
+		in.Options.LocalShear = bearing.No
+		if no := check(t, r.name, in); no.Cases[no.Governing].R != res.Cases[res.Governing].R {
+			t.Errorf("%s: auto changed the Annex D resistance", r.name)
+		}
+		in.Options.LocalShear = bearing.Auto
+		in.Options.Method = bearing.Terzaghi
+		tz := check(t, r.name, in)
+		if hasCaution(tz, "local-shear") != r.local {
+			t.Errorf("%s (terzaghi): applied %v, want %v", r.name, hasCaution(tz, "local-shear"), r.local)
+		}
+		want := "Terzaghi (1943)"
+		if r.local {
+			want += " with Terzaghi's (1943) local-shear reduction"
+		}
+		if tz.MethodLine != want {
+			t.Errorf("%s: method line %q, want %q", r.name, tz.MethodLine, want)
 		}
 	}
 }

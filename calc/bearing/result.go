@@ -60,7 +60,12 @@ type Result struct {
 	Approach string // design.Approach.Name
 	Source   string // where its factors come from
 	Method   Method
-	Cases    []Case
+	// MethodLine names what was computed: the method's title, with
+	// "with Terzaghi's (1943) local-shear reduction" when the reduced
+	// strengths were used, so no result carries a method's name unless it
+	// is that method.
+	MethodLine string
+	Cases      []Case
 	// Governing is the index in Cases of the highest utilisation (-1 if
 	// no case could be checked); GoverningDrainage is its drainage.
 	Governing         int

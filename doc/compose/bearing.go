@@ -12,15 +12,6 @@ import (
 	"plinth/doc/layout/eqn"
 )
 
-// methodWords names a bearing method for the reader.
-var methodWords = map[bearing.Method]string{
-	bearing.EC7:      "EN 1997-1:2004 Annex D",
-	bearing.Vesic:    "Vesić (1973, 1975)",
-	bearing.Meyerhof: "Meyerhof (1963)",
-	bearing.Hansen:   "Brinch Hansen (1970)",
-	bearing.Terzaghi: "Terzaghi (1943)",
-}
-
 // maxCaseCols is the most case columns a compact table holds before it
 // is split.
 const maxCaseCols = 6
@@ -37,7 +28,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	names, steps := groups(tr)
 
 	o.head(fmt.Sprintf("Bearing resistance of %s on %s", b.Of.Name, b.On.Name))
-	intro := fmt.Sprintf("Method: %s. Design approach %s", methodWords[r.Method], r.Approach)
+	intro := fmt.Sprintf("Method: %s. Design approach %s", r.MethodLine, r.Approach)
 	if r.Source != "" {
 		intro += " (" + r.Source + ")"
 	}
