@@ -244,3 +244,16 @@ func TestRenderRemovesStaleTemp(t *testing.T) {
 		}
 	}
 }
+
+// TestRenderUplift: a bearing check not verified (every combination lifts
+// the footing) has no utilisation and still renders, NOT OK, exit 1.
+func TestRenderUplift(t *testing.T) {
+	out := filepath.Join(t.TempDir(), "uplift.pdf")
+	_, errs, code := runCmd("render", "testdata/notverified", "-o", out)
+	if code != 1 {
+		t.Fatalf("status %d, want 1: %s", code, errs)
+	}
+	if _, err := os.Stat(out); err != nil {
+		t.Fatal(err)
+	}
+}

@@ -209,6 +209,15 @@ func (c *composer) sources(b *eval.Block) {
 // checkBlock prints an engine check (one that entered the check register)
 // with both sides, named by their symbols.
 func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
+	if !ch.HasUtil() {
+		// No utilisation (a check not verified, with no resistance): the
+		// relation and the verdict on one line, as for a calc check.
+		row := eqn.Row{eqn.Sym{Name: left}, eqn.Op{Text: "="}, valueNode(ch.L, ch.Unit, -1), eqn.Op{Text: relText[ch.Op]},
+			eqn.Sym{Name: right}, eqn.Op{Text: "="}, valueNode(ch.R, ch.Unit, -1)}
+		runs := []layout.Run{{Text: ch.Verdict(), Style: layout.Bold}, {Text: " (no utilisation) — "}}
+		runs = append(runs, richText(ch.Note.Value, layout.Regular)...)
+		return &layout.Statement{Pos: p, Symbol: row, Note: runs, Anchor: ch.Anchor}
+	}
 	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: valueNode(ch.L, ch.Unit, -1), Rel: ch.Op,
 		Right: eqn.Sym{Name: right}, RightValue: valueNode(ch.R, ch.Unit, -1),
 		Util: ch.Util, OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
