@@ -41,7 +41,11 @@ type calc struct {
 	hcLim       bool    // the current undrained case has H_d > A′c_u,d
 	pf          [4]bool // partial factors γ_φ′, γ_c′, γ_cu, γ_γ recorded in this case
 	once        []string
-	lname       []string // layer names as printed
+	// ksOut: φ′_d of each case whose K_s was extrapolated beyond BR 470
+	// Table A2, by case name, in case order (the caution quotes the
+	// governing case's value, the one its working shows).
+	ksOut []caseValue
+	lname []string // layer names as printed
 }
 
 // Check runs the bearing (and sliding) calculation of in: every design
@@ -280,4 +284,10 @@ func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, 
 		return c.step(name, f, v, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
 	}
 	return c.step(name, sym(gs), gam, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
+}
+
+// caseValue is a value recorded for one case.
+type caseValue struct {
+	cas string
+	v   float64
 }

@@ -187,6 +187,7 @@ func (c *calc) summarise() {
 		}
 		r.Values = append(r.Values, val("A'", g.A, c.uA))
 	}
+	c.ksCaution()
 	if uu >= 0 {
 		r.Values = append(r.Values, val("util_u", uu, ""))
 	}

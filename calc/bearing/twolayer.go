@@ -135,7 +135,7 @@ func (c *calc) twoLayer(ld design.Load, d Drainage, g *geo, top soil, qt float64
 			kt := c.step("K_p_tan_delta", nil, KpTanDelta(top.phi), "", refKs, "K_p·tanδ of the upper layer (BR 470 Table A2, log-linear in φ′)", vphi)
 			ks = c.step("K_s", div(sym("K_p_tan_delta"), fn("tan", sym("phi'_d"))), kt/math.Tan(top.phi), "", refKs, "punching shear coefficient", val("K_p_tan_delta", kt, ""), vphi)
 			if top.phi < 35*degr-1e-9 || top.phi > 45*degr+1e-9 {
-				c.warnOnce("ks-extrapolated", trace.SevWarning, refKs, fmt.Sprintf("φ′_d = %.1f° (first case) lies outside the 35°–45° of BR 470 Table A2: K_p·tanδ is extrapolated; enter K_s read from Meyerhof & Hanna's chart (option K_s) to replace it.", top.phi/degr), vphi)
+				c.ksOut = append(c.ksOut, caseValue{c.cas, top.phi})
 			} else {
 				c.warnOnce("ks-br470", trace.SevNote, refKs, "K_s comes from BR 470 Table A2 (K_p·tanδ), plinth's reading of the punching coefficient; it is not read from Meyerhof & Hanna's (1978) chart for this q_2/q_1. For a critical platform read K_s from the chart and enter it (option K_s).", vphi)
 			}
@@ -243,4 +243,32 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 	if !tl.SpreadOK {
 		c.warn("spread-fails", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %.2f: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, u), val("util_s", u, ""))
 	}
+}
+
+// ksCaution raises one warning when K_s was extrapolated beyond BR 470
+// Table A2 in any case, quoting the φ′_d of the governing case if it is
+// one of them (the working printed in full), else of the first, and
+// naming that case.
+func (c *calc) ksCaution() {
+	if len(c.ksOut) == 0 {
+		return
+	}
+	at := c.ksOut[0]
+	if g := c.r.Governing; g >= 0 {
+		for _, k := range c.ksOut {
+			if k.cas == c.r.Cases[g].Name {
+				at = k
+			}
+		}
+	}
+	more := ""
+	switch n := len(c.ksOut) - 1; {
+	case n == 1:
+		more = " (and in 1 other case, with its own φ′_d)"
+	case n > 1:
+		more = fmt.Sprintf(" (and in %d other cases, each with its own φ′_d)", n)
+	}
+	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "ks-extrapolated", Severity: trace.SevWarning, Ref: refKs, Step: -1, Case: at.cas,
+		Values:  []trace.Value{val("phi'_d", at.v, "deg")},
+		Message: fmt.Sprintf("φ′_d = %.1f° in %s%s lies outside the 35°–45° of BR 470 Table A2: K_p·tanδ is extrapolated; enter K_s read from Meyerhof & Hanna's chart (option K_s) to replace it.", at.v/degr, at.cas, more)})
 }
