@@ -144,6 +144,10 @@ func Table(in Input) (*Result, error) {
 			return nil, fmt.Errorf("capacity: no finite allowable pressure at B = %g m", b)
 		}
 		cas := fmt.Sprintf("B = %.3g m", b)
+		if al.Result != nil && len(al.Result.Unverified) > 0 {
+			r.Trace.Warn(trace.Caution{Code: "not-verified", Severity: trace.SevCaution, Step: -1, Case: cas,
+				Message: cas + ": the settlement-limited pressure is not verified: " + strings.Join(al.Result.Unverified, "; ") + "; q_a_s leaves that layer out, so the allowable pressure may be unsafe."})
+		}
 		qb := r.Trace.Add(trace.Step{Symbol: "q_a_b", Value: row.QBearing, Unit: "kPa", Case: cas,
 			Note: fmt.Sprintf("bearing-limited allowable pressure (%s, %s governs)", ap.Name, row.Drainage)})
 		qs := r.Trace.Add(trace.Step{Symbol: "q_a_s", Value: row.QSettle, Unit: "kPa", Case: cas,

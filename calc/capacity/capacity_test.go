@@ -137,3 +137,24 @@ func TestLoadAssumption(t *testing.T) {
 		t.Error("no capacity-load warning for inclined, eccentric actions")
 	}
 }
+
+// TestSettleNotVerified: a layer without stiffness under the table makes
+// each width's settlement-limited pressure "not verified" (a CAUTION),
+// never a silent pass.
+func TestSettleNotVerified(t *testing.T) {
+	in := input()
+	in.Bearing.Ground.Layers = append(in.Bearing.Ground.Layers, site.Layer{Name: "Silt", Top: 2.5, Gamma: 19e3, Cu: site.Some(60e3), Phi: site.Some(25 * deg)})
+	r, err := capacity.Table(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n := 0
+	for _, c := range r.Trace.Cautions {
+		if c.Code == "not-verified" && strings.Contains(c.Message, "Silt") {
+			n++
+		}
+	}
+	if n != len(r.Rows) {
+		t.Errorf("%d not-verified cautions for %d widths", n, len(r.Rows))
+	}
+}
