@@ -33,13 +33,14 @@ type composer struct {
 	nAnchor   int
 	cautions  []raised // engine cautions, for the cautions summary
 	contents  *layout.Table
-	sheetRows []int              // layout sheet of each contents row
-	matter    []matterTitle      // the matter sheets after the calculation sheets, in order
-	quote     int                // depth of block quotes being converted (their text is italic)
-	level     int                // level of the sheet's latest heading (engine sub-headings go below it)
-	refSeen   map[trace.Ref]bool // citations printed in the current engine block
-	appendix  []layout.Block     // working left out of the main flow (detail = governing)
-	pageRefs  []pageRef          // runs that print the page of an anchor
+	sheetRows []int                         // layout sheet of each contents row
+	matter    []matterTitle                 // the matter sheets after the calculation sheets, in order
+	quote     int                           // depth of block quotes being converted (their text is italic)
+	level     int                           // level of the sheet's latest heading (engine sub-headings go below it)
+	refSeen   map[trace.Ref]bool            // citations printed in the current engine block
+	appendix  []layout.Block                // working left out of the main flow (detail = governing)
+	pageRefs  []pageRef                     // runs that print the page of an anchor
+	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
 }
 
 // pageRef is a run that prints the page an anchor is on, filled in once

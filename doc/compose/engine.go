@@ -368,6 +368,20 @@ func (o *engineOut) selfWeight() {
 	if len(tr.Steps) == 0 {
 		return
 	}
+	w := tr.Steps[len(tr.Steps)-1]
+	if first, ok := o.c.selfShown[o.b.Of]; ok && o.c.governingOnly() {
+		runs := []layout.Run{txt("Self-weight added by plinth (self_weight = auto): "),
+			{Math: eqn.Row{eqn.Sym{Name: w.Symbol}, eqn.Op{Text: "="}, siNode(w.Value, w.Unit)}, Own: true},
+			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), {Text: "page —", Link: blockAnchor(first), Own: true}, txt(".")}
+		para := &layout.Para{Pos: o.p, Runs: runs}
+		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[3], anchor: blockAnchor(first), format: "page %d"})
+		o.add(para)
+		return
+	}
+	if o.c.selfShown == nil {
+		o.c.selfShown = map[*eval.Footing]*eval.Block{}
+	}
+	o.c.selfShown[o.b.Of] = o.b
 	o.label("Self-weight added by plinth (self_weight = auto)")
 	o.steps(tr, indices(len(tr.Steps)), "self-weight")
 }

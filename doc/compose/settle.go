@@ -285,9 +285,13 @@ func sameKind(names []string, kind string) []string {
 // again, and every value is in the table.
 func (o *engineOut) layerCases(tr *trace.Trace, groups []string, steps map[string][]int, kind string) {
 	idx := indices(len(groups))
-	cap := append([]layout.Run{txt(fmt.Sprintf("%s of every layer, by the formulas above (", capital(kind)))}, layerList(groups)...)
+	cap := append([]layout.Run{txt(fmt.Sprintf("%s of every layer, by the formulas above, a column per layer (", capital(kind)))}, layerList(groups)...)
 	cap = append(cap, txt(")."))
-	o.add(o.caseTable(tr, groups, idx, steps, "L", cap))
+	t := o.caseTable(tr, groups, idx, steps, "L", nil)
+	cap = append(cap, t.Caption...) // the values the same in every layer
+	t.Caption = nil
+	o.para(cap...)
+	o.add(t)
 	for _, g := range groups {
 		for j, ca := range tr.Cautions {
 			if ca.Case == g {
