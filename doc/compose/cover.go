@@ -132,8 +132,8 @@ func (c *composer) cover() layout.Sheet {
 		row("Current revision", user(strings.TrimSpace(r.Rev.Value+"  "+r.Date.Value+"  "+r.Note.Value)))
 	}
 	row("Page template", user(c.tpl.Name))
-	row("National annex", user(m.NationalAnnex.Value))
-	row("Partial factors", user(m.Factors.Value))
+	row("Design basis", txt("standard, national annex, partial factors, Geotechnical Category, design life, consequence class and exclusions: see the "),
+		layout.Run{Text: "summary of results", Link: "summary", Own: true})
 	row("Input fingerprint", layout.Run{Text: c.res.Fingerprint(), Style: layout.Mono})
 	if c.res.Variant() {
 		var list []string
@@ -166,9 +166,6 @@ func (c *composer) cover() layout.Sheet {
 		}})
 	}
 	add(c.contents)
-
-	add(heading(p, 2, "Checks"))
-	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
 
 	add(heading(p, 2, "Revision history"))
 	if len(m.Revisions) == 0 {

@@ -113,6 +113,9 @@ func (c *composer) summary() layout.Sheet {
 	}
 	add(basis)
 
+	add(heading(p, 2, "Checks"))
+	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
+
 	add(heading(p, 2, "Results by foundation"))
 	rows := c.summaryRows()
 	if len(rows) == 0 {

@@ -89,3 +89,40 @@ func TestSummary(t *testing.T) {
 		}
 	}
 }
+
+// TestDetail: detail = full prints every case in place, with no
+// appendix; the default (governing) moves the distant cases there, so
+// the sheets themselves (cover to the last calculation sheet) are
+// shorter.
+func TestDetail(t *testing.T) {
+	res := evaluate(t, "../../examples/brackenfield")
+	count := func() (main, total int, apx bool) {
+		pages, d := compose.Pages(res, compose.Options{})
+		if d.HasErrors() {
+			t.Fatal(d)
+		}
+		doc, _ := compose.Document(res, compose.Options{})
+		for _, sh := range doc.Sheets {
+			if sh.Bookmark == "Appendix: further working" {
+				apx = true
+			}
+		}
+		last := 1 + len(res.Sheets) // cover, summary, the sheets
+		for _, pg := range pages.Pages {
+			if pg.Sheet <= last {
+				main++
+			}
+		}
+		return main, len(pages.Pages), apx
+	}
+	gov, govTotal, govApx := count()
+	res.Src.Meta.Detail.Value = "full"
+	full, fullTotal, fullApx := count()
+	if !govApx || fullApx {
+		t.Errorf("appendix: governing %v, full %v; want true, false", govApx, fullApx)
+	}
+	if gov >= full {
+		t.Errorf("the sheets take %d pages with detail = governing, %d with full: want fewer", gov, full)
+	}
+	t.Logf("pages to the last sheet: governing %d, full %d; in all: governing %d, full %d", gov, full, govTotal, fullTotal)
+}
