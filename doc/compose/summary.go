@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"sort"
 	"strings"
 
 	"plinth/calc/site"
@@ -141,7 +142,9 @@ func (c *composer) summary() layout.Sheet {
 		}
 	}
 	seen := map[string]bool{}
-	for _, r := range c.cautions {
+	list := append([]raised(nil), c.cautions...)
+	sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
+	for _, r := range list {
 		if !openCaution(r) || seen[r.where+r.text] {
 			continue
 		}
@@ -200,8 +203,8 @@ func openCaution(r raised) bool {
 func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	p := c.matterPos()
 	t := &layout.Table{Pos: p,
-		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Size, depth, stratum")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
-			cell(txt("Settlement (SLS)")), cell(txt("Allowable pressure")), cell(txt("Warnings"))},
+		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
+			cell(txt("Settlement (SLS); allowable pressure")), cell(txt("Warnings"))},
 		Caption: []layout.Run{txt("Governing utilisation and verdict of each check with its governing case; short and long term where both apply; warnings counts the WARNINGs and CAUTIONs the engine raised. Each foundation links to its page.")}}
 	for _, fr := range rows {
 		b := fr.footing
@@ -223,7 +226,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		for _, a := range gov {
 			if st := a.Stratum(); st != "" && !strata[st] {
 				strata[st] = true
-				size = append(size, txt("\non "), user(st))
+				size = append(size, txt(" on "), user(st))
 			}
 			switch {
 			case a.Bearing != nil:
@@ -258,8 +261,17 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			}
 			name = append(name, txt(more))
 		}
+		name = append(name, txt("\n"))
+		name = append(name, size...)
+		if len(allow) > 0 {
+			if len(settl) > 0 {
+				settl = append(settl, txt("\n"))
+			}
+			settl = append(settl, allow...)
+		}
+		// the page run is registered once the cell is complete (appends move it)
 		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, size, dash(bear), dash(slide), dash(settl), dash(allow), {txt(fmt.Sprint(warn))}}})
+		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
 	}
 	return t
 }

@@ -59,7 +59,7 @@ func TestSummary(t *testing.T) {
 	if len(footings) == 0 || len(rows) != len(footings) {
 		t.Fatalf("summary has %d rows for %d footing blocks", len(rows), len(footings))
 	}
-	col := map[string]int{"bearing": 2, "sliding": 3, "settlement": 4}
+	col := map[string]int{"bearing": 1, "sliding": 2, "settlement": 3}
 	for _, f := range footings {
 		row, ok := rows[f.Name]
 		if !ok {
