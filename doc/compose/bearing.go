@@ -307,13 +307,13 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 }
 
 // maxFoldCols is the most columns a folded compact table has.
-const maxFoldCols = 9
+const maxFoldCols = 12
 
 // fold sets a narrow table of many rows in side-by-side bands of w
 // columns (read down the first band, then the next), so a table of one
 // or two cases does not run down several pages.
 func fold(t *layout.Table, w int) {
-	bands := maxFoldCols / w
+	bands := min(maxFoldCols/w, 3)
 	if bands < 2 || len(t.Rows) < 12 {
 		return
 	}
