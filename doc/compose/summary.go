@@ -159,7 +159,7 @@ func (c *composer) summary() layout.Sheet {
 		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("None.")}})
 		return out
 	}
-	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and the engine's warnings and cautions (every caution is listed, by severity, in the "),
+	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and the engine's cautions that a value was assumed or extrapolated or something not computed or verified (every caution is listed, by severity, in the "),
 		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
@@ -183,15 +183,14 @@ func (c *composer) openAt(b *eval.Block, text, sym string, v float64, unit strin
 	return runs
 }
 
-// openCaution reports whether an engine caution is an open item: every
-// WARNING and CAUTION, and the notes that say a value was assumed or a
-// chart or table read beyond its range.
+// openCaution reports whether an engine caution is an open item: one
+// that says a value was assumed, a chart or table read beyond its range,
+// φ′_cv is missing, or something was not computed, checked or verified
+// (the others are counted in the results table and listed in the
+// cautions sheet).
 func openCaution(r raised) bool {
-	if r.sev >= layout.SevWarning {
-		return true
-	}
 	t := strings.ToLower(r.text)
-	for _, w := range []string{"assumed", "extrapolat", "phi'_cv", "φ′_cv", "not computed", "not checked"} {
+	for _, w := range []string{"assumed", "extrapolat", "phi'_cv", "φ′_cv", "not computed", "not checked", "not verified", "confirm"} {
 		if strings.Contains(t, w) {
 			return true
 		}
