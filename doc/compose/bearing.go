@@ -37,6 +37,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		intro += "; options: " + strings.Join(b.Options, ", ")
 	}
 	o.para(txt(intro + "."))
+	o.selfWeight()
 
 	// Summary of the cases and the governing check.
 	if len(r.Cases) > 0 {
@@ -73,7 +74,8 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 			o.para(twoLayerWords(cs.TwoLayer)...)
 		}
 	}
-	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() })
+	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() },
+		func(i int) float64 { return r.Cases[i].Util })
 
 	// Sliding.
 	if len(r.Sliding) > 0 {
@@ -103,7 +105,8 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 			o.head(fmt.Sprintf("Governing sliding case S%d: %s", g+1, r.Sliding[g].Name))
 			o.steps(tr, steps[slide[g]], fmt.Sprintf("sliding case S%d (governing)", g+1))
 		}
-		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() })
+		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() },
+			func(i int) float64 { return r.Sliding[i].Util })
 	}
 
 	// Any case the engine traced that is neither (none expected).
@@ -122,8 +125,13 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	o.rest(tr, "bearing", nil)
 	c.sources(b)
-	return o.blocks
+	return o.done()
 }
+
+// nearShare is how close to the governing utilisation a case must be to
+// be tabulated beside it in the main flow (detail = governing): within
+// 10 %.
+const nearShare = 0.9
 
 // isSliding reports whether a caution concerns sliding.
 func isSliding(ca trace.Caution) bool {
@@ -155,31 +163,61 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 // one row per symbol and one column per case, grouped by drainage, so
 // every value of every case is on the page; the formulas are those of
 // the governing case's working. Cautions raised in these cases follow
-// the table.
-func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string) {
+// the table. With detail = governing only the cases within 10 % of the
+// governing utilisation stay in the main flow; the others go to the
+// appendix.
+func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64) {
+	var near, far []int
+	for i := range cases {
+		switch {
+		case i == gov:
+		case gov < 0 || !o.c.governingOnly() || util(i) >= nearShare*util(gov):
+			near = append(near, i)
+		default:
+			far = append(far, i)
+		}
+	}
+	if len(near)+len(far) == 0 {
+		return
+	}
+	o.head(title)
+	if len(near) > 0 {
+		what := "Each column is one case (numbered as in the summary above); each row a value of its working, in the order computed, by the formulas shown for the governing case; values the same in every case of a table are given once, in its caption."
+		if o.c.governingOnly() {
+			what = "The cases within 10 % of the governing utilisation. " + what
+		}
+		o.para(txt(what))
+		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage)
+	}
+	if len(far) > 0 {
+		o.toAppendix(fmt.Sprintf("%s %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", plural(len(far), "other case"), caseList(prefix, far)))
+		o.apx = append(o.apx, &layout.Para{Pos: o.p, Runs: []layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}})
+		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage)
+	}
+}
+
+// caseTables adds the compact tables of the cases idx to out, one per
+// drainage condition (split at maxCaseCols), each followed by the
+// cautions raised in its cases.
+func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string) []layout.Block {
 	var order []string
 	byDrain := map[string][]int{}
-	for i := range cases {
-		if i == gov {
-			continue
-		}
+	for _, i := range idx {
 		d := drainage(i)
 		if _, ok := byDrain[d]; !ok {
 			order = append(order, d)
 		}
 		byDrain[d] = append(byDrain[d], i)
 	}
-	if len(order) == 0 {
-		return
-	}
-	o.head(title)
-	o.para(txt("Each column is one case (numbered as in the summary above); each row a value of its working, in the order computed, by the formulas shown for the governing case."))
+	keep := o.blocks
 	for _, d := range order {
 		idx := byDrain[d]
 		for start := 0; start < len(idx); start += maxCaseCols {
 			chunk := idx[start:min(start+maxCaseCols, len(idx))]
-			o.add(o.caseTable(tr, cases, chunk, steps, prefix, d))
+			cap := []layout.Run{txt(fmt.Sprintf("%s cases (%s).", capital(d), caseList(prefix, chunk)))}
+			out = append(out, o.caseTable(tr, cases, chunk, steps, prefix, cap))
 		}
+		o.blocks = nil
 		for _, i := range idx {
 			for j, ca := range tr.Cautions {
 				if ca.Step >= 0 && ca.Case == cases[i] {
@@ -187,11 +225,14 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 				}
 			}
 		}
+		out = append(out, o.blocks...)
+		o.blocks = keep
 	}
+	return out
 }
 
 // caseTable is one compact table: symbols down, cases across.
-func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix, drainage string) *layout.Table {
+func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, caption []layout.Run) *layout.Table {
 	type rowKey struct {
 		sym string
 		n   int
@@ -222,12 +263,20 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 	}
 	t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
 		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft},
-		Caption: []layout.Run{txt(fmt.Sprintf("%s cases (%s).", strings.ToUpper(drainage[:1])+drainage[1:], caseList(prefix, idx)))}}
+		Caption: caption}
 	for _, i := range idx {
 		t.Header = append(t.Header, layout.Cell{txt(fmt.Sprintf("%s%d", prefix, i+1))})
 		t.Align = append(t.Align, layout.AlignRight)
 	}
+	var same []layout.Run
 	for _, k := range keys {
+		if v, ok := constantRow(vals[k], idx); ok {
+			if len(same) > 0 {
+				same = append(same, txt(", "))
+			}
+			same = append(same, layout.Run{Math: eqn.Row{eqn.Sym{Name: k.sym}, eqn.Op{Text: "="}, siNode(v, units[k])}, Own: true})
+			continue
+		}
 		row := layout.Row{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: k.sym}}}, {txt(unitText(units[k]))}}}
 		for _, i := range idx {
 			v, ok := vals[k][i]
@@ -239,7 +288,63 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 		}
 		t.Rows = append(t.Rows, row)
 	}
+	fold(t, 2+len(idx))
+	if len(same) > 0 {
+		t.Caption = append(t.Caption, txt(" The same in every case of this table: "))
+		t.Caption = append(t.Caption, same...)
+		t.Caption = append(t.Caption, txt("."))
+	}
 	return t
+}
+
+// maxFoldCols is the most columns a folded compact table has.
+const maxFoldCols = 12
+
+// fold sets a narrow table of many rows in side-by-side bands of w
+// columns (read down the first band, then the next), so a table of one
+// or two cases does not run down several pages.
+func fold(t *layout.Table, w int) {
+	bands := min(maxFoldCols/w, 3)
+	if bands < 2 || len(t.Rows) < 12 {
+		return
+	}
+	n := (len(t.Rows) + bands - 1) / bands
+	rows := make([]layout.Row, n)
+	head, align := t.Header, t.Align
+	for b := 0; b < bands; b++ {
+		if b > 0 {
+			t.Header = append(t.Header, head...)
+			t.Align = append(t.Align, align...)
+		}
+		for r := 0; r < n; r++ {
+			k := b*n + r
+			if k < len(t.Rows) {
+				rows[r].Pos = t.Rows[k].Pos
+				rows[r].Cells = append(rows[r].Cells, t.Rows[k].Cells...)
+			} else {
+				rows[r].Cells = append(rows[r].Cells, make([]layout.Cell, w)...)
+			}
+		}
+	}
+	t.Rows = rows
+}
+
+// constantRow reports whether a row of a compact table has one value in
+// every one of at least two cases.
+func constantRow(vals map[int]float64, idx []int) (float64, bool) {
+	if len(idx) < 2 {
+		return 0, false
+	}
+	v, ok := vals[idx[0]]
+	if !ok {
+		return 0, false
+	}
+	for _, i := range idx[1:] {
+		if w, ok := vals[i]; !ok || w != v {
+			return 0, false
+		}
+	}
+	return v, true
 }
 
 func caseList(prefix string, idx []int) string {

@@ -84,7 +84,7 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 	}
 	c.sources(b)
-	return o.blocks
+	return o.done()
 }
 
 func contains(xs []float64, x float64) bool {

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strings"
 
+	"plinth/calc/trace"
 	"plinth/doc/eval"
 	"plinth/doc/layout"
 	"plinth/doc/sheet"
@@ -32,9 +33,22 @@ type composer struct {
 	nAnchor   int
 	cautions  []raised // engine cautions, for the cautions summary
 	contents  *layout.Table
-	sheetRows []int // index in contents rows of each layout sheet after the cover
-	quote     int   // depth of block quotes being converted (their text is italic)
-	level     int   // level of the sheet's latest heading (engine sub-headings go below it)
+	sheetRows []int                         // layout sheet of each contents row
+	matter    []matterTitle                 // the matter sheets after the calculation sheets, in order
+	quote     int                           // depth of block quotes being converted (their text is italic)
+	level     int                           // level of the sheet's latest heading (engine sub-headings go below it)
+	refSeen   map[trace.Ref]bool            // citations printed in the current engine block
+	appendix  []layout.Block                // working left out of the main flow (detail = governing)
+	pageRefs  []pageRef                     // runs that print the page of an anchor
+	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
+}
+
+// pageRef is a run that prints the page an anchor is on, filled in once
+// the pages are laid out.
+type pageRef struct {
+	run    *layout.Run
+	anchor string
+	format string // "page %d"
 }
 
 // raised is an engine caution with the place it was printed.
@@ -85,10 +99,40 @@ func (c *composer) document() layout.Doc {
 		doc.Sheets = sheets
 		return doc
 	}
-	doc.Sheets = append(doc.Sheets, c.cover())
+	// Layout sheets: cover, summary, the sheets, the appendix (when any
+	// working was moved there), the end matter; sheetRows maps each
+	// contents row to its layout sheet.
+	c.matter = matterTitles
+	if len(c.appendix) > 0 {
+		c.matter = append([]matterTitle{{"Appendix: further working", "appendix"}}, c.matter...)
+	}
+	doc.Sheets = append(doc.Sheets, c.cover(), c.summary())
+	for i := range sheets {
+		c.sheetRows = append(c.sheetRows, 2+i)
+	}
 	doc.Sheets = append(doc.Sheets, sheets...)
-	doc.Sheets = append(doc.Sheets, c.endMatter()...)
+	if len(c.appendix) > 0 {
+		c.sheetRows = append(c.sheetRows, len(doc.Sheets))
+		doc.Sheets = append(doc.Sheets, c.appendixSheet())
+	}
+	for i, m := range c.endMatter() {
+		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+0*i)
+		doc.Sheets = append(doc.Sheets, m)
+	}
+	c.sheetRows = append([]int{1}, c.sheetRows...) // the summary is the first row
 	return doc
+}
+
+// appendixSheet holds the working left out of the main flow (detail =
+// governing): per block, the other cases' tables and the sublayer
+// tables, each headed by a link back to its block.
+func (c *composer) appendixSheet() layout.Sheet {
+	out := c.matterSheet("Appendix: further working", "appendix")
+	p := out.Pos
+	out.Blocks = append(out.Blocks, heading(p, 1, "Appendix: further working"),
+		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working that the sheets leave out of their main flow (the package prints the governing working in full; detail = full in package.yaml prints everything in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block. Each heading links back to its block.")}})
+	out.Blocks = append(out.Blocks, c.appendix...)
+	return out
 }
 
 // sheet converts one evaluated sheet.

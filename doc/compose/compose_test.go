@@ -187,6 +187,9 @@ func checkText(t *testing.T, res *eval.Result, pages *layout.Pages, text string)
 	if got := strings.Count(all, "OK") - strings.Count(all, "NOT OK"); got < 2*ok {
 		t.Errorf("OK printed %d times, want at least %d (line and register)", got, 2*ok)
 	}
+	if strings.Contains(all, "page —") || strings.Contains(all, "page -") {
+		t.Error("a page reference was left unfilled (page —)")
+	}
 	if fp := res.Fingerprint(); !strings.Contains(all, fp[:12]) {
 		t.Errorf("fingerprint %s not in the footers", fp[:12])
 	}

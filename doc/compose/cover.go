@@ -132,8 +132,8 @@ func (c *composer) cover() layout.Sheet {
 		row("Current revision", user(strings.TrimSpace(r.Rev.Value+"  "+r.Date.Value+"  "+r.Note.Value)))
 	}
 	row("Page template", user(c.tpl.Name))
-	row("National annex", user(m.NationalAnnex.Value))
-	row("Partial factors", user(m.Factors.Value))
+	row("Design basis", txt("standard, national annex, partial factors, Geotechnical Category, design life, consequence class and exclusions: see the "),
+		layout.Run{Text: "summary of results", Link: "summary", Own: true})
 	row("Input fingerprint", layout.Run{Text: c.res.Fingerprint(), Style: layout.Mono})
 	if c.res.Variant() {
 		var list []string
@@ -147,6 +147,9 @@ func (c *composer) cover() layout.Sheet {
 	add(heading(p, 2, "Contents"))
 	c.contents = &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
 		Align: []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft}}
+	c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+		cell(txt("—")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
+	}})
 	for _, s := range c.res.Sheets {
 		f := c.fields(s.Meta)
 		title := f.Title
@@ -157,15 +160,12 @@ func (c *composer) cover() layout.Sheet {
 			cell(txt("—")), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
 		}})
 	}
-	for _, mt := range matterTitles {
+	for _, mt := range c.matter {
 		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
 			cell(txt("—")), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
 		}})
 	}
 	add(c.contents)
-
-	add(heading(p, 2, "Checks"))
-	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
 
 	add(heading(p, 2, "Revision history"))
 	if len(m.Revisions) == 0 {
@@ -212,8 +212,11 @@ func (c *composer) signOff(p source.Position) *layout.Drawing {
 	return d
 }
 
+// matterTitle names a matter sheet and its anchor.
+type matterTitle struct{ title, anchor string }
+
 // matterTitles are the end-matter sheets in order.
-var matterTitles = []struct{ title, anchor string }{
+var matterTitles = []matterTitle{
 	{"Check register", "check-register"},
 	{"Input register", "input-register"},
 	{"References", "references"},

@@ -20,11 +20,31 @@
 //
 // A cover sheet (project data, the list of sheets with their page
 // numbers, a summary of the checks, the revision history and a checker's
-// sign-off box), then every sheet in file-name order, then the end matter:
-// the check register, the input register, the references list and the
-// cautions (every engine caution with where it was raised, and the
-// standing cautions). Each is a layout sheet of its own, so each has its
-// own PDF bookmark and the title block on every page.
+// sign-off box), the summary of results (summary.go: the design basis
+// from package.yaml, a row per footing block with its governing verdicts
+// and page, the open items), then every sheet in file-name order, the
+// appendix (working moved out of the main flow by detail = governing,
+// when there is any), then the end matter: the check register (demand,
+// capacity, utilisation, verdict, page), the input register (block
+// tables pointed to, not repeated; the assumed values), the references
+// list and the cautions (every engine caution, most severe first, with
+// where it was raised, and the standing cautions). Each is a layout sheet
+// of its own, so each has its own PDF bookmark and the title block on
+// every page.
+//
+// Page numbers printed in text (summary, check register, appendix
+// pointers) are runs registered in composer.pageRefs and filled in from
+// the anchors' pages after layout (Pages lays out again until nothing
+// moves), like the cover's contents.
+//
+// Detail. package.yaml's detail (governing, the default, or full) says
+// how much of each engine block is printed in place. With governing the
+// compact tables keep only the cases within 10 % of the governing
+// utilisation (the others go to the appendix), each citation prints once
+// per block, a step already expanded in the block is listed by value,
+// rows the same in every column of a compact table print once in its
+// caption, and a settlement's repeated per-layer working is printed in
+// full once (the layer with the most steps) and tabulated for all.
 //
 // Title block fields come from the sheet's front matter laid over
 // package.yaml: Rev is the sheet's revision, else the latest entry of

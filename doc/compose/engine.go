@@ -16,12 +16,14 @@ import (
 
 // engineOut collects the blocks of one engine block's printout.
 type engineOut struct {
-	c      *composer
-	s      *eval.Sheet
-	b      *eval.Block
-	p      source.Position
-	blocks []layout.Block
-	shown  map[shownKey]bool // cautions already boxed
+	c       *composer
+	s       *eval.Sheet
+	b       *eval.Block
+	p       source.Position
+	blocks  []layout.Block
+	apx     []layout.Block    // working moved to the appendix (detail = governing)
+	printed map[string]bool   // steps printed in full (stepKey)
+	shown   map[shownKey]bool // cautions already boxed
 }
 
 type shownKey struct {
@@ -30,7 +32,47 @@ type shownKey struct {
 }
 
 func (c *composer) engineOut(s *eval.Sheet, b *eval.Block) *engineOut {
-	return &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+	c.refSeen = map[trace.Ref]bool{} // each citation once per block
+	o := &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+	o.add(&layout.Anchor{Pos: o.p, Name: blockAnchor(b)})
+	return o
+}
+
+// blockAnchor names the place where a ground, footing or analysis block
+// is printed.
+func blockAnchor(b *eval.Block) string {
+	return fmt.Sprintf("block-%d-%s-%s", b.Sheet.Index+1, b.Kind, b.Name)
+}
+
+// done closes the block's printout: working moved to the appendix goes
+// there under a heading linked back to the block.
+func (o *engineOut) done() []layout.Block {
+	if len(o.apx) == 0 {
+		return o.blocks
+	}
+	title := fmt.Sprintf("%s, %s %s on %s", sheetLabel(o.s), o.b.Kind, o.b.Name, o.b.On.Name)
+	o.c.appendix = append(o.c.appendix, &layout.Anchor{Pos: o.p, Name: apxAnchor(o.b)},
+		&layout.Heading{Pos: o.p, Level: 2, NoNumber: true, Runs: []layout.Run{{Text: title, Link: blockAnchor(o.b), Own: true}}})
+	o.c.appendix = append(o.c.appendix, o.apx...)
+	return o.blocks
+}
+
+func apxAnchor(b *eval.Block) string { return "apx-" + blockAnchor(b) }
+
+// toAppendix says where working left out of the main flow is: a
+// sentence linked to the block's part of the appendix, with its page.
+func (o *engineOut) toAppendix(what string) {
+	runs := []layout.Run{txt(what + " "), {Text: "appendix, page —", Link: apxAnchor(o.b), Own: true}, txt(".")}
+	para := &layout.Para{Pos: o.p, Runs: runs}
+	o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[1], anchor: apxAnchor(o.b), format: "appendix, page %d"})
+	o.add(para)
+}
+
+// governingOnly reports whether the package prints the governing working
+// in the main flow and the rest in the appendix (detail = governing, the
+// default).
+func (c *composer) governingOnly() bool {
+	return c.packageMeta().Detail.Value != "full" && !c.opt.Bare
 }
 
 func (o *engineOut) add(bs ...layout.Block) { o.blocks = append(o.blocks, bs...) }
@@ -58,7 +100,7 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	if st.Note != "" {
 		note = append(note, richText(st.Note, layout.Regular)...)
 	}
-	if ref := c.stepRef(st.Ref); ref != nil {
+	if ref := c.stepRefOnce(st.Ref); ref != nil {
 		if len(note) > 0 {
 			note = append(note, txt(" "))
 		}
@@ -130,15 +172,58 @@ func (c *composer) fits(n eqn.Node) bool {
 // steps prints the steps of tr with the given indices, each caution boxed
 // after the step that raised it. where names the place for the cautions
 // summary ("case 7").
+//
+// With detail = governing a step already printed in full in the block
+// (the same symbol, formula and value: a load combination the sliding
+// case shares with the bearing case) is not expanded again; such steps
+// are listed by value on one line where the first of them would be.
 func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
+	var again []layout.Run
+	var at *layout.Para
 	for _, i := range idx {
-		o.add(o.c.stepLine(o.p, tr.Steps[i]))
+		st := tr.Steps[i]
+		k := stepKey(st)
+		if o.c.governingOnly() && st.Formula != nil && o.printed[k] && !o.raises(tr, i) {
+			if at == nil {
+				at = &layout.Para{Pos: o.p}
+				o.add(at)
+			}
+			if len(again) > 0 {
+				again = append(again, txt(", "))
+			}
+			again = append(again, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
+			continue
+		}
+		if o.printed == nil {
+			o.printed = map[string]bool{}
+		}
+		o.printed[k] = true
+		o.add(o.c.stepLine(o.p, st))
 		for j, ca := range tr.Cautions {
 			if ca.Step == i {
 				o.cautionOf(tr, j, where)
 			}
 		}
 	}
+	if at != nil {
+		at.Runs = append([]layout.Run{{Text: "As computed above: ", Style: layout.Italic, Own: true}}, again...)
+		at.Runs = append(at.Runs, txt("."))
+	}
+}
+
+// raises reports whether step i of tr raised a caution.
+func (o *engineOut) raises(tr *trace.Trace, i int) bool {
+	for _, ca := range tr.Cautions {
+		if ca.Step == i {
+			return true
+		}
+	}
+	return false
+}
+
+// stepKey identifies a step by its symbol, formula, inputs and value.
+func stepKey(st trace.Step) string {
+	return fmt.Sprintf("%s|%v|%v|%v|%s", st.Symbol, st.Formula, st.Inputs, st.Value, st.Unit)
 }
 
 // cautionOf boxes caution j of tr unless it is already shown.
@@ -167,8 +252,15 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 	}
 }
 
+// restates lists the caution codes that only restate the check line
+// printed beside them; they are left out.
+var restates = map[string]bool{"governing": true, "governing-sliding": true}
+
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
+	if restates[ca.Code] {
+		return
+	}
 	a := o.c.anchor("caution")
 	sev := layout.Severity(ca.Severity)
 	if sev > layout.SevCaution {
@@ -276,4 +368,29 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))
 	return o.blocks
+}
+
+// selfWeight prints the self-weight the evaluator added to the footing's
+// actions (self_weight = auto) with its working, once per block.
+func (o *engineOut) selfWeight() {
+	tr := &o.b.SelfWeight
+	if len(tr.Steps) == 0 {
+		return
+	}
+	w := tr.Steps[len(tr.Steps)-1]
+	if first, ok := o.c.selfShown[o.b.Of]; ok && o.c.governingOnly() {
+		runs := []layout.Run{txt("Self-weight added by plinth (self_weight = auto): "),
+			{Math: eqn.Row{eqn.Sym{Name: w.Symbol}, eqn.Op{Text: "="}, siNode(w.Value, w.Unit)}, Own: true},
+			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), {Text: "page —", Link: blockAnchor(first), Own: true}, txt(".")}
+		para := &layout.Para{Pos: o.p, Runs: runs}
+		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[3], anchor: blockAnchor(first), format: "page %d"})
+		o.add(para)
+		return
+	}
+	if o.c.selfShown == nil {
+		o.c.selfShown = map[*eval.Footing]*eval.Block{}
+	}
+	o.c.selfShown[o.b.Of] = o.b
+	o.label("Self-weight added by plinth (self_weight = auto)")
+	o.steps(tr, indices(len(tr.Steps)), "self-weight")
 }

@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"sort"
 	"strings"
 
 	"plinth/doc/eval"
@@ -38,10 +39,11 @@ func (c *composer) checkRegister() layout.Sheet {
 	if len(c.res.Checks) == 0 {
 		return out
 	}
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check links to the line that states it. Utilisation is the demand over the capacity (left over right for ≤).")}})
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check links to the line that states it, on the page given; the sheet and file:line locate it in the source. Demand is the left side and capacity the right (the other way round for ≥); utilisation is the demand over the capacity.")}})
 	t := &layout.Table{Pos: p,
-		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check")), cell(txt("Description")), cell(txt("Sheet")), cell(txt("Utilisation")), cell(txt("Verdict"))},
-		Align:  []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
+		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check")), cell(txt("Description")), cell(txt("Demand")), cell(txt("Capacity")),
+			cell(txt("Utilisation")), cell(txt("Verdict")), cell(txt("Page")), cell(txt("Sheet, line"))},
+		Align: []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
 	for i, ch := range c.res.Checks {
 		util := "—"
 		if ch.HasUtil() {
@@ -51,12 +53,20 @@ func (c *composer) checkRegister() layout.Sheet {
 		if !ch.OK {
 			verdict = bold("NOT OK")
 		}
+		demand, capacity := ch.L, ch.R
+		if ch.Op == ">=" || ch.Op == ">" {
+			demand, capacity = ch.R, ch.L
+		}
+		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
+		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
 		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(c.checkMath(ch)...),
 			cell(c.noteRuns(ch.Sheet, ch.Note)...),
+			cell(layout.Run{Math: valueNode(demand, ch.Unit, -1), Own: true}),
+			cell(layout.Run{Math: valueNode(capacity, ch.Unit, -1), Own: true}),
+			cell(txt(util)), cell(verdict), page,
 			cell(layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor}),
-			cell(txt(util)), cell(verdict),
 		}})
 	}
 	out.Blocks = append(out.Blocks, t)
@@ -86,12 +96,24 @@ func (c *composer) inputRegister() layout.Sheet {
 	p := out.Pos
 	out.Blocks = append(out.Blocks, heading(p, 1, "Input register"))
 	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{
-		txt("Every value the engineer gave (a number with its unit, not computed from other symbols), sheet by sheet, with its description and source, and the place it is defined (linked)."),
+		txt("Every value the engineer gave (a number with its unit, not computed from other symbols), sheet by sheet, with its description and source, and the place it is defined (linked). The cells of ground and footing tables are not repeated: a row points to each table. Values plinth assumed are listed at the end."),
 	}})
 	for _, s := range c.res.Sheets {
 		var rows []layout.Row
+		tables := map[string]int{} // anchor of a ground or footing table → its inputs
+		var order []string
+		first := map[string]*eval.Symbol{}
 		for _, y := range s.Symbols {
 			if !y.Input {
+				continue
+			}
+			if a := c.inputs[y]; y.Stmt == nil && y.Override == nil && a != "" {
+				// a cell of a ground or footing table: the register points to the table
+				if tables[a] == 0 {
+					order = append(order, a)
+					first[a] = y
+				}
+				tables[a]++
 				continue
 			}
 			val := layout.Run{Math: valueNode(y.Q, y.Unit, y.Decimals)}
@@ -105,6 +127,15 @@ func (c *composer) inputRegister() layout.Sheet {
 			}
 			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
 				cell(layout.Run{Math: eqn.Sym{Name: y.Name}}), cell(val), cell(note...), cell(at),
+			}})
+		}
+		for _, a := range order {
+			y := first[a]
+			block, _, _ := strings.Cut(y.Name, ".")
+			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+				cell(user(block + ".*")), cell(txt(plural(tables[a], "value"))),
+				cell(txt("every cell of the table of " + block + ", with the source given in its row; see the table")),
+				cell(layout.Run{Text: where(y.Span), Link: a, Own: true}),
 			}})
 		}
 		if len(rows) == 0 {
@@ -121,7 +152,48 @@ func (c *composer) inputRegister() layout.Sheet {
 			Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
 			Rows:   rows})
 	}
+	out.Blocks = append(out.Blocks, c.assumedValues()...)
 	return out
+}
+
+// assumedValues lists the values plinth assumed or added: the
+// self-weight of each analysis with self_weight = auto (and its defaults),
+// and the engine's notes of values assumed where not given.
+func (c *composer) assumedValues() []layout.Block {
+	p := c.matterPos()
+	var rows []layout.Row
+	for _, s := range c.res.Sheets {
+		for _, b := range s.Blocks() {
+			for _, st := range b.SelfWeight.Steps {
+				if st.Symbol != "W" && !strings.Contains(st.Note, "assumed") {
+					continue
+				}
+				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
+					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
+					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
+				}})
+			}
+		}
+	}
+	for _, r := range c.cautions {
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= layout.SevWarning {
+			continue
+		}
+		rows = append(rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+			cell(txt("—")), cell(txt("—")), cell(richText(r.where+": "+r.text, layout.Regular)...),
+			cell(layout.Run{Text: sheetLabel(r.sheet), Link: r.anchor, Own: true}),
+		}})
+	}
+	out := []layout.Block{&layout.Heading{Pos: p, Level: 2, NoNumber: true, Runs: []layout.Run{txt("Assumed values")}}}
+	if len(rows) == 0 {
+		return append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("plinth assumed no values for this package.")}})
+	}
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Values plinth added or assumed because the sheets do not give them, each printed with its working where it is used; confirm each.")}})
+	return append(out, &layout.Table{Pos: p,
+		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why")), cell(txt("Used at"))},
+		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
+		Rows:   rows})
 }
 
 // references prints the references list, numbered as cited.
@@ -192,7 +264,9 @@ func (c *composer) cautionSheet() layout.Sheet {
 	} else {
 		t := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution")), cell(txt("Raised at"))},
 			Align: []layout.Align{layout.AlignRight}}
-		for i, r := range c.cautions {
+		list := append([]raised(nil), c.cautions...)
+		sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
+		for i, r := range list {
 			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
 				cell(txt(fmt.Sprint(i + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...),
 				cell(layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}),

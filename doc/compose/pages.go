@@ -7,6 +7,7 @@ import (
 
 	"plinth/doc/eval"
 	"plinth/doc/layout"
+	"plinth/doc/layout/draw"
 	"plinth/doc/source"
 )
 
@@ -36,7 +37,11 @@ func Pages(res *eval.Result, opt Options) (pages *layout.Pages, diags source.Lis
 			c.diags.Sort()
 			return nil, c.diags
 		}
-		if c.contents == nil || !c.fillPages(pages) {
+		changed := c.contents != nil && c.fillPages(pages)
+		if c.fillRefs(pages) {
+			changed = true
+		}
+		if !changed {
 			break
 		}
 	}
@@ -57,7 +62,10 @@ func (c *composer) fillPages(pages *layout.Pages) bool {
 	}
 	changed := false
 	for ri := range c.contents.Rows {
-		sh := ri + 1 // the cover is layout sheet 0
+		if ri >= len(c.sheetRows) {
+			break
+		}
+		sh := c.sheetRows[ri]
 		a, ok := first[sh]
 		if !ok {
 			continue
@@ -102,4 +110,35 @@ func (c *composer) spanAt(p source.Position) source.Span {
 		return source.Span{File: f, Start: off, End: off}
 	}
 	return source.Span{}
+}
+
+// fillRefs writes the page of each referenced anchor into its run and
+// reports whether anything changed.
+func (c *composer) fillRefs(pages *layout.Pages) bool {
+	at := map[string]int{}
+	for i, pg := range pages.Pages {
+		for _, b := range pg.Boxes {
+			b.Walk(func(b *layout.Box) {
+				for _, it := range b.Items {
+					if a, ok := it.(draw.Anchor); ok {
+						if _, seen := at[a.Name]; !seen {
+							at[a.Name] = i + 1
+						}
+					}
+				}
+			})
+		}
+	}
+	changed := false
+	for _, r := range c.pageRefs {
+		n, ok := at[r.anchor]
+		if !ok {
+			continue
+		}
+		if t := fmt.Sprintf(r.format, n); r.run.Text != t {
+			r.run.Text = t
+			changed = true
+		}
+	}
+	return changed
 }

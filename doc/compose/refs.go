@@ -113,6 +113,18 @@ func (c *composer) citedText(s *eval.Sheet, note sheet.Str, style layout.Style) 
 }
 
 // stepRef prints an engine step's reference, "[n, clause]".
+// stepRefOnce is stepRef for a step of an engine block: a citation
+// already printed in the block (same source and clause) is not repeated.
+func (c *composer) stepRefOnce(r trace.Ref) []layout.Run {
+	if r.Source.Key == "" || c.refSeen[r] {
+		return nil
+	}
+	if c.refSeen != nil {
+		c.refSeen[r] = true
+	}
+	return c.stepRef(r)
+}
+
 func (c *composer) stepRef(r trace.Ref) []layout.Run {
 	if r.Source.Key == "" {
 		return nil

@@ -29,6 +29,7 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 		intro += " Options: " + strings.Join(b.Options, ", ") + "."
 	}
 	o.para(txt(intro))
+	o.selfWeight()
 
 	if len(st.Load.Steps) > 0 {
 		o.label("Serviceability load")
@@ -39,7 +40,8 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o.rest(tr, "settlement", func(ca trace.Caution) bool { return ca.Step < 0 })
 	names, steps := groups(tr)
 	shownTime := false
-	for _, n := range names {
+	kinds := map[string]bool{} // kinds of layer working printed in full
+	for gi, n := range names {
 		if strings.HasPrefix(n, "t = ") {
 			if shownTime {
 				continue
@@ -49,13 +51,36 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 			o.steps(tr, steps[n], n)
 			continue
 		}
+		if kind := groupKind(n); kind != "" && o.c.governingOnly() {
+			if kinds[kind] {
+				continue // tabulated with the first of its kind
+			}
+			kinds[kind] = true
+			if all := sameKind(names[gi:], kind); len(all) > 1 {
+				full := all[0] // the one with the most steps, so every formula is shown
+				for _, g := range all {
+					if len(steps[g]) > len(steps[full]) {
+						full = g
+					}
+				}
+				o.label(capital(full))
+				o.steps(tr, steps[full], full)
+				o.layerCases(tr, all, steps, kind)
+				continue
+			}
+		}
 		o.label(capital(n))
 		o.steps(tr, steps[n], orDefault(n, "settlement"))
 	}
 	o.rest(&st.Load, "serviceability load", nil)
 	o.rest(tr, "settlement", nil) // cautions of the times not printed in full
 
-	o.add(c.stressTable(o, r))
+	if o.c.governingOnly() && len(r.Sub) > 0 {
+		o.toAppendix(fmt.Sprintf("The stresses in each of the %d sublayers are tabulated in the", len(r.Sub)))
+		o.apx = append(o.apx, c.stressTable(o, r))
+	} else {
+		o.add(c.stressTable(o, r))
+	}
 	o.add(c.layerTable(o, r))
 	if tt := c.timeTable(o, r); tt != nil {
 		o.add(tt)
@@ -65,7 +90,7 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 		o.add(c.checkBlock(o.p, ch, "s_total", "s_lim"))
 	}
 	c.sources(b)
-	return o.blocks
+	return o.done()
 }
 
 var (
@@ -229,6 +254,65 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 		} else {
 			c.diags.Add(o.b.Span, "settlement–time chart: %v", err)
 		}
+	}
+	return out
+}
+
+// groupKind is the kind of a settlement working group named
+// "LAYER: KIND" ("immediate (Steinbrenner)"); "" for other groups.
+func groupKind(name string) string {
+	i := strings.LastIndex(name, ": ")
+	if i < 0 || strings.Contains(name, "sublayer") {
+		return ""
+	}
+	return name[i+2:]
+}
+
+// sameKind lists the groups of names of the given kind.
+func sameKind(names []string, kind string) []string {
+	var out []string
+	for _, n := range names {
+		if groupKind(n) == kind {
+			out = append(out, n)
+		}
+	}
+	return out
+}
+
+// layerCases tabulates the working of every layer of one kind, a column
+// per layer, by the formulas printed for the first of them just above
+// (detail = governing): the repeated expansions are not written out
+// again, and every value is in the table.
+func (o *engineOut) layerCases(tr *trace.Trace, groups []string, steps map[string][]int, kind string) {
+	idx := indices(len(groups))
+	cap := append([]layout.Run{txt(fmt.Sprintf("%s of every layer, by the formulas above, a column per layer (", capital(kind)))}, layerList(groups)...)
+	cap = append(cap, txt(")."))
+	t := o.caseTable(tr, groups, idx, steps, "L", nil)
+	cap = append(cap, t.Caption...) // the values the same in every layer
+	t.Caption = nil
+	o.para(cap...)
+	o.add(t)
+	for _, g := range groups {
+		for j, ca := range tr.Cautions {
+			if ca.Case == g {
+				o.cautionOf(tr, j, g)
+			}
+		}
+	}
+}
+
+// layerList names the columns of a layer table: "L1: Made ground, L2: …".
+func layerList(groups []string) []layout.Run {
+	var out []layout.Run
+	for i, g := range groups {
+		if i > 0 {
+			out = append(out, txt("; "))
+		}
+		name := g
+		if j := strings.LastIndex(g, ": "); j >= 0 {
+			name = g[:j]
+		}
+		out = append(out, txt(fmt.Sprintf("L%d ", i+1)), user(name))
 	}
 	return out
 }

@@ -64,7 +64,7 @@ func TestReferenceOrder(t *testing.T) {
 		t.Errorf("references %q, want %q", got, want)
 	}
 	// the citation in the prose is [1], linked to the list
-	sh := doc.Sheets[1]
+	sh := doc.Sheets[2] // after the cover and the summary
 	found := false
 	for _, b := range sh.Blocks {
 		if p, ok := b.(*layout.Para); ok {
@@ -208,6 +208,7 @@ func ExampleDocument() {
 	// Output:
 	// 0 problems
 	// Cover sheet    0917     Cover sheet
+	// Summary of results 0917     Summary of results
 	//                0917-01  Garden room pad
 	// Check register 0917     Check register
 	// Input register 0917     Input register

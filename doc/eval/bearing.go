@@ -2,9 +2,11 @@ package eval
 
 import (
 	"math"
+
 	"plinth/calc/bearing"
 	"plinth/calc/design"
 	"plinth/calc/site"
+	"plinth/calc/trace"
 	"plinth/calc/units"
 	"plinth/doc/sheet"
 	"plinth/doc/source"
@@ -27,6 +29,7 @@ var bearingNotes = map[string]string{
 // bearing options.
 func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts, methodKey string) (bearing.Input, bool) {
 	in := bearing.Input{Ground: blk.On.Model, Footing: blk.Of.Model, Actions: withSelfWeight(blk.Of, blk.On)}
+	blk.selfWeight()
 	ok := true
 	if d := o.word("drainage", ""); d != "" {
 		in.Options.Drainage, _ = bearing.ParseDrainage(d)
@@ -85,28 +88,76 @@ func (e *evaluator) approach(s *Sheet, o opts) (design.Approach, bool) {
 }
 
 // withSelfWeight returns the footing's actions, adding its own weight and
-// the backfill over it as a permanent action when self_weight = auto:
-// W = γ_c·A·h + A·σ_v(D − h), the backfill taking the ground's total
-// vertical stress from ground level to the top of the footing (common
-// practice).
+// the backfill over it as a permanent action when self_weight = auto
+// (see selfWeight).
 func withSelfWeight(f *Footing, g *Ground) []site.Action {
 	acts := append([]site.Action(nil), f.Actions...)
 	if !f.SelfWeight {
 		return acts
 	}
-	a := f.Model.Area()
-	w := f.GammaC*a*f.H + a*g.Model.SigmaV(f.Model.D-f.H)
+	var tr trace.Trace
+	w := selfWeight(f, g, &tr)
 	return append([]site.Action{{Name: "Self weight and backfill", Kind: site.Permanent, V: w}}, acts...)
 }
 
-// SelfWeight is the weight withSelfWeight adds (N, or N/m for a strip);
-// 0 when self_weight is not auto.
-func (f *Footing) SelfWeightOn(g *Ground) float64 {
+// selfWeight is the weight self_weight = auto adds (N, or N/m for a
+// strip), with its working recorded in tr:
+// W = γ_c·A·h + A·σ_v(D − h), the backfill taking the ground's total
+// vertical stress from ground level to the top of the footing (common
+// practice). 0 and no steps when self_weight is not auto.
+func selfWeight(f *Footing, g *Ground, tr *trace.Trace) float64 {
 	if !f.SelfWeight {
 		return 0
 	}
-	a := f.Model.Area()
-	return f.GammaC*a*f.H + a*g.Model.SigmaV(f.Model.D-f.H)
+	m := f.Model
+	areaUnit, forceUnit := "m2", "kN"
+	var area trace.Expr
+	switch m.Shape {
+	case site.Strip:
+		area, areaUnit, forceUnit = trace.S("B"), "m", "kN/m"
+	case site.Circle:
+		area = trace.Div(trace.Mul(trace.S("pi"), trace.Pow(trace.S("B"), trace.N(2))), trace.N(4))
+	case site.Rectangle:
+		area = trace.Mul(trace.S("B"), trace.S("L"))
+	default:
+		area = trace.Pow(trace.S("B"), trace.N(2))
+	}
+	v := func(sym string, x float64, unit string) trace.Value {
+		return trace.Value{Symbol: sym, V: x, Unit: unit}
+	}
+	in := []trace.Value{v("B", m.B, "m")}
+	if m.Shape == site.Rectangle {
+		in = append(in, v("L", m.L, "m"))
+	}
+	if m.Shape == site.Circle {
+		in = append(in, v("pi", math.Pi, ""))
+	}
+	a := tr.Add(trace.Step{Symbol: "A", Formula: area, Inputs: in, Value: m.Area(), Unit: areaUnit, Note: "plan area of the footing" + map[bool]string{true: " per metre run", false: ""}[m.Shape == site.Strip]})
+	gcNote := "unit weight of the footing, given"
+	if !f.GammaCGiven {
+		gcNote = "unit weight of the footing: assumed, reinforced concrete (common practice); give gamma_c to change it"
+	}
+	tr.Add(trace.Step{Symbol: "gamma_c", Value: f.GammaC, Unit: "kN/m3", Note: gcNote})
+	hNote := "thickness of the footing, given"
+	if !f.HGiven {
+		hNote = "thickness of the footing: assumed equal to D (no backfill over it); give h to change it"
+	}
+	tr.Add(trace.Step{Symbol: "h", Value: f.H, Unit: "m", Note: hNote})
+	tr.Add(trace.Step{Symbol: "D", Value: m.D, Unit: "m", Note: "depth of the underside below ground level"})
+	sv := g.Model.SigmaV(m.D - f.H)
+	tr.Add(trace.Step{Symbol: "sigma_v,fill", Value: sv, Unit: "kPa", Note: "total vertical stress of the ground model at depth D − h (the backfill over the footing)"})
+	w := f.GammaC*a*f.H + a*sv
+	tr.Add(trace.Step{Symbol: "W", Formula: trace.Add(trace.Mul(trace.S("gamma_c"), trace.S("A"), trace.S("h")), trace.Mul(trace.S("A"), trace.S("sigma_v,fill"))),
+		Inputs: []trace.Value{v("gamma_c", f.GammaC, "kN/m3"), v("A", a, areaUnit), v("h", f.H, "m"), v("sigma_v,fill", sv, "kPa")},
+		Value:  w, Unit: forceUnit, Note: "self-weight and backfill, added by plinth as a permanent action (common practice)"})
+	return w
+}
+
+// SelfWeightOn is the weight withSelfWeight adds (N, or N/m for a
+// strip); 0 when self_weight is not auto.
+func (f *Footing) SelfWeightOn(g *Ground) float64 {
+	var tr trace.Trace
+	return selfWeight(f, g, &tr)
 }
 
 // bearing runs the bearing engine for a block.

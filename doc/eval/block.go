@@ -34,6 +34,26 @@ type Block struct {
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order
 	Sources  []trace.Source  // every publication the engine cited
+	// SelfWeight is the working of the self-weight the analysis added to
+	// the footing's actions (self_weight = auto); empty otherwise.
+	SelfWeight trace.Trace
+}
+
+// selfWeight records the self-weight working of an analysis block.
+func (b *Block) selfWeight() {
+	if b.Of != nil && b.On != nil && len(b.SelfWeight.Steps) == 0 {
+		selfWeight(b.Of, b.On, &b.SelfWeight)
+	}
+}
+
+// Stratum is the name of the layer of the analysed ground at the
+// footing's underside (a depth exactly at a boundary belongs to the
+// layer below); "" for a block that is not an analysis.
+func (b *Block) Stratum() string {
+	if b.Of == nil || b.On == nil || len(b.On.Model.Layers) == 0 {
+		return ""
+	}
+	return b.On.Model.Layers[b.On.Model.At(b.Of.Model.D)].Name
 }
 
 // Block returns the evaluated form of a ground, footing or analysis block.

@@ -43,7 +43,10 @@ type Footing struct {
 	SelfWeight bool
 	GammaC     float64 // N/m3
 	H          float64 // footing thickness, m
-	OK         bool
+	// GammaCGiven and HGiven say whether gamma_c and h were written
+	// (else 24 kN/m3 and D are assumed).
+	GammaCGiven, HGiven bool
+	OK                  bool
 }
 
 // footing evaluates a footing block: shape, dimensions and actions.
@@ -104,13 +107,13 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 	f.Model.Alpha, good = get("alpha", units.Angle, "inclination of the base", false)
 	ok = ok && good
 	if v, g := get("gamma_c", units.UnitWeight, "unit weight of the footing", false); g && s.local[prefix+"gamma_c"] != nil {
-		f.GammaC = v
+		f.GammaC, f.GammaCGiven = v, true
 	} else {
 		ok = ok && g
 	}
 	f.H = f.Model.D
 	if v, g := get("h", units.Length, "thickness of the footing", false); g && s.local[prefix+"h"] != nil {
-		f.H = v
+		f.H, f.HGiven = v, true
 	} else {
 		ok = ok && g
 	}

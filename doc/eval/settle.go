@@ -102,6 +102,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	kind, _ := design.ParseServiceKind(o.word("load", "characteristic"))
 	res := &SettleResult{}
 	fu := forceUnit(in.Footing)
+	blk.selfWeight()
 	svc, err := design.ServiceLoad(withSelfWeight(blk.Of, blk.On), kind, &res.Load, fu.Name)
 	if err != nil {
 		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })

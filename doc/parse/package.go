@@ -106,6 +106,9 @@ func (ck *checker) meta(m *sheet.Meta) {
 	if f := m.Factors; f.IsSet() {
 		ck.file(f, "factors file", "")
 	}
+	if d := m.Detail; d.IsSet() && !contains(sheet.Details, d.Value) {
+		ck.diags.AddHint(d.Span, "write detail: governing (the default) or detail: full", "detail %s is not governing or full", quote(d.Value))
+	}
 	ck.date(m.Date, "date")
 	ck.date(m.CheckedDate, "checked_date")
 	for _, r := range m.Revisions {

@@ -28,6 +28,15 @@ type Meta struct {
 	References    []Reference // in the order written
 	NationalAnnex Str         // the national annex in force, as printed ("UK NA to BS EN 1997-1")
 	Factors       Str         // path inside the package to a partial-factor data file
+
+	// Design basis (printed on the summary page; a missing one prints
+	// "not stated" and is an open item).
+	Standard    Str // the design standard in force ("EN 1997-1:2004")
+	GeoCategory Str // Geotechnical Category (EN 1997-1 2.1)
+	DesignLife  Str // design working life ("50 years")
+	Consequence Str // consequence class (EN 1990 Annex B)
+	Exclusions  Str // what the package does not cover
+	Detail      Str // how much working the sheets print: governing (default) or full
 }
 
 // Revision is one entry of revisions.
@@ -54,11 +63,15 @@ var (
 		"title", "calc", "by", "date", "checked", "checked_date", "uses", "revision",
 		"project", "job", "client", "template", "revisions", "references",
 		"national_annex", "factors",
+		"standard", "geotechnical_category", "design_life", "consequence_class", "exclusions", "detail",
 	}
 	SheetOnly = []string{"uses"}
 
 	// RevisionKeys are the keys of one revisions entry.
 	RevisionKeys = []string{"rev", "date", "by", "checked", "note"}
+
+	// Details are the words the detail field takes (the first is the default).
+	Details = []string{"governing", "full"}
 
 	// Templates are the built-in page templates a template field may name.
 	Templates = []string{"a4", "letter"}
@@ -104,6 +117,18 @@ func (m *Meta) Field(key string) *Str {
 		return &m.NationalAnnex
 	case "factors":
 		return &m.Factors
+	case "standard":
+		return &m.Standard
+	case "geotechnical_category":
+		return &m.GeoCategory
+	case "design_life":
+		return &m.DesignLife
+	case "consequence_class":
+		return &m.Consequence
+	case "exclusions":
+		return &m.Exclusions
+	case "detail":
+		return &m.Detail
 	}
 	return nil
 }
@@ -156,6 +181,12 @@ func Merge(defaults, over *Meta) Meta {
 	str(&m.Template, over.Template)
 	str(&m.NationalAnnex, over.NationalAnnex)
 	str(&m.Factors, over.Factors)
+	str(&m.Standard, over.Standard)
+	str(&m.GeoCategory, over.GeoCategory)
+	str(&m.DesignLife, over.DesignLife)
+	str(&m.Consequence, over.Consequence)
+	str(&m.Exclusions, over.Exclusions)
+	str(&m.Detail, over.Detail)
 	m.Uses = over.Uses
 	if over.Has("revisions") {
 		m.Revisions = over.Revisions

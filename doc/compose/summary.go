@@ -1,0 +1,355 @@
+package compose
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"plinth/calc/site"
+	"plinth/calc/trace"
+	"plinth/calc/units"
+	"plinth/doc/eval"
+	"plinth/doc/layout"
+	"plinth/doc/layout/eqn"
+	"plinth/doc/sheet"
+)
+
+// footingRow is one row of the summary of results: a footing and the
+// analyses made of it, anywhere in the package.
+type footingRow struct {
+	footing  *eval.Block
+	analyses []*eval.Block
+}
+
+// summaryRows lists every footing block of the printed sheets, in order,
+// with its analyses.
+func (c *composer) summaryRows() []footingRow {
+	var rows []footingRow
+	at := map[*eval.Footing]int{}
+	for _, s := range c.res.Sheets {
+		for _, b := range s.Blocks() {
+			if b.Footing != nil {
+				at[b.Footing] = len(rows)
+				rows = append(rows, footingRow{footing: b})
+			}
+		}
+	}
+	for _, s := range c.res.Sheets {
+		for _, b := range s.Blocks() {
+			if i, ok := at[b.Of]; ok && b.Of != nil {
+				rows[i].analyses = append(rows[i].analyses, b)
+			}
+		}
+	}
+	return rows
+}
+
+// result finds an analysis' result symbol by its short name ("util_u").
+func result(b *eval.Block, name string) *eval.Symbol {
+	for _, y := range b.Results {
+		if strings.HasSuffix(y.Name, "."+name) {
+			return y
+		}
+	}
+	return nil
+}
+
+// basisItem is one entry of the design basis.
+type basisItem struct {
+	label string
+	field sheet.Str
+	def   string // what prints when the field is not set ("" = not stated, an open item)
+}
+
+// designBasis lists the design-basis entries from package.yaml.
+func (c *composer) designBasis() []basisItem {
+	m := c.packageMeta()
+	factors := ""
+	for _, s := range c.res.Sheets {
+		for _, b := range s.Blocks() {
+			if b.Bearing != nil && factors == "" && b.Bearing.Source != "" {
+				factors = b.Bearing.Source
+			}
+		}
+	}
+	if m.Factors.Value != "" {
+		factors = "" // the file named prints
+	}
+	detail := "governing (the governing working in full, the rest in the appendix)"
+	return []basisItem{
+		{"Standard", m.Standard, ""},
+		{"National annex", m.NationalAnnex, ""},
+		{"Partial factors", m.Factors, factors},
+		{"Geotechnical Category", m.GeoCategory, ""},
+		{"Design working life", m.DesignLife, ""},
+		{"Consequence class", m.Consequence, ""},
+		{"Scope exclusions", m.Exclusions, ""},
+		{"Detail printed", m.Detail, detail},
+	}
+}
+
+// summary is the summary of results and the design basis: one row per
+// footing with the governing verdicts and where they are, and the open
+// items a checker should settle.
+func (c *composer) summary() layout.Sheet {
+	out := c.matterSheet("Summary of results", "summary")
+	p := out.Pos
+	add := func(b ...layout.Block) { out.Blocks = append(out.Blocks, b...) }
+	add(heading(p, 1, "Summary of results"))
+
+	var open [][]layout.Run
+	add(heading(p, 2, "Design basis"))
+	basis := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
+	for _, it := range c.designBasis() {
+		v := cell(user(it.field.Value))
+		switch {
+		case strings.TrimSpace(it.field.Value) != "":
+		case it.def != "":
+			v = cell(txt(it.def))
+		default:
+			v = cell(bold("not stated"))
+			open = append(open, []layout.Run{txt(it.label + " is not stated in package.yaml.")})
+		}
+		basis.Rows = append(basis.Rows, layout.Row{Pos: p, Cells: []layout.Cell{cell(txt(strings.ReplaceAll(it.label, " ", "\u00a0"))), v}})
+	}
+	add(basis)
+
+	add(heading(p, 2, "Checks"))
+	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
+
+	add(heading(p, 2, "Results by foundation"))
+	rows := c.summaryRows()
+	if len(rows) == 0 {
+		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("The package has no footing blocks.")}})
+	} else {
+		add(c.resultsTable(rows))
+	}
+
+	// Open items.
+	if strings.TrimSpace(c.packageMeta().Checked.Value) == "" {
+		open = append(open, []layout.Run{bold("NOT CHECKED"), txt(": the package has no checker's name; the sign-off on the cover is open.")})
+	}
+	for _, fr := range rows {
+		for _, b := range fr.analyses {
+			for _, st := range b.SelfWeight.Steps {
+				if strings.Contains(st.Note, "assumed") {
+					open = append(open, c.openAt(b, fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), st.Symbol, st.Value, st.Unit))
+				}
+			}
+			if len(b.SelfWeight.Steps) > 0 {
+				break // the footing's assumptions once
+			}
+		}
+	}
+	seen := map[string]bool{}
+	list := append([]raised(nil), c.cautions...)
+	sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
+	for _, r := range list {
+		if !openCaution(r) || seen[r.where+r.text] {
+			continue
+		}
+		seen[r.where+r.text] = true
+		runs := []layout.Run{bold(r.sev.String()), txt(" " + sheetLabel(r.sheet) + ", " + r.where + ": ")}
+		runs = append(runs, richText(r.text, layout.Regular)...)
+		runs = append(runs, txt(" ("), layout.Run{Text: "page —", Link: r.anchor, Own: true}, txt(")"))
+		open = append(open, runs)
+	}
+	add(heading(p, 2, "Open items"))
+	if len(open) == 0 {
+		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("None.")}})
+		return out
+	}
+	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and the engine's cautions that a value was assumed or extrapolated or something not computed or verified (every caution is listed, by severity, in the "),
+		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
+	var items [][]layout.Block
+	for _, runs := range open {
+		para := &layout.Para{Pos: p, Runs: runs}
+		for i := range para.Runs {
+			if para.Runs[i].Text == "page —" && para.Runs[i].Link != "" {
+				c.pageRefs = append(c.pageRefs, pageRef{run: &para.Runs[i], anchor: para.Runs[i].Link, format: "page %d"})
+			}
+		}
+		items = append(items, []layout.Block{para})
+	}
+	add(&layout.List{Pos: p, Items: items})
+	return out
+}
+
+// openAt is an open item about an assumed value, linked to its block.
+func (c *composer) openAt(b *eval.Block, text, sym string, v float64, unit string) []layout.Run {
+	runs := richText(text, layout.Regular)
+	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(sym, v, unit), Own: true}, txt("; "),
+		layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}, txt(")."))
+	return runs
+}
+
+// openCaution reports whether an engine caution is an open item: one
+// that says a value was assumed, a chart or table read beyond its range,
+// φ′_cv is missing, or something was not computed, checked or verified
+// (the others are counted in the results table and listed in the
+// cautions sheet).
+func openCaution(r raised) bool {
+	t := strings.ToLower(r.text)
+	for _, w := range []string{"assumed", "extrapolat", "phi'_cv", "φ′_cv", "not computed", "not checked", "not verified", "confirm"} {
+		if strings.Contains(t, w) {
+			return true
+		}
+	}
+	return false
+}
+
+// resultsTable is the table of results: a row per footing.
+func (c *composer) resultsTable(rows []footingRow) *layout.Table {
+	p := c.matterPos()
+	t := &layout.Table{Pos: p,
+		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
+			cell(txt("Settlement (SLS); allowable pressure")), cell(txt("Warnings"))},
+		Caption: []layout.Run{txt("Governing utilisation and verdict of each check with its governing case; short and long term where both apply; warnings counts the WARNINGs and CAUTIONs the engine raised. Each foundation links to its page.")}}
+	for _, fr := range rows {
+		b := fr.footing
+		f := b.Footing
+		page := layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}
+		name := layout.Cell{userBold(f.Name), txt("\n" + sheetLabel(b.Sheet) + ", "), page}
+		size := layout.Cell{txt(shortShape(f.Model))}
+		strata := map[string]bool{}
+		var bear, slide, settl, allow layout.Cell
+		warn := 0
+		gov := governingAnalyses(fr.analyses)
+		for _, a := range fr.analyses {
+			for _, ca := range a.Cautions {
+				if ca.Severity >= trace.SevWarning && !restates[ca.Code] {
+					warn++
+				}
+			}
+		}
+		for _, a := range gov {
+			if st := a.Stratum(); st != "" && !strata[st] {
+				strata[st] = true
+				size = append(size, txt(" on "), user(st))
+			}
+			switch {
+			case a.Bearing != nil:
+				bear = append(bear, c.verdictCell(a, "bearing", a.Bearing.Governing >= 0, func() string { return a.Bearing.Cases[a.Bearing.Governing].Name })...)
+				if u, d := result(a, "util_u"), result(a, "util_dr"); u != nil && d != nil {
+					bear = append(bear, txt(fmt.Sprintf("\nshort term %.2f, long term %.2f", u.Q.V, d.Q.V)))
+				}
+				slide = append(slide, c.verdictCell(a, "sliding", a.Bearing.GoverningSliding >= 0, func() string { return a.Bearing.Sliding[a.Bearing.GoverningSliding].Name })...)
+			case a.Settle != nil:
+				if ch := findCheck(a, "settlement"); ch != nil {
+					settl = append(settl, txt(eval.Format(ch.L, ch.Unit, 1)+" ≤ "+eval.Format(ch.R, ch.Unit, -1)+"  "), verdictRun(ch))
+				}
+				if y := result(a, "t_90"); y != nil {
+					settl = append(settl, layout.Run{Text: "\n", Own: true}, layout.Run{Math: rowEq("t_90", y.Q.V, "yr"), Own: true})
+				}
+			case a.Capacity != nil:
+				if y := result(a, "q_allow"); y != nil {
+					allow = append(allow, layout.Run{Math: rowEq("q_allow", y.Q.V, "kPa"), Own: true})
+				}
+			}
+		}
+		dash := func(c layout.Cell) layout.Cell {
+			if len(c) == 0 {
+				return layout.Cell{txt("—")}
+			}
+			return c
+		}
+		if n := len(fr.analyses) - len(gov); n > 0 {
+			more := fmt.Sprintf("\n%d other analyses on its sheets", n)
+			if n == 1 {
+				more = "\n1 other analysis on its sheet"
+			}
+			name = append(name, txt(more))
+		}
+		name = append(name, txt("\n"))
+		name = append(name, size...)
+		if len(allow) > 0 {
+			if len(settl) > 0 {
+				settl = append(settl, txt("\n"))
+			}
+			settl = append(settl, allow...)
+		}
+		// the page run is registered once the cell is complete (appends move it)
+		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
+		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
+	}
+	return t
+}
+
+// verdictCell is "0.57 OK" and the governing case of an engine check.
+func (c *composer) verdictCell(a *eval.Block, kind string, has bool, gov func() string) layout.Cell {
+	ch := findCheck(a, kind)
+	if ch == nil || !has {
+		return nil
+	}
+	cl := layout.Cell{txt(fmt.Sprintf("%.2f  ", ch.Util)), verdictRun(ch), txt("\n" + gov())}
+	return cl
+}
+
+func verdictRun(ch *eval.Check) layout.Run {
+	if ch.OK {
+		return bold("OK")
+	}
+	return bold("NOT OK")
+}
+
+// rowEq is "sym = value unit" as math.
+func rowEq(sym string, v float64, unit string) eqn.Node {
+	return eqn.Row{eqn.Sym{Name: sym}, eqn.Op{Text: "="}, siNode(v, unit)}
+}
+
+// shortShape is a footing's plan and depth in a few words: "2.7 m × 3.2 m,
+// D = 1 m".
+func shortShape(f site.Footing) string {
+	m := units.MustParse("m")
+	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	var plan string
+	switch f.Shape {
+	case site.Strip:
+		plan = "strip " + l(f.B)
+	case site.Circle:
+		plan = "circle diameter " + l(f.B)
+	case site.Square:
+		plan = l(f.B) + " × " + l(f.B)
+	default:
+		plan = l(f.B) + " × " + l(f.L)
+	}
+	return plan + ", at " + l(f.D)
+}
+
+// governingAnalyses keeps, of a footing's analyses, the one of each kind
+// with the highest utilisation of its governing check (bearing by its
+// bearing check; the first capacity block), in their order.
+func governingAnalyses(as []*eval.Block) []*eval.Block {
+	best := map[string]*eval.Block{}
+	util := func(b *eval.Block, kind string) float64 {
+		if ch := findCheck(b, kind); ch != nil && ch.HasUtil() {
+			return ch.Util
+		}
+		return -1
+	}
+	for _, a := range as {
+		var kind string
+		switch {
+		case a.Bearing != nil:
+			kind = "bearing"
+		case a.Settle != nil:
+			kind = "settlement"
+		case a.Capacity != nil:
+			kind = "capacity"
+		default:
+			continue
+		}
+		if b, ok := best[kind]; !ok || kind != "capacity" && util(a, kind) > util(b, kind) {
+			best[kind] = a
+		}
+	}
+	var out []*eval.Block
+	for _, a := range as {
+		for _, b := range best {
+			if a == b {
+				out = append(out, a)
+			}
+		}
+	}
+	return out
+}
