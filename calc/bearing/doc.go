@@ -140,7 +140,9 @@
 // undrained-coarse, drained-missing, undrained-missing, base-tilt,
 // terzaghi-incl, terzaghi-circle, circle-area, uplift (V_d ≤ 0), ecc-out
 // (resultant outside the base), ecc-b6 (e > B/6: part of the base lifts),
-// ecc-b3 (e > B/3, EN 1997-1 6.5.4), hv-large (H/V > 0.3), hc-limit
+// ecc-kern (rectangle: e_B/B + e_L/L > 1/6 with each ratio within 1/6,
+// outside the rhombic kern; Gere & Timoshenko, Mechanics of Materials,
+// core of a rectangular section), ecc-b3 (e > B/3, EN 1997-1 6.5.4), hv-large (H/V > 0.3), hc-limit
 // (H > A′c_u), ks-extrapolated, two-layer-inclined, spread-fails,
 // slide-04V, governing, governing-sliding.
 //

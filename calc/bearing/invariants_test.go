@@ -2,6 +2,7 @@ package bearing_test
 
 import (
 	"fmt"
+	"math"
 	"testing"
 
 	"plinth/calc/bearing"
@@ -273,6 +274,42 @@ func TestLocalShearAuto(t *testing.T) {
 		res := check(t, r.name, in)
 		if hasCaution(res, "local-shear") != r.local || hasCaution(res, "local-shear-transitional") != r.tran {
 			t.Errorf("%s: local %v transitional %v, want %v %v", r.name, hasCaution(res, "local-shear"), hasCaution(res, "local-shear-transitional"), r.local, r.tran)
+		}
+	}
+}
+
+// Two-way eccentricity: the kern (core) of a rectangular base is the
+// rhombus e_B/B + e_L/L ≤ 1/6 (Gere & Timoshenko, Mechanics of Materials,
+// 4th ed., core of a rectangular section, from memory; the corner pressure
+// V/(BL)(1 − 6e_B/B − 6e_L/L) of Bowles 1996 §4-7). On a grid of (e_B/B,
+// e_L/L) kept off the boundary by at least 0.003 (exact comparison, no
+// tolerance needed): some lift-off caution (ecc-b6 or ecc-kern) appears
+// exactly where e_B/B + e_L/L > 1/6, and ecc-kern exactly where each
+// ratio alone is within 1/6 but the sum is not.
+func TestKernRhombus(t *testing.T) {
+	const B, L, V = 2.0, 3.0, 1000e3
+	ratios := []float64{0, 0.03, 0.07, 0.1, 0.13, 0.16, 0.19}
+	for _, rb := range ratios {
+		for _, rl := range ratios {
+			in := bearing.Input{
+				Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(32 * deg)}),
+				Footing: site.Footing{Shape: site.Rectangle, B: B, L: L, D: 1},
+				Actions: []site.Action{{Name: "G", V: V, MB: rb * B * V, ML: rl * L * V}},
+				Options: bearing.Options{Approach: design.FS(3)},
+			}
+			res := check(t, "kern", in)
+			sum := rb + rl
+			if math.Abs(sum-1.0/6) < 0.003 {
+				t.Fatalf("grid point (%g, %g) too near the boundary", rb, rl)
+			}
+			lift := hasCaution(res, "ecc-b6") || hasCaution(res, "ecc-kern")
+			if lift != (sum > 1.0/6) {
+				t.Errorf("e_B/B = %g, e_L/L = %g: lift-off caution %v, want %v", rb, rl, lift, sum > 1.0/6)
+			}
+			wantKern := sum > 1.0/6 && rb <= 1.0/6 && rl <= 1.0/6
+			if hasCaution(res, "ecc-kern") != wantKern {
+				t.Errorf("e_B/B = %g, e_L/L = %g: ecc-kern %v, want %v", rb, rl, !wantKern, wantKern)
+			}
 		}
 	}
 }
