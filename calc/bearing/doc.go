@@ -97,14 +97,21 @@
 //
 // # Local shear
 //
-// Terzaghi's (1943) c* = ⅔c, tan φ* = ⅔ tan φ are applied to the founding
-// layer when local_shear = yes, or with auto when the layer is loose or
-// very loose (density index I_D < 0.35, EN ISO 14688-2:2004 Table 4; or,
-// without I_D, SPT N < 10, Terzaghi & Peck 1948) or of low or lower
-// undrained strength (c_u < 40 kPa, EN ISO 14688-2:2004 Table 5) — the
-// local and punching shear region of Vesić's (1973) failure-mode chart at
-// any embedment. Medium-dense sand (0.35 ≤ I_D < 0.65, 10 ≤ N < 30) and
-// medium clay (40–75 kPa) raise a warning (transitional).
+// A named method keeps its result. Terzaghi's (1943) c* = 2/3 c,
+// tan φ* = 2/3 tan φ are applied to the founding layer when local_shear =
+// yes, with any method; the result is then that method "with Terzaghi's
+// local-shear reduction" (Result.LocalShear). With auto (the default) the
+// criterion for sand is relative density, the local and punching shear
+// region of Vesić's (1973) failure-mode chart at any embedment: loose or
+// very loose sand (density index I_D < 0.35, EN ISO 14688-2:2004 Table 4;
+// or, without I_D, SPT N < 10, Terzaghi & Peck 1948) raises a warning
+// (local-shear-advised) that recommends the local-shear check and keeps
+// the general-shear result; medium-dense sand (0.35 ≤ I_D < 0.65,
+// 10 ≤ N < 30) a transitional warning. Vesić's chart does not classify
+// clay: soft clay (c_u < 40 kPa, EN ISO 14688-2:2004 Table 5) gets a note
+// (local-shear-soft). Only method = terzaghi applies the reduction under
+// auto, to loose sand and soft clay, as Terzaghi (1943) does for ground
+// that fails in local shear; the caution says so.
 //
 // # Sliding
 //
@@ -136,7 +143,8 @@
 //
 // allowable, da3-actions, psi0-default, phi-high (φ′ > 40°), water-above-
 // base, water-within-B, layers-in-zone, weaker-layer, layer-no-strength,
-// local-shear, local-shear-off, local-shear-transitional, density-unknown,
+// local-shear, local-shear-advised, local-shear-soft, local-shear-off,
+// local-shear-transitional, density-unknown,
 // undrained-coarse, drained-missing, undrained-missing, base-tilt,
 // terzaghi-incl, terzaghi-circle, circle-area, uplift (V_d ≤ 0), ecc-out
 // (resultant outside the base), ecc-b6 (e > B/6: part of the base lifts),

@@ -246,6 +246,14 @@ func TestCapacityAt(t *testing.T) {
 // a reproduction of the BS 5930 / EN ISO 14688-2 terms (soft 20–40, firm
 // 40–75, stiff 75–150 kPa). Exact at the boundary: the lower class ends
 // below it.
+//
+// A named method keeps its result under auto (EN 1997-1 Annex D is Annex
+// D): loose sand raises local-shear-advised (Vesić 1973, failure modes by
+// relative density), soft clay a note (Vesić's chart does not classify
+// clay), and R_d equals the local_shear = no value exactly. Only method =
+// terzaghi applies Terzaghi's (1943) reduction under auto, as his own
+// source does for loose or soft ground; local_shear = yes applies it with
+// any method and Result.LocalShear names it.
 func TestLocalShearAuto(t *testing.T) {
 	sand := func(dr, n site.Opt) site.Layer {
 		return site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(30 * deg), Dr: dr, N: n}
@@ -254,26 +262,42 @@ func TestLocalShearAuto(t *testing.T) {
 		return site.Layer{Top: 0, Gamma: 18e3, Cu: site.Some(cu), Phi: site.Some(25 * deg)}
 	}
 	for _, r := range []struct {
-		name        string
-		l           site.Layer
-		local, tran bool
+		name              string
+		l                 site.Layer
+		advised, soft, tr bool
 	}{
-		{"I_D 0.34", sand(site.Some(0.34), site.Opt{}), true, false},
-		{"I_D 0.35", sand(site.Some(0.35), site.Opt{}), false, true},
-		{"I_D 0.64", sand(site.Some(0.64), site.Opt{}), false, true},
-		{"I_D 0.65", sand(site.Some(0.65), site.Opt{}), false, false},
-		{"N 9", sand(site.Opt{}, site.Some(9)), true, false},
-		{"N 10", sand(site.Opt{}, site.Some(10)), false, true},
-		{"N 30", sand(site.Opt{}, site.Some(30)), false, false},
-		{"c_u 39 kPa", clay(39e3), true, false},
-		{"c_u 40 kPa", clay(40e3), false, true},
-		{"c_u 75 kPa", clay(75e3), false, false},
+		{"I_D 0.34", sand(site.Some(0.34), site.Opt{}), true, false, false},
+		{"I_D 0.35", sand(site.Some(0.35), site.Opt{}), false, false, true},
+		{"I_D 0.64", sand(site.Some(0.64), site.Opt{}), false, false, true},
+		{"I_D 0.65", sand(site.Some(0.65), site.Opt{}), false, false, false},
+		{"N 9", sand(site.Opt{}, site.Some(9)), true, false, false},
+		{"N 10", sand(site.Opt{}, site.Some(10)), false, false, true},
+		{"N 30", sand(site.Opt{}, site.Some(30)), false, false, false},
+		{"c_u 39 kPa", clay(39e3), false, true, false},
+		{"c_u 40 kPa", clay(40e3), false, false, false},
+		{"c_u 75 kPa", clay(75e3), false, false, false},
 	} {
-		in := bearing.Input{Ground: oneLayer(r.l), Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
-			Actions: []site.Action{{Name: "G", V: 300e3}}, Options: bearing.Options{Approach: design.FS(3)}}
-		res := check(t, r.name, in)
-		if hasCaution(res, "local-shear") != r.local || hasCaution(res, "local-shear-transitional") != r.tran {
-			t.Errorf("%s: local %v transitional %v, want %v %v", r.name, hasCaution(res, "local-shear"), hasCaution(res, "local-shear-transitional"), r.local, r.tran)
+		run := func(m bearing.Method, ls bearing.Switch) *bearing.Result {
+			in := bearing.Input{Ground: oneLayer(r.l), Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
+				Actions: []site.Action{{Name: "G", V: 300e3}}, Options: bearing.Options{Method: m, Approach: design.FS(3), LocalShear: ls}}
+			return check(t, r.name, in)
+		}
+		auto, no, yes := run(bearing.EC7, bearing.Auto), run(bearing.EC7, bearing.No), run(bearing.EC7, bearing.Yes)
+		if hasCaution(auto, "local-shear") || auto.LocalShear {
+			t.Errorf("%s: ec7 auto applied local shear", r.name)
+		}
+		if hasCaution(auto, "local-shear-advised") != r.advised || hasCaution(auto, "local-shear-soft") != r.soft || hasCaution(auto, "local-shear-transitional") != r.tr {
+			t.Errorf("%s: advised %v soft %v transitional %v, want %v %v %v", r.name, hasCaution(auto, "local-shear-advised"), hasCaution(auto, "local-shear-soft"), hasCaution(auto, "local-shear-transitional"), r.advised, r.soft, r.tr)
+		}
+		if a, b := auto.Cases[auto.Governing].R, no.Cases[no.Governing].R; a != b {
+			t.Errorf("%s: ec7 auto R_d = %g differs from local_shear = no %g", r.name, a, b)
+		}
+		if !yes.LocalShear || !hasCaution(yes, "local-shear") || yes.Cases[yes.Governing].R >= no.Cases[no.Governing].R {
+			t.Errorf("%s: local_shear = yes did not reduce the resistance", r.name)
+		}
+		terz := run(bearing.Terzaghi, bearing.Auto)
+		if loose := r.advised || r.soft; terz.LocalShear != loose || hasCaution(terz, "local-shear") != loose {
+			t.Errorf("%s: terzaghi auto local shear %v, want %v", r.name, terz.LocalShear, loose)
 		}
 	}
 }

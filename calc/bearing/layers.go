@@ -99,13 +99,23 @@ func (c *calc) layers() {
 		val("r_q", bestR, ""))
 }
 
-// localShear decides whether Terzaghi's (1943) local-shear strengths apply
-// to the founding layer. Auto applies them to loose or very loose sand
-// (density index I_D < 0.35, EN ISO 14688-2 Table 4; without I_D, SPT N <
-// 10, Terzaghi & Peck 1948) and to clay of low or lower strength (c_u < 40
-// kPa, EN ISO 14688-2 Table 5): the local and punching shear region of
-// Vesić's (1973) failure-mode chart at any embedment. Medium-dense sand
-// and medium clay raise a warning instead (transitional).
+// localShear decides whether Terzaghi's (1943) local-shear strengths
+// c* = 2/3 c, tan φ* = 2/3 tan φ apply to the founding layer.
+//
+// local_shear = yes applies them with any method (the method line then
+// names the reduction); no never does, with a caution where the ground is
+// loose or soft. auto keeps a named method's own result: for sand the
+// criterion is relative density, Vesić's (1973) failure-mode chart, whose
+// local and punching shear region at any embedment holds loose sand
+// (density index I_D < 0.35, EN ISO 14688-2 Table 4; without I_D, SPT
+// N < 10, Terzaghi & Peck 1948); there auto raises a warning that
+// recommends the local-shear check, and medium-dense sand (0.35 ≤ I_D <
+// 0.65, 10 ≤ N < 30) a transitional warning. Vesić's chart does not
+// classify clay: soft clay (c_u < 40 kPa, EN ISO 14688-2 Table 5) gets a
+// note. Only method = terzaghi applies the reduction under auto, to loose
+// sand and soft clay, as Terzaghi (1943) does for soils that fail in local
+// shear (the c_u and N boundaries are the engine's reading of "loose" and
+// "soft", stated in the caution).
 func (c *calc) localShear() {
 	l := c.g.Layers[c.fi]
 	ln := layerName(c.g, c.fi)
@@ -114,13 +124,14 @@ func (c *calc) localShear() {
 	looseWord, transWord := "loose", "medium dense"
 	var vals []trace.Value
 	ref := trace.Ref{Source: SrcISO14688, Clause: "Table 4"}
+	clay := false
 	switch {
 	case l.Fine() && l.Cu.Set:
 		ref.Clause = "Table 5"
 		vals = append(vals, val("c_u_k", l.Cu.V, "kPa"))
 		loose = l.Cu.V < 40*kPa
-		trans = !loose && l.Cu.V < 75*kPa
-		looseWord, transWord = "of low strength (soft)", "of medium strength (firm)"
+		clay = true
+		looseWord = "of low strength (soft)"
 		why = fmt.Sprintf("c_u = %.0f kPa", l.Cu.V/kPa)
 	case l.Dr.Set:
 		vals = append(vals, val("I_D", l.Dr.V, ""))
@@ -134,19 +145,27 @@ func (c *calc) localShear() {
 		trans = !loose && l.N.V < 30
 		why = fmt.Sprintf("N = %.0f", l.N.V)
 	}
+	mw := methodTitle(c.opt.Method)
 	switch c.opt.LocalShear {
 	case Yes:
 		c.local = true
-		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used for "+ln+".")
+		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2/3 c, tan φ* = 2/3 tan φ are used for "+ln+": the result is "+mw+" with Terzaghi's local-shear reduction.")
 	case No:
 		if loose {
-			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
+			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear may govern (Vesić 1973 for sand; Terzaghi 1943); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
+			c.t.Cite(ref.Source)
 		}
 	default:
 		switch {
-		case loose:
+		case loose && c.opt.Method == Terzaghi:
 			c.local = true
-			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = ⅔c, tan φ* = ⅔ tan φ are used.", why, ln, looseWord), vals...)
+			c.warn("local-shear", trace.SevWarning, refLocal, fmt.Sprintf("local_shear = auto, method = terzaghi: %s shows %s is %s (EN ISO 14688-2), and Terzaghi (1943) gives local-shear strengths for such ground, so his reduced strengths c* = 2/3 c, tan φ* = 2/3 tan φ are used.", why, ln, looseWord), vals...)
+			c.t.Cite(ref.Source)
+		case loose && !clay:
+			c.warn("local-shear-advised", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) failure-mode chart (relative density against relative depth). The result is %s in general shear and may overstate the resistance; check local shear (local_shear = yes applies Terzaghi's reduction c* = 2/3 c, tan φ* = 2/3 tan φ).", why, ln, looseWord, mw), vals...)
+			c.t.Cite(ref.Source)
+		case loose:
+			c.warn("local-shear-soft", trace.SevNote, refLocal, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2). Vesić's (1973) failure-mode criterion is by relative density and does not classify clay; the result is %s as written. local_shear = yes applies Terzaghi's (1943) local-shear reduction.", why, ln, looseWord, mw), vals...)
 			c.t.Cite(ref.Source)
 		case trans:
 			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)
@@ -155,6 +174,21 @@ func (c *calc) localShear() {
 			c.warn("density-unknown", trace.SevNote, refMode, "local_shear = auto: no density (I_D or N) is given for "+ln+", so general shear is assumed.")
 		}
 	}
+}
+
+// methodTitle names a method for cautions.
+func methodTitle(m Method) string {
+	switch m {
+	case Vesic:
+		return "Vesić (1973, 1975)"
+	case Meyerhof:
+		return "Meyerhof (1963)"
+	case Hansen:
+		return "Brinch Hansen (1970)"
+	case Terzaghi:
+		return "Terzaghi (1943)"
+	}
+	return "EN 1997-1 Annex D"
 }
 
 // drainages returns the drainage cases to check and raises the cautions

@@ -58,7 +58,12 @@ type Result struct {
 	Approach string // design.Approach.Name
 	Source   string // where its factors come from
 	Method   Method
-	Cases    []Case
+	// LocalShear is true when Terzaghi's local-shear strengths were used
+	// for the founding layer (local_shear = yes, or auto with method =
+	// terzaghi on loose or soft ground): the method is then "Method with
+	// Terzaghi's local-shear reduction".
+	LocalShear bool
+	Cases      []Case
 	// Governing is the index in Cases of the highest utilisation (-1 if
 	// no case could be checked); GoverningDrainage is its drainage.
 	Governing         int

@@ -40,7 +40,7 @@ var (
 	refMey53  = trace.Ref{Source: SrcMeyerhof1953, Clause: "effective width B′ = B − 2e"}
 	refWater  = trace.Ref{Source: SrcDas, Clause: "effect of the water table, cases I–III"}
 	refTerz   = trace.Ref{Source: SrcTerzaghi, Clause: "bearing capacity factors"}
-	refLocal  = trace.Ref{Source: SrcTerzaghi, Clause: "local shear: c* = ⅔c, tan φ* = ⅔ tan φ"}
+	refLocal  = trace.Ref{Source: SrcTerzaghi, Clause: "local shear: c* = 2/3 c, tan φ* = 2/3 tan φ"}
 	refKumb   = trace.Ref{Source: SrcKumbhojkar, Clause: "Nγ, Das (2011) Table 3.1, linear interpolation"}
 	refMey63  = trace.Ref{Source: SrcBowles, Clause: "Tables 4-1, 4-5a (Meyerhof 1963)"}
 	refHan70  = trace.Ref{Source: SrcBowles, Clause: "Tables 4-1, 4-5a, 4-5b (Hansen 1970)"}

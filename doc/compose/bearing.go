@@ -37,7 +37,11 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	names, steps := groups(tr)
 
 	o.head(fmt.Sprintf("Bearing resistance of %s on %s", b.Of.Name, b.On.Name))
-	intro := fmt.Sprintf("Method: %s. Design approach %s", methodWords[r.Method], r.Approach)
+	mw := methodWords[r.Method]
+	if r.LocalShear {
+		mw += " with Terzaghi's local-shear reduction"
+	}
+	intro := fmt.Sprintf("Method: %s. Design approach %s", mw, r.Approach)
 	if r.Source != "" {
 		intro += " (" + r.Source + ")"
 	}
