@@ -116,8 +116,12 @@
 // # Sliding
 //
 // EN 1997-1 6.5.3: drained R_d = V′_d tanδ_d/γ_Rh with V′_d = V_d − u_0 A
-// and δ_k = k_δ φ′_k (k_δ = 1 cast in situ, 2/3 precast, 6.5.3(10)) unless
-// δ is given; undrained R_d = A′c_u,d/γ_Rh, not more than 0.4 V_d unless
+// and δ_d = k_δ φ′_cv,d (k_δ = 1 cast in situ, 2/3 smooth precast,
+// 6.5.3(10), which bases δ_d on the design critical-state angle; the
+// clause is quoted from memory), φ′_cv,d = atan(tan φ′_cv,k/γ_φ′) as for
+// φ′. Without φ′_cv the peak φ′ is used and a warning (slide-phi-cv) says
+// the resistance may be high by tan φ′_d/tan φ′_cv,d. A given δ is a
+// characteristic δ_k, δ_d = atan(tan δ_k/γ_φ′); undrained R_d = A′c_u,d/γ_Rh, not more than 0.4 V_d unless
 // Interface.Sealed (6.5.3(12)P). Passive resistance is ignored.
 //
 // # Summary values (Result.Values, in this order)
@@ -152,7 +156,8 @@
 // outside the rhombic kern; Gere & Timoshenko, Mechanics of Materials,
 // core of a rectangular section), ecc-b3 (e > B/3, EN 1997-1 6.5.4), hv-large (H/V > 0.3), hc-limit
 // (H > A′c_u), ks-extrapolated, two-layer-inclined, spread-fails,
-// slide-04V, governing, governing-sliding.
+// slide-04V, slide-phi-cv (no φ′_cv for drained sliding), governing,
+// governing-sliding.
 //
 // # Symbols
 //
@@ -169,7 +174,8 @@
 // lower layer's factors), q_b, q_1, q_2, r_q (= q_2/q_1), K_p_tan_delta,
 // K_s, r_a (= c_a/c_1), c_a, s_p, i_p, q_u, q_lim, n_s, B_s, L_s, A_s,
 // q_Ed_s, q_ult_s (and its factors …_s), q_Rd_s, util_s; sliding:
-// phi'_k, k_delta, delta_k, delta_d, A_b, U, V'_d, R_h_d, FS_s, util_h;
+// phi'_k, phi'_d, phi'_cv_k, phi'_cv_d, k_delta, delta_k, delta_d, A_b,
+// U, V'_d, R_h_d, FS_s, util_h;
 // actions (package design): V_k_TAG, H_B_k_TAG …, gamma_G_sup,
 // gamma_G_inf, gamma_Q, psi_0_TAG.
 package bearing

@@ -210,6 +210,66 @@ func TestSlidingDrained(t *testing.T) {
 	}
 }
 
+// Drained sliding with the critical-state angle, EN 1997-1:2004
+// 6.5.3(10) (δ_d = φ′_cv,d cast in situ, 2/3 φ′_cv,d smooth precast; the
+// clause text from memory, the public copies found could not be read
+// there) with φ′_cv,d = atan(tan φ′_cv,k/γ_φ′) (2.4.6.2, set M2 in
+// DA1-C2). Hand calculation: V = 500 kN, H = 100 kN, no water, φ′_k = 38°,
+// φ′_cv,k = 32°. With φ′_cv, cast in situ: DA1-C1 (G inf) R_h,d = 500 tan
+// 32° = 312.435 kN; DA1-C2 R_h,d = 500 tan 32°/1.25 = 249.948 kN. Precast
+// (k_δ = 2/3), DA1-C2: φ′_cv,d = atan(0.62487/1.25) = 26.5603°, δ_d =
+// 17.7068°, R_h,d = 500 tan 17.7068° = 159.636 kN. Without φ′_cv the peak
+// is used, DA1-C1: 500 tan 38° = 390.643 kN, 1.2503 times the φ′_cv value
+// (tan 38°/tan 32°), with the slide-phi-cv warning. Tolerance 1e-5
+// relative.
+func TestSlidingCriticalState(t *testing.T) {
+	in := func(cv site.Opt, k float64) bearing.Input {
+		return bearing.Input{
+			Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(38 * deg), PhiCv: cv}),
+			Footing: site.Footing{Shape: site.Square, B: 2, D: 1},
+			Actions: []site.Action{{Name: "G", V: 500e3, HB: 100e3}},
+			Options: bearing.Options{Approach: design.DA1(), Interface: bearing.Interface{KDelta: k}},
+		}
+	}
+	c1, c2 := "DA1-C1 · permanent only · G inf · sliding drained", "DA1-C2 · permanent only · G sup · sliding drained"
+	slide := func(r *bearing.Result, name string) bearing.SlideCase {
+		for _, s := range r.Sliding {
+			if s.Name == name {
+				return s
+			}
+		}
+		t.Fatalf("no sliding case %q", name)
+		return bearing.SlideCase{}
+	}
+	for _, r := range []struct {
+		what string
+		cv   site.Opt
+		k    float64
+		c    string
+		want float64
+		warn bool
+	}{
+		{"φ′_cv, cast, C1", site.Some(32 * deg), 1, c1, 312.435, false},
+		{"φ′_cv, cast, C2", site.Some(32 * deg), 1, c2, 249.948, false},
+		{"φ′_cv, precast, C2", site.Some(32 * deg), 2.0 / 3, c2, 159.636, false},
+		{"peak, cast, C1", site.Opt{}, 1, c1, 390.643, true},
+	} {
+		res := check(t, r.what, in(r.cv, r.k))
+		if s := slide(res, r.c); !within(s.R/kN, r.want, 1e-5, 0) {
+			t.Errorf("%s: R_h,d = %.3f kN, want %.3f (hand calculation, EN 1997-1 6.5.3(10))", r.what, s.R/kN, r.want)
+		}
+		if hasCaution(res, "slide-phi-cv") != r.warn {
+			t.Errorf("%s: slide-phi-cv %v, want %v", r.what, !r.warn, r.warn)
+		}
+	}
+	// A given δ bypasses both angles and raises no warning.
+	d := in(site.Opt{}, 1)
+	d.Options.Interface.Delta = site.Some(25 * deg)
+	if res := check(t, "delta given", d); hasCaution(res, "slide-phi-cv") {
+		t.Error("delta given: no slide-phi-cv warning expected")
+	}
+}
+
 func TestCapacityAt(t *testing.T) {
 	in := daInput()
 	prev := 0.0
