@@ -3,6 +3,7 @@ package settle_test
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"plinth/calc/settle"
@@ -218,5 +219,43 @@ func TestBurlandBurbidgeContinuity(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// The two branches of Burland & Burbidge (1985) §6 meet also where the
+// sand is preloaded beyond the present overburden (σ′_vo = σ′_p > σ′_v0):
+// s(q′ = σ′_vo ± 1e-9) agree to 1e-6 relative (hand form:
+// σ′_vo B^0.7 I_c/3 on both sides). Where the net pressure is not
+// positive, method = auto on sand with N chooses Burland & Burbidge and so
+// gives the recompression value; the elastic method gives none and its
+// note says it has no recompression branch.
+func TestBurlandBurbidgePreloaded(t *testing.T) {
+	g := site.Ground{Water: site.Some(0.5), Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), N: site.Some(25), SigmaP: site.Some(120 * kPa)}}}
+	f := site.Footing{Name: "F", Shape: site.Square, B: 2.5, D: 1.2}
+	u := 0.7 * 9.81e3
+	si := func(q float64, m settle.Method) *settle.Result {
+		return mustCompute(t, settle.Input{Ground: g, Footing: f, Q: site.Some(q), Method: m})
+	}
+	lo, hi := si(120*kPa*(1-1e-9)+u, settle.BurlandBurbidge), si(120*kPa*(1+1e-9)+u, settle.BurlandBurbidge)
+	if lo.BB.SigmaVo != 120*kPa {
+		t.Fatalf("σ′_vo = %g, want σ′_p", lo.BB.SigmaVo)
+	}
+	want := 120 * math.Pow(2.5, 0.7) * lo.BB.Ic / 3 * 1e-3
+	near(t, "s below σ′_vo", lo.Si, want, 1e-6*want, "B&B 1985 §6, q′ ≤ σ′_vo")
+	near(t, "s above σ′_vo", hi.Si, want, 1e-6*want, "B&B 1985 §6, q′ > σ′_vo")
+	// Compensated: q = 0.8 σ_v0 at the base.
+	q := 0.8 * g.SigmaV(f.D)
+	g.Layers = []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), N: site.Some(25)}}
+	if r := si(q, settle.Auto); r.Method != settle.BurlandBurbidge || !(r.Si > 0) {
+		t.Errorf("auto, q_net < 0: method %v, s_i = %g; want Burland & Burbidge recompression", r.Method, r.Si)
+	}
+	g.Layers[0].E = site.Some(30e6)
+	r := si(q, settle.Elastic)
+	found := false
+	for _, c := range r.Trace.Cautions {
+		found = found || (c.Code == "net-nonpositive" && strings.Contains(c.Message, "no recompression branch"))
+	}
+	if r.Si != 0 || !found {
+		t.Errorf("elastic, q_net < 0: s_i = %g, note found %v", r.Si, found)
 	}
 }
