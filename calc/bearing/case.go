@@ -304,6 +304,8 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 			c.warn("ecc-b3", trace.SevCaution, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
 		} else if e > lim6 {
 			c.warn("ecc-b6", trace.SevWarning, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
+		} else if k := kern(f, g.eB, g.eL); k > 1.0/6 {
+			c.warn("ecc-kern", trace.SevWarning, refKern, fmt.Sprintf("%s: e_B/B + e_L/L = %.3f > 1/6: the resultant lies outside the kern of the rectangle (a rhombus with half-diagonals B/6 and L/6) though each eccentricity is within its middle third, so a corner of the base lifts off under a linear pressure distribution (q_min = V/(BL) (1 - 6 e_B/B - 6 e_L/L) < 0).", c.cas, k), val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
 		}
 	}
 	switch {
@@ -444,4 +446,17 @@ func (c *calc) pfStep(k int, s string, v float64, set string) float64 {
 		c.take(s, v, "", refA4, "partial factor "+what+" ("+set+")")
 	}
 	return v
+}
+
+// kern returns e_B/B + e_L/L for a rectangle or square (0 for a strip or
+// circle): the resultant lies inside the kern (core) of the rectangular
+// base, a rhombus with half-diagonals B/6 and L/6, when it is at most 1/6.
+// Source: the core of a rectangular section (Gere & Timoshenko, Mechanics
+// of Materials); the corner pressure V/(BL)(1 − 6e_B/B − 6e_L/L) of
+// biaxial eccentricity (Bowles 1996, §4-7).
+func kern(f site.Footing, eB, eL float64) float64 {
+	if f.Shape != site.Rectangle && f.Shape != site.Square {
+		return 0
+	}
+	return eB/f.B + eL/f.Length()
 }

@@ -191,6 +191,7 @@ func (c *calc) common() {
 	}
 	c.layers()
 	c.localShear()
+	c.r.LocalShear = c.local
 	if f.Alpha != 0 && (c.opt.Method == Meyerhof || c.opt.Method == Terzaghi) {
 		c.warn("base-tilt", trace.SevWarning, trace.Ref{}, fmt.Sprintf("The %s method has no base-inclination factors: the inclination of the base is not taken into account. Use ec7, vesic or hansen.", c.opt.Method))
 	}

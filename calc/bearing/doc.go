@@ -116,26 +116,32 @@
 //
 // # Local shear
 //
-// Terzaghi's (1943) c* = 2c/3, tan φ* = (2/3) tan φ, for the founding layer.
-// Criteria: loose or very loose sand (density index I_D < 0.35, EN ISO
-// 14688-2 Table 4; without I_D, SPT N < 10, Terzaghi & Peck 1948), the
-// local and punching shear region of Vesić's (1973) failure modes against
-// relative density; soft clay (c_u < 40 kPa, low strength in EN ISO
-// 14688-2 Table 5), Terzaghi's (1943) own case for local shear. Vesić's
-// chart is not applied to c_u. With local_shear = auto and Terzaghi's
-// method, the reduction is applied where these say (his method carries
-// it); with any other method the method's own result is kept and a
-// CAUTION (local-shear-advised) recommends local_shear = yes: plinth never
-// changes a named method silently. local_shear = yes applies the reduction
-// with any method, and Result.MethodLine then reads "… with Terzaghi's
-// (1943) local-shear reduction". Medium-dense sand raises a WARNING
-// (transitional); a firm clay raises nothing.
+// A named method keeps its result. Terzaghi's (1943) c* = 2/3 c,
+// tan φ* = 2/3 tan φ are applied to the founding layer when local_shear =
+// yes, with any method; the result is then that method "with Terzaghi's
+// local-shear reduction" (Result.LocalShear). With auto (the default) the
+// criterion for sand is relative density, the local and punching shear
+// region of Vesić's (1973) failure-mode chart at any embedment: loose or
+// very loose sand (density index I_D < 0.35, EN ISO 14688-2:2004 Table 4;
+// or, without I_D, SPT N < 10, Terzaghi & Peck 1948) raises a warning
+// (local-shear-advised) that recommends the local-shear check and keeps
+// the general-shear result; medium-dense sand (0.35 ≤ I_D < 0.65,
+// 10 ≤ N < 30) a transitional warning. Vesić's chart does not classify
+// clay: soft clay (c_u < 40 kPa, EN ISO 14688-2:2004 Table 5), which
+// Terzaghi (1943) treats as failing in local shear, raises the same
+// warning. Only method = terzaghi applies the reduction under
+// auto, to loose sand and soft clay, as Terzaghi (1943) does for ground
+// that fails in local shear; the caution says so.
 //
 // # Sliding
 //
 // EN 1997-1 6.5.3: drained R_d = V′_d tanδ_d/γ_Rh with V′_d = V_d − u_0 A
-// and δ_k = k_δ φ′_k (k_δ = 1 cast in situ, 2/3 precast, 6.5.3(10)) unless
-// δ is given; undrained R_d = A′c_u,d/γ_Rh, not more than 0.4 V_d unless
+// and δ_d = k_δ φ′_cv,d (k_δ = 1 cast in situ, 2/3 smooth precast,
+// 6.5.3(10), which bases δ_d on the design critical-state angle; the
+// clause is quoted from memory), φ′_cv,d = atan(tan φ′_cv,k/γ_φ′) as for
+// φ′. Without φ′_cv the peak φ′ is used and a warning (slide-phi-cv) says
+// the resistance may be high by tan φ′_d/tan φ′_cv,d. A given δ is a
+// characteristic δ_k, δ_d = atan(tan δ_k/γ_φ′); undrained R_d = A′c_u,d/γ_Rh, not more than 0.4 V_d unless
 // Interface.Sealed (6.5.3(12)P). Passive resistance is ignored.
 //
 // # Summary values (Result.Values, in this order)
@@ -163,13 +169,17 @@
 //
 // allowable, da3-actions, psi0-default, phi-high (φ′ > 40°), water-above-
 // base, water-within-B, layers-in-zone, weaker-layer, layer-no-strength,
-// local-shear, local-shear-off, local-shear-transitional, density-unknown,
+// local-shear, local-shear-advised, local-shear-off,
+// local-shear-transitional, density-unknown,
 // undrained-coarse, drained-missing, undrained-missing, base-tilt,
 // terzaghi-incl, terzaghi-circle, circle-area, uplift (V_d ≤ 0), ecc-out
 // (resultant outside the base), ecc-b6 (e > B/6: part of the base lifts),
-// ecc-b3 (e > B/3, EN 1997-1 6.5.4), hv-large (H/V > 0.3), hc-limit
+// ecc-kern (rectangle: e_B/B + e_L/L > 1/6 with each ratio within 1/6,
+// outside the rhombic kern; Gere & Timoshenko, Mechanics of Materials,
+// core of a rectangular section), ecc-b3 (e > B/3, EN 1997-1 6.5.4), hv-large (H/V > 0.3), hc-limit
 // (H > A′c_u), ks-extrapolated, two-layer-inclined, spread-fails,
-// slide-04V, governing, governing-sliding.
+// slide-04V, slide-phi-cv (no φ′_cv for drained sliding), governing,
+// governing-sliding.
 //
 // # Symbols
 //
@@ -186,7 +196,8 @@
 // lower layer's factors), q_b, q_1, q_2, r_q (= q_2/q_1), K_p_tan_delta,
 // K_s, r_a (= c_a/c_1), c_a, s_p, i_p, q_u, q_lim, n_s, B_s, L_s, A_s,
 // q_Ed_s, q_ult_s (and its factors …_s), q_Rd_s, util_s; sliding:
-// phi'_k, k_delta, delta_k, delta_d, A_b, U, V'_d, R_h_d, FS_s, util_h;
+// phi'_k, phi'_d, phi'_cv_k, phi'_cv_d, k_delta, delta_k, delta_d, A_b,
+// U, V'_d, R_h_d, FS_s, util_h;
 // actions (package design): V_k_TAG, H_B_k_TAG …, gamma_G_sup,
 // gamma_G_inf, gamma_Q, psi_0_TAG.
 package bearing

@@ -102,9 +102,10 @@ func parseEnum[T ~int](s string, names []string) (T, bool) {
 // Interface describes the base–soil interface for sliding.
 type Interface struct {
 	// Delta is the characteristic interface friction angle δ_k, rad,
-	// [0, 45] deg. Not set: δ_k = KDelta·φ′_k of the founding layer.
+	// [0, 45] deg. Not set: δ_d = KDelta·φ′_cv,d of the founding layer (its
+	// peak φ′ with a warning when φ′_cv is not given).
 	Delta site.Opt
-	// KDelta is δ_k/φ′_k, (0, 1]; 0 means 1 (concrete cast in situ,
+	// KDelta is δ_d/φ′_cv,d, (0, 1]; 0 means 1 (concrete cast in situ,
 	// EN 1997-1 6.5.3(10); use 2/3 for smooth precast).
 	KDelta float64
 	// Sealed says water and air cannot reach the interface of a footing on

@@ -104,21 +104,24 @@ func (c *calc) layers() {
 		val("r_q", bestR, ""))
 }
 
-// localShear decides whether Terzaghi's (1943) local-shear strengths apply
-// to the founding layer.
-// Criteria: loose or very loose sand (density index I_D < 0.35, EN ISO
-// 14688-2 Table 4; without I_D, SPT N < 10, Terzaghi & Peck 1948), the
-// local and punching shear region of Vesić's (1973) failure modes against
-// relative density; soft clay (c_u < 40 kPa, low strength in EN ISO
-// 14688-2 Table 5), Terzaghi's (1943) own case for local shear. Vesić's
-// chart is not applied to c_u. With local_shear = auto and Terzaghi's
-// method, the reduction is applied where these say (his method carries
-// it); with any other method the method's own result is kept and a
-// CAUTION (local-shear-advised) recommends local_shear = yes: plinth never
-// changes a named method silently. local_shear = yes applies the reduction
-// with any method, and Result.MethodLine then reads "… with Terzaghi's
-// (1943) local-shear reduction". Medium-dense sand raises a WARNING
-// (transitional); a firm clay raises nothing.
+// localShear decides whether Terzaghi's (1943) local-shear strengths
+// c* = 2/3 c, tan φ* = 2/3 tan φ apply to the founding layer.
+//
+// local_shear = yes applies them with any method (the method line then
+// names the reduction); no never does, with a caution where the ground is
+// loose or soft. auto keeps a named method's own result: for sand the
+// criterion is relative density, Vesić's (1973) failure-mode chart, whose
+// local and punching shear region at any embedment holds loose sand
+// (density index I_D < 0.35, EN ISO 14688-2 Table 4; without I_D, SPT
+// N < 10, Terzaghi & Peck 1948); there auto raises a warning that
+// recommends the local-shear check, and medium-dense sand (0.35 ≤ I_D <
+// 0.65, 10 ≤ N < 30) a transitional warning. Vesić's chart does not
+// classify clay: soft clay (c_u < 40 kPa, EN ISO 14688-2 Table 5), which
+// Terzaghi (1943) treats as failing in local shear, gets the same warning.
+// Only method = terzaghi applies the reduction under auto, to loose
+// sand and soft clay, as Terzaghi (1943) does for soils that fail in local
+// shear (the c_u and N boundaries are the engine's reading of "loose" and
+// "soft", stated in the caution).
 func (c *calc) localShear() {
 	l := c.g.Layers[c.fi]
 	ln := layerName(c.g, c.fi)
@@ -127,20 +130,15 @@ func (c *calc) localShear() {
 	looseWord, transWord := "loose", "medium dense"
 	var vals []trace.Value
 	ref := trace.Ref{Source: SrcISO14688, Clause: "Table 4"}
-	// The criterion: for sands, Vesić's (1973) failure modes against
-	// relative density (I_D, or N through Terzaghi & Peck); for clays,
-	// Terzaghi's (1943) own: local shear for soft clay (c_u below 40 kPa,
-	// low strength in EN ISO 14688-2 Table 5). Vesić's chart is for sands
-	// and is not applied to c_u; a firm clay raises nothing.
-	crit := "Vesić's (1973) failure modes against relative density"
+	clay := false
 	switch {
 	case l.Fine() && l.Cu.Set:
 		ref.Clause = "Table 5"
 		vals = append(vals, val("c_u_k", l.Cu.V, "kPa"))
 		loose = l.Cu.V < 40*kPa
+		clay = true
 		looseWord = "of low strength (soft)"
 		why = fmt.Sprintf("c_u = %.0f kPa", l.Cu.V/kPa)
-		crit = "Terzaghi's (1943) local shear of soft clay"
 	case l.Dr.Set:
 		vals = append(vals, val("I_D", l.Dr.V, ""))
 		loose = l.Dr.V < 0.35
@@ -153,29 +151,29 @@ func (c *calc) localShear() {
 		trans = !loose && l.N.V < 30
 		why = fmt.Sprintf("N = %.0f", l.N.V)
 	}
+	mw := c.opt.Method.Title()
 	switch c.opt.LocalShear {
 	case Yes:
 		c.local = true
-		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used for "+ln+".")
+		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2/3 c, tan φ* = 2/3 tan φ are used for "+ln+": the result is "+mw+" with Terzaghi's local-shear reduction.")
 	case No:
 		if loose {
-			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
+			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear may govern (Vesić 1973 for sand; Terzaghi 1943); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
+			c.t.Cite(ref.Source)
 		}
 	default:
-		rm := refMode
-		if l.Fine() && l.Cu.Set {
-			rm = refLocal
-		}
 		switch {
 		case loose && c.opt.Method == Terzaghi:
-			// Terzaghi's own method carries his local-shear reduction.
 			c.local = true
-			c.warn("local-shear", trace.SevWarning, rm, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2); by %s, Terzaghi's (1943) method takes the reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ.", why, ln, looseWord, crit), vals...)
+			c.warn("local-shear", trace.SevWarning, refLocal, fmt.Sprintf("local_shear = auto, method = terzaghi: %s shows %s is %s (EN ISO 14688-2), and Terzaghi (1943) gives local-shear strengths for such ground, so his reduced strengths c* = 2/3 c, tan φ* = 2/3 tan φ are used.", why, ln, looseWord), vals...)
+			c.t.Cite(ref.Source)
+		case loose && !clay:
+			c.warn("local-shear-advised", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) failure-mode chart (relative density against relative depth). The result is %s in general shear and may overstate the resistance; check local shear (local_shear = yes applies Terzaghi's reduction c* = 2/3 c, tan φ* = 2/3 tan φ).", why, ln, looseWord, mw), vals...)
 			c.t.Cite(ref.Source)
 		case loose:
-			// Any other method keeps its own result: plinth does not
-			// change a named method, it says what the criterion says.
-			c.warn("local-shear-advised", trace.SevCaution, rm, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): by %s local or punching shear may govern, which %s does not cover. General shear is assumed, as the method does; check with local_shear = yes (Terzaghi's reduced strengths).", why, ln, looseWord, crit, c.opt.Method.Title()), vals...)
+			// Terzaghi (1943) treats soft clay as failing in local shear;
+			// the named method keeps its result and the check is advised.
+			c.warn("local-shear-advised", trace.SevWarning, refLocal, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), which Terzaghi (1943) treats as failing in local shear (Vesić's 1973 chart is by relative density and does not classify clay). The result is %s in general shear and may overstate the resistance; check local shear (local_shear = yes applies Terzaghi's reduction c* = 2/3 c, tan φ* = 2/3 tan φ).", why, ln, looseWord, mw), vals...)
 			c.t.Cite(ref.Source)
 		case trans && !l.Fine():
 			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)

@@ -65,6 +65,11 @@ type Result struct {
 	// strengths were used, so no result carries a method's name unless it
 	// is that method.
 	MethodLine string
+	// LocalShear is true when Terzaghi's local-shear strengths were used
+	// for the founding layer (local_shear = yes, or auto with method =
+	// terzaghi on loose or soft ground): the method is then "Method with
+	// Terzaghi's local-shear reduction".
+	LocalShear bool
 	Cases      []Case
 	// Governing is the index in Cases of the highest utilisation (-1 if
 	// no case could be checked); GoverningDrainage is its drainage.

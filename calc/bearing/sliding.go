@@ -59,18 +59,31 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 	var R float64
 	if d == Drained {
 		c.step("H_d", fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2)))), H, c.uF, trace.Ref{}, "resultant horizontal action", val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
-		var dk float64
+		var dd float64
+		ln := layerName(c.g, c.fi)
 		if c.opt.Interface.Delta.Set {
-			dk = c.take("delta_k", c.opt.Interface.Delta.V, "deg", refDelta, "characteristic base friction angle (given)")
+			dk := c.take("delta_k", c.opt.Interface.Delta.V, "deg", refDelta, "characteristic base friction angle (given)")
+			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
+			dd = c.step("delta_d", fn("atan", div(fn("tan", sym("delta_k")), sym(gPhi))), math.Atan(math.Tan(dk)/g), "deg", refMat, "design base friction angle",
+				val("delta_k", dk, "deg"), val(gPhi, g, ""))
 		} else {
-			c.take("phi'_k", fl.Phi.V, "deg", trace.Ref{}, "characteristic angle of shearing resistance of "+layerName(c.g, c.fi))
-			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, "δ/φ′ (1 for concrete cast in situ, 2/3 for smooth precast)")
-			dk = c.step("delta_k", mul(sym("k_delta"), sym("phi'_k")), c.opt.Interface.KDelta*fl.Phi.V, "deg", refDelta, "characteristic base friction angle",
-				val("k_delta", c.opt.Interface.KDelta, ""), val("phi'_k", fl.Phi.V, "deg"))
+			// EN 1997-1 6.5.3(10): δ_d = k_δ φ′_cv,d, with φ′_cv,d from
+			// φ′_cv,k as φ′_d is from φ′_k (tan divided by γ_φ′).
+			ks, ds, ak := "phi'_cv_k", "phi'_cv_d", fl.PhiCv.V
+			if fl.PhiCv.Set {
+				c.take(ks, ak, "deg", refDelta, "characteristic critical-state angle of shearing resistance of "+ln)
+			} else {
+				ks, ds, ak = "phi'_k", "phi'_d", fl.Phi.V
+				c.take(ks, ak, "deg", trace.Ref{}, "characteristic peak angle of shearing resistance of "+ln+" (no φ′_cv given)")
+				c.warnOnce("slide-phi-cv", trace.SevWarning, refDelta, fmt.Sprintf("No φ′_cv is given for %s: the base friction angle is taken from the peak φ′_k = %.1f°. EN 1997-1 6.5.3(10) bases δ_d on the design critical-state angle φ′_cv,d, so the drained sliding resistance may be high by the ratio tan φ′_d/tan φ′_cv,d (25 %% for 38° against 32°). Give phi'_cv in the ground table.", ln, ak/degr),
+					val("phi'_k", ak, "deg"))
+			}
+			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
+			ad := c.step(ds, fn("atan", div(fn("tan", sym(ks)), sym(gPhi))), math.Atan(math.Tan(ak)/g), "deg", refMat, "design value", val(ks, ak, "deg"), val(gPhi, g, ""))
+			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, "δ_d/φ′_cv,d (1 for concrete cast in situ, 2/3 for smooth precast)")
+			dd = c.step("delta_d", mul(sym("k_delta"), sym(ds)), c.opt.Interface.KDelta*ad, "deg", refDelta, "design base friction angle",
+				val("k_delta", c.opt.Interface.KDelta, ""), val(ds, ad, "deg"))
 		}
-		g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
-		dd := c.step("delta_d", fn("atan", div(fn("tan", sym("delta_k")), sym(gPhi))), math.Atan(math.Tan(dk)/g), "deg", refMat, "design base friction angle",
-			val("delta_k", dk, "deg"), val(gPhi, g, ""))
 		vp := ld.V
 		if c.u0 > 0 {
 			A := c.f.Area()

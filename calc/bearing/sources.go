@@ -19,6 +19,7 @@ var (
 	SrcBR470         = trace.Source{Key: "BR470", Citation: "BRE (2004) BR 470 Working platforms for tracked plant: good practice guide to the design, installation, maintenance and repair of ground-supported working platforms. Building Research Establishment, Watford (Table A2: Kp·tanδ)."}
 	SrcISO14688      = trace.Source{Key: "ISO14688-2", Citation: "EN ISO 14688-2:2004 Geotechnical investigation and testing – Identification and classification of soil – Part 2: Principles for a classification. CEN, Brussels (Table 4 density index; Table 5 undrained shear strength)."}
 	SrcTerzaghiPeck  = trace.Source{Key: "TerzaghiPeck1948", Citation: "Terzaghi, K. & Peck, R. B. (1948) Soil Mechanics in Engineering Practice. John Wiley & Sons, New York (density of sands from SPT N)."}
+	SrcGere          = trace.Source{Key: "GereTimoshenko1997", Citation: "Gere, J. M. & Timoshenko, S. P. (1997) Mechanics of Materials, 4th ed. PWS Publishing, Boston (the core, or kern, of a rectangular cross section: a rhombus with diagonals b/3 and h/3; section from memory)."}
 	SrcAPI           = trace.Source{Key: "API-RP2GEO", Citation: "API RP 2GEO (2011) Geotechnical and Foundation Design Considerations, 1st ed. American Petroleum Institute, Washington DC (effective area of a circular base under eccentric load, after API RP 2A)."}
 )
 
@@ -50,5 +51,6 @@ var (
 	refCa     = trace.Ref{Source: SrcMeyerhofHanna, Clause: "adhesion ratio ca/c1 against q2/q1 (chart)"}
 	refCircle = trace.Ref{Source: SrcAPI, Clause: "effective area of a circular foundation"}
 	refMode   = trace.Ref{Source: SrcVesic1973, Clause: "failure modes against relative density"}
+	refKern   = trace.Ref{Source: SrcGere, Clause: "core (kern) of a rectangular section; Bowles (1996) §4-7, biaxial eccentricity (from memory)"}
 	refPrandt = trace.Ref{Source: SrcPrandtl, Clause: "Nc = π + 2 for φ = 0"}
 )

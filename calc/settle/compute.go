@@ -39,13 +39,17 @@ func compute(in Input, full bool) (*Result, error) {
 	r.QNet, r.SigmaV0, r.U0 = k.qn, k.sv, k.u
 	D := k.f.D
 	method := c.Method
-	if k.qn <= 0 {
-		if method == Auto {
-			method = Elastic
-		}
+	if k.qn <= 0 && method == Auto {
+		// The zone for the choice is the deeper of the methods' zones, as
+		// no stress-ratio depth exists for a load that adds no stress.
+		method = k.resolve(D + math.Max(2*k.f.B, math.Pow(k.f.B, 0.763)))
+	}
+	if k.qn <= 0 && method != BurlandBurbidge {
+		// Burland & Burbidge (1985) have a recompression branch
+		// (q′ ≤ σ′_vo); the other methods work from the net pressure only.
 		r.Method = method
 		r.ZInf = D
-		k.warn("load", "net-nonpositive", trace.SevNote, trace.Ref{}, "the net bearing pressure is not positive: the load adds no settlement (heave and recompression are not modelled)", val("q_net", k.qn, "kPa"))
+		k.warn("load", "net-nonpositive", trace.SevNote, trace.Ref{}, "the net bearing pressure is not positive: the "+method.String()+" method works from the net pressure and has no recompression branch, so the load adds no settlement by it (heave is not modelled)", val("q_net", k.qn, "kPa"))
 		k.finish()
 		return r, nil
 	}

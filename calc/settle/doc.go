@@ -82,6 +82,15 @@
 // corrections they give). Creep (C_2, f_t) at the design life is reported
 // as secondary settlement; a sand has no other time dependence.
 //
+// Net pressure not positive (a compensated raft, a basement): Burland &
+// Burbidge's recompression branch applies, s = f_s f_l q′ B^0.7 I_c/3,
+// which meets the normally consolidated branch f_s f_l (q′ − ⅔σ′_vo)
+// B^0.7 I_c at q′ = σ′_vo, so s is continuous in q. The other methods work
+// from q_net alone and have no recompression branch: they report no
+// settlement and a note that says so (heave is not modelled). With
+// method = auto the choice is made as usual (zone 2B or B^0.763 below the
+// base, the deeper).
+//
 // # Result
 //
 // Result.Sub is the stress table by sublayer (depth, σ_v0, u_0, σ′_v0, Δσ,

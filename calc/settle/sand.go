@@ -324,7 +324,11 @@ func (k *calc) burland() error {
 	unitsNote := "s in mm with q′, σ′_vo in kPa and B in m"
 	B07 := fPow(fDiv(fS("B"), m1), fN(0.7))
 	var si float64
-	if bb.QEff <= sp {
+	if bb.QEff <= 0 {
+		bb.OC = true
+		k.add(cs, "s_i", nil, nil, 0, "mm", ref, "q′ ≤ 0: the base is not loaded in effective stress; no settlement")
+		k.warn(cs, "bb-uplift", trace.SevWarning, ref, "the gross effective bearing pressure q′ is not positive (the pore pressure at the base exceeds the applied pressure): Burland & Burbidge's method gives no settlement and heave is not modelled", val("q'", bb.QEff, "kPa"))
+	} else if bb.QEff <= sp {
 		bb.OC = true
 		si = bb.Fs * bb.Fl * bb.QEff / 1e3 * math.Pow(B, 0.7) * bb.Ic / 3 * 1e-3
 		k.add(cs, "s_i", fMul(fS("f_s"), fS("f_l"), fDiv(fS("q'"), kPa1), B07, fDiv(fS("I_c"), fN(3)), mm1),

@@ -3,6 +3,7 @@ package settle_test
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"plinth/calc/settle"
@@ -164,5 +165,97 @@ func TestBurlandBurbidgeHand(t *testing.T) {
 	var ie *site.InputError
 	if _, err := settle.Compute(miss); !errors.As(err, &ie) || ie.Param != "N" {
 		t.Errorf("missing N: %v", err)
+	}
+}
+
+// Burland & Burbidge (1985), §6 (the recompression branch quoted in the
+// package documentation): s = f_s f_l q′ B^0.7 I_c/3 for q′ ≤ σ′_vo and
+// f_s f_l [σ′_vo B^0.7 I_c/3 + (q′ − σ′_vo) B^0.7 I_c] above it, so s is
+// continuous at q′ = σ′_vo and a compensated footing (q_net ≤ 0) still
+// settles by recompression. Property test over widths, depths, water
+// levels and pressures from ½σ_v0 to 2σ_v0 at the base: (1) below σ_v0
+// the engine gives the recompression value (tolerance 1e-12 relative);
+// (2) the two sides of q′ = σ′_vo agree to 1e-6 relative for a step of
+// 1e-9 σ_v0 (continuity); (3) s is non-decreasing in q. Hand check of one
+// row: B = 2 m square, D = 1 m, γ = 18 kN/m³, N = 20, q = 18 kPa = σ_v0:
+// I_c = 1.71/20^1.4 = 0.02571, s = 18 × 2^0.7 × 0.02571/3 = 0.2506 mm.
+func TestBurlandBurbidgeContinuity(t *testing.T) {
+	hand := func(q float64) float64 {
+		g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, N: site.Some(20)}}}
+		in := settle.Input{Ground: g, Footing: site.Footing{Name: "F", Shape: site.Square, B: 2, D: 1}, Q: site.Some(q), Method: settle.BurlandBurbidge}
+		return mustCompute(t, in).Si
+	}
+	near(t, "s_i at q = σ_v0", hand(18*kPa), 18*math.Pow(2, 0.7)*(1.71/math.Pow(20, 1.4))/3*1e-3, 1e-15, "hand calculation, B&B 1985 §6")
+	for _, b := range []float64{0.8, 2, 5} {
+		for _, d := range []float64{0.5, 1.5, 4} {
+			for _, w := range []site.Opt{{}, site.Some(0.3), site.Some(d + 1)} {
+				g := site.Ground{Water: w, Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), N: site.Some(18)}}}
+				f := site.Footing{Name: "F", Shape: site.Rectangle, B: b, L: 1.6 * b, D: d}
+				sv := g.SigmaV(d)
+				s := func(q float64) (*settle.Result, float64) {
+					in := settle.Input{Ground: g, Footing: f, Q: site.Some(q), Method: settle.BurlandBurbidge}
+					r := mustCompute(t, in)
+					return r, r.Si
+				}
+				prev := -1.0
+				for _, x := range []float64{0.5, 0.75, 0.9, 1, 1.1, 1.5, 2} {
+					r, si := s(x * sv)
+					if si < prev {
+						t.Errorf("B=%g D=%g water=%v: s(%g σ_v0) = %g < %g: not monotone", b, d, w, x, si, prev)
+					}
+					prev = si
+					if x <= 1 {
+						bb := r.BB
+						want := bb.Fs * bb.Fl * bb.QEff / 1e3 * math.Pow(b, 0.7) * bb.Ic / 3 * 1e-3
+						if want <= 0 || math.Abs(si-want) > 1e-12*want {
+							t.Errorf("B=%g D=%g water=%v q=%g σ_v0: s_i = %g, want recompression %g (B&B 1985 §6)", b, d, w, x, si, want)
+						}
+					}
+				}
+				_, lo := s(sv * (1 - 1e-9))
+				_, hi := s(sv * (1 + 1e-9))
+				if math.Abs(hi-lo) > 1e-6*hi {
+					t.Errorf("B=%g D=%g water=%v: s jumps at q′ = σ′_vo: %g to %g", b, d, w, lo, hi)
+				}
+			}
+		}
+	}
+}
+
+// The two branches of Burland & Burbidge (1985) §6 meet also where the
+// sand is preloaded beyond the present overburden (σ′_vo = σ′_p > σ′_v0):
+// s(q′ = σ′_vo ± 1e-9) agree to 1e-6 relative (hand form:
+// σ′_vo B^0.7 I_c/3 on both sides). Where the net pressure is not
+// positive, method = auto on sand with N chooses Burland & Burbidge and so
+// gives the recompression value; the elastic method gives none and its
+// note says it has no recompression branch.
+func TestBurlandBurbidgePreloaded(t *testing.T) {
+	g := site.Ground{Water: site.Some(0.5), Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), N: site.Some(25), SigmaP: site.Some(120 * kPa)}}}
+	f := site.Footing{Name: "F", Shape: site.Square, B: 2.5, D: 1.2}
+	u := 0.7 * 9.81e3
+	si := func(q float64, m settle.Method) *settle.Result {
+		return mustCompute(t, settle.Input{Ground: g, Footing: f, Q: site.Some(q), Method: m})
+	}
+	lo, hi := si(120*kPa*(1-1e-9)+u, settle.BurlandBurbidge), si(120*kPa*(1+1e-9)+u, settle.BurlandBurbidge)
+	if lo.BB.SigmaVo != 120*kPa {
+		t.Fatalf("σ′_vo = %g, want σ′_p", lo.BB.SigmaVo)
+	}
+	want := 120 * math.Pow(2.5, 0.7) * lo.BB.Ic / 3 * 1e-3
+	near(t, "s below σ′_vo", lo.Si, want, 1e-6*want, "B&B 1985 §6, q′ ≤ σ′_vo")
+	near(t, "s above σ′_vo", hi.Si, want, 1e-6*want, "B&B 1985 §6, q′ > σ′_vo")
+	// Compensated: q = 0.8 σ_v0 at the base.
+	q := 0.8 * g.SigmaV(f.D)
+	g.Layers = []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, GammaSat: site.Some(20e3), N: site.Some(25)}}
+	if r := si(q, settle.Auto); r.Method != settle.BurlandBurbidge || !(r.Si > 0) {
+		t.Errorf("auto, q_net < 0: method %v, s_i = %g; want Burland & Burbidge recompression", r.Method, r.Si)
+	}
+	g.Layers[0].E = site.Some(30e6)
+	r := si(q, settle.Elastic)
+	found := false
+	for _, c := range r.Trace.Cautions {
+		found = found || (c.Code == "net-nonpositive" && strings.Contains(c.Message, "no recompression branch"))
+	}
+	if r.Si != 0 || !found {
+		t.Errorf("elastic, q_net < 0: s_i = %g, note found %v", r.Si, found)
 	}
 }

@@ -37,7 +37,8 @@ type Layer struct {
 	Gamma    float64 // bulk unit weight above the water table, N/m³, 5–30 kN/m³
 	GammaSat Opt     // saturated unit weight, N/m³, ≥ Gamma, ≤ 30 kN/m³ (default Gamma)
 	Cu       Opt     // undrained shear strength, Pa, (0, 2000] kPa
-	Phi      Opt     // effective angle of shearing resistance φ′, rad, [0, 50) deg
+	Phi      Opt     // effective angle of shearing resistance φ′ (peak), rad, [0, 50) deg
+	PhiCv    Opt     // critical-state angle φ′_cv, rad, [0, 50) deg, ≤ Phi; base friction (EN 1997-1 6.5.3(10))
 	C        Opt     // effective cohesion c′, Pa, 0–500 kPa
 	Eu       Opt     // undrained Young's modulus, Pa, (0, 10000] MPa
 	E        Opt     // drained Young's modulus E′, Pa, (0, 10000] MPa
@@ -119,6 +120,14 @@ func (g Ground) Validate() error {
 			errs = append(errs, &RangeError{Where: w, Layer: n, Param: "phi'", Value: l.Phi.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it and the factors are meaningless there"})
 		} else {
 			opt("phi'", l.Phi, deg, 0, 50, false, "deg")
+		}
+		if l.PhiCv.Set && l.PhiCv.V/deg >= 50 {
+			errs = append(errs, &RangeError{Where: w, Layer: n, Param: "phi'_cv", Value: l.PhiCv.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it"})
+		} else {
+			opt("phi'_cv", l.PhiCv, deg, 0, 50, false, "deg")
+			if l.PhiCv.Set && l.Phi.Set && l.PhiCv.V > l.Phi.V {
+				errs = append(errs, &RangeError{Where: w, Layer: n, Param: "phi'_cv", Value: l.PhiCv.V / deg, Min: 0, Max: l.Phi.V / deg, Unit: "deg", Reason: "the critical-state angle cannot exceed the peak angle φ′"})
+			}
 		}
 		opt("c'", l.C, kPa, 0, 500, false, "kPa")
 		opt("E_u", l.Eu, MPa, 0, 10000, true, "MPa")

@@ -66,6 +66,18 @@ func TestValidate(t *testing.T) {
 			t.Errorf("Validate() = %v, want it to contain %q", err, want)
 		}
 	}
+	// φ′_cv: the range of φ′ and not above the peak (critical state is
+	// the lower bound of the peak angle, common practice).
+	g = clay()
+	g.Layers[1].Phi = site.Some(24 * math.Pi / 180)
+	g.Layers[1].PhiCv = site.Some(30 * math.Pi / 180)
+	if err := g.Validate(); err == nil || !strings.Contains(err.Error(), "phi'_cv = 30 deg is outside the valid range 0 to 24 deg") {
+		t.Errorf("φ′_cv above φ′: %v", err)
+	}
+	g.Layers[1].PhiCv = site.Some(22 * math.Pi / 180)
+	if err := g.Validate(); err != nil {
+		t.Errorf("φ′_cv below φ′: %v", err)
+	}
 	f := site.Footing{Name: "P1", Shape: site.Rectangle, B: 3, L: 2, D: -1}
 	err = f.Validate()
 	for _, want := range []string{"B is the shorter side", "D = -1 m is outside"} {

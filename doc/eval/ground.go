@@ -19,6 +19,7 @@ var groundColumns = []colSpec{
 	{name: "gamma_sat", dims: []units.Dim{units.UnitWeight}, what: "saturated unit weight"},
 	{name: "c_u", dims: []units.Dim{units.Pressure}, what: "undrained shear strength"},
 	{name: "phi'", dims: []units.Dim{units.Angle}, what: "effective angle of shearing resistance"},
+	{name: "phi'_cv", dims: []units.Dim{units.Angle}, what: "critical-state angle of shearing resistance"},
 	{name: "c'", dims: []units.Dim{units.Pressure}, what: "effective cohesion"},
 	{name: "E_u", dims: []units.Dim{units.Pressure}, what: "undrained Young's modulus"},
 	{name: "E'", dims: []units.Dim{units.Pressure}, what: "drained Young's modulus"},
@@ -161,6 +162,8 @@ func setLayer(l *site.Layer, col string, v float64) {
 		l.Cu = opt
 	case "phi'":
 		l.Phi = opt
+	case "phi'_cv":
+		l.PhiCv = opt
 	case "c'":
 		l.C = opt
 	case "E_u":
