@@ -50,6 +50,10 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "load", Words: []string{"characteristic", "quasi-permanent"}, Default: "characteristic (EN 1990 6.14b)"},
 		{Name: "rigid", Words: []string{"yes", "no"}, Default: "no (flexible, stresses at the point chosen by at)"},
 	},
+	KindDifferential: {
+		{Name: "spacing", Form: "a length: the centre-to-centre distance between the two footings", Default: "none: required"},
+		{Name: "limit", Form: "a number from 0 to 0.1: the limiting angular distortion (1/500)", Default: "1/500 (Bjerrum 1963; EN 1997-1 Annex H)"},
+	},
 	KindCapacity: {
 		{Name: "widths", Form: "a list of lengths (1.0 m, 1.5 m, 2.0 m)", Default: "none: required"},
 		{Name: "limit", Form: "a length (settlement limit)", Default: "25 mm"},
