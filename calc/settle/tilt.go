@@ -44,7 +44,7 @@ type Tilt struct {
 	Kind   string  // "E_u" (undrained, short term) or "E'" (drained, long term)
 	Axes   []TiltAxis
 	Trace  trace.Trace
-	Values []trace.Value // theta_B, tan_theta_B, delta_s_B (and _L)
+	Values []trace.Value // theta_B, omega_B (tan θ_B), delta_s_B (and _L)
 }
 
 // TiltOf returns the tilt of a rigid footing on an elastic half-space
@@ -175,10 +175,10 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 				trace.Ref{Source: RHW1970, Clause: "equivalent radius for rocking (from memory)"}, "circle of the same second moment of area about the axis of tilt")
 		}
 		ax.Tan = 3 * (1 - t.Nu*t.Nu) * ax.M / (4 * t.E * ax.R * ax.R * ax.R)
-		tsym := "tan_theta_" + dir
+		tsym := "omega_" + dir
 		add(tsym, fDiv(fMul(fN(3), fSub(fN(1), fPow(fS("nu"), fN(2))), fFn("abs", fS(msym))), fMul(fN(4), fS(esym), fPow(fS(rsym), fN(3)))),
 			[]trace.Value{val("nu", t.Nu, ""), val(msym, m, "kNm"), val(esym, t.E, "MPa"), val(rsym, ax.R, "m")}, ax.Tan, "", refC,
-			"tilt of a rigid circle on an elastic half-space")
+			"tilt as a slope, tan θ (rigid circle on an elastic half-space)")
 		ax.Theta = math.Atan(ax.Tan)
 		add("theta_"+dir, fFn("atan", fS(tsym)), []trace.Value{val(tsym, ax.Tan, "")}, ax.Theta, "deg", trace.Ref{}, "tilt")
 		ax.Delta = ax.A * ax.Tan

@@ -86,8 +86,8 @@ func (e *evaluator) differential(s *Sheet, b *sheet.Analysis, blk *Block) {
 	}
 	a, aok := e.settleBlock(s, b.Footing)
 	c, cok := e.settleBlock(s, b.To)
-	if a != nil && c != nil && a == c {
-		e.errs.AddHint(b.To.Span, "name two different footings", "%s and %s are the same settlement block", b.Footing.Value, b.To.Value)
+	if a != nil && c != nil && a.Of != nil && a.Of == c.Of {
+		e.errs.AddHint(b.To.Span, "name two different footings", "%s and %s are settlement blocks of the same footing %s", b.Footing.Value, b.To.Value, a.Of.Name)
 		fail()
 		return
 	}

@@ -20,6 +20,7 @@ type SettleResult struct {
 	Service design.Service
 	Load    trace.Trace // the serviceability combination
 	*settle.Result
+	Tilt *settle.Tilt // tilt = yes: the tilt under the SLS moment
 }
 
 // CapacityResult is a capacity block's table.
@@ -124,6 +125,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 		vals = append(vals, v)
 	}
 	e.defineResults(s, blk, vals, settleNotes)
+	e.tilt(s, b, blk, o, res)
 	mm := units.MustParse("mm")
 	e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",
 		units.Quantity{V: r.Total, Dim: units.Length}, units.Quantity{V: r.Limit, Dim: units.Length}, mm,

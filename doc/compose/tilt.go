@@ -1,0 +1,26 @@
+package compose
+
+import (
+	"fmt"
+
+	"plinth/doc/eval"
+)
+
+// tilt prints a settlement block's tilt working (tilt = yes): the
+// founding layer's modulus, the SLS moment, the radius, tan θ, θ and the
+// edge settlement difference, with the half-space cautions.
+func (c *composer) tilt(o *engineOut, st *eval.SettleResult) {
+	tr := st.TiltTrace()
+	if tr == nil {
+		return
+	}
+	t := st.Tilt
+	kind := "drained E′ (long term)"
+	if t.Kind == "E_u" {
+		kind = "undrained E_u (short term)"
+	}
+	o.label("Tilt under the serviceability moment")
+	o.para(txt(fmt.Sprintf("The footing is taken as rigid on an elastic half-space with the founding layer's %s; the moment uses the factors of the serviceability combination (%s).", kind, st.Service.Name)))
+	o.steps(tr, indices(len(tr.Steps)), "tilt")
+	o.rest(tr, "tilt", nil)
+}
