@@ -65,6 +65,7 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 		o.add(c.checkBlock(o.p, ch, "s_total", "s_lim"))
 	}
 	c.tilt(o, st)
+	c.within(o, st)
 	c.sources(b)
 	return o.blocks
 }

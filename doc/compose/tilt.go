@@ -24,3 +24,16 @@ func (c *composer) tilt(o *engineOut, st *eval.SettleResult) {
 	o.steps(tr, indices(len(tr.Steps)), "tilt")
 	o.rest(tr, "tilt", nil)
 }
+
+// within prints a settlement block's centre-against-corner working
+// (within = yes).
+func (c *composer) within(o *engineOut, st *eval.SettleResult) {
+	if st.Within == nil {
+		return
+	}
+	tr := &st.Within.Trace
+	o.label("Differential settlement within the footing")
+	o.para(txt("The settlement at the centre and at a corner (the edge of a strip or circle), by the same method, stress distribution and sublayers as above (the corner's working is that of at = corner)."))
+	o.steps(tr, indices(len(tr.Steps)), "within the footing")
+	o.rest(tr, "within the footing", nil)
+}

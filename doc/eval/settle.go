@@ -20,7 +20,8 @@ type SettleResult struct {
 	Service design.Service
 	Load    trace.Trace // the serviceability combination
 	*settle.Result
-	Tilt *settle.Tilt // tilt = yes: the tilt under the SLS moment
+	Tilt   *settle.Tilt   // tilt = yes: the tilt under the SLS moment
+	Within *settle.Within // within = yes: centre against corner
 }
 
 // CapacityResult is a capacity block's table.
@@ -126,6 +127,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	}
 	e.defineResults(s, blk, vals, settleNotes)
 	e.tilt(s, b, blk, o, res)
+	e.within(s, b, blk, o, res, in)
 	mm := units.MustParse("mm")
 	e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",
 		units.Quantity{V: r.Total, Dim: units.Length}, units.Quantity{V: r.Limit, Dim: units.Length}, mm,

@@ -49,6 +49,7 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "sublayers", Form: "a count of sublayers over the zone of influence", Default: "40"},
 		{Name: "load", Words: []string{"characteristic", "quasi-permanent"}, Default: "characteristic (EN 1990 6.14b)"},
 		{Name: "rigid", Words: []string{"yes", "no"}, Default: "no (flexible, stresses at the point chosen by at)"},
+		{Name: "within", Words: []string{"yes", "no"}, Default: "no (yes: settlement at the centre and a corner, and the angular distortion between them)"},
 		{Name: "tilt", Words: []string{"yes", "no"}, Default: "no (yes: tilt of the rigid footing under the SLS moment)"},
 	},
 	KindDifferential: {

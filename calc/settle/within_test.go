@@ -1,0 +1,59 @@
+package settle_test
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"plinth/calc/settle"
+	"plinth/calc/site"
+	"plinth/calc/trace"
+)
+
+// TestWithinHalfSpace checks the centre against the corner of a flexible
+// rectangle on a deep elastic layer. On a half-space the corner of a
+// B × L rectangle settles as the centre of one of B/2 × L/2 scaled by 2,
+// so s_centre = 4 s_corner(B/2, L/2) = 2 s_corner(B, L) (superposition,
+// Bowles 1996 §5-6; hand argument). The layer is 400 B deep, so the
+// finite thickness changes the ratio by less than 1 % (tolerance 1 %).
+func TestWithinHalfSpace(t *testing.T) {
+	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(10e6), Nu: site.Some(0.3)}}}
+	for _, f := range []site.Footing{
+		{Name: "S", Shape: site.Square, B: 1, D: 0},
+		{Name: "R", Shape: site.Rectangle, B: 1, L: 3, D: 0},
+	} {
+		in := settle.Input{Ground: g, Footing: f, Q: site.Some(100e3), Method: settle.Elastic,
+			Depth: settle.Depth{Rule: settle.DepthFixed, Z: site.Some(400)}}
+		w, err := settle.WithinFooting(in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := trace.Verify(w.Trace, 1e-9); err != nil {
+			t.Fatal(err)
+		}
+		if r := w.Centre / w.Corner; math.Abs(r/2-1) > 0.01 {
+			t.Errorf("%v: s_centre/s_corner = %.4f, want 2", f.Shape, r)
+		}
+		if d := math.Hypot(f.B, f.Length()) / 2; math.Abs(w.Beta-w.Delta/d) > 1e-15 {
+			t.Errorf("beta = %g, want %g", w.Beta, w.Delta/d)
+		}
+		// the centre is what Compute gives at the centre
+		r, err := settle.Compute(in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(r.Total-w.Centre) > 1e-12 {
+			t.Errorf("centre %g, Compute %g", w.Centre, r.Total)
+		}
+	}
+}
+
+// TestWithinRigid checks that a rigid footing is refused.
+func TestWithinRigid(t *testing.T) {
+	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(10e6)}}}
+	_, err := settle.WithinFooting(settle.Input{Ground: g, Footing: site.Footing{Shape: site.Square, B: 1, D: 0.5}, Q: site.Some(100e3), Rigid: true})
+	var ie *site.InputError
+	if !errors.As(err, &ie) {
+		t.Errorf("got %v, want an InputError", err)
+	}
+}
