@@ -24,6 +24,10 @@ type TiltInput struct {
 	// M = Σ f_i M_i.
 	Actions []site.Action
 	Factors []float64
+	// LongTerm takes the drained E′ where the founding layer gives it,
+	// for a long-term (quasi-permanent) load; otherwise a fine-grained
+	// layer's E_u is used (short term).
+	LongTerm bool
 }
 
 // TiltAxis is the tilt from one moment component.
@@ -62,9 +66,10 @@ type Tilt struct {
 // other (Richart, Hall & Woods 1970, equivalent radius for rocking; the
 // clause from memory). The edge settlements then differ by A tan θ.
 //
-// The modulus is that of the founding layer: E_u with ν = 0.5 in a
-// fine-grained layer that gives it (undrained, short term), else E′ with
-// ν′ (default 0.3, long term). A strip, a footing with no moment, and a
+// The modulus is that of the founding layer: for a long-term load
+// (LongTerm) E′ with ν′ (default 0.3) where given; otherwise E_u with
+// ν = 0.5 in a fine-grained layer that gives it (undrained, short term),
+// else E′. A strip, a footing with no moment, and a
 // founding layer without stiffness are errors.
 func TiltOf(in TiltInput) (*Tilt, error) {
 	var errs site.Errors
@@ -90,6 +95,8 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 	l := g.Layers[li]
 	t := &Tilt{Layer: li, Nu: l.Nu.Or(DefaultNu), Kind: "E'"}
 	switch {
+	case in.LongTerm && l.E.Set:
+		t.E = l.E.V
 	case l.Fine() && l.Eu.Set:
 		t.E, t.Nu, t.Kind = l.Eu.V, 0.5, "E_u"
 	case l.E.Set:

@@ -1,6 +1,7 @@
 package eval
 
 import (
+	"plinth/calc/design"
 	"plinth/calc/settle"
 	"plinth/calc/trace"
 	"plinth/doc/sheet"
@@ -35,7 +36,7 @@ func (e *evaluator) tilt(s *Sheet, b *sheet.Analysis, blk *Block, o opts, res *S
 		at = x.Value.Span
 	}
 	t, err := settle.TiltOf(settle.TiltInput{Ground: blk.On.Model, Footing: blk.Of.Model,
-		Actions: withSelfWeight(blk.Of, blk.On), Factors: res.Service.Factor})
+		Actions: withSelfWeight(blk.Of, blk.On), Factors: res.Service.Factor, LongTerm: res.Service.Kind == design.QuasiPermanent})
 	if err != nil {
 		e.siteErrors(err, at, func(int, string) source.Span { return at })
 		for _, n := range tiltNames {
