@@ -28,16 +28,23 @@ type Within struct {
 // Boussinesq's superposition of corner rectangles (Bowles 1996, §5-6),
 // as at = corner does; the calculations are the same as Compute's with
 // At set, run without their working. A rigid footing settles uniformly
-// and is refused.
+// and is refused, as are the load-spread stress and the sand methods
+// (Schmertmann, Burland & Burbidge), which give no settlement at a point.
 func WithinFooting(in Input) (*Within, error) {
 	if in.Rigid {
 		return nil, &site.InputError{Where: in.Footing.Name, Param: "rigid", Msg: "a rigid footing settles uniformly: the settlement within it needs a flexible footing (rigid = no)"}
+	}
+	if in.Stress == stress.Spread {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "within", Msg: "the load-spread (2:1) stress is an average over the spread area, not the stress below a point: use stress = boussinesq"}
 	}
 	a, c := in, in
 	a.At, c.At = stress.Centre, stress.Corner
 	ra, err := compute(a, false)
 	if err != nil {
 		return nil, err
+	}
+	if ra.Method == Schmertmann || ra.Method == BurlandBurbidge {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "within", Msg: "the " + ra.Method.String() + " method gives one settlement for the whole footing, not one at each point: use method = elastic or consolidation"}
 	}
 	rc, err := compute(c, false)
 	if err != nil {

@@ -7,6 +7,7 @@ import (
 
 	"plinth/calc/settle"
 	"plinth/calc/site"
+	"plinth/calc/stress"
 	"plinth/calc/trace"
 )
 
@@ -48,12 +49,21 @@ func TestWithinHalfSpace(t *testing.T) {
 	}
 }
 
-// TestWithinRigid checks that a rigid footing is refused.
-func TestWithinRigid(t *testing.T) {
-	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(10e6)}}}
-	_, err := settle.WithinFooting(settle.Input{Ground: g, Footing: site.Footing{Shape: site.Square, B: 1, D: 0.5}, Q: site.Some(100e3), Rigid: true})
-	var ie *site.InputError
-	if !errors.As(err, &ie) {
-		t.Errorf("got %v, want an InputError", err)
+// TestWithinRefused checks the inputs with no settlement at a point: a
+// rigid footing, the load-spread stress, the sand methods.
+func TestWithinRefused(t *testing.T) {
+	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(10e6), Qc: site.Some(5e6), N: site.Some(20)}}}
+	base := settle.Input{Ground: g, Footing: site.Footing{Shape: site.Square, B: 1, D: 0.5}, Q: site.Some(100e3)}
+	rigid, spread, schm, bb := base, base, base, base
+	rigid.Rigid = true
+	spread.Stress = stress.Spread
+	schm.Method = settle.Schmertmann
+	bb.Method = settle.BurlandBurbidge
+	for name, in := range map[string]settle.Input{"rigid": rigid, "spread": spread, "schmertmann": schm, "burland-burbidge": bb} {
+		_, err := settle.WithinFooting(in)
+		var ie *site.InputError
+		if !errors.As(err, &ie) || (name != "rigid" && ie.Param != "within") {
+			t.Errorf("%s: got %v, want an InputError on within", name, err)
+		}
 	}
 }
