@@ -16,15 +16,21 @@ type Within struct {
 	Delta          float64 // s_centre − s_corner, m
 	Dist           float64 // centre to corner (half-diagonal; half-width of a strip, radius of a circle), m
 	Beta           float64 // Delta/Dist
-	Trace          trace.Trace
-	Values         []trace.Value // s_centre, s_corner, delta_s_in, beta_in
+	// Rectangles and squares: the middles of a long side (B/2 from the
+	// centre) and of a short side (L/2), and β from the centre to each.
+	MidB, MidL   float64
+	BetaB, BetaL float64
+	Trace        trace.Trace
+	Values       []trace.Value // s_centre, s_corner (s_edge), delta_s_in, beta_in; s_mid_B, beta_B, s_mid_L, beta_L for a rectangle or square
 }
 
 // WithinFooting returns the settlement of a flexible footing at its centre
 // and at a corner (the edge of a strip or circle) with in's method, stress
 // distribution and sublayers, and the angular distortion between them,
 // β = (s_centre − s_corner)/d over the half-diagonal d = √(B² + L²)/2
-// (B/2 for a strip or circle). The corner uses Steinbrenner's and
+// (B/2 for a strip or circle); for a rectangle or square also at the
+// middles of a long and a short side, β_B = (s_centre − s_mid,B)/(B/2) and
+// β_L = (s_centre − s_mid,L)/(L/2). The corner uses Steinbrenner's and
 // Boussinesq's superposition of corner rectangles (Bowles 1996, §5-6),
 // as at = corner does; the calculations are the same as Compute's with
 // At set, run without their working. A rigid footing settles uniformly
@@ -80,5 +86,34 @@ func WithinFooting(in Input) (*Within, error) {
 	t.WarnAll(trace.Caution{Code: "within-flexible", Severity: trace.SevNote, Case: cs,
 		Message: "the footing is taken as flexible: a stiff footing or raft spreads the load and settles more evenly than this"})
 	w.Values = []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm"), val("delta_s_in", w.Delta, "mm"), val("beta_in", w.Beta, "")}
+	if edge == "edge" {
+		return w, nil
+	}
+	for _, m := range []struct {
+		p          stress.Point
+		side, what string
+		s, beta    *float64
+	}{{stress.MidB, "B", "middle of a long side", &w.MidB, &w.BetaB}, {stress.MidL, "L", "middle of a short side", &w.MidL, &w.BetaL}} {
+		x := in
+		x.At = m.p
+		r, err := compute(x, false)
+		if err != nil {
+			return nil, err
+		}
+		*m.s = r.Total
+		ss := "s_mid_" + m.side
+		add(ss, nil, nil, r.Total, "mm", ref, "total settlement at the "+m.what+", "+m.side+"/2 from the centre")
+		side, sv := m.side, f.B
+		if m.side == "L" {
+			sv = f.Length()
+			if f.Shape == site.Square {
+				side = "B"
+			}
+		}
+		*m.beta = (w.Centre - r.Total) / (sv / 2)
+		add("beta_"+m.side, fDiv(fSub(fS("s_centre"), fS(ss)), fDiv(fS(side), fN(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(side, sv, "m")}, *m.beta, "",
+			trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion from the centre to the "+m.what)
+		w.Values = append(w.Values, val(ss, r.Total, "mm"), val("beta_"+m.side, *m.beta, ""))
+	}
 	return w, nil
 }

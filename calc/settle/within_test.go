@@ -67,3 +67,33 @@ func TestWithinRefused(t *testing.T) {
 		}
 	}
 }
+
+// TestWithinMidSides checks the middles of the sides of a flexible square
+// on a deep elastic layer against the half-space corner factors of
+// Steinbrenner (N → ∞, settle.Steinbrenner): s_centre = 4·(B/2)F1(1),
+// s_mid = 2·(B/2)F1(2), so s_mid/s_centre = F1(2)/(2F1(1)) = 0.6825
+// (the familiar 0.76/1.12 of Bowles 1996 Table 5-2, from memory). The
+// layer is 400 B deep (tolerance 1 %).
+func TestWithinMidSides(t *testing.T) {
+	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(10e6), Nu: site.Some(0.3)}}}
+	in := settle.Input{Ground: g, Footing: site.Footing{Name: "S", Shape: site.Square, B: 1, D: 0}, Q: site.Some(100e3), Method: settle.Elastic,
+		Depth: settle.Depth{Rule: settle.DepthFixed, Z: site.Some(400)}}
+	w, err := settle.WithinFooting(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := trace.Verify(w.Trace, 1e-9); err != nil {
+		t.Fatal(err)
+	}
+	f11, _, _ := settle.Steinbrenner(1, math.Inf(1))
+	f12, _, _ := settle.Steinbrenner(2, math.Inf(1))
+	want := f12 / (2 * f11)
+	for _, got := range []float64{w.MidB / w.Centre, w.MidL / w.Centre} {
+		if math.Abs(got/want-1) > 0.01 {
+			t.Errorf("s_mid/s_centre = %.4f, want %.4f", got, want)
+		}
+	}
+	if math.Abs(w.BetaB-(w.Centre-w.MidB)/0.5) > 1e-15 || w.MidB != w.MidL {
+		t.Errorf("beta_B = %g, s_mid B %g L %g", w.BetaB, w.MidB, w.MidL)
+	}
+}
