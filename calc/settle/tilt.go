@@ -197,7 +197,11 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 		return nil, &site.InputError{Where: w, Param: "tilt", Msg: "the serviceability load has no moment (M_B, M_L): there is no tilt to compute"}
 	}
 	// a layered profile within the depth the rotation reaches
-	z := f.D + 2*math.Max(f.B, math.Min(f.Length(), 2*f.B))
+	amax := 0.0
+	for _, ax := range t.Axes {
+		amax = math.Max(amax, ax.A)
+	}
+	z := f.D + 2*amax // twice the side along the tilt below the base (common practice)
 	if g.At(z) != li {
 		tr.Warn(trace.Caution{Code: "tilt-layered", Severity: trace.SevWarning, Case: cs, Ref: trace.Ref{Source: PoulosDavis1974},
 			Message: fmt.Sprintf("the tilt assumes a homogeneous elastic half-space with the founding layer's %s; other layers lie within %.3g m of ground level, so the tilt is only indicative", t.Kind, z)})

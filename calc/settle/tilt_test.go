@@ -140,3 +140,30 @@ func TestTiltErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestTiltLayered checks the half-space warning: a second layer within
+// twice the side along the tilt below the base raises tilt-layered; a
+// deep one does not (common practice).
+func TestTiltLayered(t *testing.T) {
+	two := func(top float64) site.Ground {
+		return site.Ground{Layers: []site.Layer{{Name: "Clay", Top: 0, Gamma: 19e3, E: site.Some(10e6)}, {Name: "Gravel", Top: top, Gamma: 20e3, E: site.Some(80e6)}}}
+	}
+	f := site.Footing{Shape: site.Square, B: 2, D: 1}
+	acts := []site.Action{{Kind: site.Permanent, V: 100e3, MB: 10e3}}
+	for _, c := range []struct {
+		top  float64
+		want bool
+	}{{3, true}, {6, false}} {
+		r, err := settle.TiltOf(settle.TiltInput{Ground: two(c.top), Footing: f, Actions: acts, Factors: []float64{1}})
+		if err != nil {
+			t.Fatal(err)
+		}
+		got := false
+		for _, ca := range r.Trace.Cautions {
+			got = got || ca.Code == "tilt-layered"
+		}
+		if got != c.want {
+			t.Errorf("second layer at %g m: tilt-layered %v, want %v", c.top, got, c.want)
+		}
+	}
+}
