@@ -11,6 +11,8 @@
 //	Compute(in Input) (*Result, error)              one settlement calculation
 //	Allowable(in Input, sLim float64) (*Allow, error) q for s_total(q) = s_lim
 //	Differential(in DiffInput) (*Diff, error)       angular distortion check
+//	WithinFooting(in Input) (*Within, error)        centre against corner of one footing
+//	TiltOf(in TiltInput) (*Tilt, error)             tilt of a rigid footing under moment
 //	U(Tv), Tv(U), Steinbrenner(M, N)                 the underlying formulas
 //
 // # Input
@@ -131,6 +133,15 @@
 // Differential checks β = |s_A − s_B|/L against 1/500 by default, with
 // cautions at 1/500 (Bjerrum 1963; EN 1997-1 Annex H), 1/300 and 1/150
 // (Skempton & MacDonald 1956). Diff.Symbols: delta_s, beta, beta_lim, util.
+//
+// WithinFooting runs Compute's calculation (without its working) at the
+// centre and at a corner of a flexible footing and gives Δs and
+// β = Δs/d over the half-diagonal. TiltOf gives the tilt of a rigid
+// footing on an elastic half-space under the serviceability moment: the
+// rigid circle tan θ = 3(1 − ν²)M/(4ER³) (Borowicka 1943; Poulos & Davis
+// 1974), a rectangle as the circle of the same second moment of area
+// about the axis of tilt (Richart, Hall & Woods 1970), with the founding
+// layer's modulus and a warning for a layered profile.
 //
 // Invalid input returns *site.RangeError, *site.InputError or
 // site.Errors; no result holds NaN.

@@ -112,8 +112,16 @@ func (k *calc) elasticRects() (bp, lp float64, rs []erect) {
 		kx, ky = 0.5, 0.5
 	case stress.Characteristic:
 		kx, ky = stress.CharRect, stress.CharRect
+	case stress.MidB:
+		kx = 0.5
+	case stress.MidL:
+		ky = 0.5
+		if math.IsInf(lp, 1) || f.Shape == site.Circle {
+			kx, ky = 0.5, 0 // a strip's or circle's edge
+		}
 	}
-	if math.IsInf(lp, 1) || (f.Shape == site.Circle && k.c.point == stress.Corner) {
+	edge := k.c.point == stress.Corner || k.c.point == stress.MidB || k.c.point == stress.MidL
+	if math.IsInf(lp, 1) || (f.Shape == site.Circle && edge) {
 		ky = 0 // a strip is unbounded along L; a circle's edge is taken at mid-side of its square
 	}
 	xs := []float64{0.5 + kx, 0.5 - kx}

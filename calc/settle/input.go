@@ -141,7 +141,7 @@ type Input struct {
 	Method Method
 	Stress stress.Method // Boussinesq (default) or Spread
 	Spread site.Opt      // spread angle to the vertical, rad; default atan(1/2) (2:1)
-	At     stress.Point  // centre (default), corner, characteristic
+	At     stress.Point  // centre (default), corner, characteristic; MidB, MidL (middle of a long, short side)
 	Rigid  bool          // rigid footing: stresses and settlement at the characteristic point when At is Centre
 
 	Limit     site.Opt  // settlement limit, m, (0, 1]; default 25 mm
@@ -215,7 +215,7 @@ func (in Input) validate() (*config, error) {
 		errs = check(errs, w, "spread angle", in.Spread.V, math.Pi/180, 0, 60, true, "deg")
 		c.angle = in.Spread.V
 	}
-	if in.At < stress.Centre || in.At > stress.Characteristic {
+	if in.At < stress.Centre || in.At > stress.MidL {
 		errs = append(errs, &site.InputError{Where: w, Param: "at", Msg: "expected centre, corner or characteristic"})
 	}
 	c.point = in.At

@@ -97,6 +97,10 @@ func (e *explainer) rect(p Point) float64 {
 		parts, factor = []part{{0.5, 0.5}}, 4
 	case Corner:
 		parts = []part{{1, 1}}
+	case MidB:
+		parts, factor = []part{{1, 0.5}}, 2
+	case MidL:
+		parts, factor = []part{{0.5, 1}}, 2
 	default:
 		a, b := 0.5+CharRect, 0.5-CharRect
 		parts = []part{{a, a}, {a, b}, {b, a}, {b, b}}
@@ -185,7 +189,7 @@ func (e *explainer) strip(p Point) float64 {
 	x, _ := Offset(f, p)
 	var xf trace.Expr
 	switch p {
-	case Corner:
+	case Corner, MidB, MidL:
 		xf = fDiv(fS("B"), fN(2))
 	case Characteristic:
 		xf = fMul(fN(CharRect), fS("B"))

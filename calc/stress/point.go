@@ -44,6 +44,8 @@ const (
 	Centre         Point = iota
 	Corner               // a corner (the edge of a strip or circle)
 	Characteristic       // where a flexible footing settles as a rigid one (Graßhoff 1955)
+	MidB                 // the middle of a long side, B/2 from the centre (the edge of a strip or circle)
+	MidL                 // the middle of a short side, L/2 from the centre (a rectangle or square)
 )
 
 func (p Point) String() string {
@@ -54,6 +56,10 @@ func (p Point) String() string {
 		return "corner"
 	case Characteristic:
 		return "characteristic"
+	case MidB:
+		return "middle of a long side"
+	case MidL:
+		return "middle of a short side"
 	}
 	return fmt.Sprintf("Point(%d)", int(p))
 }
@@ -113,6 +119,14 @@ func Offset(f site.Footing, p Point) (x, y float64) {
 			return f.B / 2, 0
 		}
 		return f.B / 2, f.Length() / 2
+	case MidB:
+		return f.B / 2, 0
+	case MidL:
+		switch f.Shape {
+		case site.Strip, site.Circle:
+			return f.B / 2, 0
+		}
+		return 0, f.Length() / 2
 	case Characteristic:
 		switch f.Shape {
 		case site.Strip:

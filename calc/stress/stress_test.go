@@ -323,7 +323,7 @@ func TestExplainVerifies(t *testing.T) {
 	}
 	for _, f := range shapes {
 		for _, o := range []stress.Options{
-			{Point: stress.Centre}, {Point: stress.Corner}, {Point: stress.Characteristic},
+			{Point: stress.Centre}, {Point: stress.Corner}, {Point: stress.Characteristic}, {Point: stress.MidB}, {Point: stress.MidL},
 			{Method: stress.Spread}, {Method: stress.Spread, Angle: 0.5},
 		} {
 			var tr trace.Trace

@@ -44,7 +44,7 @@ type jsonBlock struct {
 // table.
 type jsonCase struct {
 	Name        string             `json:"name"`
-	Check       string             `json:"check"` // bearing, sliding, capacity
+	Check       string             `json:"check"` // bearing, sliding, settlement, capacity, differential
 	Drainage    string             `json:"drainage,omitempty"`
 	Combination string             `json:"combination,omitempty"`
 	VD          float64            `json:"V_d"`
@@ -211,6 +211,13 @@ func blockJSON(b *eval.Block) jsonBlock {
 	if sr := b.Settle; sr != nil {
 		jc := jsonCase{Name: "total settlement, " + sr.Service.Name, Check: "settlement", VD: sr.Service.V,
 			Util: sr.Util, OK: sr.OK, Factors: map[string]float64{"s_i": sr.Si, "s_c": sr.Sc, "s_sec": sr.Ssec, "s_total": sr.Total, "s_lim": sr.Limit}}
+		jb.Cases = append(jb.Cases, jc)
+		jb.Governing = &jc
+	}
+	if dr := b.Diff; dr != nil {
+		jc := jsonCase{Name: dr.A.Of.Name + " to " + dr.B.Of.Name, Check: "differential", Util: dr.Util, OK: dr.OK,
+			Factors: map[string]float64{"s_A": dr.A.Settle.Total, "s_B": dr.B.Settle.Total, "L": dr.Spacing,
+				"delta_s": dr.Delta, "beta": dr.Beta, "beta_lim": dr.Limit}}
 		jb.Cases = append(jb.Cases, jc)
 		jb.Governing = &jc
 	}

@@ -36,7 +36,7 @@ func TestCommands(t *testing.T) {
 		{"help", []string{"help"}, 0, []string{"plinth check PATH"}, nil},
 		{"unknown command", []string{"draw"}, 2, nil, []string{`unknown command "draw"`}},
 		{"check example", []string{"check", example}, 0,
-			[]string{"01-ground.md — Ground models and design parameters", "site.firm_to_stiff_sandy_clay.c_u", "P1 bearing: V_d <= R_d", "11 checks: 11 OK, 0 NOT OK"}, nil},
+			[]string{"01-ground.md — Ground models and design parameters", "site.firm_to_stiff_sandy_clay.c_u", "P1 bearing: V_d <= R_d", "13 checks: 13 OK, 0 NOT OK"}, nil},
 		{"flags after path", []string{"check", example, "--set", "site.firm_to_stiff_sandy_clay.c_u=55kPa"}, 0,
 			[]string{"VARIANT: site.firm_to_stiff_sandy_clay.c_u=55kPa"}, nil},
 		{"check NOT OK exits 1", []string{"check", example, "--set=P1.B=1.6m"}, 1, []string{"NOT OK"}, nil},
@@ -81,7 +81,7 @@ func TestJSONGolden(t *testing.T) {
 	for _, b := range r.Blocks {
 		kinds[b.Kind]++
 	}
-	for k, n := range map[string]int{"ground": 3, "footing": 4, "bearing": 4, "settlement": 3, "capacity": 1} {
+	for k, n := range map[string]int{"ground": 3, "footing": 5, "bearing": 4, "settlement": 4, "capacity": 1, "differential": 1} {
 		if kinds[k] != n {
 			t.Errorf("%d %s blocks, want %d", kinds[k], k, n)
 		}

@@ -72,7 +72,7 @@ func TestRenderDefaultOutput(t *testing.T) {
 	if !bytes.HasPrefix(data, []byte("%PDF-")) || !bytes.Contains(data, []byte("%%EOF")) {
 		t.Errorf("%s is not a complete PDF", pdf)
 	}
-	if !strings.Contains(out, pdf+": ") || !strings.Contains(out, " pages, 11 checks: 11 OK, 0 NOT OK") {
+	if !strings.Contains(out, pdf+": ") || !strings.Contains(out, " pages, 13 checks: 13 OK, 0 NOT OK") {
 		t.Errorf("stdout: %q", out)
 	}
 	if l := leftovers(t, filepath.Dir(pkg), "brackenfield", "brackenfield.pdf"); len(l) > 0 {

@@ -364,6 +364,8 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return c.settlement(s, b)
 	case b.Capacity != nil:
 		return c.capacity(s, b)
+	case b.Diff != nil:
+		return c.differential(s, b)
 	}
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))

@@ -89,6 +89,8 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if ch := findCheck(b, "settlement"); ch != nil {
 		o.add(c.checkBlock(o.p, ch, "s_total", "s_lim"))
 	}
+	c.tilt(o, st)
+	c.within(o, st)
 	c.sources(b)
 	return o.done()
 }

@@ -29,7 +29,8 @@ type Block struct {
 	Bearing  *bearing.Result
 	Settle   *SettleResult
 	Capacity *CapacityResult
-	Options  []string // the options in force, "method = ec7", for printing
+	Diff     *DiffResult // differential blocks
+	Options  []string    // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order
@@ -138,6 +139,10 @@ func containsStr(list []string, s string) bool {
 func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 	blk := &Block{Kind: b.Kind, Name: b.ResultPrefix().Value, Span: b.Span, Sheet: s}
 	s.blocks[b] = blk
+	if b.Kind == sheet.KindDifferential {
+		e.differential(s, b, blk)
+		return
+	}
 	f, fok := e.findFooting(s, b.Footing)
 	g, gok := e.findGround(s, b.Ground)
 	blk.Of, blk.On = f, g

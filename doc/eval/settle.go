@@ -22,6 +22,8 @@ type SettleResult struct {
 	Service design.Service
 	Load    trace.Trace // the serviceability combination
 	*settle.Result
+	Tilt   *settle.Tilt   // tilt = yes: the tilt under the SLS moment
+	Within *settle.Within // within = yes: centre against corner
 }
 
 // CapacityResult is a capacity block's table.
@@ -127,6 +129,8 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 		vals = append(vals, v)
 	}
 	e.defineResults(s, blk, vals, settleNotes)
+	e.tilt(s, b, blk, o, res)
+	e.within(s, b, blk, o, res, in)
 	mm := units.MustParse("mm")
 	note := "total settlement within the limit (" + r.Method.String() + ")"
 	c := e.addCheck(s, blk, blk.Name+" settlement: s_total <= s_lim", "<=",

@@ -102,7 +102,7 @@ func (c *conv) fenced(n *ast.FencedCodeBlock) sheet.Block {
 		return &sheet.Footing{Span: sp, Name: h.name, Lines: b.lines, Table: b.table}
 	}
 	return &sheet.Analysis{Span: sp, Kind: kind, KindSpan: c.span(ws[0].start, ws[0].end),
-		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, Lines: b.lines}
+		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, To: h.to, Lines: b.lines}
 }
 
 // container names what an unclosed fence runs to the end of.
@@ -151,7 +151,7 @@ var nameRE = regexp.MustCompile(`^[A-Za-z][A-Za-z0-9_]*$`)
 
 // header holds the names from a plinth block's info string.
 type header struct {
-	name, footing, ground, prefix sheet.Str
+	name, footing, ground, prefix, to sheet.Str
 }
 
 // header reads the info string after the block word:
@@ -159,6 +159,7 @@ type header struct {
 //	calc
 //	ground NAME | footing NAME
 //	bearing|settlement|capacity FOOTING on GROUND [as PREFIX]
+//	differential FOOTING to FOOTING [as PREFIX]
 func (c *conv) header(kind sheet.Kind, ws []word) header {
 	var h header
 	i := 1
@@ -197,14 +198,19 @@ func (c *conv) header(kind sheet.Kind, ws []word) header {
 		h.name, _ = take("a footing name", "footing")
 	default:
 		form := "write " + kind.String() + " FOOTING on GROUND [as PREFIX]"
+		kw, second, dst := "on", "a ground model name", &h.ground
+		if kind == sheet.KindDifferential {
+			form = "write differential FOOTING to FOOTING [as PREFIX]"
+			kw, second, dst = "to", "a footing name", &h.to
+		}
 		var ok bool
 		if h.footing, ok = take("a footing name", kind.String()); !ok {
 			return h
 		}
-		if !keyword("on", form) {
+		if !keyword(kw, form) {
 			return h
 		}
-		if h.ground, ok = take("a ground model name", "on"); !ok {
+		if *dst, ok = take(second, kw); !ok {
 			return h
 		}
 		if i < len(ws) {

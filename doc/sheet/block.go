@@ -15,10 +15,11 @@ const (
 	KindBearing
 	KindSettlement
 	KindCapacity
+	KindDifferential
 )
 
 // Kinds are the block words in Kind order.
-var Kinds = []string{"calc", "ground", "footing", "bearing", "settlement", "capacity"}
+var Kinds = []string{"calc", "ground", "footing", "bearing", "settlement", "capacity", "differential"}
 
 func (k Kind) String() string { return Kinds[k] }
 
@@ -57,7 +58,8 @@ type Footing struct {
 }
 
 // Analysis is a bearing, settlement or capacity block:
-// ```KIND FOOTING on GROUND [as PREFIX], holding options.
+// ```KIND FOOTING on GROUND [as PREFIX], holding options; or a
+// differential block, ```differential FOOTING to FOOTING [as PREFIX].
 type Analysis struct {
 	Span     source.Span
 	Kind     Kind // KindBearing, KindSettlement or KindCapacity
@@ -65,6 +67,7 @@ type Analysis struct {
 	Footing  Str
 	Ground   Str
 	Prefix   Str    // the "as" name; zero when absent (results go under Footing)
+	To       Str    // differential blocks: the second footing (Ground is then zero)
 	Lines    []Line // *Option and *Comment
 }
 
@@ -73,6 +76,9 @@ type Analysis struct {
 func (a *Analysis) ResultPrefix() Str {
 	if a.Prefix.IsSet() {
 		return a.Prefix
+	}
+	if a.Kind == KindDifferential {
+		return Str{Value: a.Footing.Value + "_" + a.To.Value, Span: a.Footing.Span}
 	}
 	return a.Footing
 }

@@ -124,7 +124,11 @@ func (d *dumper) block(n int, b Block) {
 		d.lines(n+1, b.Lines)
 		d.grid(n+1, b.Table)
 	case *Analysis:
-		d.p(n, "Analysis %s kind=%s footing=%s ground=%s prefix=%s", at(b.Span), b.Kind, str(b.Footing), str(b.Ground), str(b.Prefix))
+		if b.To.IsSet() {
+			d.p(n, "Analysis %s kind=%s footing=%s to=%s prefix=%s", at(b.Span), b.Kind, str(b.Footing), str(b.To), str(b.Prefix))
+		} else {
+			d.p(n, "Analysis %s kind=%s footing=%s ground=%s prefix=%s", at(b.Span), b.Kind, str(b.Footing), str(b.Ground), str(b.Prefix))
+		}
 		d.lines(n+1, b.Lines)
 	default:
 		d.p(n, "%T", b)

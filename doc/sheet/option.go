@@ -49,6 +49,12 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "sublayers", Form: "a count of sublayers over the zone of influence", Default: "40"},
 		{Name: "load", Words: []string{"characteristic", "quasi-permanent"}, Default: "characteristic (EN 1990 6.14b)"},
 		{Name: "rigid", Words: []string{"yes", "no"}, Default: "no (flexible, stresses at the point chosen by at)"},
+		{Name: "within", Words: []string{"yes", "no"}, Default: "no (yes: settlement at the centre and a corner, and the angular distortion between them)"},
+		{Name: "tilt", Words: []string{"yes", "no"}, Default: "no (yes: tilt of the rigid footing under the SLS moment)"},
+	},
+	KindDifferential: {
+		{Name: "spacing", Form: "a length: the centre-to-centre distance between the two footings", Default: "none: required"},
+		{Name: "limit", Form: "a number from 0 to 0.1: the limiting angular distortion (1/500)", Default: "1/500 (Bjerrum 1963; EN 1997-1 Annex H)"},
 	},
 	KindCapacity: {
 		{Name: "widths", Form: "a list of lengths (1.0 m, 1.5 m, 2.0 m)", Default: "none: required"},

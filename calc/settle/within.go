@@ -1,0 +1,119 @@
+package settle
+
+import (
+	"math"
+
+	"plinth/calc/site"
+	"plinth/calc/stress"
+	"plinth/calc/trace"
+)
+
+// Within is the differential settlement within one flexible footing:
+// centre against corner (the edge of a strip or circle), by the same
+// method, stress distribution and sublayers.
+type Within struct {
+	Centre, Corner float64 // total settlements, m
+	Delta          float64 // s_centre − s_corner, m
+	Dist           float64 // centre to corner (half-diagonal; half-width of a strip, radius of a circle), m
+	Beta           float64 // Delta/Dist
+	// Rectangles and squares: the middles of a long side (B/2 from the
+	// centre) and of a short side (L/2), and β from the centre to each.
+	MidB, MidL   float64
+	BetaB, BetaL float64
+	Trace        trace.Trace
+	Values       []trace.Value // s_centre, s_corner (s_edge), delta_s_in, beta_in; s_mid_B, beta_B, s_mid_L, beta_L for a rectangle or square
+}
+
+// WithinFooting returns the settlement of a flexible footing at its centre
+// and at a corner (the edge of a strip or circle) with in's method, stress
+// distribution and sublayers, and the angular distortion between them,
+// β = (s_centre − s_corner)/d over the half-diagonal d = √(B² + L²)/2
+// (B/2 for a strip or circle); for a rectangle or square also at the
+// middles of a long and a short side, β_B = (s_centre − s_mid,B)/(B/2) and
+// β_L = (s_centre − s_mid,L)/(L/2). The corner uses Steinbrenner's and
+// Boussinesq's superposition of corner rectangles (Bowles 1996, §5-6),
+// as at = corner does; the calculations are the same as Compute's with
+// At set, run without their working. A rigid footing settles uniformly
+// and is refused, as are the load-spread stress and the sand methods
+// (Schmertmann, Burland & Burbidge), which give no settlement at a point.
+func WithinFooting(in Input) (*Within, error) {
+	if in.Rigid {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "rigid", Msg: "a rigid footing settles uniformly: the settlement within it needs a flexible footing (rigid = no)"}
+	}
+	if in.Stress == stress.Spread {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "within", Msg: "the load-spread (2:1) stress is an average over the spread area, not the stress below a point: use stress = boussinesq"}
+	}
+	a, c := in, in
+	a.At, c.At = stress.Centre, stress.Corner
+	ra, err := compute(a, false)
+	if err != nil {
+		return nil, err
+	}
+	if ra.Method == Schmertmann || ra.Method == BurlandBurbidge {
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "within", Msg: "the " + ra.Method.String() + " method gives one settlement for the whole footing, not one at each point: use method = elastic or consolidation"}
+	}
+	rc, err := compute(c, false)
+	if err != nil {
+		return nil, err
+	}
+	f := in.Footing
+	w := &Within{Centre: ra.Total, Corner: rc.Total}
+	t := &w.Trace
+	cs := "within the footing"
+	add := func(sym string, fx trace.Expr, vin []trace.Value, v float64, unit string, r trace.Ref, note string) {
+		t.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
+	}
+	ref := trace.Ref{Source: Bowles1996, Clause: "§5-6, superposition of corner rectangles"}
+	add("s_centre", nil, nil, w.Centre, "mm", ref, "total settlement at the centre ("+ra.Method.String()+")")
+	edge := "corner"
+	if f.Shape == site.Strip || f.Shape == site.Circle {
+		edge = "edge"
+	}
+	add("s_"+edge, nil, nil, w.Corner, "mm", ref, "total settlement at the "+edge+", same method, stress distribution and sublayers")
+	w.Delta = w.Centre - w.Corner
+	add("delta_s_in", fSub(fS("s_centre"), fS("s_"+edge)), []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm")}, w.Delta, "mm", trace.Ref{}, "differential settlement within the footing")
+	switch f.Shape {
+	case site.Strip, site.Circle:
+		w.Dist = f.B / 2
+		add("d", fDiv(fS("B"), fN(2)), []trace.Value{val("B", f.B, "m")}, w.Dist, "m", trace.Ref{}, "centre to edge")
+	default:
+		L := f.Length()
+		w.Dist = math.Hypot(f.B, L) / 2
+		add("d", fDiv(fFn("sqrt", fAdd(fPow(fS("B"), fN(2)), fPow(fS("L"), fN(2)))), fN(2)), []trace.Value{val("B", f.B, "m"), val("L", L, "m")}, w.Dist, "m", trace.Ref{}, "centre to corner (half-diagonal)")
+	}
+	w.Beta = w.Delta / w.Dist
+	add("beta_in", fDiv(fS("delta_s_in"), fS("d")), []trace.Value{val("delta_s_in", w.Delta, "mm"), val("d", w.Dist, "m")}, w.Beta, "", trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion within the footing")
+	t.WarnAll(trace.Caution{Code: "within-flexible", Severity: trace.SevNote, Case: cs,
+		Message: "the footing is taken as flexible: a stiff footing or raft spreads the load and settles more evenly than this"})
+	w.Values = []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm"), val("delta_s_in", w.Delta, "mm"), val("beta_in", w.Beta, "")}
+	if edge == "edge" {
+		return w, nil
+	}
+	for _, m := range []struct {
+		p          stress.Point
+		side, what string
+		s, beta    *float64
+	}{{stress.MidB, "B", "middle of a long side", &w.MidB, &w.BetaB}, {stress.MidL, "L", "middle of a short side", &w.MidL, &w.BetaL}} {
+		x := in
+		x.At = m.p
+		r, err := compute(x, false)
+		if err != nil {
+			return nil, err
+		}
+		*m.s = r.Total
+		ss := "s_mid_" + m.side
+		add(ss, nil, nil, r.Total, "mm", ref, "total settlement at the "+m.what+", "+m.side+"/2 from the centre")
+		side, sv := m.side, f.B
+		if m.side == "L" {
+			sv = f.Length()
+			if f.Shape == site.Square {
+				side = "B"
+			}
+		}
+		*m.beta = (w.Centre - r.Total) / (sv / 2)
+		add("beta_"+m.side, fDiv(fSub(fS("s_centre"), fS(ss)), fDiv(fS(side), fN(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(side, sv, "m")}, *m.beta, "",
+			trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion from the centre to the "+m.what)
+		w.Values = append(w.Values, val(ss, r.Total, "mm"), val("beta_"+m.side, *m.beta, ""))
+	}
+	return w, nil
+}
