@@ -189,10 +189,7 @@ func validate(in Input) (Options, error) {
 		}
 	}
 	rng := func(p string, v, scale, lo, hi float64, unit string, open bool) {
-		d := v / scale
-		if d < lo || d > hi || (open && d == lo) || d != d {
-			errs = append(errs, &site.RangeError{Where: "bearing", Param: p, Value: d, Min: lo, Max: hi, Unit: unit})
-		}
+		errs.Range("bearing", p, v, scale, lo, hi, open, unit)
 	}
 	if o.Interface.Delta.Set {
 		rng("delta", o.Interface.Delta.V, degr, 0, 45, "deg", false)

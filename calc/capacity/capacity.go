@@ -99,12 +99,12 @@ func Table(in Input) (*Result, error) {
 		return nil, &site.InputError{Param: "widths", Msg: fmt.Sprintf("give 1 to 50 widths, not %d", len(in.Widths))}
 	}
 	for _, b := range in.Widths {
-		if !(b > 0) || b > 100 {
-			return nil, &site.RangeError{Param: "widths", Value: b, Min: 0, Max: 100, Unit: "m"}
+		if !(b >= site.MinWidth) || b > 100 {
+			return nil, &site.RangeError{Param: "widths", Value: b, Min: site.MinWidth, Max: 100, Unit: "m"}
 		}
 	}
 	if !(in.Limit > 0) || in.Limit > 1 {
-		return nil, &site.RangeError{Param: "limit", Value: in.Limit * 1e3, Min: 0, Max: 1000, Unit: "mm"}
+		return nil, &site.RangeError{Param: "limit", Value: in.Limit * 1e3, Min: 0, Max: 1000, Unit: "mm", OpenMin: true}
 	}
 	r := &Result{Approach: ap.Name, Limit: in.Limit, Own: -1}
 	f := in.Bearing.Footing

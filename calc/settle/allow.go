@@ -44,7 +44,7 @@ const AllowTol = 1.0
 // resistance and takes the lower.
 func Allowable(in Input, sLim float64) (*Allow, error) {
 	if !(sLim > 0) || sLim > 1 {
-		return nil, &site.RangeError{Where: in.Footing.Name, Param: "s_lim", Value: sLim * 1e3, Min: 0, Max: 1000, Unit: "mm"}
+		return nil, &site.RangeError{Where: in.Footing.Name, Param: "s_lim", Value: sLim * 1e3, Min: 0, Max: 1000, Unit: "mm", OpenMin: true}
 	}
 	in.V = site.Opt{}
 	in.Limit = site.Some(sLim)

@@ -248,6 +248,9 @@ func (k *calc) finish() {
 	k.add(cs, "s_total", fAdd(fS("s_i"), fS("s_c"), fS("s_sec")), []trace.Value{val("s_i", r.Si, "mm"), val("s_c", r.Sc, "mm"), val("s_sec", r.Ssec, "mm")}, r.Total, "mm", trace.Ref{}, "total settlement")
 	r.Util = r.Total / r.Limit
 	k.add(cs, "util", fDiv(fS("s_total"), fS("s_lim")), []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, r.Util, "", trace.Ref{}, "settlement against the limit")
+	if zone := r.ZInf - k.f.D; zone > 0 && r.Total > zone {
+		k.unverified(fmt.Sprintf("the computed settlement %.3g m exceeds the %.3g m thickness of the ground it comes from: the stiffness given is outside the range where the method has physical sense", r.Total, zone))
+	}
 	r.OK = r.Util <= 1 && len(r.Unverified) == 0
 	if len(r.Unverified) > 0 {
 		k.warn(cs, "not-verified", trace.SevCaution, trace.Ref{}, "settlement not verified: "+strings.Join(r.Unverified, "; ")+"; the total leaves that out, so the check is NOT OK until the data are given")

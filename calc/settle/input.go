@@ -278,9 +278,6 @@ func (in Input) validate() (*config, error) {
 
 // check appends a RangeError when v (SI) / scale lies outside [min, max].
 func check(errs site.Errors, where, param string, v, scale, min, max float64, openMin bool, unit string) site.Errors {
-	d := v / scale
-	if d != d || d < min || d > max || (openMin && d == min) || math.IsInf(d, 0) {
-		errs = append(errs, &site.RangeError{Where: where, Param: param, Value: d, Min: min, Max: max, Unit: unit})
-	}
+	errs.Range(where, param, v, scale, min, max, openMin, unit)
 	return errs
 }

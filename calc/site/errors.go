@@ -2,6 +2,7 @@ package site
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 	"strings"
 )
@@ -10,14 +11,15 @@ import (
 // are in Unit (display units, e.g. kPa, deg), not SI, so the message reads
 // as the engineer wrote the input. Where names the layer or footing.
 type RangeError struct {
-	Where  string
-	Layer  int // 1-based index of the layer concerned; 0 when not a layer
-	Param  string
-	Value  float64
-	Min    float64
-	Max    float64
-	Unit   string
-	Reason string // optional: why the range is what it is
+	Where   string
+	Layer   int // 1-based index of the layer concerned; 0 when not a layer
+	Param   string
+	Value   float64
+	Min     float64
+	Max     float64
+	Unit    string
+	Reason  string // optional: why the range is what it is
+	OpenMin bool   // Min itself is outside the range ("greater than")
 }
 
 func (e *RangeError) Error() string {
@@ -30,7 +32,23 @@ func (e *RangeError) Error() string {
 	if u != "" {
 		u = " " + u
 	}
-	fmt.Fprintf(&b, "%s = %s%s is outside the valid range %s to %s%s", e.Param, num(e.Value), u, num(e.Min), num(e.Max), u)
+	// Said the way an engineer reads a limit: "B = 0 m: must be at
+	// least 0.1 m", "phi' = 52 deg: must be at most 50 deg".
+	fmt.Fprintf(&b, "%s = %s%s: ", e.Param, num(e.Value), u)
+	switch {
+	case e.Value != e.Value:
+		b.WriteString("not a number")
+	case e.Value < e.Min || (e.OpenMin && e.Value == e.Min):
+		if e.OpenMin {
+			fmt.Fprintf(&b, "must be greater than %s%s", num(e.Min), u)
+		} else {
+			fmt.Fprintf(&b, "must be at least %s%s", num(e.Min), u)
+		}
+	case e.Value > e.Max:
+		fmt.Fprintf(&b, "must be at most %s%s", num(e.Max), u)
+	default:
+		fmt.Fprintf(&b, "must lie from %s to %s%s", num(e.Min), num(e.Max), u)
+	}
 	if e.Reason != "" {
 		b.WriteString(" (")
 		b.WriteString(e.Reason)
@@ -86,11 +104,20 @@ func (l *Errors) check(where, param string, v, scale, min, max float64, openMin 
 	l.checkLayer(where, 0, param, v, scale, min, max, openMin, unit)
 }
 
+// Range is check for the engine packages: it appends a RangeError when v
+// (SI) / scale is NaN, infinite or outside [min, max] (display units;
+// openMin excludes min), and reports whether v was in range.
+func (l *Errors) Range(where, param string, v, scale, min, max float64, openMin bool, unit string) bool {
+	n := len(*l)
+	l.checkLayer(where, 0, param, v, scale, min, max, openMin, unit)
+	return len(*l) == n
+}
+
 // checkLayer is check for a parameter of layer n (1-based).
 func (l *Errors) checkLayer(where string, n int, param string, v, scale, min, max float64, openMin bool, unit string) {
 	d := v / scale
-	if d < min || d > max || (openMin && d == min) || d != d {
-		*l = append(*l, &RangeError{Where: where, Layer: n, Param: param, Value: d, Min: min, Max: max, Unit: unit})
+	if d < min || d > max || (openMin && d == min) || d != d || math.IsInf(d, 0) {
+		*l = append(*l, &RangeError{Where: where, Layer: n, Param: param, Value: d, Min: min, Max: max, Unit: unit, OpenMin: openMin})
 	}
 }
 

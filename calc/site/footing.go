@@ -70,6 +70,9 @@ func (f Footing) Area() float64 {
 	return f.B * f.B
 }
 
+// MinWidth is the smallest footing width or length accepted, m.
+const MinWidth = 0.1
+
 // Validate checks the footing's dimensions.
 func (f Footing) Validate() error {
 	var errs Errors
@@ -77,9 +80,12 @@ func (f Footing) Validate() error {
 	if f.Shape < Strip || f.Shape > Circle {
 		errs = append(errs, &InputError{Where: w, Param: "shape", Msg: "expected strip, square, rectangle or circle"})
 	}
-	errs.check(w, "B", f.B, 1, 0, 100, true, "m")
+	// 0.1 m is a practical lower bound: no shallow foundation is
+	// narrower, and below it the effective-area and stress formulas lose
+	// meaning (common practice).
+	errs.check(w, "B", f.B, 1, MinWidth, 100, false, "m")
 	if f.Shape == Rectangle {
-		errs.check(w, "L", f.L, 1, 0, 1000, true, "m")
+		errs.check(w, "L", f.L, 1, MinWidth, 1000, false, "m")
 		if f.L < f.B {
 			errs = append(errs, &InputError{Where: w, Param: "L", Msg: fmt.Sprintf("L = %g m is less than B = %g m: B is the shorter side", f.L, f.B)})
 		}

@@ -115,7 +115,10 @@ func (g Ground) Validate() error {
 				errs.checkLayer(w, n, name, o.V, scale, min, max, open, unit)
 			}
 		}
-		opt("c_u", l.Cu, kPa, 0, 2000, true, "kPa")
+		// Practical lower bounds (common practice): the softest clays and
+		// peats have c_u of a few kPa and moduli of a few hundred kPa;
+		// below these the methods give numbers without physical sense.
+		opt("c_u", l.Cu, kPa, 1, 2000, false, "kPa")
 		if l.Phi.Set && l.Phi.V/deg >= 50 {
 			errs = append(errs, &RangeError{Where: w, Layer: n, Param: "phi'", Value: l.Phi.V / deg, Min: 0, Max: 50, Unit: "deg", Reason: "50 deg excluded: no soil reaches it and the factors are meaningless there"})
 		} else {
@@ -130,8 +133,8 @@ func (g Ground) Validate() error {
 			}
 		}
 		opt("c'", l.C, kPa, 0, 500, false, "kPa")
-		opt("E_u", l.Eu, MPa, 0, 10000, true, "MPa")
-		opt("E'", l.E, MPa, 0, 10000, true, "MPa")
+		opt("E_u", l.Eu, MPa, 0.1, 10000, false, "MPa")
+		opt("E'", l.E, MPa, 0.1, 10000, false, "MPa")
 		opt("nu", l.Nu, 1, 0, 0.5, false, "")
 		opt("m_v", l.Mv, m2MN, 0, 10, true, "m2/MN")
 		opt("c_v", l.Cv, m2yr, 0, 10000, true, "m2/yr")
@@ -145,7 +148,7 @@ func (g Ground) Validate() error {
 		opt("OCR", l.OCR, 1, 1, 50, false, "")
 		opt("C_alpha", l.Calpha, 1, 0, 1, false, "")
 		opt("N", l.N, 1, 0, 300, false, "")
-		opt("q_c", l.Qc, MPa, 0, 100, true, "MPa")
+		opt("q_c", l.Qc, MPa, 0.1, 100, false, "MPa")
 		opt("D_r", l.Dr, 1, 0, 1, false, "")
 	}
 	if g.Water.Set {

@@ -59,8 +59,8 @@ func TestValidate(t *testing.T) {
 	err := g.Validate()
 	for _, want := range []string{
 		"must start at ground level",
-		"phi' = 52 deg is outside the valid range 0 to 50 deg",
-		"gamma_sat = 18 kN/m3 is outside the valid range 19 to 30 kN/m3",
+		"phi' = 52 deg: must be at most 50 deg",
+		"gamma_sat = 18 kN/m3: must be at least 19 kN/m3",
 	} {
 		if err == nil || !strings.Contains(err.Error(), want) {
 			t.Errorf("Validate() = %v, want it to contain %q", err, want)
@@ -71,7 +71,7 @@ func TestValidate(t *testing.T) {
 	g = clay()
 	g.Layers[1].Phi = site.Some(24 * math.Pi / 180)
 	g.Layers[1].PhiCv = site.Some(30 * math.Pi / 180)
-	if err := g.Validate(); err == nil || !strings.Contains(err.Error(), "phi'_cv = 30 deg is outside the valid range 0 to 24 deg") {
+	if err := g.Validate(); err == nil || !strings.Contains(err.Error(), "phi'_cv = 30 deg: must be at most 24 deg") {
 		t.Errorf("φ′_cv above φ′: %v", err)
 	}
 	g.Layers[1].PhiCv = site.Some(22 * math.Pi / 180)
@@ -80,7 +80,7 @@ func TestValidate(t *testing.T) {
 	}
 	f := site.Footing{Name: "P1", Shape: site.Rectangle, B: 3, L: 2, D: -1}
 	err = f.Validate()
-	for _, want := range []string{"B is the shorter side", "D = -1 m is outside"} {
+	for _, want := range []string{"B is the shorter side", "D = -1 m: must be at least 0 m"} {
 		if err == nil || !strings.Contains(err.Error(), want) {
 			t.Errorf("Footing.Validate() = %v, want %q", err, want)
 		}
@@ -102,6 +102,24 @@ func TestStrata(t *testing.T) {
 	for i := range want {
 		if got[i] != want[i] {
 			t.Errorf("stratum %d = %+v, want %+v", i, got[i], want[i])
+		}
+	}
+}
+
+// TestRangeWords: a range error reads the way an engineer reads a limit,
+// and tiny widths are refused at the practical lower bound.
+func TestRangeWords(t *testing.T) {
+	for _, c := range []struct {
+		f    site.Footing
+		want string
+	}{
+		{site.Footing{Name: "F", Shape: site.Square, B: 0, D: 1}, "F: B = 0 m: must be at least 0.1 m"},
+		{site.Footing{Name: "F", Shape: site.Square, B: 1e-300, D: 1}, "F: B = 1e-300 m: must be at least 0.1 m"},
+		{site.Footing{Name: "F", Shape: site.Square, B: 200, D: 1}, "F: B = 200 m: must be at most 100 m"},
+		{site.Footing{Name: "F", Shape: site.Square, B: math.NaN(), D: 1}, "F: B = NaN m: not a number"},
+	} {
+		if err := c.f.Validate(); err == nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("B = %g: %v, want %q", c.f.B, err, c.want)
 		}
 	}
 }
