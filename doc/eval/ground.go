@@ -70,7 +70,7 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	g.Water = s.local[prefix+"water"]
 	g.GammaW = s.local[prefix+"gamma_w"]
 	g.Model = site.Ground{Name: g.Name}
-	ok := true
+	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines, groundStmts)
 	if g.Water != nil {
 		if !e.wantDim(g.Water, units.Length, "water (depth of the groundwater table below ground level)") {
 			ok = false
