@@ -199,8 +199,17 @@ func (e *evaluator) wantDim(y *Symbol, d units.Dim, what string) bool {
 	if y.Q.Dim == d {
 		return true
 	}
-	e.errs.Add(y.Span, "%s needs %s, not %s", what, dimWords(d), dimWords(y.Q.Dim))
+	e.errs.AddHint(y.Span, densityHint(d, y.Q.Dim), "%s needs %s, not %s", what, dimWords(d), dimWords(y.Q.Dim))
 	return false
+}
+
+// densityHint tells how to turn a density (t/m3, Mg/m3) into the unit
+// weight expected, and is "" for any other mismatch.
+func densityHint(want, got units.Dim) string {
+	if want != units.UnitWeight || got != units.Density {
+		return ""
+	}
+	return "a density is a mass per volume: multiply it by g, the standard acceleration of gravity (9.80665 m/s2), e.g. 1.9 t/m3 * g"
 }
 
 // siteErrors reports the engine's input errors at the cells they concern.
