@@ -234,7 +234,7 @@ func (k *calc) load() {
 		trace.Ref{Source: Craig2012, Clause: "net foundation pressure"}, "net bearing pressure: gross less the overburden removed")
 	if h0 := k.g.Flood(); h0 > 0 {
 		k.warn(cs, "water-above-ground", trace.SevWarning, trace.Ref{},
-			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; q_net = q − σ_v0 is right only when the SLS load includes the water on the footing, which plinth does not add.",
+			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; q_net = q − σ_v0 is right only when the SLS load includes the water on the footing.",
 			val("h_w0", h0, "m"))
 	}
 	if f.Alpha != 0 {

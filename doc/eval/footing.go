@@ -121,6 +121,11 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 	} else {
 		ok = ok && g
 	}
+	if y := s.local[prefix+"gamma_c"]; y != nil && !f.SelfWeight {
+		e.errs.AddHint(y.Span, "add a line self_weight = auto, or remove this one",
+			"gamma_c is used only with self_weight = auto; without it the actions include the footing's weight")
+		ok = false
+	}
 	f.H = f.Model.D
 	if v, g := get("h", units.Length, "thickness of the footing", false); g && s.local[prefix+"h"] != nil {
 		f.H = v

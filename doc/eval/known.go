@@ -40,16 +40,18 @@ func (e *evaluator) unknownStmts(kind sheet.Kind, name string, lines []sheet.Lin
 	return ok
 }
 
-// nearestStmt is sheet.Nearest, or else a known name the statement's name
-// extends with "_…" (water_table → water).
+// nearestStmt is sheet.Nearest, or else the longest known name of three
+// or more letters that the statement's name extends (water_table → water,
+// gamma_conc → gamma_c).
 func nearestStmt(name string, known []string) (string, bool) {
 	if n, ok := sheet.Nearest(name, known); ok {
 		return n, true
 	}
+	best := ""
 	for _, k := range known {
-		if strings.HasPrefix(name, k+"_") {
-			return k, true
+		if len(k) >= 3 && len(k) > len(best) && strings.HasPrefix(name, k) {
+			best = k
 		}
 	}
-	return "", false
+	return best, best != ""
 }
