@@ -77,6 +77,11 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 		}
 		g.Model.Water = site.Some(g.Water.Q.V)
 	}
+	if g.GammaW != nil && g.Water == nil {
+		e.errs.AddHint(g.GammaW.Span, "add a line water = … (depth of the water table), or remove this one",
+			"gamma_w is used only with a water table")
+		ok = false
+	}
 	if g.GammaW != nil {
 		if !e.wantDim(g.GammaW, units.UnitWeight, "gamma_w (unit weight of water)") {
 			ok = false
