@@ -222,6 +222,14 @@ func (c *calc) overburden() {
 	var f trace.Expr
 	var in []trace.Value
 	var parts []string
+	if h0 := g.Flood(); h0 > 0 {
+		c.warnOnce("water-above-ground", trace.SevWarning, trace.Ref{},
+			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; the actions must account for the water on the footing and the uplift on its base.",
+			val("h_w0", h0, "m"))
+		f = mul(sym("gamma_w"), sym("h_w0"))
+		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
+		parts = append(parts, "0: free water above ground level")
+	}
 	for k, st := range g.Strata(D) {
 		gs, hs := fmt.Sprintf("gamma_s%d", k+1), fmt.Sprintf("h_s%d", k+1)
 		term := mul(sym(gs), sym(hs))

@@ -168,9 +168,10 @@
 // # Cautions (trace.Caution.Code)
 //
 // allowable, da3-actions, psi0-default, phi-high (φ′ > 40°), water-above-
-// base, water-within-B, layers-in-zone, weaker-layer, layer-no-strength,
-// local-shear, local-shear-advised, local-shear-off,
-// local-shear-transitional, density-unknown,
+// ground (free water above ground level), water-above-base, water-within-B,
+// layers-in-zone, weaker-layer, layer-no-strength, local-shear,
+// local-shear-advised, local-shear-off, local-shear-transitional,
+// density-unknown,
 // undrained-coarse, drained-missing, undrained-missing, base-tilt,
 // terzaghi-incl, terzaghi-circle, circle-area, uplift (V_d ≤ 0), ecc-out
 // (resultant outside the base), ecc-b6 (e > B/6: part of the base lifts),

@@ -54,7 +54,7 @@ func TestDomainErrors(t *testing.T) {
 		{"unit weight 40", "gamma", func(in *bearing.Input) { in.Ground.Layers[0].Gamma = 40e3 }},
 		{"negative c_u", "c_u", func(in *bearing.Input) { in.Ground.Layers[0].Cu = site.Some(-5e3) }},
 		{"first layer below ground", "top", func(in *bearing.Input) { in.Ground.Layers[0].Top = 1 }},
-		{"water above ground", "water", func(in *bearing.Input) { in.Ground.Water = site.Some(-1) }},
+		{"water 60 m above ground", "water", func(in *bearing.Input) { in.Ground.Water = site.Some(-60) }},
 		{"no actions", "", func(in *bearing.Input) { in.Actions = nil }},
 		{"ψ0 above 1", "psi_0", func(in *bearing.Input) { in.Actions[0].Psi0 = site.Some(1.5) }},
 		{"no strength at the base", "phi'", func(in *bearing.Input) { in.Ground.Layers[0].Phi = site.Opt{} }},

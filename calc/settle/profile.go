@@ -46,7 +46,7 @@ func (k *calc) sigmaV(z float64) float64 {
 			w = g.Water.V
 		}
 		var zs, ss, gs []float64
-		s := 0.0
+		s := g.Gw() * g.Flood() // free water above ground level
 		for i, l := range g.Layers {
 			top, bot := l.Top, g.Bottom(i)
 			if w > top && w < bot {
@@ -175,6 +175,11 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 	g := k.g
 	var terms []trace.Expr
 	var in []trace.Value
+	if h0 := g.Flood(); h0 > 0 {
+		terms = append(terms, fMul(fS("gamma_w"), fS("h_w0")))
+		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
+		sv += g.Gw() * h0
+	}
 	for _, st := range g.Strata(z) {
 		fd, fw, gsym, hsym, gssym, hwsym := layerSyms(st.Layer)
 		if st.Wet {
@@ -190,7 +195,11 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 		if len(terms) == 0 {
 			k.add(cs, "sigma_v0", nil, nil, 0, "kPa", trace.Ref{}, "at ground level")
 		} else {
-			k.add(cs, "sigma_v0", fAdd(terms[0], terms[1:]...), in, sv, "kPa", trace.Ref{}, "total vertical stress from the ground model (h_w: thickness below the water table)")
+			note := "total vertical stress from the ground model (h_w: thickness below the water table)"
+			if g.Flood() > 0 {
+				note = "total vertical stress from the ground model (h_w0: free water above ground level; h_w: thickness below the water table)"
+			}
+			k.add(cs, "sigma_v0", fAdd(terms[0], terms[1:]...), in, sv, "kPa", trace.Ref{}, note)
 		}
 	}
 	u = g.PoreP(z)
@@ -234,6 +243,11 @@ func (k *calc) load() {
 	k.qn = stress.Net(c.q, k.sv)
 	k.add(cs, "q_net", fSub(fS("q"), fS("sigma_v0")), []trace.Value{val("q", c.q, "kPa"), val("sigma_v0", k.sv, "kPa")}, k.qn, "kPa",
 		trace.Ref{Source: Craig2012, Clause: "net foundation pressure"}, "net bearing pressure: gross less the overburden removed")
+	if h0 := k.g.Flood(); h0 > 0 {
+		k.warn(cs, "water-above-ground", trace.SevWarning, trace.Ref{},
+			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; q_net = q − σ_v0 is right only when the SLS load includes the water on the footing.",
+			val("h_w0", h0, "m"))
+	}
 	if f.Alpha != 0 {
 		k.warn(cs, "inclined-base", trace.SevNote, trace.Ref{}, "the base inclination is ignored in the settlement calculation")
 	}

@@ -72,7 +72,7 @@ func (l Layer) GammaSatOr() float64 { return l.GammaSat.Or(l.Gamma) }
 type Ground struct {
 	Name   string
 	Layers []Layer
-	Water  Opt     // depth of the groundwater table below ground level, m, 0–200; not set = no groundwater in the depth of interest
+	Water  Opt     // depth of the groundwater table below ground level, m, −50 to 200 (negative: free water above ground level, a flooded or tidal site); not set = no groundwater in the depth of interest
 	GammaW float64 // unit weight of water, N/m³, 9–10.5 kN/m³; 0 means GammaWDefault
 }
 
@@ -152,7 +152,7 @@ func (g Ground) Validate() error {
 		opt("D_r", l.Dr, 1, 0, 1, false, "")
 	}
 	if g.Water.Set {
-		errs.check(g.Name, "water", g.Water.V, 1, 0, 200, false, "m")
+		errs.check(g.Name, "water", g.Water.V, 1, -50, 200, false, "m")
 	}
 	if g.GammaW != 0 {
 		errs.check(g.Name, "gamma_w", g.GammaW, kNm3, 9, 10.5, false, "kN/m3")
@@ -214,11 +214,23 @@ func (g Ground) Strata(z float64) []Stratum {
 	return out
 }
 
-// SigmaV returns the total vertical stress at depth z (Pa): the sum of
+// Flood returns the depth of free water standing above ground level (m):
+// −Water when the water table is above ground level, else 0.
+func (g Ground) Flood() float64 {
+	if g.Water.Set && g.Water.V < 0 {
+		return -g.Water.V
+	}
+	return 0
+}
+
+// SigmaV returns the total vertical stress at depth z (Pa): the weight of
+// any free water above ground level, γ_w·h_w0, plus the sum of
 // γ·thickness above the water table and γ_sat·thickness below it over the
-// strata above z (common practice).
+// strata above z (common practice; the standing water adds total stress
+// and, through u = γ_w (z − z_w), the same pore pressure, so no effective
+// stress: Craig's Soil Mechanics, 8th ed., §3.4 (from memory)).
 func (g Ground) SigmaV(z float64) float64 {
-	var s float64
+	s := g.Gw() * g.Flood()
 	for _, st := range g.Strata(z) {
 		s += st.Gamma * st.H()
 	}

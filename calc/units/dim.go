@@ -30,6 +30,8 @@ var (
 	Compliance  = Dim{L: 1, M: -1, T: 2}  // 1/pressure, e.g. m_v
 	Diffusivity = Dim{L: 2, T: -1}        // area per time, e.g. c_v
 	Velocity    = Dim{L: 1, T: -1}
+	Accel       = Dim{L: 1, T: -2} // acceleration, e.g. g
+	Density     = Dim{L: -3, M: 1} // mass per volume (t/m3 = Mg/m3)
 )
 
 // IsNone reports whether d is dimensionless.

@@ -24,6 +24,7 @@ var display = map[Dim]Unit{
 	Compliance:  MustParse("m2/MN"),
 	Diffusivity: MustParse("m2/yr"),
 	Velocity:    MustParse("m/s"),
+	Accel:       MustParse("m/s2"),
 }
 
 // Display returns the unit a value of dimension d is shown in when the

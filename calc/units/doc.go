@@ -32,13 +32,14 @@
 //	moment    kNm MNm            (kN·m; also written kN*m, kN·m)
 //	mass      kg g Mg t          (t is the tonne, 1000 kg)
 //	angle     rad deg °
-//	time      s min h day days week weeks yr year years
+//	time      s min h day days week weeks month months yr year years
 //	ratio     %                  (0.01); "" or "-" for a pure number
 //
 // yr is the Julian year of exactly 365.25 days (31 557 600 s), the year
 // astronomers use (IAU, from memory); consolidation coefficients in m2/yr
 // use it. NIST SP 811 (2008) B.8 lists only the 365-day, sidereal and
-// tropical years, so its day factor is the check (unit_test.go). Derived units are
+// tropical years, so its day factor is the check (unit_test.go). month is
+// 1/12 of that year, exactly 30.4375 days (2 629 800 s). Derived units are
 // written by composition: kN/m3, kN/m^3, kN/m³, m2/yr, cm2/s, m2/MN, 1/kPa,
 // kN/m (strip line load), kNm/m, kN/m2.
 //

@@ -88,6 +88,8 @@ var names = []name{
 	{"days", 86400, Time},
 	{"week", 7 * 86400, Time},
 	{"weeks", 7 * 86400, Time},
+	{"month", 365.25 * 86400 / 12, Time}, // 1/12 Julian year = 30.4375 d
+	{"months", 365.25 * 86400 / 12, Time},
 	{"yr", 365.25 * 86400, Time}, // Julian year, 365.25 d
 	{"year", 365.25 * 86400, Time},
 	{"years", 365.25 * 86400, Time},

@@ -68,6 +68,8 @@ var factorRows = []struct {
 	{"week", 7 * 8.64e4, units.Time, 1e-12, "NIST SP 811 (2008) B.8: day = 8.64 E+04 s; week = 7 d (common practice, not in B.8)"},
 	{"yr", 365.25 * 8.64e4, units.Time, 1e-12, "NIST SP 811 (2008) B.8: day = 8.64 E+04 s; Julian year = 365.25 d = 3.155 76 E+07 s (common practice in astronomy; B.8's year (365 days) = 3.1536 E+07 s is the calendar year and is not used)"},
 	{"weeks", 6.048e5, units.Time, 1e-12, "NIST SP 811 (2008) B.8: day = 8.64 E+04 s; week = 7 d (common practice, not in B.8)"},
+	{"month", 2.6298e6, units.Time, 1e-12, "1/12 of the Julian year (yr): 30.4375 × 8.64 E+04 s = 2.6298 E+06 s (plinth's definition; NIST SP 811 B.8 lists no month)"},
+	{"months", 2.6298e6, units.Time, 1e-12, "as month"},
 	{"years", 3.15576e7, units.Time, 1e-12, "as yr: 365.25 × 8.64 E+04 s"},
 	{"year", 3.15576e7, units.Time, 1e-12, "as yr: 365.25 × 8.64 E+04 s"},
 	{"m2/yr", 1 / 3.15576e7, units.Diffusivity, 1e-12, "NIST SP 811 (2008) B.8: day = 8.64 E+04 s; 1 m2/yr = 1/(365.25 × 8.64 E+04) m2/s"},

@@ -28,7 +28,7 @@ func newFormula(n expr.Node, uses []*eval.Symbol) *formula {
 	f := &formula{syms: map[string]*eval.Symbol{}}
 	f.x = f.conv(n)
 	for _, name := range trace.Symbols(f.x) {
-		if strings.HasPrefix(name, "#") || name == "pi" {
+		if strings.HasPrefix(name, "#") || name == "pi" || name == "g" {
 			continue
 		}
 		for _, y := range uses {
@@ -103,6 +103,9 @@ func (f *formula) substituted() eqn.Node {
 		}
 		if y := f.syms[name]; y != nil {
 			return valueNode(y.Q, y.Unit, y.Decimals), true
+		}
+		if name == "g" { // printed where used: the constant is an assumed value
+			return withUnit(numberNode("9.80665"), "m/s2"), true
 		}
 		return nil, false
 	}})

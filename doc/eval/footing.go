@@ -1,6 +1,8 @@
 package eval
 
 import (
+	"math"
+
 	"plinth/calc/site"
 	"plinth/calc/units"
 	"plinth/doc/sheet"
@@ -55,7 +57,7 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 	s.blocks[b] = &Block{Kind: sheet.KindFooting, Name: f.Name, Span: b.Span, Sheet: s, Footing: f}
 	s.footings[f.Name] = f
 	prefix := f.Name + "."
-	ok := true
+	ok := e.unknownStmts(sheet.KindFooting, f.Name, b.Lines, footingStmts)
 	f.Model.Name = f.Name
 	shapeSet := false
 	for _, o := range b.Options() {
@@ -99,8 +101,19 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		f.Model.L, good = get("L", units.Length, "length", true)
 		ok = ok && good
 	} else if y := s.local[prefix+"L"]; y != nil && shapeSet {
-		e.errs.Add(y.Span, "L is given for a %s footing: only a rectangle has a separate length", f.Model.Shape)
-		ok = false
+		b0 := s.local[prefix+"B"]
+		switch {
+		case f.Model.Shape == site.Square && b0 != nil && y.Q.Dim == units.Length && sameLength(y.Q.V, b0.Q.V):
+			// L = B on a square is what the trade writes: accepted.
+		case f.Model.Shape == site.Square && b0 != nil && y.Q.Dim == units.Length:
+			e.errs.AddHint(y.Span, "write shape = rectangle, or leave L out", "L = %g m differs from B = %g m: a square has L = B", y.Q.V, b0.Q.V)
+			ok = false
+		case f.Model.Shape == site.Square:
+			ok = ok && e.wantDim(y, units.Length, "L (length)")
+		default:
+			e.errs.Add(y.Span, "L is given for a %s footing: only a rectangle has a separate length", f.Model.Shape)
+			ok = false
+		}
 	}
 	f.Model.D, good = get("D", units.Length, "depth of the underside below ground level", true)
 	ok = ok && good
@@ -110,6 +123,11 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		f.GammaC, f.GammaCGiven = v, true
 	} else {
 		ok = ok && g
+	}
+	if y := s.local[prefix+"gamma_c"]; y != nil && !f.SelfWeight {
+		e.errs.AddHint(y.Span, "add a line self_weight = auto, or remove this one",
+			"gamma_c is used only with self_weight = auto; without it the actions include the footing's weight")
+		ok = false
 	}
 	f.H = f.Model.D
 	if v, g := get("h", units.Length, "thickness of the footing", false); g && s.local[prefix+"h"] != nil {
@@ -224,4 +242,10 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		}
 	}
 	f.OK = ok
+}
+
+// sameLength reports whether two lengths (m) agree to 1e-9 relative, so
+// L = B written in different units (2500 mm, 2.5 m) still counts as equal.
+func sameLength(a, b float64) bool {
+	return math.Abs(a-b) <= 1e-9*math.Max(math.Abs(a), math.Abs(b))
 }

@@ -71,12 +71,17 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	g.Water = s.local[prefix+"water"]
 	g.GammaW = s.local[prefix+"gamma_w"]
 	g.Model = site.Ground{Name: g.Name}
-	ok := true
+	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines, groundStmts)
 	if g.Water != nil {
 		if !e.wantDim(g.Water, units.Length, "water (depth of the groundwater table below ground level)") {
 			ok = false
 		}
 		g.Model.Water = site.Some(g.Water.Q.V)
+	}
+	if g.GammaW != nil && g.Water == nil {
+		e.errs.AddHint(g.GammaW.Span, "add a line water = … (depth of the water table), or remove this one",
+			"gamma_w is used only with a water table")
+		ok = false
 	}
 	if g.GammaW != nil {
 		if !e.wantDim(g.GammaW, units.UnitWeight, "gamma_w (unit weight of water)") {
@@ -202,8 +207,17 @@ func (e *evaluator) wantDim(y *Symbol, d units.Dim, what string) bool {
 	if y.Q.Dim == d {
 		return true
 	}
-	e.errs.Add(y.Span, "%s needs %s, not %s", what, dimWords(d), dimWords(y.Q.Dim))
+	e.errs.AddHint(y.Span, densityHint(d, y.Q.Dim), "%s needs %s, not %s", what, dimWords(d), dimWords(y.Q.Dim))
 	return false
+}
+
+// densityHint tells how to turn a density (t/m3, Mg/m3) into the unit
+// weight expected, and is "" for any other mismatch.
+func densityHint(want, got units.Dim) string {
+	if want != units.UnitWeight || got != units.Density {
+		return ""
+	}
+	return "a density is a mass per volume: multiply it by g, the standard acceleration of gravity (9.80665 m/s2), e.g. 1.9 t/m3 * g"
 }
 
 // siteErrors reports the engine's input errors at the cells they concern.

@@ -140,6 +140,7 @@ func dimWords(d units.Dim) string {
 		{units.LineLoad, "a force per metre"}, {units.Moment, "a moment"}, {units.Angle, "an angle"},
 		{units.Time, "a time"}, {units.Compliance, "a compressibility"}, {units.Diffusivity, "a consolidation coefficient"},
 		{units.Mass, "a mass"}, {units.Velocity, "a velocity"},
+		{units.Accel, "an acceleration"}, {units.Density, "a density"},
 	}
 	if d.IsNone() {
 		return "a pure number"

@@ -131,7 +131,7 @@ func (e *evaluator) readTable(g *sheet.Grid, specs []colSpec, prefix, nameCol, f
 					e.errs.AddHint(where, fmt.Sprintf("write the unit in the header, e.g. %s (%s)", spec.name, want[0]),
 						"column %s (%s) needs a unit", spec.name, spec.what)
 				} else {
-					e.errs.Add(where, "column %s (%s) needs a unit of %s, not %s", spec.name, spec.what, strings.Join(want, " or "), u.Name)
+					e.errs.AddHint(where, densityHint(spec.dims[0], u.Dim), "column %s (%s) needs a unit of %s, not %s", spec.name, spec.what, strings.Join(want, " or "), u.Name)
 				}
 				t.ok = false
 			}
@@ -262,7 +262,7 @@ func (e *evaluator) evalCells(sc scope, t *table) ([][]*Symbol, []bool) {
 				q = units.Quantity{V: q.V * hu.Factor, Dim: hu.Dim}
 			}
 			if !spec.accepts(q.Dim) && !(q.Dim.IsNone() && spec.accepts(units.None)) {
-				e.errs.Add(cell.Span, "%s needs %s, but %q is %s", spec.name, dimWords(spec.dims[0]), cell.Value, dimWords(q.Dim))
+				e.errs.AddHint(cell.Span, densityHint(spec.dims[0], q.Dim), "%s needs %s, but %q is %s", spec.name, dimWords(spec.dims[0]), cell.Value, dimWords(q.Dim))
 				ok = false
 				e.fail(sc.s, name)
 				continue

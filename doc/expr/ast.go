@@ -34,12 +34,19 @@ type Ident struct {
 	Name     string
 }
 
-// Const is a named constant; the only one is pi.
+// Const is a named constant: pi, or g, the standard acceleration of
+// gravity (see Gravity).
 type Const struct {
 	Pos, End int
-	Name     string  // "pi"
-	V        float64 // math.Pi
+	Name     string    // "pi" or "g"
+	V        float64   // math.Pi; Gravity
+	Dim      units.Dim // None; units.Accel
 }
+
+// Gravity is g, the standard acceleration of gravity, 9.80665 m/s²
+// (3rd CGPM, 1901; NIST SP 811 (2008) §8.2 and B.8), so that a density
+// becomes a unit weight: 1.9 t/m3 * g.
+const Gravity = 9.80665
 
 // Unary is a sign: -x or +x.
 type Unary struct {
@@ -224,3 +231,6 @@ func parseFloat(s string) float64 {
 }
 
 func isInfinite(v float64) bool { return math.IsInf(v, 0) }
+
+// gravityDim is g's dimension (the parser file does not import units).
+var gravityDim = units.Accel

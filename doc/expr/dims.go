@@ -80,7 +80,7 @@ func (a *analyzer) dim(n Node) (units.Dim, bool) {
 	case *Num:
 		return n.Unit.Dim, true
 	case *Const:
-		return units.None, true
+		return n.Dim, true
 	case *Ident:
 		if a.env != nil {
 			if q, ok := a.env.Lookup(n.Name); ok {

@@ -26,7 +26,7 @@
 //	unary      = ( "-" | "+" ) unary | power .
 //	power      = primary [ "^" exponent ] .
 //	exponent   = ( "-" | "+" ) exponent | power .
-//	primary    = number [ unit ] | symbol | "pi" | call | "(" expr ")" .
+//	primary    = number [ unit ] | symbol | "pi" | "g" | call | "(" expr ")" .
 //	call       = function "(" [ expr { "," expr } ] ")" .
 //	function   = "sqrt" | "abs" | "min" | "max" | "exp" | "ln" | "log10"
 //	           | "sin" | "cos" | "tan" | "asin" | "acos" | "atan" | "atan2"

@@ -50,8 +50,10 @@ func fold(op func(x, y float64) float64) func(a []float64) float64 {
 func IsFunction(name string) bool { _, ok := functions[name]; return ok }
 
 // Reserved reports whether name cannot be a symbol: a function name, the
-// constant pi, or the keyword check.
-func Reserved(name string) bool { return IsFunction(name) || name == "pi" || name == "check" }
+// constants pi and g, or the keyword check.
+func Reserved(name string) bool {
+	return IsFunction(name) || name == "pi" || name == "g" || name == "check"
+}
 
 // Functions returns the built-in function names.
 func Functions() []string { return strings.Fields(functionList) }

@@ -97,7 +97,7 @@ func binary(op token, x, y Node) *Binary {
 	return &Binary{Pos: pos, End: end, Op: op.op, OpText: op.text, OpPos: op.pos, OpEnd: op.end, L: x, R: y}
 }
 
-// primary = number | symbol | "pi" | function "(" args ")" | "(" expr ")" .
+// primary = number | symbol | "pi" | "g" | function "(" args ")" | "(" expr ")" .
 func (p *parser) primary() Node {
 	for p.tok.kind == tIllegal { // reported by the scanner
 		p.next()
@@ -114,6 +114,9 @@ func (p *parser) primary() Node {
 		p.next()
 		if t.text == "pi" {
 			return &Const{Pos: t.pos, End: t.end, Name: "pi", V: math.Pi}
+		}
+		if t.text == "g" {
+			return &Const{Pos: t.pos, End: t.end, Name: "g", V: Gravity, Dim: gravityDim}
 		}
 		if f, ok := functions[t.text]; ok {
 			if p.tok.kind != tLparen {

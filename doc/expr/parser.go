@@ -118,6 +118,8 @@ func (p *parser) checkName(id Ident) {
 	switch {
 	case id.Name == "pi":
 		p.errorf(id.Pos, id.End, "pi is the constant π; choose another name")
+	case id.Name == "g":
+		p.errorf(id.Pos, id.End, "g is the standard acceleration of gravity, 9.80665 m/s2; choose another name")
 	case id.Name == "check":
 		p.errorf(id.Pos, id.End, "check is a keyword; choose another name")
 	case IsFunction(id.Name):

@@ -8,11 +8,13 @@ import (
 	_ "image/png"
 	"plinth/doc/media"
 	"regexp"
+	"sort"
 	"strconv"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
 
+	"plinth/doc/sheet"
 	"plinth/templates"
 )
 
@@ -193,6 +195,19 @@ var knownFields = map[string]bool{
 	"sheet": true, "sheets": true, "page": true, "pages": true, "fingerprint": true,
 }
 
+// fieldHint suggests the known field nearest an unknown one, or lists them.
+func fieldHint(name string) string {
+	names := make([]string, 0, len(knownFields))
+	for n := range knownFields {
+		names = append(names, n)
+	}
+	sort.Strings(names)
+	if n, ok := sheet.Nearest(name, names); ok {
+		return "did you mean {" + n + "}?"
+	}
+	return "fields are: " + strings.Join(names, ", ")
+}
+
 func (t *Template) check() error {
 	var errs []error
 	bad := func(format string, args ...any) { errs = append(errs, fmt.Errorf(format, args...)) }
@@ -227,6 +242,8 @@ func (t *Template) check() error {
 		for _, m := range placeholder.FindAllStringSubmatch(s, -1) {
 			if m[1] == "" {
 				bad("%s: empty placeholder {}", where)
+			} else if !knownFields[m[1]] {
+				bad("%s: unknown field {%s}; %s", where, m[1], fieldHint(m[1]))
 			}
 			seen[m[1]] = true
 		}

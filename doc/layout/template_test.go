@@ -69,6 +69,8 @@ func TestTemplateErrors(t *testing.T) {
 		{"footer without fingerprint", `left: "inputs {fingerprint}"`, `left: "inputs"`, "footer has no {fingerprint}"},
 		{"cell outside", "w: 40mm,  h: 8mm, label: Sheet", "w: 90mm,  h: 8mm, label: Sheet", "lies outside the title block"},
 		{"bad length", "height: 24mm", "height: tall", `bad length "tall"`},
+		{"unknown placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {sheet_count}"`, "unknown field {sheet_count}; fields are:"},
+		{"misspelt placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {shets}"`, "unknown field {shets}; did you mean {sheets}?"},
 		{"bad align", "label: Revision,", "label: Revision, align: middle,", `align "middle"`},
 	}
 	for _, tt := range tests {

@@ -4,7 +4,9 @@ import "strings"
 
 // Nearest returns the candidate closest to name, for "did you mean"
 // hints, and false when none is close. A candidate differing only in
-// letter case wins; otherwise the smallest edit distance (Levenshtein, on
+// letter case wins, then one differing only in underscores (cu → c_u,
+// gammasat → gamma_sat, site.firm_clay.cu → site.firm_clay.c_u rather than
+// the equally near site.firm_clay.c'); otherwise the smallest edit distance (Levenshtein, on
 // runes) up to 1 for names of up to four letters and 2 for longer ones,
 // ties going to the earlier candidate. name itself is never suggested.
 func Nearest(name string, candidates []string) (string, bool) {
@@ -18,6 +20,11 @@ func Nearest(name string, candidates []string) (string, bool) {
 	}
 	for _, c := range candidates {
 		if strings.EqualFold(c, name) {
+			return c, true
+		}
+	}
+	for _, c := range candidates {
+		if squash(c) == squash(name) {
 			return c, true
 		}
 	}
@@ -64,3 +71,6 @@ func Distance(a, b string) int {
 	}
 	return prev[len(rb)]
 }
+
+// squash folds letter case and drops underscores.
+func squash(s string) string { return strings.ReplaceAll(strings.ToLower(s), "_", "") }

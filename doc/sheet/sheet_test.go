@@ -25,6 +25,16 @@ func TestNearest(t *testing.T) {
 			t.Errorf("Nearest(%q) = %q, %v; want %q", c.in, got, ok, c.want)
 		}
 	}
+	cells := []string{"site.firm_clay.top", "site.firm_clay.c'", "site.firm_clay.c_u", "site.firm_clay.phi'"}
+	for _, c := range []struct{ in, want string }{
+		{"site.firm_clay.cu", "site.firm_clay.c_u"}, // underscores only, before the equally near c'
+		{"site.firm_clay.C_U", "site.firm_clay.c_u"},
+		{"site.firm_clay.phi", "site.firm_clay.phi'"},
+	} {
+		if got, _ := sheet.Nearest(c.in, cells); got != c.want {
+			t.Errorf("Nearest(%q) = %q; want %q", c.in, got, c.want)
+		}
+	}
 	if d := sheet.Distance("γ_w", "g_w"); d != 1 {
 		t.Errorf("Distance counts bytes, not runes: %d", d)
 	}

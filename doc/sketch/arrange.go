@@ -128,7 +128,7 @@ func arrange(f Footing, w, h float64) (*sk, error) {
 	// the groundwater label
 	sideP := 12 + 3 + 2 + textW(fonts.Regular, sizeText, "D = "+metres(D))
 	if f.Water != nil {
-		sideP = math.Max(sideP, 14+6+2+textW(fonts.Regular, sizeText, "GWL "+metres(*f.Water)))
+		sideP = math.Max(sideP, 14+6+2+textW(fonts.Regular, sizeText, waterLabel(*f.Water)))
 	}
 	// each side of the footing is sideM metres, and at least sideP points
 	sideM := k.half - B/2

@@ -42,7 +42,7 @@ func (k *sk) paint() []draw.Item {
 	}
 	water := f.Water != nil && *f.Water < k.zBot
 	if water {
-		y := k.Y(*f.Water)
+		y := k.Y(math.Max(*f.Water, 0)) // free water above GL: its label says how high
 		it = append(it, draw.Line{X1: xL, Y1: y, X2: xR, Y2: y, Paint: draw.Paint{Stroke: inkWater, Width: 0.6, Dash: []float64{5, 2.5}}})
 	}
 	// boundaries, carried out to the label column
@@ -159,12 +159,21 @@ func (k *sk) dims() []draw.Item {
 	return it
 }
 
+// waterLabel names the water level: "GWL 1.50 m", or for free water above
+// ground level "water 1.50 m above GL".
+func waterLabel(z float64) string {
+	if z < 0 {
+		return "GWL " + metres(-z) + " above"
+	}
+	return "GWL " + metres(z)
+}
+
 // waterMark is the groundwater symbol — an inverted triangle on the level
 // with two short lines under it — and the level's label.
 func (k *sk) waterMark(z float64) []draw.Item {
-	l := "GWL " + metres(z)
+	l := waterLabel(z)
 	// towards the section's right edge, clear of the footing's dimensions
-	x, y := math.Max(k.X(k.f.B/2)+14, k.X(k.half)-4-textW(fonts.Regular, sizeText, l)-6), k.Y(z)
+	x, y := math.Max(k.X(k.f.B/2)+14, k.X(k.half)-4-textW(fonts.Regular, sizeText, l)-6), k.Y(math.Max(z, 0))
 	p := draw.Paint{Stroke: inkWater, Width: 0.6, Fill: draw.Gray(255), Filled: true}
 	return []draw.Item{
 		draw.Poly{Closed: true, Paint: p, Points: []draw.Point{draw.Pt(x-3.5, y-6), draw.Pt(x+3.5, y-6), draw.Pt(x, y)}},

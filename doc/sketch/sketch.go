@@ -21,7 +21,7 @@ type Footing struct {
 	// Thickness of the footing; 0 draws clamp(0.35 B, 0.25, 0.6) m, no
 	// more than D when D ≥ 0.25 m.
 	Thickness float64
-	Water     *float64 // groundwater depth below GL; nil = none given
+	Water     *float64 // groundwater depth below GL (negative: free water above GL, drawn at GL); nil = none given
 	Layers    []Layer  // top down; boundaries deeper than the sketch are left out
 	// Characteristic actions as given: V down (negative: up), H to the
 	// right (negative: to the left), M clockwise (negative: anticlockwise;
@@ -86,7 +86,7 @@ func check(f Footing, w, h float64) error {
 		rs = append(rs, rng{"L", f.L, 0, 1000, true, "m"})
 	}
 	if f.Water != nil {
-		rs = append(rs, rng{"Water", *f.Water, 0, 1000, false, "m"})
+		rs = append(rs, rng{"Water", *f.Water, -50, 1000, false, "m"}) // negative: free water above GL
 	}
 	if f.BEff != nil {
 		rs = append(rs, rng{"BEff", *f.BEff, 0, f.B, true, "m"})

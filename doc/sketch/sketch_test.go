@@ -34,6 +34,8 @@ var cases = []struct {
 		V: 900, M: -150, BEff: ptr(3.0 - 2*150.0/900)}, 480, 260},
 	{"square-bare", sketch.Footing{Shape: "square", B: 1.5, D: 0.6, Water: ptr(0.4),
 		Layers: []sketch.Layer{{Name: "Firm clay", Top: 0}}}, 360, 200},
+	{"flooded", sketch.Footing{Shape: "square", B: 2.0, D: 1.0, Water: ptr(-1.5),
+		Layers: []sketch.Layer{{Name: "Estuarine silt", Top: 0}}, V: 400}, 480, 250},
 	{"surface-uplift", sketch.Footing{Shape: "square", B: 1.2, D: 0, Thickness: 0.4, V: -40, H: 15, M: 5,
 		VLabel: "uplift 40 kN", Layers: []sketch.Layer{{Name: "Chalk", Top: 1.5}}}, 360, 200},
 	{"raft", sketch.Footing{Shape: "rectangle", B: 18, L: 40, D: 1.5, Water: ptr(3.5),
@@ -117,7 +119,7 @@ func TestErrors(t *testing.T) {
 		{"NaN depth", mod(func(f *sketch.Footing) { f.D = math.NaN() }), 400, 200, "D = NaN m must be from 0 to 50 m"},
 		{"negative depth", mod(func(f *sketch.Footing) { f.D = -1 }), 400, 200, "D = -1 m must be from 0 to 50 m"},
 		{"rectangle without L", mod(func(f *sketch.Footing) { f.Shape = "rectangle" }), 400, 200, "L = 0 m must be above 0"},
-		{"water above GL", mod(func(f *sketch.Footing) { f.Water = ptr(-0.5) }), 400, 200, "Water = -0.5 m must be from 0"},
+		{"water far above GL", mod(func(f *sketch.Footing) { f.Water = ptr(-60) }), 400, 200, "Water = -60 m must be from -50"},
 		{"B′ wider than B", mod(func(f *sketch.Footing) { f.BEff = ptr(2.5) }), 400, 200, "BEff = 2.5 m must be above 0 to 2 m"},
 		{"layers out of order", mod(func(f *sketch.Footing) {
 			f.Layers = []sketch.Layer{{Name: "a", Top: 0}, {Name: "b", Top: 3}, {Name: "c", Top: 2}}
