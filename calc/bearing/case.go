@@ -117,7 +117,7 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 			c.r.UpliftV = ld.V
 		}
 		c.r.Uplift++
-		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		c.warn("uplift", trace.SevWarning, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}
 	g, ok := c.geometry(ld, false)
@@ -292,7 +292,7 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 		lim6, lim3, edge, what = f.B/6, f.B/3, f.B/2, "B/6 (middle third)"
 	}
 	if e >= edge {
-		c.warn("ecc-out", trace.SevCaution, ref654, fmt.Sprintf("%s: the resultant lies at or outside the edge of the base (e = %.3f m): the footing overturns and has no bearing resistance.", c.cas, e), val("e", e, "m"))
+		c.warn("ecc-out", trace.SevWarning, ref654, fmt.Sprintf("%s: the resultant lies at or outside the edge of the base (e = %.3f m): the footing overturns and has no bearing resistance.", c.cas, e), val("e", e, "m"))
 		return g, false
 	}
 	if !quiet {
@@ -301,11 +301,11 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 			if f.Shape == site.Circle {
 				lim = "0.6 r"
 			}
-			c.warn("ecc-b3", trace.SevCaution, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
+			c.warn("ecc-b3", trace.SevWarning, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
 		} else if e > lim6 {
-			c.warn("ecc-b6", trace.SevWarning, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
+			c.warn("ecc-b6", trace.SevCaution, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
 		} else if k := kern(f, g.eB, g.eL); k > 1.0/6 {
-			c.warn("ecc-kern", trace.SevWarning, refKern, fmt.Sprintf("%s: e_B/B + e_L/L = %.3f > 1/6: the resultant lies outside the kern of the rectangle (a rhombus with half-diagonals B/6 and L/6) though each eccentricity is within its middle third, so a corner of the base lifts off under a linear pressure distribution (q_min = V/(BL) (1 - 6 e_B/B - 6 e_L/L) < 0).", c.cas, k), val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+			c.warn("ecc-kern", trace.SevCaution, refKern, fmt.Sprintf("%s: e_B/B + e_L/L = %.3f > 1/6: the resultant lies outside the kern of the rectangle (a rhombus with half-diagonals B/6 and L/6) though each eccentricity is within its middle third, so a corner of the base lifts off under a linear pressure distribution (q_min = V/(BL) (1 - 6 e_B/B - 6 e_L/L) < 0).", c.cas, k), val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
 		}
 	}
 	switch {
@@ -330,7 +330,7 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 	if g.H > 0 {
 		c.step("beta", fBeta, math.Atan(g.H/ld.V), "deg", trace.Ref{}, "inclination of the load from the vertical", val("H_d", g.H, c.uF), vV)
 		if !quiet && g.H/ld.V > 0.3 {
-			c.warn("hv-large", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
+			c.warn("hv-large", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
 		}
 		if !g.strip && (c.opt.Method == EC7 || c.opt.Method == Vesic) {
 			c.theta(&g, ld)

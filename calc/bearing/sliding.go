@@ -46,7 +46,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 	ld.Record(c.t, c.acts, name, c.uF, c.uM)
 	sc := SlideCase{Name: name, Combination: ld.Name, Drainage: d}
 	if ld.V <= 0 {
-		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		c.warn("uplift", trace.SevWarning, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}
 	H := math.Hypot(ld.HB, ld.HL)
@@ -75,7 +75,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 			} else {
 				ks, ds, ak = "phi'_k", "phi'_d", fl.Phi.V
 				c.take(ks, ak, "deg", trace.Ref{}, "characteristic peak angle of shearing resistance of "+ln+" (no φ′_cv given)")
-				c.warnOnce("slide-phi-cv", trace.SevWarning, refDelta, fmt.Sprintf("No φ′_cv is given for %s: the base friction angle is taken from the peak φ′_k = %.1f°. EN 1997-1 6.5.3(10) bases δ_d on the design critical-state angle φ′_cv,d, so the drained sliding resistance may be high by the ratio tan φ′_d/tan φ′_cv,d (25 %% for 38° against 32°). Give phi'_cv in the ground table.", ln, ak/degr),
+				c.warnOnce("slide-phi-cv", trace.SevCaution, refDelta, fmt.Sprintf("No φ′_cv is given for %s: the base friction angle is taken from the peak φ′_k = %.1f°. EN 1997-1 6.5.3(10) bases δ_d on the design critical-state angle φ′_cv,d, so the drained sliding resistance may be high by the ratio tan φ′_d/tan φ′_cv,d (25 %% for 38° against 32°). Give phi'_cv in the ground table.", ln, ak/degr),
 					val("phi'_k", ak, "deg"))
 			}
 			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
@@ -162,7 +162,7 @@ func (c *calc) summarise() {
 	r.OK = len(r.Cases) > 0
 	if len(r.Cases) == 0 && r.Uplift > 0 {
 		r.Unverified = fmt.Sprintf("bearing not verified: V_d ≤ 0 in every design load (at most %.1f %s): the base is in tension or lifts, so tension piles or anchorage are needed", r.UpliftV/kN, c.uF)
-		c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "not-verified", Severity: trace.SevCaution, Message: r.Unverified, Values: []trace.Value{val("V_d", r.UpliftV, c.uF)}, Step: -1})
+		c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "not-verified", Severity: trace.SevWarning, Message: r.Unverified, Values: []trace.Value{val("V_d", r.UpliftV, c.uF)}, Step: -1})
 	}
 	uu, ud := -1.0, -1.0
 	for i, cs := range r.Cases {

@@ -241,7 +241,7 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 	}
 	tl.SpreadQEd, tl.SpreadQRd, tl.SpreadUtil, tl.SpreadOK = qEd, qRd, u, u <= 1+1e-12
 	if !tl.SpreadOK {
-		c.warn("spread-fails", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %.2f: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, u), val("util_s", u, ""))
+		c.warn("spread-fails", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %.2f: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, u), val("util_s", u, ""))
 	}
 }
 
@@ -268,7 +268,7 @@ func (c *calc) ksCaution() {
 	case n > 1:
 		more = fmt.Sprintf(" (and in %d other cases, each with its own φ′_d)", n)
 	}
-	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "ks-extrapolated", Severity: trace.SevWarning, Ref: refKs, Step: -1, Case: at.cas,
+	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: "ks-extrapolated", Severity: trace.SevCaution, Ref: refKs, Step: -1, Case: at.cas,
 		Values:  []trace.Value{val("phi'_d", at.v, "deg")},
 		Message: fmt.Sprintf("φ′_d = %.1f° in %s%s lies outside the 35°–45° of BR 470 Table A2: K_p·tanδ is extrapolated; enter K_s read from Meyerhof & Hanna's chart (option K_s) to replace it.", at.v/degr, at.cas, more)})
 }

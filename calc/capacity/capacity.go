@@ -84,7 +84,7 @@ func loadCaution(t *trace.Trace, in bearing.Input) {
 	if len(parts) == 0 {
 		parts = append(parts, "not a downward central load")
 	}
-	t.Warn(trace.Caution{Code: "capacity-load", Severity: trace.SevWarning, Step: -1, Values: vals,
+	t.Warn(trace.Caution{Code: "capacity-load", Severity: trace.SevCaution, Step: -1, Values: vals,
 		Message: "the allowable pressures assume a " + Assumes + "; the footing's own characteristic actions are " + strings.Join(parts, " and ") +
 			", so the footing cannot use the pressures tabulated: its bearing block, which applies the inclination factors and the effective area, governs."})
 }
@@ -145,7 +145,7 @@ func Table(in Input) (*Result, error) {
 		}
 		cas := fmt.Sprintf("B = %.3g m", b)
 		if al.Result != nil && len(al.Result.Unverified) > 0 {
-			r.Trace.Warn(trace.Caution{Code: "not-verified", Severity: trace.SevCaution, Step: -1, Case: cas,
+			r.Trace.Warn(trace.Caution{Code: "not-verified", Severity: trace.SevWarning, Step: -1, Case: cas,
 				Message: cas + ": the settlement-limited pressure is not verified: " + strings.Join(al.Result.Unverified, "; ") + "; q_a_s leaves that layer out, so the allowable pressure may be unsafe."})
 		}
 		qb := r.Trace.Add(trace.Step{Symbol: "q_a_b", Value: row.QBearing, Unit: "kPa", Case: cas,

@@ -253,10 +253,10 @@ func (k *calc) finish() {
 	}
 	r.OK = r.Util <= 1 && len(r.Unverified) == 0
 	if len(r.Unverified) > 0 {
-		k.warn(cs, "not-verified", trace.SevCaution, trace.Ref{}, "settlement not verified: "+strings.Join(r.Unverified, "; ")+"; the total leaves that out, so the check is NOT OK until the data are given")
+		k.warn(cs, "not-verified", trace.SevWarning, trace.Ref{}, "settlement not verified: "+strings.Join(r.Unverified, "; ")+"; the total leaves that out, so the check is NOT OK until the data are given")
 	}
 	if r.Util > 1 {
-		k.warn(cs, "limit", trace.SevCaution, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
+		k.warn(cs, "limit", trace.SevWarning, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
 	}
 	r.symbols()
 }

@@ -244,7 +244,7 @@ func (k *calc) load() {
 	k.add(cs, "q_net", fSub(fS("q"), fS("sigma_v0")), []trace.Value{val("q", c.q, "kPa"), val("sigma_v0", k.sv, "kPa")}, k.qn, "kPa",
 		trace.Ref{Source: Craig2012, Clause: "net foundation pressure"}, "net bearing pressure: gross less the overburden removed")
 	if h0 := k.g.Flood(); h0 > 0 {
-		k.warn(cs, "water-above-ground", trace.SevWarning, trace.Ref{},
+		k.warn(cs, "water-above-ground", trace.SevCaution, trace.Ref{},
 			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; q_net = q − σ_v0 is right only when the SLS load includes the water on the footing.",
 			val("h_w0", h0, "m"))
 	}
@@ -307,7 +307,7 @@ func (k *calc) depth() (float64, error) {
 	switch {
 	case !found:
 		k.add(cs, "z_inf", nil, nil, z, "m", trace.Ref{}, "depth of influence: search limit reached")
-		k.warn(cs, "depth-cap", trace.SevWarning, trace.Ref{}, fmt.Sprintf("Δσ did not fall to %g σ′_v0 within %g m below the base; the zone is cut there", ratio, capZ))
+		k.warn(cs, "depth-cap", trace.SevCaution, trace.Ref{}, fmt.Sprintf("Δσ did not fall to %g σ′_v0 within %g m below the base; the zone is cut there", ratio, capZ))
 	case z < minZ:
 		k.add(cs, "z_inf", fAdd(fS("D"), fS("B")), []trace.Value{val("D", D, "m"), val("B", f.B, "m")}, minZ, "m", trace.Ref{}, "depth of influence: not less than one width below the base (common practice)")
 		z = minZ

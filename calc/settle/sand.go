@@ -98,7 +98,7 @@ func (k *calc) schmertmann() error {
 	for _, lr := range k.layerRanges() {
 		l := k.g.Layers[lr.layer]
 		if l.Fine() && !warnedFine {
-			k.warn(cs, "method-soil", trace.SevCaution, ref, fmt.Sprintf("%s is fine-grained: Schmertmann's method is for sands; its long-term settlement is not covered", k.layerName(lr.layer)))
+			k.warn(cs, "method-soil", trace.SevWarning, ref, fmt.Sprintf("%s is fine-grained: Schmertmann's method is for sands; its long-term settlement is not covered", k.layerName(lr.layer)))
 			warnedFine = true
 		}
 		var E float64
@@ -108,7 +108,7 @@ func (k *calc) schmertmann() error {
 		case l.Qc.Set:
 			E = kq * l.Qc.V
 		default:
-			k.warn(cs, "no-stiffness", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no E′ or q_c given: the layer adds no settlement", k.layerName(lr.layer)))
+			k.warn(cs, "no-stiffness", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no E′ or q_c given: the layer adds no settlement", k.layerName(lr.layer)))
 			k.unverified(fmt.Sprintf("%s has no E′ or q_c for Schmertmann's method", k.layerName(lr.layer)))
 			continue
 		}
@@ -198,7 +198,7 @@ func (k *calc) burland() error {
 		if l.Fine() && g.Bottom(i) > D {
 			H = math.Max(0, l.Top-D)
 			if H == 0 {
-				k.warn(cs, "method-soil", trace.SevCaution, ref, fmt.Sprintf("%s, the founding layer, is fine-grained: Burland & Burbidge's method is for sand and gravel", k.layerName(i)))
+				k.warn(cs, "method-soil", trace.SevWarning, ref, fmt.Sprintf("%s, the founding layer, is fine-grained: Burland & Burbidge's method is for sand and gravel", k.layerName(i)))
 				H = math.Inf(1)
 			}
 			break
@@ -327,7 +327,7 @@ func (k *calc) burland() error {
 	if bb.QEff <= 0 {
 		bb.OC = true
 		k.add(cs, "s_i", nil, nil, 0, "mm", ref, "q′ ≤ 0: the base is not loaded in effective stress; no settlement")
-		k.warn(cs, "bb-uplift", trace.SevWarning, ref, "the gross effective bearing pressure q′ is not positive (the pore pressure at the base exceeds the applied pressure): Burland & Burbidge's method gives no settlement and heave is not modelled", val("q'", bb.QEff, "kPa"))
+		k.warn(cs, "bb-uplift", trace.SevCaution, ref, "the gross effective bearing pressure q′ is not positive (the pore pressure at the base exceeds the applied pressure): Burland & Burbidge's method gives no settlement and heave is not modelled", val("q'", bb.QEff, "kPa"))
 	} else if bb.QEff <= sp {
 		bb.OC = true
 		si = bb.Fs * bb.Fl * bb.QEff / 1e3 * math.Pow(B, 0.7) * bb.Ic / 3 * 1e-3

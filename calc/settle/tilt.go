@@ -203,7 +203,7 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 	}
 	z := f.D + 2*amax // twice the side along the tilt below the base (common practice)
 	if g.At(z) != li {
-		tr.Warn(trace.Caution{Code: "tilt-layered", Severity: trace.SevWarning, Case: cs, Ref: trace.Ref{Source: PoulosDavis1974},
+		tr.Warn(trace.Caution{Code: "tilt-layered", Severity: trace.SevCaution, Case: cs, Ref: trace.Ref{Source: PoulosDavis1974},
 			Message: fmt.Sprintf("the tilt assumes a homogeneous elastic half-space with the founding layer's %s; other layers lie within %.3g m of ground level, so the tilt is only indicative", t.Kind, z)})
 	}
 	tr.Warn(trace.Caution{Code: "tilt-rigid", Severity: trace.SevNote, Case: cs, Ref: refC,
