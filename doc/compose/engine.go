@@ -209,9 +209,10 @@ func (c *composer) sources(b *eval.Block) {
 // checkBlock prints an engine check (one that entered the check register)
 // with both sides, named by their symbols.
 func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
-	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: valueNode(ch.L, ch.Unit, -1), Rel: ch.Op,
-		Right: eqn.Sym{Name: right}, RightValue: valueNode(ch.R, ch.Unit, -1),
-		Util: ch.Util, OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
+	lt, rt := ch.Values()
+	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: withUnit(numberNode(lt), ch.Unit.Name), Rel: relText[ch.Relation()],
+		Right: eqn.Sym{Name: right}, RightValue: withUnit(numberNode(rt), ch.Unit.Name),
+		Util: ch.Util, UtilText: ch.UtilText(), OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
 }
 
 // findCheck returns the block's check whose text starts with prefix.

@@ -45,7 +45,7 @@ func (c *composer) checkRegister() layout.Sheet {
 	for i, ch := range c.res.Checks {
 		util := "—"
 		if ch.HasUtil() {
-			util = fmt.Sprintf("%.2f", ch.Util)
+			util = ch.UtilText()
 		}
 		verdict := txt("OK")
 		if !ch.OK {
@@ -94,7 +94,7 @@ func (c *composer) inputRegister() layout.Sheet {
 			if !y.Input {
 				continue
 			}
-			val := layout.Run{Math: valueNode(y.Q, y.Unit, y.Decimals)}
+			val := layout.Run{Math: symbolNode(y, y.Unit, y.Decimals)}
 			note := c.noteRuns(s, y.Note)
 			if y.Override != nil {
 				note = append([]layout.Run{bold("VARIANT (--set " + y.Override.Arg + ") ")}, note...)

@@ -137,7 +137,7 @@ func (c *composer) inlines(s *eval.Sheet, in []sheet.Inline) []layout.Run {
 			if x.Ref != nil && x.Ref.Display != nil {
 				dec = x.Ref.Display.Decimals
 			}
-			out = append(out, layout.Run{Math: valueNode(y.Q, it.Unit, dec)})
+			out = append(out, layout.Run{Math: symbolNode(y, it.Unit, dec)})
 		case *sheet.Cite:
 			if r := c.sheetRef(s, x.Key.Value, true); r != nil {
 				out = append(out, c.citeRun(r))
