@@ -1,6 +1,9 @@
 package units
 
-import "strconv"
+import (
+	"math"
+	"strconv"
+)
 
 // maxExtra bounds the digits Apart and Beside add: values closer than
 // this cannot be told apart in print and are shown at the last attempt.
@@ -31,7 +34,8 @@ func Apart(l, r float64, u Unit, dl, dr int) (ls, rs string) {
 // Beside formats v (SI, in u with decimals d as in Format) so that the
 // printed number stands on the same side of each bound as v does: a
 // value below a bound never prints equal to it or above it, one above
-// never equal or below, one equal to it prints equal. Bounds are SI
+// never equal or below, one equal to it prints equal to it (25 mm shown in
+// m to two decimals prints 0.025, not 0.03). Bounds are SI
 // values of v's dimension, the values it is compared with; digits are
 // added one at a time until every bound holds.
 func Beside(v float64, bounds []float64, u Unit, d int) string {
@@ -43,8 +47,11 @@ func Beside(v float64, bounds []float64, u Unit, d int) string {
 		}
 		ok := true
 		for _, b := range bounds {
-			want := cmp(v, b)
-			if want != 0 && want != 2 && cmp(x, shown(b, u)) != want {
+			want, bb := cmp(v, b), shown(b, u)
+			if want == 0 && math.Abs(x-bb) <= 2e-3*math.Abs(bb) {
+				continue // equal: printed equal to about the automatic rule's precision (0.333 for 1/3)
+			}
+			if want != 2 && cmp(x, bb) != want {
 				ok = false
 				break
 			}

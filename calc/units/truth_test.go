@@ -105,3 +105,20 @@ func TestRelation(t *testing.T) {
 		}
 	}
 }
+
+func TestBesideEqual(t *testing.T) {
+	m := units.MustParse("m")
+	for _, r := range []struct {
+		v, b float64
+		d    int
+		want string
+	}{
+		{0.025, 0.025, 2, "0.025"},      // equal prints equal, not 0.03
+		{1.0 / 3, 1.0 / 3, -1, "0.333"}, // equal: no digits added for a value equal to its bound
+		{0.02459, 0.025, 2, "0.02"},
+	} {
+		if got := units.Beside(r.v, []float64{r.b}, m, r.d); got != r.want {
+			t.Errorf("Beside(%g, %g, %d) = %q, want %q", r.v, r.b, r.d, got, r.want)
+		}
+	}
+}
