@@ -129,7 +129,7 @@ type Check struct {
 	Span   source.Span
 	Sheet  *Sheet
 	Stmt   *expr.Check
-	Anchor string // a unique name for links ("check-3"), by register order
+	Anchor string     // a unique name for links ("check-3"), by register order
 	Sides  [2]*Symbol // the symbol each side is, when it is a lone symbol (else nil)
 	Uses   []*Symbol
 	Cites  []string
