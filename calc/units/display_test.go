@@ -119,7 +119,7 @@ func TestFormat(t *testing.T) {
 		{-0.0001, m, 2, "0.00"},
 		{0.0254, mm, 1, "25.4"},
 		{0.02459, mm, -1, "24.6"},   // mm: to 0.1 mm
-		{0.024, mm, -1, "24"},       // trailing zero dropped
+		{0.024, mm, -1, "24.0"},     // the tenth kept
 		{1.23456, mm, -1, "1234.6"}, // 0.1 mm whatever the size
 		{0.000123, mm, -1, "0.12"},  // two significant figures below 1 mm
 		{2.4, m, 2, "2.40"},

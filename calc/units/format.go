@@ -10,11 +10,12 @@ import (
 // decimal places; decimals < 0 chooses them by the display-precision rules:
 //
 //	quantity                     automatic precision
-//	millimetres (mm)             0.1 mm ("24.6"); two significant figures below 1 mm ("0.12")
+//	millimetres (mm)             0.1 mm, the tenth kept ("24.6", "7.0", "25.0"); two
+//	                             significant figures below 1 mm ("0.12")
 //	everything else              four significant figures from 1 up (12350, 1250, 245.7,
 //	                             24.57, 2.457), three below 1 (0.246, 0.00123)
 //
-// Trailing zeros are dropped (2.4, 18), and an exponent is used only
+// Trailing zeros are otherwise dropped (2.4, 18), and an exponent is used only
 // outside [1e-4, 1e7): "1.235e8", "4.5e-6". Negative zero prints as "0";
 // NaN and infinities as "NaN", "Inf", "-Inf". Utilisations are printed by
 // Utilisation (two decimals), and a value printed against a value it is
@@ -42,7 +43,12 @@ func format(v float64, u Unit, decimals, extra int) string {
 		return "0"
 	}
 	if u.Name == "mm" && ax >= 1 && ax < 1e7 {
-		return clean(trimZeros(strconv.FormatFloat(x, 'f', 1+extra, 64)))
+		// to 0.1 mm, the tenth kept ("7.0"); digits added beyond it trimmed
+		s := strconv.FormatFloat(x, 'f', 1+extra, 64)
+		for extra > 0 && strings.HasSuffix(s, "0") {
+			s, extra = s[:len(s)-1], extra-1
+		}
+		return clean(s)
 	}
 	if ax < 1e-4 || ax >= 1e7 {
 		s := strconv.FormatFloat(x, 'e', 3+extra, 64)

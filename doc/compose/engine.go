@@ -65,6 +65,9 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 		note = append(note, ref...)
 	}
 	res := siNode(st.Value, st.Unit)
+	if isUtil(st.Symbol, st.Unit) {
+		res = numberNode(units.Utilisation(st.Value)) // two decimals, as in the check line and the register
+	}
 	if st.Formula == nil {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
@@ -183,6 +186,12 @@ func (o *engineOut) caution(ca trace.Caution, where string) {
 	}
 	o.add(&layout.Anchor{Pos: o.p, Name: a},
 		&layout.Caution{Pos: o.p, Severity: sev, Body: []layout.Block{&layout.Para{Pos: o.p, Runs: body}}})
+}
+
+// isUtil reports whether an engine step is a utilisation (util, util_s,
+// util_h…): a pure number printed by units.Utilisation.
+func isUtil(symbol, unit string) bool {
+	return unit == "" && (symbol == "util" || strings.HasPrefix(symbol, "util_"))
 }
 
 // groups lists the case names of tr in order of first appearance, with
