@@ -16,6 +16,10 @@ const (
 	sizeTitle = 8.0
 	headLen   = 5.0 // arrowhead length
 	headHalf  = 2.0 // arrowhead half-width
+
+	glWidth       = 0.9 // the ground line's stroke
+	hatchReach    = 4.0 // how far its hatching reaches below it
+	boundaryWidth = 0.5 // a layer boundary's stroke
 )
 
 var (
