@@ -109,7 +109,7 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 	start := len(c.t.Steps)
 	ld.Record(c.t, c.acts, name, c.uF, c.uM)
 	if ld.V <= 0 {
-		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		c.warn("uplift", trace.SevWarning, ref652, fmt.Sprintf("%s: V_d = %.1f %s is not a downward load: the base is in tension or lifts, so bearing does not apply; check uplift and overturning separately.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}
 	g, ok := c.geometry(ld, false)
@@ -255,7 +255,7 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 		lim6, lim3, edge, what = f.B/6, f.B/3, f.B/2, "B/6 (middle third)"
 	}
 	if e >= edge {
-		c.warn("ecc-out", trace.SevCaution, ref654, fmt.Sprintf("%s: the resultant lies at or outside the edge of the base (e = %.3f m): the footing overturns and has no bearing resistance.", c.cas, e), val("e", e, "m"))
+		c.warn("ecc-out", trace.SevWarning, ref654, fmt.Sprintf("%s: the resultant lies at or outside the edge of the base (e = %.3f m): the footing overturns and has no bearing resistance.", c.cas, e), val("e", e, "m"))
 		return g, false
 	}
 	if !quiet {
@@ -264,9 +264,9 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 			if f.Shape == site.Circle {
 				lim = "0.6 r"
 			}
-			c.warn("ecc-b3", trace.SevCaution, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
+			c.warn("ecc-b3", trace.SevWarning, ref654, fmt.Sprintf("%s: eccentricity beyond %s: EN 1997-1 6.5.4(1)P asks for special precautions and a careful review of construction tolerances.", c.cas, lim), val("e", e, "m"), val("e_lim", lim3, "m"))
 		} else if e > lim6 {
-			c.warn("ecc-b6", trace.SevWarning, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
+			c.warn("ecc-b6", trace.SevCaution, trace.Ref{Source: SrcMeyerhof1953, Clause: "eccentric loads"}, fmt.Sprintf("%s: eccentricity beyond %s: part of the base lifts off the ground under a linear pressure distribution.", c.cas, what), val("e", e, "m"), val("e_lim", lim6, "m"))
 		}
 	}
 	switch {
@@ -291,7 +291,7 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 	if g.H > 0 {
 		c.step("beta", fBeta, math.Atan(g.H/ld.V), "deg", trace.Ref{}, "inclination of the load from the vertical", val("H_d", g.H, c.uF), vV)
 		if !quiet && g.H/ld.V > 0.3 {
-			c.warn("hv-large", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
+			c.warn("hv-large", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
 		}
 		if !g.strip && (c.opt.Method == EC7 || c.opt.Method == Vesic) {
 			c.theta(&g, ld)

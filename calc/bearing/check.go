@@ -161,7 +161,7 @@ func (c *calc) common() {
 		c.warn("da3-actions", trace.SevNote, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.4.4"}, "DA3: all actions on the footing are taken as structural actions (set A1).")
 	}
 	if names := design.PsiDefaulted(c.acts); len(names) > 0 {
-		c.warn("psi0-default", trace.SevWarning, trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1"},
+		c.warn("psi0-default", trace.SevCaution, trace.Ref{Source: trace.EN1990, Clause: "Annex A1, Table A1.1"},
 			fmt.Sprintf("No ψ0 given for %s: ψ0 = %g taken when not leading (EN 1990 Table A1.1, imposed loads categories A–D). State ψ0 for wind, snow or storage loads.", strings.Join(names, ", "), c.ap.Psi0()),
 			val("psi_0", c.ap.Psi0(), ""))
 	}
@@ -174,16 +174,16 @@ func (c *calc) common() {
 	}
 	c.gEffK = c.unitWeight("gamma'_k", l, "gamma", "gamma_sat", f.D, "D", f.B, "B")
 	if l.Phi.Set && l.Phi.V > 40*degr {
-		c.warn("phi-high", trace.SevWarning, trace.Ref{}, fmt.Sprintf("φ′ = %.1f° of %s is above about 40°: the bearing factors grow very fast there and the resistance is sensitive to the value chosen.", l.Phi.V/degr, layerName(g, c.fi)),
+		c.warn("phi-high", trace.SevCaution, trace.Ref{}, fmt.Sprintf("φ′ = %.1f° of %s is above about 40°: the bearing factors grow very fast there and the resistance is sensitive to the value chosen.", l.Phi.V/degr, layerName(g, c.fi)),
 			val("phi'_k", l.Phi.V, "deg"))
 	}
 	c.layers()
 	c.localShear()
 	if f.Alpha != 0 && (c.opt.Method == Meyerhof || c.opt.Method == Terzaghi) {
-		c.warn("base-tilt", trace.SevWarning, trace.Ref{}, fmt.Sprintf("The %s method has no base-inclination factors: the inclination of the base is not taken into account. Use ec7, vesic or hansen.", c.opt.Method))
+		c.warn("base-tilt", trace.SevCaution, trace.Ref{}, fmt.Sprintf("The %s method has no base-inclination factors: the inclination of the base is not taken into account. Use ec7, vesic or hansen.", c.opt.Method))
 	}
 	if c.opt.Method == Terzaghi && c.anyH() {
-		c.warn("terzaghi-incl", trace.SevCaution, refMey63, "Terzaghi (1943) gives no inclination factors: Meyerhof's (1963) i_c = i_q = (1 − β/90°)², i_γ = (1 − β/φ′)² are applied to the inclined load.")
+		c.warn("terzaghi-incl", trace.SevWarning, refMey63, "Terzaghi (1943) gives no inclination factors: Meyerhof's (1963) i_c = i_q = (1 − β/90°)², i_γ = (1 − β/φ′)² are applied to the inclined load.")
 	}
 	if c.opt.Method == Terzaghi && f.Shape == site.Circle {
 		c.warn("terzaghi-circle", trace.SevNote, refTerz, "Terzaghi circle: with a central load the diameter is used with s_c = 1.3, s_γ = 0.6; with an eccentric load the equivalent rectangle of the effective area is used with the rectangular factors.")

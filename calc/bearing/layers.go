@@ -82,7 +82,7 @@ func (c *calc) layers() {
 	for _, i := range zone {
 		l := g.Layers[i]
 		if !l.Phi.Set && !(l.Fine() && l.Cu.Set) {
-			c.warn("layer-no-strength", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s lies within 2B below the base but has neither φ′ nor c_u: it cannot be checked.", layerName(g, i)))
+			c.warn("layer-no-strength", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s lies within 2B below the base but has neither φ′ nor c_u: it cannot be checked.", layerName(g, i)))
 		}
 	}
 	if best < 0 {
@@ -91,11 +91,11 @@ func (c *calc) layers() {
 	c.weak = best
 	if c.opt.TwoLayer == No {
 		c.weak = -1
-		c.warn("weaker-layer", trace.SevCaution, refMH, fmt.Sprintf("%s within 2B below the base is weaker than the founding layer (q_2/q_1 = %.2f) but two_layer = no: it is not checked and the resistance may be unsafe.", layerName(g, best), bestR),
+		c.warn("weaker-layer", trace.SevWarning, refMH, fmt.Sprintf("%s within 2B below the base is weaker than the founding layer (q_2/q_1 = %.2f) but two_layer = no: it is not checked and the resistance may be unsafe.", layerName(g, best), bestR),
 			val("r_q", bestR, ""))
 		return
 	}
-	c.warn("weaker-layer", trace.SevWarning, refMH, fmt.Sprintf("%s (top %.2f m) within 2B below the base is weaker than the founding layer (characteristic q_2/q_1 = %.2f): checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", layerName(g, best), g.Layers[best].Top, bestR),
+	c.warn("weaker-layer", trace.SevCaution, refMH, fmt.Sprintf("%s (top %.2f m) within 2B below the base is weaker than the founding layer (characteristic q_2/q_1 = %.2f): checked by Meyerhof & Hanna (1978) punching shear, capped by the upper layer's own resistance, with a load-spread check beside it.", layerName(g, best), g.Layers[best].Top, bestR),
 		val("r_q", bestR, ""))
 }
 
@@ -137,19 +137,19 @@ func (c *calc) localShear() {
 	switch c.opt.LocalShear {
 	case Yes:
 		c.local = true
-		c.warn("local-shear", trace.SevWarning, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used for "+ln+".")
+		c.warn("local-shear", trace.SevCaution, refLocal, "local_shear = yes: Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used for "+ln+".")
 	case No:
 		if loose {
-			c.warn("local-shear-off", trace.SevCaution, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
+			c.warn("local-shear-off", trace.SevWarning, refMode, fmt.Sprintf("local_shear = no, but %s shows %s is %s, where local or punching shear governs (Vesić 1973); general-shear resistance may be unsafe.", why, ln, looseWord), vals...)
 		}
 	default:
 		switch {
 		case loose:
 			c.local = true
-			c.warn("local-shear", trace.SevWarning, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used.", why, ln, looseWord), vals...)
+			c.warn("local-shear", trace.SevCaution, refMode, fmt.Sprintf("local_shear = auto: %s shows %s is %s (EN ISO 14688-2), in the local or punching shear region of Vesić's (1973) chart, so Terzaghi's (1943) reduced strengths c* = 2c/3, tan φ* = (2/3) tan φ are used.", why, ln, looseWord), vals...)
 			c.t.Cite(ref.Source)
 		case trans:
-			c.warn("local-shear-transitional", trace.SevWarning, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)
+			c.warn("local-shear-transitional", trace.SevCaution, refMode, fmt.Sprintf("%s shows %s is %s (EN ISO 14688-2): Vesić (1973) places such ground between general and local shear, more so with embedment. General shear is assumed; consider local_shear = yes.", why, ln, transWord), vals...)
 			c.t.Cite(ref.Source)
 		case why == "" && !l.Fine():
 			c.warn("density-unknown", trace.SevNote, refMode, "local_shear = auto: no density (I_D or N) is given for "+ln+", so general shear is assumed.")
@@ -174,12 +174,12 @@ func (c *calc) drainages() []Drainage {
 			c.warn("undrained-coarse", trace.SevNote, trace.Ref{}, layerName(c.g, c.fi)+" is coarse-grained: it acts drained in the undrained (short-term) case.")
 		}
 		if fine && fl.Phi.Set {
-			c.warn("drained-missing", trace.SevWarning, trace.Ref{}, "drainage = undrained: the long-term (drained) check of "+layerName(c.g, c.fi)+" is not made.")
+			c.warn("drained-missing", trace.SevCaution, trace.Ref{}, "drainage = undrained: the long-term (drained) check of "+layerName(c.g, c.fi)+" is not made.")
 		}
 		return []Drainage{Undrained}
 	case Drained:
 		if fine || fineZone {
-			c.warn("undrained-missing", trace.SevCaution, trace.Ref{}, "drainage = drained: the short-term (undrained) check of the fine-grained ground is not made; for saturated clay it usually governs.")
+			c.warn("undrained-missing", trace.SevWarning, trace.Ref{}, "drainage = drained: the short-term (undrained) check of the fine-grained ground is not made; for saturated clay it usually governs.")
 		}
 		return []Drainage{Drained}
 	case Both:
@@ -187,13 +187,13 @@ func (c *calc) drainages() []Drainage {
 	}
 	if fine && fl.Cu.Set {
 		if !fl.Phi.Set {
-			c.warn("drained-missing", trace.SevWarning, trace.Ref{}, "No φ′ for the fine-grained "+layerName(c.g, c.fi)+": only the undrained (short-term) check is made.")
+			c.warn("drained-missing", trace.SevCaution, trace.Ref{}, "No φ′ for the fine-grained "+layerName(c.g, c.fi)+": only the undrained (short-term) check is made.")
 			return []Drainage{Undrained}
 		}
 		return []Drainage{Undrained, Drained}
 	}
 	if fine {
-		c.warn("undrained-missing", trace.SevCaution, trace.Ref{}, "No c_u for the fine-grained "+layerName(c.g, c.fi)+": the short-term (undrained) check of the founding layer cannot be made.")
+		c.warn("undrained-missing", trace.SevWarning, trace.Ref{}, "No c_u for the fine-grained "+layerName(c.g, c.fi)+": the short-term (undrained) check of the founding layer cannot be made.")
 	}
 	if fineZone && fl.Phi.Set {
 		return []Drainage{Undrained, Drained}

@@ -291,7 +291,7 @@ func (c *calc) resistU(m Method, F *forms, s soil, g *geo) float64 {
 	}
 	if F == fMain && g.H > g.Ap*s.cu {
 		c.hcLim = true
-		c.warn("hc-limit", trace.SevCaution, refD3, "H_d exceeds A′c_u,d: the base slides before it can bear (EN 1997-1 D.3 needs H ≤ A′c_u); the check fails.",
+		c.warn("hc-limit", trace.SevWarning, refD3, "H_d exceeds A′c_u,d: the base slides before it can bear (EN 1997-1 D.3 needs H ≤ A′c_u); the check fails.",
 			vH, val("A'c_u_d", g.Ap*s.cu, c.uF))
 	}
 	shape := func(f trace.Expr, v float64, note string) float64 {

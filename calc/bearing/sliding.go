@@ -47,7 +47,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 	ld.Record(c.t, c.acts, name, c.uF, c.uM)
 	sc := SlideCase{Name: name, Combination: ld.Name, Drainage: d}
 	if ld.V <= 0 {
-		c.warn("uplift", trace.SevCaution, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
+		c.warn("uplift", trace.SevWarning, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}
 	H := math.Hypot(ld.HB, ld.HL)

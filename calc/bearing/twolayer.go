@@ -136,7 +136,7 @@ func (c *calc) twoLayer(ld design.Load, d Drainage, g *geo, top soil, qt float64
 			kt := c.step("K_p_tan_delta", nil, KpTanDelta(top.phi), "", refKs, "K_p·tanδ of the upper layer (BR 470 Table A2, log-linear in φ′)", vphi)
 			ks = c.step("K_s", div(sym("K_p_tan_delta"), fn("tan", sym("phi'_d"))), kt/math.Tan(top.phi), "", refKs, "punching shear coefficient", val("K_p_tan_delta", kt, ""), vphi)
 			if top.phi < 35*degr-1e-9 || top.phi > 45*degr+1e-9 {
-				c.warnOnce("ks-extrapolated", trace.SevWarning, refKs, fmt.Sprintf("φ′_d = %.1f° (first case) lies outside the 35°–45° of BR 470 Table A2: K_p·tanδ is extrapolated; enter K_s read from Meyerhof & Hanna's chart (option K_s) to replace it.", top.phi/degr), vphi)
+				c.warnOnce("ks-extrapolated", trace.SevCaution, refKs, fmt.Sprintf("φ′_d = %.1f° (first case) lies outside the 35°–45° of BR 470 Table A2: K_p·tanδ is extrapolated; enter K_s read from Meyerhof & Hanna's chart (option K_s) to replace it.", top.phi/degr), vphi)
 			} else {
 				c.warnOnce("ks-br470", trace.SevNote, refKs, "K_s comes from BR 470 Table A2 (K_p·tanδ), plinth's reading of the punching coefficient; it is not read from Meyerhof & Hanna's (1978) chart for this q_2/q_1. For a critical platform read K_s from the chart and enter it (option K_s).", vphi)
 			}
@@ -242,6 +242,6 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 	}
 	tl.SpreadQEd, tl.SpreadQRd, tl.SpreadUtil, tl.SpreadOK = qEd, qRd, u, u <= 1+1e-12
 	if !tl.SpreadOK {
-		c.warn("spread-fails", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %s: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, units.Utilisation(u)), val("util_s", u, ""))
+		c.warn("spread-fails", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %s: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, units.Utilisation(u)), val("util_s", u, ""))
 	}
 }

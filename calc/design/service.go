@@ -149,7 +149,7 @@ func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF str
 			}
 			if !given {
 				note += " (not given: default)"
-				t.Warn(trace.Caution{Code: "psi-default", Severity: trace.SevWarning, Ref: pref,
+				t.Warn(trace.Caution{Code: "psi-default", Severity: trace.SevCaution, Ref: pref,
 					Message: fmt.Sprintf("%s gives no %s; %g is used", a.Name, map[bool]string{true: "ψ2", false: "ψ0"}[kind == QuasiPermanent], best.Factor[i])})
 			}
 			t.Add(trace.Step{Symbol: psi, Value: best.Factor[i], Ref: pref, Note: note})

@@ -245,7 +245,7 @@ func (k *calc) finish() {
 	k.add(cs, "util", fDiv(fS("s_total"), fS("s_lim")), []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, r.Util, "", trace.Ref{}, "settlement against the limit")
 	r.OK = r.Util <= 1
 	if !r.OK {
-		k.warn(cs, "limit", trace.SevCaution, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
+		k.warn(cs, "limit", trace.SevWarning, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
 	}
 	r.symbols()
 }

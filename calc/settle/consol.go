@@ -33,7 +33,7 @@ func (k *calc) consolidation(mode Method) error {
 			}
 			switch {
 			case l.Fine():
-				k.warn(cs, "no-consolidation", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: fine-grained but no m_v or C_c given: its consolidation settlement is not computed", name))
+				k.warn(cs, "no-consolidation", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: fine-grained but no m_v or C_c given: its consolidation settlement is not computed", name))
 			case mode == Consolidation:
 				k.warn(cs, "incompressible", trace.SevNote, trace.Ref{}, fmt.Sprintf("%s: coarse-grained with no m_v: taken as incompressible in the consolidation method", name))
 			}
@@ -113,7 +113,7 @@ func (k *calc) consolidation(mode Method) error {
 			k.warn(cs, "cc-no-e0", trace.SevNote, trace.Ref{}, fmt.Sprintf("%s: C_c given without e_0, so m_v is used", name))
 		}
 		if low {
-			k.warn(cs, "sigma-p-low", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: σ′_p is below σ′_v0 in part of the layer (under-consolidated as given); σ′_p = σ′_v0 used there", name))
+			k.warn(cs, "sigma-p-low", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: σ′_p is below σ′_v0 in part of the layer (under-consolidated as given); σ′_p = σ′_v0 used there", name))
 		}
 	}
 	return nil

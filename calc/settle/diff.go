@@ -74,10 +74,10 @@ func Differential(in DiffInput) (*Diff, error) {
 	vals := []trace.Value{val("beta", d.Beta, "")}
 	switch {
 	case d.Beta > BetaStructure:
-		t.Warn(trace.Caution{Code: "beta-structure", Severity: trace.SevCaution, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/150: structural damage"},
+		t.Warn(trace.Caution{Code: "beta-structure", Severity: trace.SevWarning, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/150: structural damage"},
 			Message: fmt.Sprintf("angular distortion 1/%.0f exceeds 1/150, at which Skempton & MacDonald (1956) found structural damage (about the ultimate limit state in EN 1997-1 Annex H)", 1/d.Beta)})
 	case d.Beta > BetaCracking:
-		t.Warn(trace.Caution{Code: "beta-cracking", Severity: trace.SevWarning, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/300: cracking of panel walls"},
+		t.Warn(trace.Caution{Code: "beta-cracking", Severity: trace.SevCaution, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/300: cracking of panel walls"},
 			Message: fmt.Sprintf("angular distortion 1/%.0f exceeds 1/300, at which Skempton & MacDonald (1956) found cracking in panel walls", 1/d.Beta)})
 	case d.Beta > BetaSafe:
 		t.Warn(trace.Caution{Code: "beta-safe", Severity: trace.SevNote, Case: cs, Values: vals, Ref: trace.Ref{Source: Bjerrum1963, Clause: "1/500"},

@@ -180,7 +180,7 @@ func (k *calc) elastic(combined bool) {
 		E, nu, kind, ok := k.modulus(i, combined)
 		if !ok {
 			var code, msg string
-			sev := trace.SevCaution
+			sev := trace.SevWarning
 			switch {
 			case l.Fine() && combined && hasConsol(l):
 				code, msg, sev = "no-eu", fmt.Sprintf("%s: no E_u given, so its immediate (undrained) settlement is not included", k.layerName(i)), trace.SevNote

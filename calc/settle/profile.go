@@ -282,7 +282,7 @@ func (k *calc) depth() (float64, error) {
 	switch {
 	case !found:
 		k.add(cs, "z_inf", nil, nil, z, "m", trace.Ref{}, "depth of influence: search limit reached")
-		k.warn(cs, "depth-cap", trace.SevWarning, trace.Ref{}, fmt.Sprintf("Δσ did not fall to %g σ′_v0 within %g m below the base; the zone is cut there", ratio, capZ))
+		k.warn(cs, "depth-cap", trace.SevCaution, trace.Ref{}, fmt.Sprintf("Δσ did not fall to %g σ′_v0 within %g m below the base; the zone is cut there", ratio, capZ))
 	case z < minZ:
 		k.add(cs, "z_inf", fAdd(fS("D"), fS("B")), []trace.Value{val("D", D, "m"), val("B", f.B, "m")}, minZ, "m", trace.Ref{}, "depth of influence: not less than one width below the base (common practice)")
 		z = minZ

@@ -98,7 +98,7 @@ func (k *calc) schmertmann() error {
 	for _, lr := range k.layerRanges() {
 		l := k.g.Layers[lr.layer]
 		if l.Fine() && !warnedFine {
-			k.warn(cs, "method-soil", trace.SevCaution, ref, fmt.Sprintf("%s is fine-grained: Schmertmann's method is for sands; its long-term settlement is not covered", k.layerName(lr.layer)))
+			k.warn(cs, "method-soil", trace.SevWarning, ref, fmt.Sprintf("%s is fine-grained: Schmertmann's method is for sands; its long-term settlement is not covered", k.layerName(lr.layer)))
 			warnedFine = true
 		}
 		var E float64
@@ -108,7 +108,7 @@ func (k *calc) schmertmann() error {
 		case l.Qc.Set:
 			E = kq * l.Qc.V
 		default:
-			k.warn(cs, "no-stiffness", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no E′ or q_c given: the layer adds no settlement", k.layerName(lr.layer)))
+			k.warn(cs, "no-stiffness", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no E′ or q_c given: the layer adds no settlement", k.layerName(lr.layer)))
 			continue
 		}
 		for j := lr.first; j < lr.end; j++ {
@@ -197,7 +197,7 @@ func (k *calc) burland() error {
 		if l.Fine() && g.Bottom(i) > D {
 			H = math.Max(0, l.Top-D)
 			if H == 0 {
-				k.warn(cs, "method-soil", trace.SevCaution, ref, fmt.Sprintf("%s, the founding layer, is fine-grained: Burland & Burbidge's method is for sand and gravel", k.layerName(i)))
+				k.warn(cs, "method-soil", trace.SevWarning, ref, fmt.Sprintf("%s, the founding layer, is fine-grained: Burland & Burbidge's method is for sand and gravel", k.layerName(i)))
 				H = math.Inf(1)
 			}
 			break

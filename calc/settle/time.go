@@ -125,7 +125,7 @@ func (k *calc) timing() {
 		name := lr.Name
 		cs := name + ": time"
 		if !l.Cv.Set {
-			k.warn(cs, "no-cv", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no c_v given: its consolidation settlement is shown as complete at every time, and it has no t_50 or t_90", name))
+			k.warn(cs, "no-cv", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no c_v given: its consolidation settlement is shown as complete at every time, and it has no t_50 or t_90", name))
 			continue
 		}
 		top := math.Max(l.Top, k.f.D)
@@ -154,7 +154,7 @@ func (k *calc) timing() {
 		if k.full {
 			if unbounded {
 				k.add(cs, ix("H_", i), fSub(fS("z_inf"), fS("z_top")), []trace.Value{val("z_inf", bot, "m"), val("z_top", top, "m")}, H, "m", trace.Ref{}, "drainage thickness: the layer has no base in the ground model, taken to the bottom of the zone")
-				k.warn(cs, "unbounded-layer", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no base given, so its drainage thickness is taken to the bottom of the zone of influence; give the layer below to fix the drainage path", name))
+				k.warn(cs, "unbounded-layer", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no base given, so its drainage thickness is taken to the bottom of the zone of influence; give the layer below to fix the drainage path", name))
 			} else {
 				k.add(cs, ix("H_", i), fSub(fS("z_bot"), fS("z_top")), []trace.Value{val("z_bot", bot, "m"), val("z_top", top, "m")}, H, "m", trace.Ref{}, "thickness of the consolidating layer below the base")
 			}
@@ -178,7 +178,7 @@ func (k *calc) timing() {
 			}
 			k.add(cs, ix("H_dr,", i), hx, []trace.Value{val(ix("H_", i), H, "m")}, hdr, "m", refU, how)
 			if k.c.Drainage == DrainAuto && !topDrains && !botDrains {
-				k.warn(cs, "no-drain", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no free-draining boundary identified: one-way drainage over its thickness assumed", name))
+				k.warn(cs, "no-drain", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no free-draining boundary identified: one-way drainage over its thickness assumed", name))
 			}
 		}
 		for _, p := range []struct {
@@ -268,7 +268,7 @@ func (k *calc) secondary() {
 		name := lr.Name
 		cs := name + ": secondary compression"
 		if !l.E0.Set {
-			k.warn(cs, "secondary-no-e0", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: C_α is given without e_0: secondary compression not computed", name))
+			k.warn(cs, "secondary-no-e0", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: C_α is given without e_0: secondary compression not computed", name))
 			continue
 		}
 		i := lr.Layer
@@ -285,7 +285,7 @@ func (k *calc) secondary() {
 					[]trace.Value{val("T_95", T, ""), val(ix("H_dr,", i), lr.Hdr, "m"), val(ix("c_v,", i), lr.Cv, "m2/yr")}, tp, "yr", refU, "end of primary consolidation taken at U = 95 % (common practice)")
 			}
 		default:
-			k.warn(cs, "secondary-no-tp", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: no c_v and no t_p given: secondary compression not computed", name))
+			k.warn(cs, "secondary-no-tp", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no c_v and no t_p given: secondary compression not computed", name))
 			continue
 		}
 		lr.Tp = site.Some(tp)

@@ -214,13 +214,14 @@ type Check struct {
 	Anchor     string // the check register links here
 }
 
-// Severity is a caution's heading word.
+// Severity is a caution's heading word, lowest first: NOTE, CAUTION,
+// WARNING (the order of calc/trace.Severity).
 type Severity uint8
 
 const (
 	SevNote Severity = iota
-	SevWarning
 	SevCaution
+	SevWarning
 )
 
 func (s Severity) String() string {

@@ -203,8 +203,8 @@ func fraction(ws []word) (float64, bool) {
 	}
 	var text strings.Builder
 	for _, f := range ws[0].frags {
-		if f.math != nil {
-			return 0, false
+		if f.math != nil && f.text == "" {
+			return 0, false // a formula, not a lone number
 		}
 		text.WriteString(f.text)
 	}

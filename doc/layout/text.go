@@ -29,7 +29,7 @@ type frag struct {
 	color draw.Color
 	link  string
 	w     float64
-	math  *eqn.Box
+	math  *eqn.Box // an inline formula (text then holds a lone number's digits, else "")
 }
 
 // word is what the line breaker moves: frags with no break opportunity
@@ -97,7 +97,11 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 				e.mathProblem(pos, r.Own, err)
 				continue
 			}
-			cur.frags = append(cur.frags, frag{math: b, w: b.W, size: st.size, link: r.Link, color: color})
+			fr := frag{math: b, w: b.W, size: st.size, link: r.Link, color: color}
+			if n, ok := r.Math.(eqn.Num); ok {
+				fr.text, fr.face = n.Text, fonts.Regular // a lone number: its digits, for decimal alignment
+			}
+			cur.frags = append(cur.frags, fr)
 			cur.w += b.W
 			open = true
 			continue
