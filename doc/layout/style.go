@@ -32,4 +32,3 @@ var (
 	badInk   = draw.Color{R: 190, G: 28, B: 28}
 	badFill  = draw.Color{R: 253, G: 236, B: 236}
 )
-
