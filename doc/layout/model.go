@@ -234,7 +234,7 @@ func (s Severity) String() string {
 	return "NOTE"
 }
 
-// Caution is a boxed caution: the word NOTE, WARNING or CAUTION, an
+// Caution is a boxed caution: the word NOTE, CAUTION or WARNING, an
 // optional title, and body blocks. A long one may run onto the next page.
 type Caution struct {
 	Pos      source.Position
