@@ -2,11 +2,13 @@ package eval_test
 
 import (
 	"fmt"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
 
 	"plinth/doc/eval"
+	"plinth/doc/load"
 	"plinth/doc/parse"
 	"plinth/doc/sheet"
 	"plinth/doc/source"
@@ -105,5 +107,48 @@ func TestFailingRelation(t *testing.T) {
 		if c.Relation() != want[i] {
 			t.Errorf("%s: %s %s %s %s, want %s", c.Text, l, c.Relation(), r, c.Verdict(), want[i])
 		}
+	}
+}
+
+// TestExampleProseApart: in the example packages, every prose
+// interpolation of a symbol that is compared with something (a side of a
+// check, a utilisation) stands on the same side of each compared value as
+// the symbol does (the pad's conclusion: 24.59 mm against 25 mm prints
+// 24.6 mm at mm:0).
+func TestExampleProseApart(t *testing.T) {
+	dirs, _ := filepath.Glob("../../examples/*")
+	n := 0
+	for _, dir := range dirs {
+		lp, d := load.Path(dir)
+		if lp == nil {
+			t.Fatal(d)
+		}
+		pkg, _ := parse.Package(lp)
+		res, diags := eval.Package(pkg, eval.Options{})
+		if diags.HasErrors() {
+			t.Fatal(diags)
+		}
+		for i, s := range res.Sheets {
+			for _, in := range interps(pkg.Sheets[i]) {
+				it := s.Interp(in)
+				if it == nil || len(it.Symbol.Bounds) == 0 {
+					continue
+				}
+				n++
+				x, f := number(t, it.Text), it.Unit.Factor
+				if f == 0 {
+					f = 1
+				}
+				for _, b := range it.Symbol.Bounds {
+					bu, _ := strconv.ParseFloat(strconv.FormatFloat(b/f, 'g', 12, 64), 64) // the bound in the printed unit
+					if want := order(it.Symbol.Q.V, b); want != 0 && order(x, bu) != want {
+						t.Errorf("%s: {%s} printed %q against %g (SI)", s.Name(), in.Src.Value, it.Text, b)
+					}
+				}
+			}
+		}
+	}
+	if n < 3 {
+		t.Errorf("only %d interpolations of compared symbols found", n)
 	}
 }
