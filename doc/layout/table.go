@@ -194,36 +194,41 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	return out
 }
 
-// fraction reports whether a cell is one number ("245.7", "−0.12", "18",
-// "1.2e5") and the width of its decimal point and the digits after it (0
-// for a whole number), so a column can align its numbers on the point.
+// fraction reports whether a cell is one number ("245.7", "−0.12", "18")
+// or a formula that is one number and its unit ("2.4 m", "18 kN/m³"), and
+// the width from its decimal point to the cell's end (from the number's
+// end for a whole number), so a column can align its numbers on the point.
+// Exponents ("1.2e5") are not aligned.
 func fraction(ws []word) (float64, bool) {
 	if len(ws) != 1 || len(ws[0].frags) == 0 {
 		return 0, false
 	}
-	var text strings.Builder
-	for _, f := range ws[0].frags {
-		if f.math != nil && f.text == "" {
-			return 0, false // a formula, not a lone number
+	fs := ws[0].frags
+	var num string
+	if fs[0].math != nil {
+		if len(fs) != 1 || fs[0].text == "" {
+			return 0, false // a formula, not a number
 		}
-		text.WriteString(f.text)
+		num = fs[0].text
+	} else {
+		var text strings.Builder
+		for _, f := range fs {
+			if f.math != nil {
+				return 0, false
+			}
+			text.WriteString(f.text)
+		}
+		num = text.String()
 	}
-	s := strings.Replace(text.String(), "−", "-", 1)
+	s := strings.Replace(num, "−", "-", 1)
 	if _, err := strconv.ParseFloat(s, 64); err != nil || strings.ContainsAny(s, "eEinIN") {
 		return 0, false
 	}
-	tail, seen := 0.0, false
-	for _, f := range ws[0].frags {
-		if seen {
-			tail += f.w
-			continue
-		}
-		if i := strings.IndexByte(f.text, '.'); i >= 0 {
-			seen = true
-			tail += fonts.Get(f.face).Width(f.text[i:], f.size)
-		}
+	whole := num
+	if i := strings.IndexByte(num, '.'); i >= 0 {
+		whole = num[:i]
 	}
-	return tail, true
+	return ws[0].w - fonts.Get(fs[0].face).Width(whole, fs[0].size), true
 }
 
 // measureWords is the narrowest a cell can be without splitting a word
