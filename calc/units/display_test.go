@@ -101,8 +101,8 @@ func TestFormat(t *testing.T) {
 		dec  int
 		want string
 	}{
-		{245.66e3, kPa, -1, "246"},   // kN and kPa: whole from 100 up
-		{24.567e3, kPa, -1, "24.6"},  // three significant figures below
+		{245.66e3, kPa, -1, "246"},  // kN and kPa: whole from 100 up
+		{24.567e3, kPa, -1, "24.6"}, // three significant figures below
 		{2.4567e3, kPa, -1, "2.46"},
 		{99.96e3, kPa, -1, "100"},
 		{0.65e3, kPa, -1, "0.65"},
