@@ -7,6 +7,7 @@ import (
 	"plinth/calc/design"
 	"plinth/calc/site"
 	"plinth/calc/trace"
+	"plinth/calc/units"
 )
 
 // slidingDrainages returns the sliding checks to make: none when sliding
@@ -186,7 +187,7 @@ func (c *calc) summarise() {
 		g := r.Cases[r.Governing]
 		r.GoverningDrainage = g.Drainage
 		c.completeWeak(g.Name)
-		c.whole("governing", fmt.Sprintf("Bearing governed by %s: utilisation %.3f; the %s case governs.", g.Name, g.Util, g.Drainage), val("util", g.Util, ""))
+		c.whole("governing", fmt.Sprintf("Bearing governed by %s: utilisation %s; the %s case governs.", g.Name, units.Utilisation(g.Util), g.Drainage), val("util", g.Util, ""))
 		strip := c.f.Shape == site.Strip
 		r.Values = append(r.Values,
 			val("R_d", g.R, c.uF), val("util", g.Util, ""), val("q_Ed", g.QEd, "kPa"), val("q_Rd", g.QRd, "kPa"), val("q_ult", g.QUlt, "kPa"),
@@ -210,7 +211,7 @@ func (c *calc) summarise() {
 	if r.GoverningSliding >= 0 {
 		s := r.Sliding[r.GoverningSliding]
 		r.Values = append(r.Values, val("H_d_h", s.H, c.uF), val("V_d_h", s.V, c.uF), val("R_h_d", s.R, c.uF), val("util_h", s.Util, ""))
-		c.whole("governing-sliding", fmt.Sprintf("Sliding governed by %s: utilisation %.3f.", s.Name, s.Util), val("util_h", s.Util, ""))
+		c.whole("governing-sliding", fmt.Sprintf("Sliding governed by %s: utilisation %s.", s.Name, units.Utilisation(s.Util)), val("util_h", s.Util, ""))
 	}
 }
 

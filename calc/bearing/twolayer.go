@@ -6,6 +6,7 @@ import (
 
 	"plinth/calc/design"
 	"plinth/calc/trace"
+	"plinth/calc/units"
 )
 
 // twoLayer checks the founding layer over the weaker layer c.weak by
@@ -241,7 +242,7 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 	}
 	tl.SpreadQEd, tl.SpreadQRd, tl.SpreadUtil, tl.SpreadOK = qEd, qRd, u, u <= 1+1e-12
 	if !tl.SpreadOK {
-		c.warn("spread-fails", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %.2f: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, u), val("util_s", u, ""))
+		c.warn("spread-fails", trace.SevWarning, trace.Ref{}, fmt.Sprintf("%s: the load-spread check of the lower layer gives utilisation %s: it disagrees with or confirms the punching check; review the platform thickness.", c.cas, units.Utilisation(u)), val("util_s", u, ""))
 	}
 }
 

@@ -7,6 +7,7 @@ import (
 	"plinth/calc/site"
 	"plinth/calc/solve"
 	"plinth/calc/trace"
+	"plinth/calc/units"
 )
 
 // Try is one bearing pressure tried by Allowable and the settlement there.
@@ -72,7 +73,8 @@ func Allowable(in Input, sLim float64) (*Allow, error) {
 		return nil, err
 	}
 	if flo >= 0 {
-		return nil, &site.InputError{Where: in.Footing.Name, Param: "s_lim", Msg: fmt.Sprintf("the settlement with no net load (%.1f mm) already reaches the limit %.1f mm", (flo+sLim)*1e3, sLim*1e3)}
+		s0, sl := units.Apart(flo+sLim, sLim, mmUnit, -1, -1)
+		return nil, &site.InputError{Where: in.Footing.Name, Param: "s_lim", Msg: fmt.Sprintf("the settlement with no net load (%s mm) already reaches the limit %s mm", s0, sl)}
 	}
 	hi := 0.0
 	for step := 100e3; ; step *= 2 {

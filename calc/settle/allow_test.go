@@ -3,6 +3,7 @@ package settle_test
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"plinth/calc/settle"
@@ -118,10 +119,19 @@ func TestDifferential(t *testing.T) {
 			t.Errorf("β = 1/%.0f: caution %q ok %v, want %q %v", 1/d.Beta, code, d.OK, r.code, r.ok)
 		}
 	}
+	// Just past 1/150 (hand calculation: δ = 0.0401 m over 6 m, 1/β = 149.63):
+	// the message never reads "1/150 exceeds 1/150".
+	d, err := settle.Differential(settle.DiffInput{A: "P1", B: "P2", SA: 0.0501, SB: 0.010, Spacing: 6})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(d.Trace.Cautions) == 0 || !strings.Contains(d.Trace.Cautions[0].Message, "1/149.6 exceeds 1/150") {
+		t.Errorf("cautions %+v, want 1/149.6 exceeds 1/150", d.Trace.Cautions)
+	}
 	var re *site.RangeError
 	if _, err := settle.Differential(settle.DiffInput{SA: 0.01, SB: 0.02, Spacing: 0}); !errors.As(err, &re) {
 		t.Errorf("zero spacing: %v", err)
 	}
-	d, _ := settle.Differential(settle.DiffInput{SA: 0.01, SB: 0.02, Spacing: 10, Limit: site.Some(1.0 / 1000)})
+	d, _ = settle.Differential(settle.DiffInput{SA: 0.01, SB: 0.02, Spacing: 10, Limit: site.Some(1.0 / 1000)})
 	near(t, "util", d.Util, 1, 1e-12, "β/β_lim")
 }

@@ -7,6 +7,7 @@ import (
 
 	"plinth/calc/stress"
 	"plinth/calc/trace"
+	"plinth/calc/units"
 )
 
 // Compute runs one settlement calculation: stresses by sublayer, immediate,
@@ -256,7 +257,11 @@ func (k *calc) finish() {
 		k.warn(cs, "not-verified", trace.SevWarning, trace.Ref{}, "settlement not verified: "+strings.Join(r.Unverified, "; ")+"; the total leaves that out, so the check is NOT OK until the data are given")
 	}
 	if r.Util > 1 {
-		k.warn(cs, "limit", trace.SevWarning, trace.Ref{}, fmt.Sprintf("the total settlement %.1f mm exceeds the limit %.1f mm", r.Total*1e3, r.Limit*1e3), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
+		st, sl := units.Apart(r.Total, r.Limit, mmUnit, -1, -1) // never printed onto the limit
+		k.warn(cs, "limit", trace.SevWarning, trace.Ref{}, fmt.Sprintf("the total settlement %s mm exceeds the limit %s mm", st, sl), val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm"))
 	}
 	r.symbols()
 }
+
+// mmUnit prints settlements in messages by the display rules (units.Format).
+var mmUnit = units.MustParse("mm")

@@ -6,6 +6,7 @@ import (
 
 	"plinth/calc/site"
 	"plinth/calc/trace"
+	"plinth/calc/units"
 )
 
 // Published limits of angular distortion β = δ/L between two footings.
@@ -75,15 +76,21 @@ func Differential(in DiffInput) (*Diff, error) {
 	switch {
 	case d.Beta > BetaStructure:
 		t.Warn(trace.Caution{Code: "beta-structure", Severity: trace.SevWarning, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/150: structural damage"},
-			Message: fmt.Sprintf("angular distortion 1/%.0f exceeds 1/150, at which Skempton & MacDonald (1956) found structural damage (about the ultimate limit state in EN 1997-1 Annex H)", 1/d.Beta)})
+			Message: fmt.Sprintf("angular distortion 1/%s exceeds 1/150, at which Skempton & MacDonald (1956) found structural damage (about the ultimate limit state in EN 1997-1 Annex H)", inverse(d.Beta, BetaStructure))})
 	case d.Beta > BetaCracking:
 		t.Warn(trace.Caution{Code: "beta-cracking", Severity: trace.SevCaution, Case: cs, Values: vals, Ref: trace.Ref{Source: SM1956, Clause: "1/300: cracking of panel walls"},
-			Message: fmt.Sprintf("angular distortion 1/%.0f exceeds 1/300, at which Skempton & MacDonald (1956) found cracking in panel walls", 1/d.Beta)})
+			Message: fmt.Sprintf("angular distortion 1/%s exceeds 1/300, at which Skempton & MacDonald (1956) found cracking in panel walls", inverse(d.Beta, BetaCracking))})
 	case d.Beta > BetaSafe:
 		t.Warn(trace.Caution{Code: "beta-safe", Severity: trace.SevNote, Case: cs, Values: vals, Ref: trace.Ref{Source: Bjerrum1963, Clause: "1/500"},
-			Message: fmt.Sprintf("angular distortion 1/%.0f exceeds 1/500, the safe limit of Bjerrum (1963) for buildings where cracking is not permissible (EN 1997-1 Annex H: acceptable for many structures)", 1/d.Beta)})
+			Message: fmt.Sprintf("angular distortion 1/%s exceeds 1/500, the safe limit of Bjerrum (1963) for buildings where cracking is not permissible (EN 1997-1 Annex H: acceptable for many structures)", inverse(d.Beta, BetaSafe))})
 	}
 	t.Cite(SM1956)
 	d.Symbols = []trace.Value{val("delta_s", d.Delta, "mm"), val("beta", d.Beta, ""), val("beta_lim", d.Limit, ""), val("util", d.Util, "")}
 	return d, nil
+}
+
+// inverse prints 1/beta as a whole number, with decimals where that would
+// print it onto or past 1/limit (units.Beside): 1/149.6, not 1/150.
+func inverse(beta, limit float64) string {
+	return units.Beside(1/beta, []float64{1 / limit}, units.Dimensionless, 0)
 }

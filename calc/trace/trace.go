@@ -41,14 +41,23 @@ type Step struct {
 	Case    string  // the case it belongs to ("" = common to all)
 }
 
-// Severity ranks a caution. The document boxes them with the words NOTE,
-// WARNING and CAUTION.
+// Severity ranks a caution, lowest first, in the order of the hazard
+// statements of ANSI Z535.4 and ISO 3864-2 (WARNING above CAUTION) without
+// their DANGER:
+//
+//	SevNote     NOTE     information: a choice made, a value assumed
+//	SevCaution  CAUTION  a method used near its limits, or an assumption
+//	                     the engineer must confirm
+//	SevWarning  WARNING  a result that may be unsafe or is missing: a limit
+//	                     exceeded, a check not made, a layer left out
+//
+// The document boxes them with these words.
 type Severity int
 
 const (
 	SevNote Severity = iota
-	SevWarning
 	SevCaution
+	SevWarning
 )
 
 func (s Severity) String() string {

@@ -101,14 +101,26 @@ func TestFormat(t *testing.T) {
 		dec  int
 		want string
 	}{
-		{245.66e3, kPa, -1, "245.7"},
-		{24.567e3, kPa, -1, "24.57"},
-		{2.4567e3, kPa, -1, "2.457"},
+		{245.66e3, kPa, -1, "246"},  // kN and kPa: whole from 100 up
+		{24.567e3, kPa, -1, "24.6"}, // three significant figures below
+		{2.4567e3, kPa, -1, "2.46"},
+		{99.96e3, kPa, -1, "100"},
+		{0.65e3, kPa, -1, "0.65"},
+		{9.81e3, units.MustParse("kN/m3"), -1, "9.81"},
+		{58.89e3, units.MustParse("kN/m"), -1, "58.9"},
 		{2.4, m, -1, "2.4"},
 		{18e3, kPa, -1, "18"},
 		{1250e3, kPa, -1, "1250"},
-		{12345.6e3, kPa, -1, "12350"},
+		{12345.6e3, kPa, -1, "12346"},
 		{999.96e3, kPa, -1, "1000"},
+		{12345.6, m, -1, "12350"}, // four significant figures for the rest
+		{999.96, m, -1, "1000"},
+		{245.66, m, -1, "245.7"},
+		{112.5e3, kPa, -1, "113"}, // a tie rounds away from zero
+		{-112.5e3, kPa, -1, "-113"},
+		{0.125, m, -1, "0.125"},
+		{2.4565, m, -1, "2.457"},
+		{0.0245, m, 2, "0.02"}, // 0.0245 is below the tie in binary
 		{0.24567, m, -1, "0.246"},
 		{0.0012345, m, -1, "0.00123"},
 		{0.000045, m, -1, "4.5e-5"},
@@ -118,6 +130,10 @@ func TestFormat(t *testing.T) {
 		{math.Copysign(0, -1), m, -1, "0"},
 		{-0.0001, m, 2, "0.00"},
 		{0.0254, mm, 1, "25.4"},
+		{0.02459, mm, -1, "24.6"},   // mm: to 0.1 mm
+		{0.024, mm, -1, "24.0"},     // the tenth kept
+		{1.23456, mm, -1, "1234.6"}, // 0.1 mm whatever the size
+		{0.000123, mm, -1, "0.12"},  // two significant figures below 1 mm
 		{2.4, m, 2, "2.40"},
 		{math.NaN(), m, -1, "NaN"},
 		{math.Inf(-1), m, 2, "-Inf"},
@@ -173,7 +189,7 @@ func ExampleFormat() {
 	fmt.Println(units.Format(q, units.Display(units.Pressure), -1), units.Display(units.Pressure).Name)
 	fmt.Println(units.Quantity{V: 3.15576e7 * 2.5, Dim: units.Time})
 	// Output:
-	// 131.9 kPa
+	// 132 kPa
 	// 2.5 yr
 }
 

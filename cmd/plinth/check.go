@@ -11,7 +11,6 @@ import (
 	"strings"
 	"text/tabwriter"
 
-	"plinth/calc/units"
 	"plinth/doc/eval"
 	"plinth/doc/source"
 )
@@ -116,7 +115,7 @@ func printTables(w io.Writer, res *eval.Result) {
 				if y.Override != nil {
 					note = "[--set] " + note
 				}
-				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\n", y.Name, units.Format(y.Q.V, y.Unit, y.Decimals), y.Unit.Name, note, where(y.Span))
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\n", y.Name, y.Number(y.Unit, y.Decimals), y.Unit.Name, note, where(y.Span))
 			}
 			tw.Flush()
 		}
@@ -133,12 +132,17 @@ func printTables(w io.Writer, res *eval.Result) {
 	for _, c := range res.Checks {
 		util := "—"
 		if c.HasUtil() {
-			util = fmt.Sprintf("%.2f", c.Util)
+			util = c.UtilText()
 		}
 		if !c.OK {
 			nok++
 		}
-		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", c.Text, eval.Format(c.L, c.Unit, -1), c.Op, eval.Format(c.R, c.Unit, -1), util, c.Verdict(), where(c.Span))
+		l, r := c.Values() // never rounded onto or across each other; a failing check shows the relation that holds
+		unit := ""
+		if c.Unit.Name != "" {
+			unit = " " + c.Unit.Name
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", c.Text, l+unit, c.Relation(), r+unit, util, c.Verdict(), where(c.Span))
 	}
 	tw.Flush()
 	for _, c := range res.Checks {

@@ -70,7 +70,7 @@ func TestCheckCautions(t *testing.T) {
 		t.Fatalf("no cautions section after the checks:\n%s", out)
 	}
 	tail := out[i:]
-	if !strings.Contains(tail, "WARNING  bearing OR1 (../../examples/brackenfield/05-crane-platform.md:") {
+	if !strings.Contains(tail, "CAUTION  bearing OR1 (../../examples/brackenfield/05-crane-platform.md:") {
 		t.Errorf("a warning lacks its block and position:\n%s", tail)
 	}
 	if strings.Contains(tail, "\n  NOTE ") || !strings.Contains(tail, "NOTEs not shown: plinth check -v lists them") {

@@ -151,8 +151,14 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 		return txt(s)
 	}
 	no := mark(fmt.Sprint(i + 1))
-	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(num(a, unit))}, {txt(num(b, unit))}, {txt(num(r, unit))},
-		{mark(fmt.Sprintf("%.3f", util))}, {verdict}}
+	u, err := units.Parse(unit)
+	if err != nil {
+		u = units.Dimensionless
+	}
+	as, rs := units.Apart(a, r, u, -1, -1) // the demand and its resistance, never rounded onto each other
+	as, rs = strings.Replace(as, "-", "−", 1), strings.Replace(rs, "-", "−", 1)
+	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(as)}, {txt(num(b, unit))}, {txt(rs)},
+		{mark(units.Utilisation(util))}, {verdict}}
 	if i == gov {
 		cells[2] = layout.Cell{txt(drainage), bold("  governing")}
 	}
@@ -370,6 +376,7 @@ func twoLayerWords(tl *bearing.TwoLayer) []layout.Run {
 	if !tl.SpreadOK {
 		verdict = "NOT OK"
 	}
-	s += fmt.Sprintf(" Load spread to the lower layer: %s against %s (utilisation %.2f, %s).", p(tl.SpreadQEd), p(tl.SpreadQRd), tl.SpreadUtil, verdict)
+	qs, qr := units.Apart(tl.SpreadQEd, tl.SpreadQRd, kpa, -1, -1)
+	s += fmt.Sprintf(" Load spread to the lower layer: %s kPa against %s kPa (utilisation %s, %s).", qs, qr, units.Utilisation(tl.SpreadUtil), verdict)
 	return richText(s, layout.Regular)
 }

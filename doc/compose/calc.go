@@ -1,7 +1,6 @@
 package compose
 
 import (
-	"plinth/calc/units"
 	"plinth/doc/eval"
 	"plinth/doc/expr"
 	"plinth/doc/layout"
@@ -54,7 +53,7 @@ func (c *composer) assign(s *eval.Sheet, st *sheet.Stmt, a *expr.Assign, y *eval
 	sym := eqn.Sym{Name: a.Sym.Name}
 	note := c.noteRuns(s, y.Note)
 	f := newFormula(a.X, y.Uses)
-	result := valueNode(y.Q, y.Unit, y.Decimals)
+	result := symbolNode(y, y.Unit, y.Decimals)
 	if y.Override != nil {
 		o := y.Override
 		note = append(note, layout.Run{Text: "  VARIANT: set by --set " + o.Arg + "; the sheet gives ", Style: layout.Bold})
@@ -97,25 +96,26 @@ func (c *composer) inputAnchor(y *eval.Symbol) string {
 	return a
 }
 
-var relText = map[string]string{"<=": "≤", ">=": "≥", "<": "<", ">": ">", "==": "="}
+var relText = map[string]string{"<=": "≤", ">=": "≥", "<": "<", ">": ">", "==": "=", "!=": "≠"}
 
 // check converts a check line.
 func (c *composer) check(s *eval.Sheet, ch *eval.Check) layout.Block {
 	p := pos(ch.Span)
 	note := c.noteRuns(s, ch.Note)
-	side := func(n expr.Node, q units.Quantity) (eqn.Node, eqn.Node) {
+	lt, rt := ch.Values()
+	side := func(n expr.Node, text string) (eqn.Node, eqn.Node) {
 		f := newFormula(n, ch.Uses)
 		if !f.hasSymbols() {
 			return f.symbolic(), nil // a number as written is its own value
 		}
-		val := valueNode(q, ch.Unit, -1)
+		val := withUnit(numberNode(text), ch.Unit.Name)
 		if !f.lone() {
 			val = eqn.Row{f.substituted(), eqn.Op{Text: "="}, val}
 		}
 		return f.symbolic(), val
 	}
-	l, lv := side(ch.Stmt.L, ch.L)
-	r, rv := side(ch.Stmt.R, ch.R)
+	l, lv := side(ch.Stmt.L, lt)
+	r, rv := side(ch.Stmt.R, rt)
 	if !ch.HasUtil() {
 		// No utilisation (an equality, or a side that is not positive):
 		// the relation and the verdict on one calculation line.
@@ -123,7 +123,7 @@ func (c *composer) check(s *eval.Sheet, ch *eval.Check) layout.Block {
 		if lv != nil {
 			row = append(row, eqn.Op{Text: "="}, lv)
 		}
-		row = append(row, eqn.Op{Text: relText[ch.Op]}, r)
+		row = append(row, eqn.Op{Text: relText[ch.Relation()]}, r)
 		if rv != nil {
 			row = append(row, eqn.Op{Text: "="}, rv)
 		}
@@ -138,6 +138,6 @@ func (c *composer) check(s *eval.Sheet, ch *eval.Check) layout.Block {
 		}
 		return &layout.Statement{Pos: p, Symbol: row, Note: runs, Anchor: ch.Anchor}
 	}
-	return &layout.Check{Pos: p, Left: l, LeftValue: lv, Rel: ch.Op, Right: r, RightValue: rv,
-		Util: ch.Util, OK: ch.OK, Note: note, Anchor: ch.Anchor}
+	return &layout.Check{Pos: p, Left: l, LeftValue: lv, Rel: relText[ch.Relation()], Right: r, RightValue: rv,
+		Util: ch.Util, UtilText: ch.UtilText(), OK: ch.OK, Note: note, Anchor: ch.Anchor}
 }

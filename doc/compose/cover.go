@@ -263,7 +263,7 @@ func (c *composer) checkTotals(toRegister bool) []layout.Run {
 		out = append(out, txt(plural(n, "check")+": "), bold(fmt.Sprintf("%d NOT OK", bad)), txt(fmt.Sprintf(", %d OK.", n-bad)))
 	}
 	if worst != nil {
-		out = append(out, txt(fmt.Sprintf(" Highest utilisation %.2f: ", worst.Util)))
+		out = append(out, txt(" Highest utilisation "+worst.UtilText()+": "))
 		out = append(out, c.checkMath(worst)...)
 		out = append(out, txt(" ("+sheetLabel(worst.Sheet)+")."))
 	}

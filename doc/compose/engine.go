@@ -107,6 +107,9 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 		note = append(note, ref...)
 	}
 	res := siNode(st.Value, st.Unit)
+	if isUtil(st.Symbol, st.Unit) {
+		res = numberNode(units.Utilisation(st.Value)) // two decimals, as in the check line and the register
+	}
 	if st.Formula == nil {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
@@ -256,16 +259,36 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 // printed beside them; they are left out.
 var restates = map[string]bool{"governing": true, "governing-sliding": true}
 
+// engineSeverity is the box an engine caution prints in: the same word
+// (an unknown severity prints as the highest, WARNING).
+func engineSeverity(s trace.Severity) layout.Severity {
+	switch s {
+	case trace.SevNote:
+		return layout.SevNote
+	case trace.SevCaution:
+		return layout.SevCaution
+	}
+	return layout.SevWarning
+}
+
+// alertSeverity is the box a "> [!WORD]" blockquote prints in.
+func alertSeverity(k sheet.Alert) layout.Severity {
+	switch k {
+	case sheet.AlertNote:
+		return layout.SevNote
+	case sheet.AlertCaution:
+		return layout.SevCaution
+	}
+	return layout.SevWarning
+}
+
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
 		return
 	}
 	a := o.c.anchor("caution")
-	sev := layout.Severity(ca.Severity)
-	if sev > layout.SevCaution {
-		sev = layout.SevCaution
-	}
+	sev := engineSeverity(ca.Severity)
 	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	body := richText(ca.Message, layout.Regular)
@@ -275,6 +298,12 @@ func (o *engineOut) caution(ca trace.Caution, where string) {
 	}
 	o.add(&layout.Anchor{Pos: o.p, Name: a},
 		&layout.Caution{Pos: o.p, Severity: sev, Body: []layout.Block{&layout.Para{Pos: o.p, Runs: body}}})
+}
+
+// isUtil reports whether an engine step is a utilisation (util, util_s,
+// util_h…): a pure number printed by units.Utilisation.
+func isUtil(symbol, unit string) bool {
+	return unit == "" && (symbol == "util" || strings.HasPrefix(symbol, "util_"))
 }
 
 // groups lists the case names of tr in order of first appearance, with
@@ -310,9 +339,10 @@ func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right str
 		runs = append(runs, richText(ch.Note.Value, layout.Regular)...)
 		return &layout.Statement{Pos: p, Symbol: row, Note: runs, Anchor: ch.Anchor}
 	}
-	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: valueNode(ch.L, ch.Unit, -1), Rel: ch.Op,
-		Right: eqn.Sym{Name: right}, RightValue: valueNode(ch.R, ch.Unit, -1),
-		Util: ch.Util, OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
+	lt, rt := ch.Values()
+	return &layout.Check{Pos: p, Left: eqn.Sym{Name: left}, LeftValue: withUnit(numberNode(lt), ch.Unit.Name), Rel: relText[ch.Relation()],
+		Right: eqn.Sym{Name: right}, RightValue: withUnit(numberNode(rt), ch.Unit.Name),
+		Util: ch.Util, UtilText: ch.UtilText(), OK: ch.OK, Note: richText(ch.Note.Value, layout.Regular), Anchor: ch.Anchor}
 }
 
 // findCheck returns the block's check whose text starts with prefix.

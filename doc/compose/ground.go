@@ -87,7 +87,7 @@ func (c *composer) gridCell(s *eval.Sheet, y *eval.Symbol, text sheet.Str, ancho
 	if y.Input && anchor != "" {
 		c.inputs[y] = anchor
 	}
-	val := numberNode(units.Format(y.Q.V, y.Unit, y.Decimals))
+	val := numberNode(y.Number(y.Unit, y.Decimals))
 	if y.Override != nil {
 		return layout.Cell{{Math: val}, bold(" (VARIANT)")}
 	}

@@ -102,7 +102,7 @@ func (f *formula) substituted() eqn.Node {
 			return n, true
 		}
 		if y := f.syms[name]; y != nil {
-			return valueNode(y.Q, y.Unit, y.Decimals), true
+			return symbolNode(y, y.Unit, y.Decimals), true
 		}
 		if name == "g" { // printed where used: the constant is an assumed value
 			return withUnit(numberNode("9.80665"), "m/s2"), true
@@ -124,6 +124,12 @@ func (f *formula) hasSymbols() bool { return len(f.syms) > 0 }
 // automatic significant figures), as the sheet's own lines print it.
 func valueNode(q units.Quantity, u units.Unit, decimals int) eqn.Node {
 	return withUnit(numberNode(units.Format(q.V, u, decimals)), u.Name)
+}
+
+// symbolNode prints a symbol's value in u with the given decimals, with
+// the digits its bounds need (eval.Symbol.Number).
+func symbolNode(y *eval.Symbol, u units.Unit, decimals int) eqn.Node {
+	return withUnit(numberNode(y.Number(u, decimals)), u.Name)
 }
 
 // siNode prints an SI value in the unit named unit ("" = a pure number).

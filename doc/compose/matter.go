@@ -47,7 +47,7 @@ func (c *composer) checkRegister() layout.Sheet {
 	for i, ch := range c.res.Checks {
 		util := "—"
 		if ch.HasUtil() {
-			util = fmt.Sprintf("%.2f", ch.Util)
+			util = ch.UtilText()
 		}
 		verdict := txt("OK")
 		if !ch.OK {
@@ -116,7 +116,7 @@ func (c *composer) inputRegister() layout.Sheet {
 				tables[a]++
 				continue
 			}
-			val := layout.Run{Math: valueNode(y.Q, y.Unit, y.Decimals)}
+			val := layout.Run{Math: symbolNode(y, y.Unit, y.Decimals)}
 			note := c.noteRuns(s, y.Note)
 			if y.Override != nil {
 				note = append([]layout.Run{bold("VARIANT (--set " + y.Override.Arg + ") ")}, note...)
@@ -252,6 +252,9 @@ var standing = []string{
 	"The input fingerprint in every page footer identifies the inputs of this print. A print showing a different fingerprint was made from different inputs.",
 }
 
+// severityOrder states the order of the caution words (calc/trace.Severity).
+const severityOrder = "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): WARNING, a result that may be unsafe or is missing (a limit exceeded, a check not made, a layer left out); CAUTION, a method used near its limits or an assumption the engineer must confirm; NOTE, information (a choice made, a value assumed)."
+
 // cautionSheet lists every engine caution with where it was raised, then
 // the standing cautions.
 func (c *composer) cautionSheet() layout.Sheet {
@@ -259,6 +262,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 	p := out.Pos
 	out.Blocks = append(out.Blocks, heading(p, 1, "Cautions"))
 	out.Blocks = append(out.Blocks, heading(p, 2, "Cautions raised by the engine"))
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder)}})
 	if len(c.cautions) == 0 {
 		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {

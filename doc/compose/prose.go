@@ -45,7 +45,7 @@ func (c *composer) block(s *eval.Sheet, b sheet.Block) []layout.Block {
 	case *sheet.CodeBlock:
 		return []layout.Block{&layout.Code{Pos: p, Text: b.Text}}
 	case *sheet.Caution:
-		return []layout.Block{&layout.Caution{Pos: p, Severity: layout.Severity(b.Kind), Body: c.blocks(s, b.Body)}}
+		return []layout.Block{&layout.Caution{Pos: p, Severity: alertSeverity(b.Kind), Body: c.blocks(s, b.Body)}}
 	case *sheet.Quote:
 		c.quote++
 		defer func() { c.quote-- }()
@@ -137,7 +137,7 @@ func (c *composer) inlines(s *eval.Sheet, in []sheet.Inline) []layout.Run {
 			if x.Ref != nil && x.Ref.Display != nil {
 				dec = x.Ref.Display.Decimals
 			}
-			out = append(out, layout.Run{Math: valueNode(y.Q, it.Unit, dec)})
+			out = append(out, layout.Run{Math: symbolNode(y, it.Unit, dec)})
 		case *sheet.Cite:
 			if r := c.sheetRef(s, x.Key.Value, true); r != nil {
 				out = append(out, c.citeRun(r))

@@ -194,6 +194,10 @@ func (e *evaluator) defineResults(s *Sheet, blk *Block, vals []trace.Value, note
 			Name: name, Q: units.Quantity{V: v.V, Dim: u.Dim}, Unit: u, Decimals: -1,
 			Note: sheet.Str{Value: notes[v.Symbol]}, Span: headerSpan(blk.Span), Sheet: s,
 		}
+		if strings.HasPrefix(v.Symbol, "util") && u.Dim == units.None {
+			// a utilisation: two decimals, never printed onto or across 1
+			y.Decimals, y.Bounds = 2, []float64{1}
+		}
 		s.local[name] = y
 		s.Symbols = append(s.Symbols, y)
 		blk.Results = append(blk.Results, y)
@@ -209,11 +213,27 @@ func headerSpan(sp source.Span) source.Span {
 	return sp
 }
 
-// addCheck enters an engine check into the sheet's checks.
+// side is the result symbol name when it holds the check side's value q
+// (a block's H_d is its governing bearing case's, which need not be the
+// governing sliding case's), else nil.
+func side(s *Sheet, name string, q units.Quantity) *Symbol {
+	if y := s.local[name]; y != nil && y.Q == q {
+		return y
+	}
+	return nil
+}
+
+// addCheck enters an engine check into the sheet's checks. Its text is
+// "NAME kind: left op right" with the block's result names as the sides.
 func (e *evaluator) addCheck(s *Sheet, blk *Block, text, op string, l, r units.Quantity, u units.Unit, util float64, ok bool, note string) *Check {
 	c := &Check{
 		Text: text, Op: op, L: l, R: r, Unit: u, Util: util, OK: ok,
 		Note: sheet.Str{Value: note}, Span: headerSpan(blk.Span), Sheet: s,
+	}
+	if _, rel, ok := strings.Cut(text, ": "); ok {
+		if f := strings.Fields(rel); len(f) == 3 {
+			c.Sides = [2]*Symbol{side(s, blk.Name+"."+f[0], l), side(s, blk.Name+"."+f[2], r)}
+		}
 	}
 	s.Checks = append(s.Checks, c)
 	blk.Checks = append(blk.Checks, c)

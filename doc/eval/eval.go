@@ -64,6 +64,7 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 	}
 	e.splitContext()
 	e.register()
+	e.bounds()
 	for _, s := range e.res.Sheets {
 		e.prose(s)
 	}
@@ -359,6 +360,21 @@ func usesSpan(s *Sheet, name string) source.Span {
 		}
 	}
 	return source.Span{File: s.Src.File}
+}
+
+// bounds gives each symbol that is a side of a check the other side's
+// value, so that it never prints onto or across it (Symbol.Bounds).
+func (e *evaluator) bounds() {
+	for _, s := range append(append([]*Sheet(nil), e.res.Context...), e.res.Sheets...) {
+		for _, c := range s.Checks {
+			if y := c.Sides[0]; y != nil && y.Q.Dim == c.R.Dim {
+				y.Bounds = append(y.Bounds, c.R.V)
+			}
+			if y := c.Sides[1]; y != nil && y.Q.Dim == c.L.Dim {
+				y.Bounds = append(y.Bounds, c.L.V)
+			}
+		}
+	}
 }
 
 // register builds the check register in printing order.

@@ -123,7 +123,7 @@ func (e *evaluator) interp(sc scope, in *sheet.Interp) {
 		}
 		u, dec = d.Unit, d.Decimals
 	}
-	sc.s.interps[in] = &Interp{Symbol: y, Unit: u, Text: Format(y.Q, u, dec)}
+	sc.s.interps[in] = &Interp{Symbol: y, Unit: u, Text: y.In(u, dec)}
 }
 
 // unresolvedProse reports an interpolation of an unknown symbol; prose may

@@ -134,7 +134,8 @@ func (e *evaluator) check(sc scope, st *sheet.Stmt, c *expr.Check) *Check {
 		Text: string(f.Text[lpos:rend]), Op: c.Op, L: v.L, R: v.R, OK: v.Holds,
 		Util: utilisation(c.Op, v.L.V, v.R.V), Note: st.Note(),
 		Span: spanOf(f, c.Pos, rend), Sheet: sc.s, Stmt: c,
-		Uses: append(usedL, usedR...),
+		Uses:  append(usedL, usedR...),
+		Sides: [2]*Symbol{lone(c.L, usedL), lone(c.R, usedR)},
 	}
 	out.Unit = displayUnit(c.L, sc, v.L)
 	if out.Unit.Dim != v.L.Dim {
@@ -142,6 +143,22 @@ func (e *evaluator) check(sc scope, st *sheet.Stmt, c *expr.Check) *Check {
 	}
 	out.Cites = e.cites(sc.s, out.Note)
 	return out
+}
+
+// lone is the symbol n is when n is a single symbol (in parentheses or
+// not), else nil.
+func lone(n expr.Node, used []*Symbol) *Symbol {
+	for {
+		p, ok := n.(*expr.Paren)
+		if !ok {
+			break
+		}
+		n = p.X
+	}
+	if _, ok := n.(*expr.Ident); ok && len(used) == 1 {
+		return used[0]
+	}
+	return nil
 }
 
 // displayUnit chooses how to show a value computed by n: the unit it was

@@ -92,13 +92,30 @@ type Symbol struct {
 	Override *Override    // non-nil when --set replaced it
 	Uses     []*Symbol    // symbols its expression reads, in order of first use
 	Cites    []string     // reference keys cited in its note
+	Bounds   []float64    // SI values it is compared with (the other side of each check it is a side of; 1 for a utilisation): it never prints onto or across one (units.Beside)
 }
 
 // Value is the value in the display unit.
 func (y *Symbol) Value() float64 { return y.Q.In(y.Unit) }
 
 // Text formats the value with its display unit ("245.7 kPa").
-func (y *Symbol) Text() string { return Format(y.Q, y.Unit, y.Decimals) }
+func (y *Symbol) Text() string { return y.In(y.Unit, y.Decimals) }
+
+// Number formats the value as a number of u with the given decimals (< 0:
+// automatic), with the digits its Bounds need: the one way every printing
+// of a symbol's value is written.
+func (y *Symbol) Number(u units.Unit, decimals int) string {
+	return units.Beside(y.Q.V, y.Bounds, u, decimals)
+}
+
+// In is Number with the unit's name ("24.6 mm").
+func (y *Symbol) In(u units.Unit, decimals int) string {
+	s := y.Number(u, decimals)
+	if u.Name != "" {
+		s += " " + u.Name
+	}
+	return s
+}
 
 // Check is an evaluated check line.
 type Check struct {
@@ -112,13 +129,31 @@ type Check struct {
 	Span   source.Span
 	Sheet  *Sheet
 	Stmt   *expr.Check
-	Anchor string // a unique name for links ("check-3"), by register order
+	Anchor string     // a unique name for links ("check-3"), by register order
+	Sides  [2]*Symbol // the symbol each side is, when it is a lone symbol (else nil)
 	Uses   []*Symbol
 	Cites  []string
 	// Unverified says why an engine check cannot be verified ("not
 	// verified: …": data its method needs are missing, or the base is in
 	// tension); such a check is never OK and has no utilisation.
 	Unverified string
+}
+
+// Relation is the relation the two sides stand in as printed: the one
+// asked when the check holds, its negation when it fails ("<=" → ">").
+func (c *Check) Relation() string { return units.Relation(c.Op, c.OK) }
+
+// Values formats both sides in the check's unit so that they stand in the
+// order of the values (units.Apart): never rounded onto or across each other.
+func (c *Check) Values() (l, r string) { return units.Apart(c.L.V, c.R.V, c.Unit, -1, -1) }
+
+// UtilText is the utilisation to two decimals (units.Utilisation), "" when
+// it has no meaning.
+func (c *Check) UtilText() string {
+	if !c.HasUtil() {
+		return ""
+	}
+	return units.Utilisation(c.Util)
 }
 
 // HasUtil reports whether the utilisation is defined.

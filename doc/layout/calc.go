@@ -139,7 +139,7 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 	return []*piece{{box: b, before: calcGap, base: pad + f.base}}
 }
 
-var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥": "≥", "<": "<", ">": ">", "=": "=", "==": "="}
+var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥": "≥", "<": "<", ">": ">", "=": "=", "==": "=", "!=": "≠", "≠": "≠"}
 
 func (e *engine) check(c *Check, width float64) []*piece {
 	rel, ok := relations[strings.TrimSpace(c.Rel)]
@@ -183,6 +183,9 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	base := pad + f.base
 	// the verdict: utilisation, then the word in a box
 	util := fmt.Sprintf("utilisation %.2f", c.Util)
+	if c.UtilText != "" {
+		util = "utilisation " + c.UtilText
+	}
 	if math.IsNaN(c.Util) || math.IsInf(c.Util, 0) {
 		e.probs.add(c.Pos, "check utilisation is %v", c.Util)
 		util = "utilisation —"

@@ -5,22 +5,28 @@ import (
 	"plinth/doc/layout/fonts"
 )
 
-// caution lays out a caution as a tinted panel with a coloured bar at its
-// left: the severity word and title, then the body blocks. It is made of
-// the body's pieces, each on its own strip of panel, so a long caution can
-// continue on the next page.
+// caution lays out a caution in the house style (cautionStyle): a panel
+// with a bar at its left, heavier as the severity rises, the severity
+// word and title, then the body blocks. It is made of the body's pieces,
+// each on its own strip of panel, so a long caution can continue on the
+// next page.
 func (e *engine) caution(c *Caution, width float64) []*piece {
 	sev := c.Severity
-	if sev > SevCaution {
-		e.probs.add(c.Pos, "caution severity %d: want NOTE, WARNING or CAUTION", sev)
-		sev = SevCaution
+	if sev > SevWarning {
+		e.probs.add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", sev)
+		sev = SevWarning
 	}
 	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 5.0
 	inner := width - bar - padL - padR
 	// heading line: the word, then the title
 	word := sev.String()
+	sty := cautionStyles[sev]
 	wf := fonts.Get(fonts.Bold)
-	wordW := wf.Width(word, bodySize) + 7
+	mark := 0.0 // room for the WARNING triangle
+	if sty.triangle {
+		mark = 11
+	}
+	wordW := mark + wf.Width(word, bodySize) + 7
 	head := &Box{Kind: "caution-head", Pos: c.Pos, W: inner}
 	st := bodyStyle
 	st.bold = true
@@ -30,7 +36,10 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	} else {
 		lines = []line{setLine(nil, st)}
 	}
-	head.Items = append(head.Items, draw.Text{Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sevInk[sev], Text: word})
+	if sty.triangle {
+		head.Items = append(head.Items, warnTriangle(lines[0].base)...)
+	}
+	head.Items = append(head.Items, draw.Text{X: mark, Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
 	y := 0.0
 	for _, ln := range lines {
 		head.Items = appendOffset(head.Items, ln.items, wordW, y)
@@ -44,13 +53,26 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	}
 	ps = append(ps, body...)
 	// wrap each piece in its strip of panel
-	wrap := func(p *piece, top, bottom float64) *piece {
+	wrap := func(p *piece, top, bottom float64, first, last bool) *piece {
 		h := top + p.box.H + bottom
 		p.box.move(bar+padL, top)
-		w := &Box{Kind: "caution", Pos: c.Pos, W: width, H: h, Kids: []*Box{p.box}, Items: []draw.Item{
-			draw.Rect{W: width, H: h, Paint: draw.Fill(sevFill[sev])},
-			draw.Rect{W: bar, H: h, Paint: draw.Fill(sevInk[sev])},
-		}}
+		var items []draw.Item
+		if sty.fill {
+			items = append(items, draw.Rect{W: width, H: h, Paint: draw.Fill(shade)})
+		}
+		if sty.frame > 0 { // a frame all round, drawn a strip at a time
+			fr := draw.Stroke(sty.bar, sty.frame)
+			in := sty.frame / 2
+			items = append(items, draw.Line{X1: width - in, Y1: 0, X2: width - in, Y2: h, Paint: fr})
+			if first {
+				items = append(items, draw.Line{X1: 0, Y1: in, X2: width, Y2: in, Paint: fr})
+			}
+			if last {
+				items = append(items, draw.Line{X1: 0, Y1: h - in, X2: width, Y2: h - in, Paint: fr})
+			}
+		}
+		items = append(items, draw.Rect{W: sty.barW, H: h, Paint: draw.Fill(sty.bar)})
+		w := &Box{Kind: "caution", Pos: c.Pos, W: width, H: h, Kids: []*Box{p.box}, Items: items}
 		return &piece{box: w, keep: p.keep, brk: p.brk, base: top + p.base}
 	}
 	out := make([]*piece, len(ps))
@@ -62,11 +84,41 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 		if i == len(ps)-1 {
 			bottom = padV
 		}
-		out[i] = wrap(p, top, bottom)
+		out[i] = wrap(p, top, bottom, i == 0, i == len(ps)-1)
 		if p.head != nil { // a table's repeated header, on its own strip
-			out[i].head = wrap(clonePiece(p.head), 0, 0)
+			out[i].head = wrap(clonePiece(p.head), 0, 0, false, false)
 		}
 	}
 	out[0].before = paraGap + 3
 	return out
+}
+
+// cautionStyle is how a severity is drawn. The house has one accent and
+// keeps red and green for NOT OK and OK, so severity shows in the word
+// first and in weight second: NOTE a thin accent bar on white; CAUTION a
+// heavy ink bar on the light panel; WARNING the same inside an ink frame,
+// with a warning triangle before the word.
+type cautionStyle struct {
+	word, bar draw.Color
+	barW      float64 // width of the left bar
+	fill      bool    // the light panel behind
+	frame     float64 // stroke of a frame all round; 0 = none
+	triangle  bool
+}
+
+var cautionStyles = [3]cautionStyle{
+	SevNote:    {word: accent, bar: accent, barW: 1.2},
+	SevCaution: {word: ink, bar: ink, barW: 3, fill: true},
+	SevWarning: {word: ink, bar: ink, barW: 3, fill: true, frame: 0.8, triangle: true},
+}
+
+// warnTriangle is the warning sign before the word WARNING: an ink
+// triangle with a white bar and dot, its base on the baseline.
+func warnTriangle(base float64) []draw.Item {
+	const w, h = 9.0, 8.0
+	return []draw.Item{
+		draw.Poly{Closed: true, Paint: draw.Fill(ink), Points: []draw.Point{draw.Pt(0, base), draw.Pt(w, base), draw.Pt(w/2, base-h)}},
+		draw.Rect{X: w/2 - 0.55, Y: base - h + 2.6, W: 1.1, H: 3, Paint: draw.Fill(draw.Gray(255))},
+		draw.Rect{X: w/2 - 0.55, Y: base - 1.8, W: 1.1, H: 1.1, Paint: draw.Fill(draw.Gray(255))},
+	}
 }

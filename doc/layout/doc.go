@@ -25,7 +25,7 @@
 //	*Statement  Symbol = Expr = Subst = Result, with Note and Ref
 //	*Input      Symbol = Value, with Note and Ref
 //	*Check      Left = value  ≤  Right = value, utilisation, OK / NOT OK
-//	*Caution    NOTE / WARNING / CAUTION panel with a title and body blocks
+//	*Caution    NOTE / CAUTION / WARNING panel (rising severity) with a title and body blocks
 //	*Drawing    vector primitives (draw.Item), W × H points
 //	*PageBreak  and *Anchor (a named place links can jump to)
 //

@@ -4,7 +4,9 @@ import (
 	"bytes"
 	"errors"
 	"flag"
+	"math"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 
@@ -236,5 +238,52 @@ func TestOwnText(t *testing.T) {
 	}
 	if s := strings.Join(text, " "); !strings.Contains(s, "2/3c") || strings.Contains(s, "⅔") {
 		t.Errorf("own text set as %q", s)
+	}
+}
+
+// Numbers in a right-aligned column line up on the decimal point (a whole
+// number's end sits where the point would be), as text, as formulas and as
+// formulas of a number and its unit.
+func TestDecimalAlignment(t *testing.T) {
+	nums := []string{"245.7", "18", "2.457", "1250", "−0.12", "24.6", "2.4", "19.5", "7"}
+	var rows []layout.Row
+	for i, n := range nums {
+		c := layout.Cell{txt(n)}
+		switch {
+		case i == 6: // a formula of a number and its unit
+			c = layout.Cell{{Math: eqn.Row{eqn.Num{Text: n}, eqn.Space{Em: 0.2}, eqn.Unit("m")}}}
+		case i == 7:
+			c = layout.Cell{{Math: eqn.Row{eqn.Num{Text: n}, eqn.Space{Em: 0.2}, eqn.Unit("kN/m3")}}}
+		case i == 8: // a lone number as a formula
+			c = layout.Cell{{Math: eqn.Num{Text: n}}}
+		}
+		rows = append(rows, layout.Row{Pos: at(10 + i), Cells: []layout.Cell{{txt("row")}, c}})
+	}
+	doc := sheet(&layout.Table{Pos: at(9), Header: []layout.Cell{{txt("Name")}, {txt("Value")}}, Align: []layout.Align{0, layout.AlignRight}, Rows: rows})
+	p, err := layout.Document(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var points []float64
+	for _, b := range p.Pages[0].Boxes {
+		if b.Kind != "row" {
+			continue
+		}
+		for _, it := range b.Items {
+			tx, ok := it.(draw.Text)
+			if !ok || tx.Text == "row" || !slices.Contains(nums, tx.Text) {
+				continue // the row name, a unit
+			}
+			whole, _, _ := strings.Cut(tx.Text, ".")
+			points = append(points, b.X+tx.Start()+fonts.Get(tx.Face).Width(whole, tx.Size))
+		}
+	}
+	if len(points) != len(nums) {
+		t.Fatalf("found %d numbers, want %d", len(points), len(nums))
+	}
+	for i, x := range points {
+		if math.Abs(x-points[0]) > 0.01 {
+			t.Errorf("%s: decimal point at x %.2f, want %.2f as %s", nums[i], x, points[0], nums[0])
+		}
 	}
 }

@@ -198,7 +198,8 @@ type Input struct {
 
 // Check is a design check: both sides with values, the comparison, the
 // utilisation and the verdict OK or NOT OK (in words; colour only
-// supports them). Rel is one of ≤ ≥ < > = (or <= >=).
+// supports them). Rel is one of ≤ ≥ < > = ≠ (or <= >= !=): the relation
+// the printed sides stand in, so a failing ≤ check is given as >.
 type Check struct {
 	Pos        source.Position
 	Left       eqn.Node // the left symbol, e.g. q_Ed
@@ -207,18 +208,20 @@ type Check struct {
 	Right      eqn.Node
 	RightValue eqn.Node
 	Util       float64 // utilisation, left over right for ≤
+	UtilText   string  // the utilisation as printed everywhere ("0.57"); "" prints Util to two decimals
 	OK         bool
 	Note       []Run
 	Anchor     string // the check register links here
 }
 
-// Severity is a caution's heading word.
+// Severity is a caution's heading word, lowest first: NOTE, CAUTION,
+// WARNING (the order of calc/trace.Severity).
 type Severity uint8
 
 const (
 	SevNote Severity = iota
-	SevWarning
 	SevCaution
+	SevWarning
 )
 
 func (s Severity) String() string {
@@ -231,7 +234,7 @@ func (s Severity) String() string {
 	return "NOTE"
 }
 
-// Caution is a boxed caution: the word NOTE, WARNING or CAUTION, an
+// Caution is a boxed caution: the word NOTE, CAUTION or WARNING, an
 // optional title, and body blocks. A long one may run onto the next page.
 type Caution struct {
 	Pos      source.Position

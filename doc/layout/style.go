@@ -32,7 +32,3 @@ var (
 	badInk   = draw.Color{R: 190, G: 28, B: 28}
 	badFill  = draw.Color{R: 253, G: 236, B: 236}
 )
-
-// severity colours: NOTE, WARNING, CAUTION
-var sevInk = [3]draw.Color{{R: 52, G: 92, B: 140}, {R: 176, G: 112, B: 0}, {R: 180, G: 30, B: 30}}
-var sevFill = [3]draw.Color{{R: 240, G: 244, B: 250}, {R: 253, G: 247, B: 232}, {R: 252, G: 238, B: 238}}

@@ -2,6 +2,8 @@ package layout
 
 import (
 	"math"
+	"strconv"
+	"strings"
 
 	"plinth/doc/layout/draw"
 	"plinth/doc/layout/fonts"
@@ -60,14 +62,37 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		}
 		rows = append(rows, row)
 	}
+	// numbers in right-aligned columns line up on the decimal point:
+	// each is moved left by its column's longest fraction less its own
+	tails := make([][]float64, len(rows))
+	most := make([]float64, ncol)
+	for ri, row := range rows {
+		tails[ri] = make([]float64, len(row))
+		for c, cw := range row {
+			tails[ri][c] = -1
+			if ri == 0 || c >= len(t.Align) || t.Align[c] != AlignRight {
+				continue
+			}
+			if w, ok := fraction(cw.ws); ok {
+				tails[ri][c] = w
+				most[c] = math.Max(most[c], w)
+			}
+		}
+	}
+	shift := func(ri, c int) float64 {
+		if tails[ri][c] < 0 {
+			return 0
+		}
+		return most[c] - tails[ri][c]
+	}
 	// column widths from the content
 	minW := make([]float64, ncol)
 	maxW := make([]float64, ncol)
-	for _, row := range rows {
+	for ri, row := range rows {
 		for c, cw := range row {
 			lo, hi := measureWords(cw.ws)
-			minW[c] = math.Max(minW[c], lo+2*cellPadX)
-			maxW[c] = math.Max(maxW[c], hi+2*cellPadX)
+			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
+			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
 		}
 	}
 	widths := columnWidths(minW, maxW, width)
@@ -115,6 +140,9 @@ func (e *engine) table(t *Table, width float64) []*piece {
 				switch align {
 				case AlignRight:
 					dx += inner - ln.w
+					if len(lines) == 1 {
+						dx -= shift(ri, c)
+					}
 				case AlignCenter:
 					dx += (inner - ln.w) / 2
 				}
@@ -164,6 +192,43 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		out[n-2].keep = true
 	}
 	return out
+}
+
+// fraction reports whether a cell is one number ("245.7", "−0.12", "18")
+// or a formula that is one number and its unit ("2.4 m", "18 kN/m³"), and
+// the width from its decimal point to the cell's end (from the number's
+// end for a whole number), so a column can align its numbers on the point.
+// Exponents ("1.2e5") are not aligned.
+func fraction(ws []word) (float64, bool) {
+	if len(ws) != 1 || len(ws[0].frags) == 0 {
+		return 0, false
+	}
+	fs := ws[0].frags
+	var num string
+	if fs[0].math != nil {
+		if len(fs) != 1 || fs[0].text == "" {
+			return 0, false // a formula, not a number
+		}
+		num = fs[0].text
+	} else {
+		var text strings.Builder
+		for _, f := range fs {
+			if f.math != nil {
+				return 0, false
+			}
+			text.WriteString(f.text)
+		}
+		num = text.String()
+	}
+	s := strings.Replace(num, "−", "-", 1)
+	if _, err := strconv.ParseFloat(s, 64); err != nil || strings.ContainsAny(s, "eEinIN") {
+		return 0, false
+	}
+	whole := num
+	if i := strings.IndexByte(num, '.'); i >= 0 {
+		whole = num[:i]
+	}
+	return ws[0].w - fonts.Get(fs[0].face).Width(whole, fs[0].size), true
 }
 
 // measureWords is the narrowest a cell can be without splitting a word

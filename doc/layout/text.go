@@ -11,6 +11,25 @@ import (
 	"plinth/doc/source"
 )
 
+// leadNum is the digits of a formula that is a number, alone or with its
+// unit (eqn.Num, a degree sign after it, or a Row of a Num, a space and a
+// Unit).
+func leadNum(n eqn.Node) (string, bool) {
+	switch n := n.(type) {
+	case eqn.Num:
+		return strings.TrimSuffix(n.Text, "°"), true // 26°: degrees are glued to their number
+	case eqn.Row:
+		if len(n) == 3 {
+			num, ok := n[0].(eqn.Num)
+			_, sp := n[1].(eqn.Space)
+			if ok && sp {
+				return num.Text, true
+			}
+		}
+	}
+	return "", false
+}
+
 // textStyle is how a run of text is set in a block.
 type textStyle struct {
 	size  float64
@@ -29,7 +48,7 @@ type frag struct {
 	color draw.Color
 	link  string
 	w     float64
-	math  *eqn.Box
+	math  *eqn.Box // an inline formula (text then holds a lone number's digits, else "")
 }
 
 // word is what the line breaker moves: frags with no break opportunity
@@ -97,7 +116,11 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 				e.mathProblem(pos, r.Own, err)
 				continue
 			}
-			cur.frags = append(cur.frags, frag{math: b, w: b.W, size: st.size, link: r.Link, color: color})
+			fr := frag{math: b, w: b.W, size: st.size, link: r.Link, color: color}
+			if n, ok := leadNum(r.Math); ok {
+				fr.text, fr.face = n, fonts.Regular // a number (with its unit): its digits, for decimal alignment
+			}
+			cur.frags = append(cur.frags, fr)
 			cur.w += b.W
 			open = true
 			continue

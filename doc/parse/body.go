@@ -325,7 +325,7 @@ func (c *conv) quote(n *ast.Blockquote) sheet.Block {
 		}
 	}
 	if kind < 0 {
-		hint := "write > [!CAUTION], > [!WARNING] or > [!NOTE]"
+		hint := "write > [!WARNING], > [!CAUTION] or > [!NOTE] (highest severity first)"
 		if s, ok := sheet.Nearest(word, sheet.Alerts); ok {
 			hint = "did you mean [!" + s + "]?"
 		}

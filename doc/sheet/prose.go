@@ -96,17 +96,18 @@ type CodeBlock struct {
 	Text string
 }
 
-// Alert is the kind of a boxed caution.
+// Alert is the kind of a boxed caution, lowest severity first (the order
+// of calc/trace.Severity: NOTE, CAUTION, WARNING).
 type Alert int
 
 const (
 	AlertNote Alert = iota
-	AlertWarning
 	AlertCaution
+	AlertWarning
 )
 
 // Alerts are the words of "> [!WORD]" in Alert order.
-var Alerts = []string{"NOTE", "WARNING", "CAUTION"}
+var Alerts = []string{"NOTE", "CAUTION", "WARNING"}
 
 func (k Alert) String() string { return Alerts[k] }
 

@@ -2,6 +2,7 @@ package sketch
 
 import (
 	"math"
+	"slices"
 
 	"plinth/doc/layout/draw"
 	"plinth/doc/layout/fonts"
@@ -46,7 +47,7 @@ func (k *sk) paint() []draw.Item {
 		it = append(it, draw.Line{X1: xL, Y1: y, X2: xR, Y2: y, Paint: draw.Paint{Stroke: inkWater, Width: 0.6, Dash: []float64{5, 2.5}}})
 	}
 	// boundaries, carried out to the label column
-	bl := draw.Stroke(inkBoundary, 0.5)
+	bl := draw.Stroke(inkBoundary, boundaryWidth)
 	ends := []float64{}
 	if plat > 0 && plat < k.zBot {
 		ends = append(ends, plat)
@@ -71,19 +72,17 @@ func (k *sk) paint() []draw.Item {
 	if f.D-k.t <= 1e-9 { // the footing itself reaches GL
 		gap0, gap1 = k.X(-f.B/2), k.X(f.B/2)
 	}
-	gl := draw.Stroke(inkLine, 0.9)
+	gl := draw.Stroke(inkLine, glWidth)
 	it = append(it, draw.Line{X1: xL, Y1: k.yGL, X2: gap0, Y2: k.yGL, Paint: gl}, draw.Line{X1: gap1, Y1: k.yGL, X2: xR, Y2: k.yGL, Paint: gl})
-	const hs, hl = 4.5, 4.0 // hatch spacing and reach
+	const hs, hl = 4.5, hatchReach // hatch spacing and reach
 	for x := xL + hl; x <= xR+1e-9; x += hs {
 		if x-hl < gap1 && x > gap0 {
 			continue
 		}
 		it = append(it, draw.Line{X1: x, Y1: k.yGL, X2: x - hl, Y2: k.yGL + hl, Paint: draw.Stroke(inkHatch, 0.45)})
 	}
-	it = append(it, k.dims()...)
-	if water {
-		it = append(it, k.waterMark(*f.Water)...)
-	}
+	// labels at fixed places first, then those placed clear of them and
+	// of the lines (place): D and the groundwater level
 	it = append(it, k.loadArrows()...)
 	it = append(it, k.labelColumn()...)
 	if k.noteY > 0 {
@@ -96,6 +95,10 @@ func (k *sk) paint() []draw.Item {
 			t = "Section (strip footing, per metre run)"
 		}
 		it = append(it, draw.Text{X: xL, Y: k.titleY, Face: fonts.Bold, Size: sizeTitle, Color: inkText, Text: t})
+	}
+	it = k.dims(it)
+	if water {
+		it = k.waterMark(it, *f.Water)
 	}
 	if k.plan {
 		it = append(it, k.planView()...)
@@ -120,21 +123,54 @@ func (k *sk) gravel(x0, x1, y0, y1 float64) []draw.Item {
 	return it
 }
 
-// dims draws D beside the footing, B under it and B′ under that.
-func (k *sk) dims() []draw.Item {
+// levelsBelow are the page heights of the water line and the layer
+// boundaries below y, top down.
+func (k *sk) levelsBelow(y float64) []float64 {
+	var out []float64
+	if k.f.Water != nil && *k.f.Water < k.zBot {
+		out = append(out, k.Y(*k.f.Water))
+	}
+	for _, l := range k.f.Layers {
+		if l.Top > 0 && l.Top < k.zBot {
+			out = append(out, k.Y(l.Top))
+		}
+	}
+	if p := k.f.Platform; p != nil && p.Thickness < k.zBot {
+		out = append(out, k.Y(p.Thickness))
+	}
+	var below []float64
+	for _, v := range out {
+		if v > y {
+			below = append(below, v)
+		}
+	}
+	slices.Sort(below)
+	return below
+}
+
+// dims draws B under the footing, B′ under that and D beside it, onto
+// the items drawn so far; D's label takes the first place clear of them:
+// beside its dimension line, under the base, under each level below it,
+// or above GL.
+func (k *sk) dims(it []draw.Item) []draw.Item {
 	f := k.f
-	var it []draw.Item
 	ext := draw.Stroke(inkDim, 0.4)
 	left, right, base := k.X(-f.B/2), k.X(f.B/2), k.Y(f.D)
-	if f.D > 0 {
+	d := func() {
 		xd := left - 12
 		it = append(it, draw.Line{X1: left - 2, Y1: base, X2: xd - 3, Y2: base, Paint: ext})
 		it = append(it, dim(draw.Pt(xd, k.yGL), draw.Pt(xd, base), nil)...)
-		y := (k.yGL+base)/2 + capMid(sizeText)
-		if base-k.yGL < ascent(sizeText)+descent(sizeText)+6 { // too short to hold it: set it under the base
-			y = base + 2 + ascent(sizeText)
+		label := "D = " + metres(f.D)
+		var cands []draw.Text
+		if base-k.yGL >= ascent(sizeText)+descent(sizeText)+6 { // room beside the dimension line
+			cands = append(cands, txt(xd-3, (k.yGL+base)/2+capMid(sizeText), draw.Right, label))
 		}
-		it = append(it, masked(txt(xd-3, y, draw.Right, "D = "+metres(f.D)))...)
+		cands = append(cands, txt(xd-3, base+2+ascent(sizeText), draw.Right, label))
+		for _, y := range k.levelsBelow(base) {
+			cands = append(cands, txt(xd-3, y+2+ascent(sizeText), draw.Right, label))
+		}
+		cands = append(cands, txt(xd-3, k.yGL-3-descent(sizeText), draw.Right, label))
+		it = append(it, masked(place(it, cands...))...)
 	}
 	yb, ye := k.dimLevels()
 	it = append(it, draw.Line{X1: left, Y1: base + 2, X2: left, Y2: yb + 3, Paint: ext},
@@ -156,6 +192,9 @@ func (k *sk) dims() []draw.Item {
 		it = append(it, dim(draw.Pt(xa, ye), draw.Pt(xb, ye), []float64{3, 2})...)
 		it = append(it, masked(txt((xa+xb)/2, ye+2.5+ascent(sizeText), draw.Center, "B′ = "+metres(be)))...)
 	}
+	if f.D > 0 {
+		d()
+	}
 	return it
 }
 
@@ -168,19 +207,27 @@ func waterLabel(z float64) string {
 	return "GWL " + metres(z)
 }
 
-// waterMark is the groundwater symbol — an inverted triangle on the level
-// with two short lines under it — and the level's label.
-func (k *sk) waterMark(z float64) []draw.Item {
+// waterMark adds the groundwater symbol — an inverted triangle on the
+// level with two short lines under it — and the level's label to the
+// items drawn so far: the label above the water line, else under it, else
+// under the next level down, wherever it first stands clear (place).
+func (k *sk) waterMark(it []draw.Item, z float64) []draw.Item {
 	l := waterLabel(z)
 	// towards the section's right edge, clear of the footing's dimensions
 	x, y := math.Max(k.X(k.f.B/2)+14, k.X(k.half)-4-textW(fonts.Regular, sizeText, l)-6), k.Y(math.Max(z, 0))
 	p := draw.Paint{Stroke: inkWater, Width: 0.6, Fill: draw.Gray(255), Filled: true}
-	return []draw.Item{
+	it = append(it,
 		draw.Poly{Closed: true, Paint: p, Points: []draw.Point{draw.Pt(x-3.5, y-6), draw.Pt(x+3.5, y-6), draw.Pt(x, y)}},
 		draw.Line{X1: x - 3, Y1: y + 2, X2: x + 3, Y2: y + 2, Paint: draw.Stroke(inkWater, 0.6)},
-		draw.Line{X1: x - 1.6, Y1: y + 4, X2: x + 1.6, Y2: y + 4, Paint: draw.Stroke(inkWater, 0.6)},
-		draw.Text{X: x + 6, Y: y - 2.5, Face: fonts.Regular, Size: sizeText, Color: inkWater, Text: l},
+		draw.Line{X1: x - 1.6, Y1: y + 4, X2: x + 1.6, Y2: y + 4, Paint: draw.Stroke(inkWater, 0.6)})
+	at := func(y float64) draw.Text {
+		return draw.Text{X: x + 6, Y: y, Face: fonts.Regular, Size: sizeText, Color: inkWater, Text: l}
 	}
+	cands := []draw.Text{at(y - 2.5), at(y + 2.5 + ascent(sizeText))}
+	for _, v := range k.levelsBelow(y + 0.01) {
+		cands = append(cands, at(v+2+ascent(sizeText)))
+	}
+	return append(it, place(it, cands...))
 }
 
 // loadArrows draws V onto the column top, H at the column's head and M
@@ -259,7 +306,8 @@ func (k *sk) labelColumn() []draw.Item {
 
 // dimLevels are the heights of the B and B′ dimension lines under the
 // base: 12 and 30 pt down, lowered in steps while either would lie along
-// the water line or a layer boundary.
+// the water line or a layer boundary or their labels would cross one, as
+// far as the sketch's bottom allows.
 func (k *sk) dimLevels() (yb, ye float64) {
 	var avoid []float64
 	if k.f.Water != nil {
@@ -278,7 +326,11 @@ func (k *sk) dimLevels() (yb, ye float64) {
 		return false
 	}
 	base := k.Y(k.f.D)
-	for off := 0.0; off <= dimShift; off += 2 {
+	room := k.Y(k.zBot) - (base + 30 + 2.5 + ascent(sizeText) + descent(sizeText)) // how far B′'s label can go down
+	if k.f.BEff == nil {
+		room += 18
+	}
+	for off := 0.0; off <= math.Max(dimShift, room); off += 1 {
 		yb, ye = base+12+off, base+30+off
 		if !near(yb) && (k.f.BEff == nil || !near(ye)) {
 			return

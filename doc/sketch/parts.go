@@ -5,6 +5,7 @@ import (
 	"strconv"
 	"strings"
 
+	"plinth/calc/units"
 	"plinth/doc/layout/draw"
 	"plinth/doc/layout/fonts"
 )
@@ -16,6 +17,10 @@ const (
 	sizeTitle = 8.0
 	headLen   = 5.0 // arrowhead length
 	headHalf  = 2.0 // arrowhead half-width
+
+	glWidth       = 0.9 // the ground line's stroke
+	hatchReach    = 4.0 // how far its hatching reaches below it
+	boundaryWidth = 0.5 // a layer boundary's stroke
 )
 
 var (
@@ -90,8 +95,12 @@ func dim(a, b draw.Point, dash []float64) []draw.Item {
 		draw.Line{X1: b.X - t*(ux-uy), Y1: b.Y - t*(uy+ux), X2: b.X + t*(ux-uy), Y2: b.Y + t*(uy+ux), Paint: draw.Stroke(inkDim, 0.6)}}
 }
 
-// metres prints a length to the centimetre: "2.40 m".
-func metres(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) + " m" }
+// metres prints a length by the display rules of the rest of the
+// document (units.Format), so a sketch and the working give the same
+// number: "2.4 m", "2.631 m".
+func metres(v float64) string { return units.Format(v, metre, -1) + " m" }
+
+var metre = units.MustParse("m")
 
 // amount prints a load's size to at most two decimals, trailing zeros
 // dropped: 1270, 35.5.

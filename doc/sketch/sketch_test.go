@@ -98,8 +98,10 @@ func TestLabels(t *testing.T) {
 			got = append(got, x.Text)
 		}
 	}
-	want := "D = 1.00 m|B = 2.40 m|B′ = 2.26 m|GWL 2.00 m|V = 1270 kN|M = 90 kNm|H = 35 kN|" +
-		"Made ground from GL|Firm clay from 0.60 m|Dense sand from 5.00 m|Section|Plan|B = 2.40 m|L = 3.00 m"
+	// fixed labels first, then those placed clear of them (D, GWL)
+	// lengths by the document's display rules (units.Format), as in the working
+	want := "V = 1270 kN|M = 90 kNm|H = 35 kN|Made ground from GL|Firm clay from 0.6 m|Dense sand from 5 m|Section|" +
+		"B = 2.4 m|B′ = 2.258 m|D = 1 m|GWL 2 m|Plan|B = 2.4 m|L = 3 m"
 	if g := strings.Join(got, "|"); g != want {
 		t.Errorf("labels\n got %s\nwant %s", g, want)
 	}
