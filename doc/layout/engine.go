@@ -71,6 +71,9 @@ func Document(doc Doc) (pages *Pages, err error) {
 			title = fmt.Sprintf("Sheet %d", si+1)
 		}
 		out.Outline = append(out.Outline, Bookmark{Title: title, Page: first})
+		if doc.Progress != nil {
+			doc.Progress(si+1, len(doc.Sheets))
+		}
 	}
 	e.furnish(doc, out, banner)
 	e.checkLinks(out)

@@ -22,6 +22,9 @@ type Options struct {
 	Time time.Time
 	// Creator names the program that made the document ("plinth 0.3").
 	Creator string
+	// Progress, when set, is called after each page is drawn with the
+	// pages done and the total.
+	Progress func(done, total int)
 }
 
 // Write draws pages as a PDF to w.
@@ -75,6 +78,9 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			if err := p.box(b); err != nil {
 				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
 			}
+		}
+		if opt.Progress != nil {
+			opt.Progress(i+1, len(pages.Pages))
 		}
 	}
 	var buf bytes.Buffer
