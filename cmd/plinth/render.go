@@ -50,7 +50,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		return exitErrors
 	}
 	var buf bytes.Buffer
-	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth", Progress: prog.pageFunc()})
+	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth", Progress: prog.pageFunc(), Release: true})
 	prog.done()
 	if err != nil {
 		printDiags(stderr, diags)
