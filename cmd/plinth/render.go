@@ -42,17 +42,21 @@ func render(args []string, stdout, stderr io.Writer) int {
 		printDiags(stderr, diags)
 		return exitErrors
 	}
-	pages, cd := compose.Pages(res, compose.Options{})
+	prog := newProgress(stderr) // a line on a terminal for a long render
+	pages, cd := compose.Pages(res, compose.Options{Progress: prog.sheetFunc()})
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)
 	diags.Sort()
 	if diags.HasErrors() {
+		prog.done()
 		printDiags(stderr, diags)
 		return exitErrors
 	}
 	var buf bytes.Buffer
-	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version()}); err != nil {
+	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Progress: prog.pageFunc(), Release: true})
+	prog.done()
+	if err != nil {
 		printDiags(stderr, diags)
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors

@@ -18,6 +18,9 @@ type Options struct {
 	// numbers, but the references list they point to is not printed, so
 	// they are not linked.
 	Bare bool
+	// Progress is passed to the layout (layout.Doc.Progress): sheets laid
+	// out, once per layout pass.
+	Progress func(done, total int)
 }
 
 // composer carries the state of one Document call.

@@ -29,6 +29,7 @@ func Pages(res *eval.Result, opt Options) (pages *layout.Pages, diags source.Lis
 		c.diags.Sort()
 		return nil, c.diags
 	}
+	doc.Progress = c.opt.Progress
 	for pass := 0; pass < 3; pass++ {
 		var err error
 		pages, err = layout.Document(doc)

@@ -2,6 +2,8 @@ package layout
 
 import (
 	"fmt"
+	"runtime"
+	"sync"
 
 	"plinth/doc/layout/draw"
 	"plinth/doc/source"
@@ -57,10 +59,14 @@ func Document(doc Doc) (pages *Pages, err error) {
 		e.bodyH -= banner.H + 8
 	}
 	out := &Pages{Info: doc.Info}
+	laid, err := e.sheets(doc.Sheets)
+	if err != nil {
+		return nil, err
+	}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
-		e.num = [4]int{}
-		pieces := e.blocks(sh.Blocks, e.bodyW)
+		pieces := laid[si]
+		laid[si] = nil
 		first := len(out.Pages)
 		e.paginate(si, sh.Pos, pieces, out)
 		title := sh.Bookmark
@@ -71,6 +77,9 @@ func Document(doc Doc) (pages *Pages, err error) {
 			title = fmt.Sprintf("Sheet %d", si+1)
 		}
 		out.Outline = append(out.Outline, Bookmark{Title: title, Page: first})
+		if doc.Progress != nil {
+			doc.Progress(si+1, len(doc.Sheets))
+		}
 	}
 	e.furnish(doc, out, banner)
 	e.checkLinks(out)
@@ -78,6 +87,49 @@ func Document(doc Doc) (pages *Pages, err error) {
 		return nil, e.probs.sorted()
 	}
 	return out, nil
+}
+
+// sheets lays out the body of every sheet into pieces, the sheets in
+// parallel: each is independent until it is paginated. Each sheet gets its
+// own copy of the engine state; the problems are gathered in sheet order.
+func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
+	laid := make([][]*piece, len(shs))
+	probs := make([]Problems, len(shs))
+	fails := make([]error, len(shs))
+	workers := min(runtime.GOMAXPROCS(0), len(shs))
+	next := make(chan int)
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for si := range next {
+				func() {
+					defer func() {
+						if r := recover(); r != nil {
+							fails[si] = fmt.Errorf("layout: internal error: %v", r)
+						}
+					}()
+					se := *e
+					se.probs, se.num, se.listDepth = nil, [4]int{}, 0
+					laid[si] = se.blocks(shs[si].Blocks, se.bodyW)
+					probs[si] = se.probs
+				}()
+			}
+		}()
+	}
+	for si := range shs {
+		next <- si
+	}
+	close(next)
+	wg.Wait()
+	for si := range shs {
+		if fails[si] != nil {
+			return nil, fails[si]
+		}
+		e.probs = append(e.probs, probs[si]...)
+	}
+	return laid, nil
 }
 
 // blocks lays out a list of blocks at width.

@@ -4,6 +4,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"plinth/doc/layout/draw"
 	"plinth/doc/layout/fonts"
@@ -149,10 +150,7 @@ func (e *engine) titleBlock(value func(string) (string, bool), pos source.Positi
 		avail := cw - 4.8
 		if tw := vf.Width(text, size); tw > avail {
 			size = math.Max(size*avail/tw, size*0.7)
-			for vf.Width(text, size) > avail && len([]rune(text)) > 1 {
-				rs := []rune(strings.TrimSuffix(text, "…"))
-				text = strings.TrimSpace(string(rs[:len(rs)-1])) + "…"
-			}
+			text = clip(vf, text, size, avail)
 		}
 		top := labelBase + 1
 		base := top + (cy+ch-top+vf.CapHeight(size))/2
@@ -203,4 +201,30 @@ func (e *engine) footer(value func(string) (string, bool), pos source.Position) 
 		b.Items = append(b.Items, draw.Text{X: x, Y: base, Face: fonts.Regular, Size: size, Color: muted, Text: text})
 	}
 	return b
+}
+
+// clip shortens text with an ellipsis until it fits avail at size: the
+// prefix is found in one pass over the characters that fit, so a very long
+// value costs no more than a short one.
+func clip(f *fonts.Font, text string, size, avail float64) string {
+	if f.Width(text, size) <= avail {
+		return text
+	}
+	room := avail - f.Width("…", size)
+	x, end := 0.0, 0
+	for i, r := range text {
+		x += float64(f.Advance(r)) * size / 1000
+		if x > room && i > 0 {
+			break
+		}
+		end = i + utf8.RuneLen(r)
+	}
+	rs := []rune(text[:end])
+	for {
+		out := strings.TrimSpace(string(rs)) + "…"
+		if len(rs) <= 1 || f.Width(out, size) <= avail {
+			return out
+		}
+		rs = rs[:len(rs)-1]
+	}
 }

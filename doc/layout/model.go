@@ -13,6 +13,9 @@ type Doc struct {
 	Info     Info
 	Template *Template // nil = the built-in A4 template
 	Sheets   []Sheet
+	// Progress, when set, is called after each sheet is laid out with the
+	// sheets done and the total (it does not change the pages).
+	Progress func(done, total int)
 }
 
 // Info describes the package as a whole.

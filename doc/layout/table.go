@@ -95,6 +95,13 @@ func (e *engine) table(t *Table, width float64) []*piece {
 			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
 		}
 	}
+	// a word wider than half the table breaks rather than squeezing
+	// the other columns to nothing
+	share := math.Max(width/2, 4*cellPadX)
+	for c := range minW {
+		minW[c] = math.Min(minW[c], share)
+		maxW[c] = math.Max(maxW[c], minW[c])
+	}
 	widths := columnWidths(minW, maxW, width)
 	total := 0.0
 	for _, w := range widths {
@@ -128,7 +135,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		h := 0.0
 		x := 0.0
 		for c, cw := range row {
-			inner := widths[c] - 2*cellPadX
+			inner := math.Max(widths[c]-2*cellPadX, 1)
 			lines := breakLines(append([]word(nil), cw.ws...), inner, cw.style)
 			y := cellPadY
 			for _, ln := range lines {

@@ -3,6 +3,7 @@ package layout
 import (
 	"math"
 	"strings"
+	"unicode"
 	"unicode/utf8"
 
 	"plinth/doc/layout/draw"
@@ -260,7 +261,9 @@ func excerpt(s string, r rune) string {
 
 // breakLines sets words into lines no wider than width: greedy, breaking
 // at spaces; a word longer than a line breaks after a '/' if it can, else
-// between characters.
+// between characters (with a hyphen between two letters). Every step sets
+// a word or a non-empty part of one, so the work is bounded by the
+// characters of the text.
 func breakLines(ws []word, width float64, st textStyle) []line {
 	var lines []line
 	var cur []word
@@ -284,7 +287,12 @@ func breakLines(ws []word, width float64, st textStyle) []line {
 			i--
 			continue
 		default: // alone and too long: split it
-			head, tail := splitWord(w, width)
+			head, tail, ok := splitWord(w, width)
+			if !ok { // nothing to split: set it as it is
+				cur = append(cur, w)
+				x += w.w
+				break
+			}
 			cur = append(cur, head)
 			flush()
 			ws[i] = tail
@@ -302,9 +310,15 @@ func breakLines(ws []word, width float64, st textStyle) []line {
 }
 
 // splitWord cuts w so the head fits width: after the last '/' that fits,
-// else after the last character that fits (at least one character).
-func splitWord(w word, width float64) (head, tail word) {
-	type cut struct{ frag, off int }
+// else after the last character that fits (at least one character), with
+// a hyphen when the cut falls between two letters. ok is false when w
+// cannot be cut (a single character or formula). The work is in
+// proportion to the head, not the whole word.
+func splitWord(w word, width float64) (head, tail word, ok bool) {
+	type cut struct {
+		frag, off int
+		hyph      bool
+	}
 	var best, slash cut
 	found, foundSlash := false, false
 	x := 0.0
@@ -314,19 +328,25 @@ func splitWord(w word, width float64) (head, tail word) {
 				break
 			}
 			x += f.w
-			best, found = cut{fi + 1, 0}, true
+			best, found = cut{fi + 1, 0, false}, true
 			continue
 		}
 		fo := fonts.Get(f.face)
+		hyW := float64(fo.Advance('-')) * f.size / 1000
 		for off, r := range f.text {
 			cw := float64(fo.Advance(r)) * f.size / 1000
 			if x+cw > width && found {
 				goto done
 			}
 			x += cw
-			best, found = cut{fi, off + utf8.RuneLen(r)}, true
-			if r == '/' {
-				slash, foundSlash = best, true
+			end := off + utf8.RuneLen(r)
+			next, _ := utf8.DecodeRuneInString(f.text[end:])
+			letters := unicode.IsLetter(r) && unicode.IsLetter(next)
+			if !letters || x+hyW <= width || !found {
+				best, found = cut{fi, end, letters && x+hyW <= width}, true
+				if r == '/' {
+					slash, foundSlash = best, true
+				}
 			}
 		}
 	}
@@ -334,26 +354,43 @@ done:
 	if foundSlash {
 		best = slash
 	}
-	for fi, f := range w.frags {
-		switch {
-		case fi < best.frag:
-			head.frags = append(head.frags, f)
-		case fi > best.frag:
+	if best.frag < len(w.frags) && w.frags[best.frag].math == nil && best.off >= len(w.frags[best.frag].text) {
+		best = cut{best.frag + 1, 0, false}
+	}
+	if best.frag >= len(w.frags) || (best.frag == 0 && best.off == 0) {
+		return w, word{}, false // nothing before or after the cut
+	}
+	head.frags = make([]frag, 0, best.frag+1)
+	head.frags = append(head.frags, w.frags[:best.frag]...)
+	if best.frag < len(w.frags) {
+		f := w.frags[best.frag]
+		if best.off > 0 {
+			fo := fonts.Get(f.face)
+			h := f
+			h.text = f.text[:best.off]
+			hu := fo.Units(h.text)
+			l, _ := utf8.DecodeLastRuneInString(h.text)
+			r, _ := utf8.DecodeRuneInString(f.text[best.off:])
+			// the tail's width from the whole's, exactly as Width would give it
+			all := int(math.Round(f.w * 1000 / f.size))
+			tu := all - hu - fo.Kern(l, r)
+			if best.hyph {
+				h.text += "-"
+				hu = fo.Units(h.text)
+			}
+			h.w = float64(hu) * f.size / 1000
+			head.frags = append(head.frags, h)
+			t := f
+			t.text = f.text[best.off:]
+			t.w = float64(tu) * f.size / 1000
+			tail.frags = append(tail.frags, t)
+		} else {
 			tail.frags = append(tail.frags, f)
-		default:
-			if best.off > 0 {
-				h := f
-				h.text = f.text[:best.off]
-				h.w = fonts.Get(f.face).Width(h.text, f.size)
-				head.frags = append(head.frags, h)
-			}
-			if best.off < len(f.text) {
-				t := f
-				t.text = f.text[best.off:]
-				t.w = fonts.Get(f.face).Width(t.text, f.size)
-				tail.frags = append(tail.frags, t)
-			}
 		}
+		tail.frags = append(tail.frags, w.frags[best.frag+1:]...)
+	}
+	if len(head.frags) == 0 || len(tail.frags) == 0 {
+		return w, word{}, false
 	}
 	for _, f := range head.frags {
 		head.w += f.w
@@ -362,7 +399,7 @@ done:
 		tail.w += f.w
 	}
 	tail.space, tail.hard = w.space, w.hard
-	return head, tail
+	return head, tail, true
 }
 
 // setLine places words on a line and measures it. Items are relative to

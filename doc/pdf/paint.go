@@ -1,7 +1,7 @@
 package pdf
 
 import (
-	"fmt"
+	"slices"
 
 	"github.com/signintech/gopdf"
 
@@ -19,7 +19,7 @@ type painter struct {
 	stroke draw.Color
 	fill   draw.Color
 	width  float64
-	dash   string
+	dash   []float64
 	// which of the above hold on the current page (a new page's content
 	// stream starts from the default graphics state)
 	hasFont, hasText, hasStroke, hasFill bool
@@ -70,14 +70,13 @@ func (p *painter) setStroke(pt draw.Paint) {
 		p.gp.SetLineWidth(pt.Width)
 		p.width = pt.Width
 	}
-	dash := fmt.Sprint(pt.Dash)
-	if fresh || dash != p.dash {
+	if fresh || !slices.Equal(pt.Dash, p.dash) {
 		if len(pt.Dash) == 0 {
 			p.gp.SetLineType("solid")
 		} else {
 			p.gp.SetCustomLineType(append([]float64(nil), pt.Dash...), 0)
 		}
-		p.dash = dash
+		p.dash = append(p.dash[:0], pt.Dash...)
 	}
 }
 

@@ -22,6 +22,13 @@ type Options struct {
 	Time time.Time
 	// Creator names the program that made the document ("plinth 0.3").
 	Creator string
+	// Progress, when set, is called after each page is drawn with the
+	// pages done and the total.
+	Progress func(done, total int)
+	// Release drops each page's boxes once the page is drawn, so the
+	// layout behind the written pages can be collected while the rest are
+	// drawn (for a caller that needs only the page count afterwards).
+	Release bool
 }
 
 // Write draws pages as a PDF to w.
@@ -75,6 +82,12 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			if err := p.box(b); err != nil {
 				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
 			}
+		}
+		if opt.Release {
+			pg.Boxes = nil
+		}
+		if opt.Progress != nil {
+			opt.Progress(i+1, len(pages.Pages))
 		}
 	}
 	var buf bytes.Buffer
