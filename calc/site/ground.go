@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 )
 
 // Unit scales used for the ranges below: SI value = display value × scale.
@@ -90,12 +91,20 @@ func (g Ground) Validate() error {
 	if len(g.Layers) == 0 {
 		errs = append(errs, &InputError{Where: g.Name, Msg: "the ground model has no layers"})
 	}
+	seen := map[string]int{}
 	for i, l := range g.Layers {
 		w := fmt.Sprintf("layer %d", i+1)
 		if l.Name != "" {
 			w = fmt.Sprintf("layer %q", l.Name)
 		}
 		n := i + 1
+		if key := strings.ToLower(strings.TrimSpace(l.Name)); key != "" {
+			if first, dup := seen[key]; dup {
+				errs = append(errs, &InputError{Where: w, Layer: n, Msg: fmt.Sprintf("its name is already that of layer %d: each layer of a ground model needs its own name (its cells are named by it)", first)})
+			} else {
+				seen[key] = n
+			}
+		}
 		if i == 0 && l.Top != 0 {
 			errs = append(errs, &InputError{Where: w, Layer: n, Param: "top", Msg: fmt.Sprintf("the first layer must start at ground level (top = 0 m), not %g m", l.Top)})
 		}
