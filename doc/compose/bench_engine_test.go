@@ -60,9 +60,14 @@ func BenchmarkRenderEngine1000(b *testing.B) {
 	benchEngine(b, 1000)
 }
 
-func benchEngine(b *testing.B, n int) {
+func benchEngine(b *testing.B, n int) { benchPackage(b, writeEngineBenchPackage, n) }
+
+// benchPackage renders a generated package of n sheets from its
+// evaluated form (compose, layout, PDF) and reports pages, PDF size and
+// peak memory.
+func benchPackage(b *testing.B, write func(string, int) error, n int) {
 	dir := b.TempDir()
-	if err := writeEngineBenchPackage(dir, n); err != nil {
+	if err := write(dir, n); err != nil {
 		b.Fatal(err)
 	}
 	res := evaluate(b, dir)

@@ -1,16 +1,12 @@
 package compose_test
 
 import (
-	"bytes"
 	"fmt"
 	"os"
 	"path/filepath"
-	"runtime"
 	"strings"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/pdf"
 )
 
 // writeBenchPackage writes an invented package of n calc sheets, each
@@ -87,33 +83,7 @@ func TestWriteBenchPackage(t *testing.T) {
 // pages) from its evaluated form: compose, layout (two passes for the
 // cover's page numbers) and the PDF. Target: under 1 s and 200 MB on one
 // core.
-func BenchmarkRender100(b *testing.B) {
-	dir := b.TempDir()
-	if err := writeBenchPackage(dir, 100); err != nil {
-		b.Fatal(err)
-	}
-	res := evaluate(b, dir)
-	b.ReportAllocs()
-	b.ResetTimer()
-	var pages, size int
-	for b.Loop() {
-		p, d := compose.Pages(res, compose.Options{})
-		if d.HasErrors() {
-			b.Fatal(d)
-		}
-		var buf bytes.Buffer
-		if err := pdf.Write(&buf, p, pdf.Options{}); err != nil {
-			b.Fatal(err)
-		}
-		pages, size = len(p.Pages), buf.Len()
-	}
-	b.StopTimer()
-	var ms runtime.MemStats
-	runtime.ReadMemStats(&ms)
-	b.ReportMetric(float64(pages), "pages")
-	b.ReportMetric(float64(size)/1e6, "MB-pdf")
-	b.ReportMetric(float64(ms.HeapSys)/1e6, "MB-heap-sys")
-}
+func BenchmarkRender100(b *testing.B) { benchPackage(b, writeBenchPackage, 100) }
 
 // BenchmarkRenderDemo renders the example package end to end, as plinth
 // render does: load, parse, evaluate (with the engine), compose, layout
