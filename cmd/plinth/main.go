@@ -19,6 +19,9 @@ const usage = `plinth — calculation packages for shallow foundations
 Usage:
   plinth check PATH [--set name=value]... [--json]
   plinth render PATH [-o FILE] [--set name=value]...
+  plinth diff OLD NEW [--json]    what changed between two packages
+  plinth verify FILE.pdf [PATH] [--render]   check a PDF against its inputs
+  plinth extract FILE.pdf DIR     write the package a PDF carries to DIR
   plinth init DIR         write a starter package (ground model and a pad) to DIR
   plinth version          print the version
   plinth help [COMMAND]   this overview, or one command's flags (also COMMAND -h)
@@ -68,6 +71,52 @@ Flags (before or after PATH):
 
 Exit status: 0 all checks OK, 1 a check is NOT OK (the PDF is written),
 2 input errors (nothing is written).
+`,
+	"diff": `Usage: plinth diff OLD NEW [--json]
+
+Evaluates two packages and prints what changed: checks whose verdict
+changed (OK → NOT OK first), checks added or removed, results whose
+displayed value changed (with the change in %), inputs changed (with
+file:line on each side) and the package fields changed (revision,
+checker). Values equal at display precision are not changes. Sheets are
+matched by calc number, then by file name.
+
+OLD and NEW are each a package folder or sheet, a git revision of one
+(REV:path, path relative to the working folder, read with the git
+command), or a PDF plinth wrote (its embedded inputs).
+
+Flags:
+  --json             print one JSON object (documented in the README)
+  -h, --help         print this help
+
+Exit status: 0 no check became NOT OK, 1 one did, 2 input errors in
+either side (listed with the side named).
+`,
+	"verify": `Usage: plinth verify FILE.pdf [PATH] [--render]
+
+Checks the package a PDF carries: each embedded file against its SHA-256,
+and the input fingerprint recomputed from them against the one in the
+document information. With PATH, lists the working files that differ from
+those the PDF was made from (added, removed, changed, with a line count).
+With --render, renders again from the embedded inputs and confirms the
+PDF is byte-identical (when the plinth version matches).
+
+Flags:
+  --render           re-render from the embedded inputs and compare
+  -h, --help         print this help
+
+Exit status: 0 verified, 1 mismatch, 2 unreadable.
+`,
+	"extract": `Usage: plinth extract FILE.pdf DIR
+
+Writes the package a PDF carries (its sheets, package.yaml, templates,
+factor files, images) into DIR, creating it. Never overwrites a file and
+never writes outside DIR.
+
+Flags:
+  -h, --help         print this help
+
+Exit status: 0 written, 2 unreadable PDF or a file exists.
 `,
 	"init": `Usage: plinth init DIR
 
@@ -130,6 +179,12 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return render(rest, stdout, stderr)
 	case "init":
 		return initPackage(rest, stdout, stderr)
+	case "diff":
+		return diffCmd(rest, stdout, stderr)
+	case "verify":
+		return verifyCmd(rest, stdout, stderr)
+	case "extract":
+		return extractCmd(rest, stdout, stderr)
 	}
 	fmt.Fprintf(stderr, "plinth: unknown command %q\n\n%s", cmd, usage)
 	return exitErrors

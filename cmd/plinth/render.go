@@ -37,7 +37,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors
 	}
-	res, diags := evaluate(o.path, o.sets)
+	res, diags, rec := evaluateRecorded(o.path, o.sets)
 	if diags.HasErrors() {
 		printDiags(stderr, diags)
 		return exitErrors
@@ -51,8 +51,14 @@ func render(args []string, stdout, stderr io.Writer) int {
 		printDiags(stderr, diags)
 		return exitErrors
 	}
+	files, err := inputFiles(res, rec, o.path)
+	if err != nil {
+		printDiags(stderr, diags)
+		fmt.Fprintf(stderr, "plinth: %v\n", err)
+		return exitErrors
+	}
 	var buf bytes.Buffer
-	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version()}); err != nil {
+	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Files: files}); err != nil {
 		printDiags(stderr, diags)
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors

@@ -22,6 +22,9 @@ type Options struct {
 	Time time.Time
 	// Creator names the program that made the document ("plinth 0.3").
 	Creator string
+	// Files are embedded as attachments (the package's inputs), listed in
+	// the catalog's EmbeddedFiles name tree in name order.
+	Files []File
 }
 
 // Write draws pages as a PDF to w.
@@ -88,6 +91,11 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	}
 	if out, err = patchInfo(out, info, opt.Time); err != nil {
 		return err
+	}
+	if len(opt.Files) > 0 {
+		if out, err = embed(out, opt.Files); err != nil {
+			return err
+		}
 	}
 	_, err = w.Write(out)
 	return err
