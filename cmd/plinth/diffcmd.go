@@ -83,6 +83,7 @@ func diffCmd(args []string, stdout, stderr io.Writer) int {
 func writeJSON(w io.Writer, v any) {
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
+	enc.SetEscapeHTML(false)
 	enc.Encode(v)
 }
 
