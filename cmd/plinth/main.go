@@ -2,6 +2,9 @@
 //
 //	plinth check PATH [--set name=value]... [--json]
 //	plinth render PATH [-o FILE] [--set name=value]...
+//	plinth diff OLD NEW [--json]
+//	plinth verify FILE.pdf [PATH] [--render]
+//	plinth extract FILE.pdf DIR
 //	plinth init DIR
 //
 // Exit status: 0 when every check is OK, 1 when a check is NOT OK, 2 for
