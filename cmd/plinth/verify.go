@@ -189,7 +189,10 @@ func compareWorking(w io.Writer, in *inputs, p string) int {
 	}
 	var extra []string
 	for k := range work {
-		if _, ok := in.files[k]; !ok && (isSheetPath(k) || k == "package.yaml") {
+		// a new sheet is an input of a folder's run; a single sheet's
+		// run reads other sheets only through its uses, which would
+		// change the sheet itself
+		if _, ok := in.files[k]; !ok && ((in.man.Sheet == "" && isSheetPath(k)) || k == "package.yaml") {
 			extra = append(extra, k)
 		}
 	}

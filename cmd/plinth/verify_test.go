@@ -174,3 +174,21 @@ func TestVariantPDF(t *testing.T) {
 		t.Errorf("inputs: %+v", c.Inputs)
 	}
 }
+
+// TestSingleSheetPDF: a sheet rendered alone carries the sheets it uses
+// and verifies against its own folder, where the other sheets are not
+// its inputs; diff finds nothing between it and the sheet.
+func TestSingleSheetPDF(t *testing.T) {
+	pkg := copyPackage(t)
+	sheet := filepath.Join(pkg, "03-pad-p1.md")
+	file := filepath.Join(t.TempDir(), "p1.pdf")
+	if _, errs, code := runCmd("render", sheet, "-o", file); code != exitOK {
+		t.Fatalf("render: %s", errs)
+	}
+	if out, errs, code := runCmd("verify", file, sheet, "--render"); code != exitOK {
+		t.Errorf("verify: status %d\n%s%s", code, out, errs)
+	}
+	if out, errs, code := runCmd("diff", file, sheet); code != exitOK || !strings.Contains(out, "no changes") {
+		t.Errorf("diff: status %d\n%s%s", code, out, errs)
+	}
+}
