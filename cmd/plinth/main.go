@@ -21,7 +21,7 @@ const usage = `plinth — calculation packages for shallow foundations
 
 Usage:
   plinth check PATH [--set name=value]... [--json]
-  plinth render PATH [-o FILE] [--set name=value]...
+  plinth render PATH [-o FILE] [--set name=value]... [--since OLD]
   plinth diff OLD NEW [--json]    what changed between two packages
   plinth verify FILE.pdf [PATH] [--render]   check a PDF against its inputs
   plinth extract FILE.pdf DIR     write the package a PDF carries to DIR
@@ -70,7 +70,13 @@ Flags (before or after PATH):
   -o, --output FILE  the PDF to write (default: <folder>.pdf beside a
                      package folder, <sheet>.pdf beside a sheet)
   --set name=value   override an input for a variant run (repeatable)
+  --since OLD        add a page "Changes since revision X" after the
+                     summary: what plinth diff OLD PATH prints (OLD a
+                     folder, a sheet, REV:path or a PDF plinth wrote)
   -h, --help         print this help
+
+Every PDF embeds the package's source files and a manifest (plinth
+verify, plinth extract).
 
 Exit status: 0 all checks OK, 1 a check is NOT OK (the PDF is written),
 2 input errors (nothing is written).

@@ -28,7 +28,7 @@ import (
 // The document date is the latest revision date in package.yaml, or
 // SOURCE_DATE_EPOCH when set; the same inputs give the same bytes.
 func render(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs("render", args, "set", "output")
+	o, err := parseArgs("render", args, "set", "output", "since")
 	if err == errHelp {
 		fmt.Fprint(stdout, helps["render"])
 		return exitOK
@@ -42,7 +42,15 @@ func render(args []string, stdout, stderr io.Writer) int {
 		printDiags(stderr, diags)
 		return exitErrors
 	}
-	pages, cd := compose.Pages(res, compose.Options{})
+	var copt compose.Options
+	if o.since != "" {
+		ch, ok := sinceChanges(o.since, o.path, res, stderr)
+		if !ok {
+			return exitErrors
+		}
+		copt.Changes = ch
+	}
+	pages, cd := compose.Pages(res, copt)
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)
