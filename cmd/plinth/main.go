@@ -71,8 +71,10 @@ Flags (before or after PATH):
                      package folder, <sheet>.pdf beside a sheet)
   --set name=value   override an input for a variant run (repeatable)
   --since OLD        add a page "Changes since revision X" after the
-                     summary: what plinth diff OLD PATH prints (OLD a
-                     folder, a sheet, REV:path or a PDF plinth wrote)
+                     summary (what plinth diff OLD PATH prints) and
+                     change bars beside the lines whose values changed
+                     (OLD a folder, a sheet, REV:path or a PDF plinth
+                     wrote)
   -h, --help         print this help
 
 Every PDF embeds the package's source files and a manifest (plinth

@@ -51,6 +51,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		copt.Changes = ch
 	}
 	pages, cd := compose.Pages(res, copt)
+	compose.MarkChanges(pages, copt.Changes)
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)

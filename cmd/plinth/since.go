@@ -45,6 +45,28 @@ func changesPage(c *changes, a, b *eval.Result) *compose.Changes {
 		since += " (" + c.Old.Spec + ")"
 	}
 	ch := &compose.Changes{Since: since, Empty: "No changes: every check, result, input and package field is as in revision " + since + "."}
+	ch.Letter = b.Src.Meta.Revision.Value
+	if !printable(ch.Letter) {
+		ch.Letter = ""
+	}
+	mark := func(file string, line int, value string) {
+		if file != "" && line > 0 {
+			num, _, _ := strings.Cut(value, " ")
+			ch.Lines = append(ch.Lines, compose.ChangeLine{Pos: source.Position{Path: file, Line: line}, Values: []string{num}})
+		}
+	}
+	for _, f := range c.Flipped {
+		mark(f.File, f.Line, "")
+	}
+	for _, f := range c.Added {
+		mark(f.File, f.Line, "")
+	}
+	for _, v := range c.Results {
+		mark(v.NewFile, v.NewLine, v.New)
+	}
+	for _, v := range c.Inputs {
+		mark(v.NewFile, v.NewLine, v.New)
+	}
 	util := func(v string, u *float64) string {
 		if u != nil {
 			return fmt.Sprintf("%s (%.2f)", v, *u)
@@ -109,4 +131,15 @@ func changesPage(c *changes, a, b *eval.Result) *compose.Changes {
 		ch.Sections = append(ch.Sections, s)
 	}
 	return ch
+}
+
+// printable reports whether s is plain ASCII text (a revision letter the
+// margin can print in plinth's own face).
+func printable(s string) bool {
+	for _, r := range s {
+		if r < 0x20 || r > 0x7e {
+			return false
+		}
+	}
+	return true
 }
