@@ -25,6 +25,7 @@ Usage:
   plinth diff OLD NEW [--json]    what changed between two packages
   plinth verify FILE.pdf [PATH] [--render]   check a PDF against its inputs
   plinth extract FILE.pdf DIR     write the package a PDF carries to DIR
+  plinth watch PATH [-o FILE] [--set name=value]...   render on every save
   plinth init DIR         write a starter package (ground model and a pad) to DIR
   plinth version          print the version
   plinth help [COMMAND]   this overview, or one command's flags (also COMMAND -h)
@@ -129,6 +130,21 @@ Flags:
 
 Exit status: 0 written, 2 unreadable PDF or a file exists.
 `,
+	"watch": `Usage: plinth watch PATH [flags]
+
+Renders PATH as plinth render does, then again after every save to a file
+of the package folder (debounced), until Ctrl-C. Each render prints the
+time it took, the checks that flipped since the last good render, then the
+results and inputs that changed. On input errors it prints them and leaves
+the last good PDF untouched.
+
+Flags (before or after PATH):
+  -o, --output FILE  the PDF to write (default as for render)
+  --set name=value   override an input for a variant run (repeatable)
+  -h, --help         print this help
+
+Exit status: 0 when stopped, 2 bad flags or PATH.
+`,
 	"init": `Usage: plinth init DIR
 
 Writes a starter package (a ground-model sheet and a pad) into DIR,
@@ -192,6 +208,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return initPackage(rest, stdout, stderr)
 	case "diff":
 		return diffCmd(rest, stdout, stderr)
+	case "watch":
+		return watchCmd(rest, stdout, stderr)
 	case "verify":
 		return verifyCmd(rest, stdout, stderr)
 	case "extract":
