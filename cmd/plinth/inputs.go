@@ -7,6 +7,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"net/url"
 	"os"
 	"path"
 	"path/filepath"
@@ -70,6 +71,48 @@ func (rc *recorder) ReadInside(rel string) ([]byte, error) {
 	return data, err
 }
 
+// parsed reads what only doc/parse reads, so it is recorded too: the
+// figures of every sheet (a context sheet's are checked, not printed) and
+// the template and factor files named in package.yaml and front matter
+// (unreadable ones are parse's to report).
+func (rc *recorder) parsed(pkg *sheet.Package) {
+	meta := func(m *sheet.Meta) {
+		for _, f := range []sheet.Str{m.Template, m.Factors} {
+			if v := f.Value; v != "" && v != "a4" && v != "letter" {
+				rc.ReadInside(v)
+			}
+		}
+	}
+	var images func([]sheet.Block)
+	images = func(blocks []sheet.Block) {
+		for _, b := range blocks {
+			switch b := b.(type) {
+			case *sheet.Image:
+				p := b.Path.Value
+				if u, err := url.PathUnescape(p); err == nil && strings.Contains(p, "%") {
+					p = u
+				}
+				if p != "" && !strings.Contains(p, "://") {
+					rc.ReadInside(p)
+				}
+			case *sheet.List:
+				for _, it := range b.Items {
+					images(it.Blocks)
+				}
+			case *sheet.Quote:
+				images(b.Body)
+			case *sheet.Caution:
+				images(b.Body)
+			}
+		}
+	}
+	meta(&pkg.Meta)
+	for _, s := range pkg.Sheets {
+		meta(&s.Meta)
+		images(s.Body)
+	}
+}
+
 // evaluateRecorded is evaluate, with the package's reads recorded.
 func evaluateRecorded(p string, sets []string) (*eval.Result, source.List, *recorder) {
 	lp, diags := load.Path(p)
@@ -86,6 +129,7 @@ func evaluateRecorded(p string, sets []string) (*eval.Result, source.List, *reco
 	rec := &recorder{r: pkg.Inside, files: map[string][]byte{}}
 	if pkg.Inside != nil {
 		pkg.Inside = rec
+		rec.parsed(pkg)
 	}
 	res, ed := eval.Package(pkg, eval.Options{Set: sets, Prior: diags})
 	diags.Append(ed)

@@ -2,6 +2,8 @@ package main
 
 import (
 	"bytes"
+	"image"
+	"image/png"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -190,5 +192,35 @@ func TestSingleSheetPDF(t *testing.T) {
 	}
 	if out, errs, code := runCmd("diff", file, sheet); code != exitOK || !strings.Contains(out, "no changes") {
 		t.Errorf("diff: status %d\n%s%s", code, out, errs)
+	}
+}
+
+// TestEmbedsFigures: a figure of a context sheet (checked by the parser,
+// not printed) and one of a printed sheet are embedded, so the sheet
+// rendered alone re-renders from its PDF.
+func TestEmbedsFigures(t *testing.T) {
+	dir := t.TempDir()
+	img := image.NewGray(image.Rect(0, 0, 4, 4))
+	var png1 bytes.Buffer
+	png.Encode(&png1, img)
+	os.MkdirAll(filepath.Join(dir, "figures"), 0o755)
+	os.WriteFile(filepath.Join(dir, "figures", "a b.png"), png1.Bytes(), 0o644)
+	os.WriteFile(filepath.Join(dir, "figures", "c.png"), png1.Bytes(), 0o644)
+	os.WriteFile(filepath.Join(dir, "01-a.md"), []byte("---\ntitle: A\ncalc: \"1\"\n---\n\n![Plan](figures/a%20b.png)\n\n```calc\nx = 2 m\n```\n"), 0o644)
+	os.WriteFile(filepath.Join(dir, "02-b.md"), []byte("---\ntitle: B\ncalc: \"2\"\nuses: [01-a.md]\n---\n\n![Section](figures/c.png)\n\n```calc\ny = 2 * x\n```\n"), 0o644)
+	out := filepath.Join(t.TempDir(), "b.pdf")
+	if _, errs, code := runCmd("render", filepath.Join(dir, "02-b.md"), "-o", out); code != exitOK {
+		t.Fatalf("render: %s", errs)
+	}
+	data, _ := os.ReadFile(out)
+	in, err := readInputs(data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := strings.Join(in.names(), ", "); got != "01-a.md, 02-b.md, figures/a b.png, figures/c.png" {
+		t.Errorf("embedded: %s", got)
+	}
+	if o, errs, code := runCmd("verify", out, "--render"); code != exitOK {
+		t.Errorf("verify --render: status %d\n%s%s", code, o, errs)
 	}
 }
