@@ -11,7 +11,10 @@ import (
 	"path/filepath"
 	"regexp"
 	"sort"
+	"strconv"
 	"strings"
+
+	"plinth/doc/pdf"
 )
 
 // verifyCmd implements "plinth verify FILE.pdf [PATH] [--render]".
@@ -47,6 +50,10 @@ func verifyCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "plinth: %s: %v\n", file, err)
 		return exitErrors
 	}
+	fmt.Fprintf(stdout, "%s: %d embedded file%s, fingerprint %s, written by plinth %s\n", file, len(in.files), plural(len(in.files)), in.man.Fingerprint, in.man.Version)
+	if len(in.man.Sets) > 0 {
+		fmt.Fprintf(stdout, "  variant: --set %s\n", strings.Join(in.man.Sets, " --set "))
+	}
 	bad := 0
 	fail := func(format string, a ...any) {
 		bad++
@@ -78,6 +85,21 @@ func verifyCmd(args []string, stdout, stderr io.Writer) int {
 		if fp != in.man.Fingerprint {
 			fail("fingerprint of the embedded files %s, the manifest says %s", fp, in.man.Fingerprint)
 		}
+		if texts, err := pdf.PageTexts(data); err != nil {
+			fail("the pages cannot be read: %v", err)
+		} else {
+			var missing []string
+			for i, t := range texts {
+				if !strings.Contains(t, fp[:12]) {
+					missing = append(missing, strconv.Itoa(i+1))
+				}
+			}
+			if len(missing) > 0 {
+				fail("page%s %s do%s not print the fingerprint %s of the embedded files", plural(len(missing)), strings.Join(missing, ", "), map[bool]string{true: "es", false: ""}[len(missing) == 1], fp[:12])
+			} else {
+				fmt.Fprintf(stdout, "  every page (%d) prints the fingerprint %s\n", len(texts), fp[:12])
+			}
+		}
 		kw := infoFingerprint(data)
 		switch {
 		case kw == "":
@@ -85,10 +107,6 @@ func verifyCmd(args []string, stdout, stderr io.Writer) int {
 		case kw != fp:
 			fail("fingerprint of the embedded files %s, the document information says %s", fp, kw)
 		}
-	}
-	fmt.Fprintf(stdout, "%s: %d embedded file%s, fingerprint %s, written by plinth %s\n", file, len(in.files), plural(len(in.files)), in.man.Fingerprint, in.man.Version)
-	if len(in.man.Sets) > 0 {
-		fmt.Fprintf(stdout, "  variant: --set %s\n", strings.Join(in.man.Sets, " --set "))
 	}
 	if len(pos) == 2 {
 		bad += compareWorking(stdout, in, pos[1])

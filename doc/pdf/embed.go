@@ -148,46 +148,12 @@ var (
 // and refuses anything else with an error: a truncated or altered file,
 // a PDF from another program (ErrNoFiles when it simply has none).
 func Files(data []byte) ([]File, error) {
-	if !bytes.HasPrefix(data, []byte("%PDF-")) {
-		return nil, errors.New("not a PDF")
-	}
-	if !bytes.HasSuffix(bytes.TrimRight(data, "\r\n"), []byte("%%EOF")) {
-		return nil, errors.New("the PDF is truncated (no %EOF at its end)")
-	}
-	offs, xref, trailer, err := xrefTable(data)
-	if err != nil {
-		return nil, fmt.Errorf("not a PDF plinth wrote, or damaged: %v", err)
-	}
-	obj := func(n int) ([]byte, error) {
-		if n < 1 || n >= len(offs) {
-			return nil, fmt.Errorf("object %d is not in the cross-reference table", n)
-		}
-		end := xref
-		if n+1 < len(offs) {
-			end = offs[n+1]
-		}
-		o := data[offs[n]:end]
-		if !bytes.HasPrefix(o, []byte(strconv.Itoa(n)+" 0 obj\n")) {
-			return nil, fmt.Errorf("object %d is not where the cross-reference table says", n)
-		}
-		return o, nil
-	}
-	ref := func(re *regexp.Regexp, b []byte, what string) (int, error) {
-		m := re.FindSubmatch(b)
-		if m == nil {
-			return 0, fmt.Errorf("no %s", what)
-		}
-		n, err := strconv.Atoi(string(m[1]))
-		if err != nil {
-			return 0, fmt.Errorf("bad %s", what)
-		}
-		return n, nil
-	}
-	root, err := ref(rootRe, data[trailer:], "document catalog in the trailer")
+	r, err := newReader(data)
 	if err != nil {
 		return nil, err
 	}
-	cat, err := obj(root)
+	obj := r.obj
+	cat, err := obj(r.root)
 	if err != nil {
 		return nil, err
 	}
@@ -245,7 +211,7 @@ func streamData(o []byte, max int) ([]byte, error) {
 		return nil, errors.New("stream length does not fit the object")
 	}
 	raw := o[at+10 : at+10+n]
-	if !bytes.Contains(o[:at], []byte("/Filter /FlateDecode")) {
+	if !bytes.Contains(o[:at], []byte("/Filter /FlateDecode")) && !bytes.Contains(o[:at], []byte("/Filter/FlateDecode")) {
 		return append([]byte(nil), raw...), nil
 	}
 	zr, err := zlib.NewReader(bytes.NewReader(raw))

@@ -6,6 +6,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"plinth/doc/layout"
@@ -122,6 +123,7 @@ func FuzzFiles(f *testing.F) {
 	f.Add(good[:len(good)-50])
 	f.Add([]byte("%PDF-1.4\nxref\n0 2\n0000000000 65535 f \n0000000009 00000 n \ntrailer\n<< /Root 1 0 R >>\nstartxref\n0\n%%EOF\n"))
 	f.Fuzz(func(t *testing.T, data []byte) {
+		pdf.PageTexts(data)
 		files, err := pdf.Files(data)
 		if err == nil {
 			for _, fl := range files {
@@ -140,5 +142,35 @@ func BenchmarkFiles(b *testing.B) {
 		if _, err := pdf.Files(good); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// TestPageTexts: the text of every page is read back through the fonts'
+// ToUnicode maps, the fingerprint in the footer included.
+func TestPageTexts(t *testing.T) {
+	doc := demoDoc(3)
+	doc.Info.Fingerprint = "0123456789abcdef"
+	pages, err := layout.Document(doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	if err := pdf.Write(&b, pages, pdf.Options{Time: when}); err != nil {
+		t.Fatal(err)
+	}
+	texts, err := pdf.PageTexts(b.Bytes())
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(texts) != len(pages.Pages) {
+		t.Fatalf("%d page texts, %d pages", len(texts), len(pages.Pages))
+	}
+	for i, s := range texts {
+		if !strings.Contains(s, "0123456789ab") {
+			t.Errorf("page %d does not show the fingerprint: %q", i+1, s)
+		}
+	}
+	if _, err := pdf.PageTexts(b.Bytes()[:b.Len()/2]); err == nil {
+		t.Error("a truncated PDF: no error")
 	}
 }
