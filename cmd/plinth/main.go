@@ -108,8 +108,9 @@ either side (listed with the side named).
 
 Checks the package a PDF carries: each embedded file against its SHA-256,
 and the input fingerprint recomputed from them against the one in the
-document information and the one printed on every page. With PATH, lists the working files that differ from
-those the PDF was made from (added, removed, changed, with a line count).
+document information and the one printed on every page. With PATH, lists
+the working files that differ from those the PDF was made from (added,
+removed, changed, with a line count).
 With --render, renders again from the embedded inputs and confirms the
 PDF is byte-identical (when the plinth version matches).
 
