@@ -99,6 +99,9 @@ func watch(ctx context.Context, o options, stdout, stderr io.Writer, rendered ch
 			printDiags(&buf, diags)
 		}
 		took := time.Since(start)
+		if isTerminal(stdout) {
+			fmt.Fprint(stdout, "\033[H\033[2J") // one screen per render
+		}
 		fmt.Fprintf(stdout, "\n── %s  render %.2f s ──\n", time.Now().Format("15:04:05"), took.Seconds())
 		if status == exitErrors {
 			fmt.Fprint(stdout, buf.String())
@@ -190,4 +193,14 @@ func printWatch(w io.Writer, c *changes) {
 		}
 		fmt.Fprintf(w, "  %s: %s → %s%s  %s:%d\n", v.Name, old, cur, pct, v.NewFile, v.NewLine)
 	}
+}
+
+// isTerminal reports whether w is a terminal (a character device).
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	if !ok {
+		return false
+	}
+	fi, err := f.Stat()
+	return err == nil && fi.Mode()&os.ModeCharDevice != 0
 }
