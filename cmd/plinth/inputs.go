@@ -16,8 +16,6 @@ import (
 	"sync"
 
 	"plinth/doc/eval"
-	"plinth/doc/load"
-	"plinth/doc/parse"
 	"plinth/doc/pdf"
 	"plinth/doc/sheet"
 	"plinth/doc/source"
@@ -115,28 +113,14 @@ func (rc *recorder) parsed(pkg *sheet.Package) {
 
 // evaluateRecorded is evaluate, with the package's reads recorded.
 func evaluateRecorded(p string, sets []string) (*eval.Result, source.List, *recorder) {
-	lp, diags := load.Path(p)
-	if lp == nil {
-		diags.Sort()
-		return nil, diags, nil
-	}
-	pkg, pd := parse.Package(lp)
-	diags.Append(pd)
-	if pkg == nil {
-		diags.Sort()
-		return nil, diags, nil
-	}
-	rec := &recorder{r: pkg.Inside, files: map[string][]byte{}}
-	if pkg.Inside != nil {
-		pkg.Inside = rec
-		rec.parsed(pkg)
-	}
-	res, ed := eval.Package(pkg, eval.Options{Set: sets, Prior: diags})
-	diags.Append(ed)
-	diags.Sort()
-	if diags.HasErrors() {
-		return nil, diags, nil
-	}
+	var rec *recorder
+	res, diags := evaluateWith(p, sets, func(pkg *sheet.Package) {
+		if pkg.Inside != nil {
+			rec = &recorder{r: pkg.Inside, files: map[string][]byte{}}
+			pkg.Inside = rec
+			rec.parsed(pkg)
+		}
+	})
 	return res, diags, rec
 }
 
