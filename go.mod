@@ -4,6 +4,7 @@ go 1.26.0
 
 require (
 	github.com/Knetic/govaluate v3.0.0+incompatible
+	github.com/fsnotify/fsnotify v1.10.1
 	github.com/go-fonts/dejavu v0.3.2
 	github.com/signintech/gopdf v0.38.1
 	github.com/yuin/goldmark v1.8.7
@@ -15,4 +16,5 @@ require (
 require (
 	github.com/phpdave11/gofpdi v1.0.14-0.20211212211723-1f10f9844311 // indirect
 	github.com/pkg/errors v0.8.1 // indirect
+	golang.org/x/sys v0.50.0 // indirect
 )

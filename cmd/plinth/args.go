@@ -19,6 +19,7 @@ type options struct {
 	layout  bool
 	verbose bool
 	output  string
+	since   string // render --since: the earlier revision to compare with
 }
 
 // parseArgs reads args for cmd; allowed names the flags the command takes.
@@ -81,6 +82,12 @@ func parseArgs(cmd string, args []string, allowed ...string) (options, error) {
 				return o, err
 			}
 			o.output = v
+		case "since":
+			v, err := value()
+			if err != nil {
+				return o, err
+			}
+			o.since = v
 		}
 	}
 	if o.path == "" {

@@ -7,12 +7,19 @@ import (
 	"plinth/doc/eval"
 	"plinth/doc/load"
 	"plinth/doc/parse"
+	"plinth/doc/sheet"
 	"plinth/doc/source"
 )
 
 // evaluate runs load → parse → eval and returns the result with every
 // diagnostic of the run, sorted.
 func evaluate(path string, sets []string) (*eval.Result, source.List) {
+	return evaluateWith(path, sets, nil)
+}
+
+// evaluateWith is evaluate with a hook called on the parsed package
+// before it is evaluated (render records the files read through it).
+func evaluateWith(path string, sets []string, hook func(*sheet.Package)) (*eval.Result, source.List) {
 	lp, diags := load.Path(path)
 	if lp == nil {
 		diags.Sort()
@@ -23,6 +30,9 @@ func evaluate(path string, sets []string) (*eval.Result, source.List) {
 	if pkg == nil {
 		diags.Sort()
 		return nil, diags
+	}
+	if hook != nil {
+		hook(pkg)
 	}
 	// Evaluate even after parse errors, so every independent error of the
 	// run is listed at once; eval leaves the lines parse reported alone.

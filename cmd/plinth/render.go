@@ -28,7 +28,7 @@ import (
 // The document date is the latest revision date in package.yaml, or
 // SOURCE_DATE_EPOCH when set; the same inputs give the same bytes.
 func render(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs("render", args, "set", "output")
+	o, err := parseArgs("render", args, "set", "output", "since")
 	if err == errHelp {
 		fmt.Fprint(stdout, helps["render"])
 		return exitOK
@@ -37,13 +37,22 @@ func render(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "plinth: %v\n", err)
 		return exitErrors
 	}
-	res, diags := evaluate(o.path, o.sets)
+	res, diags, rec := evaluateRecorded(o.path, o.sets)
 	if diags.HasErrors() {
 		printDiags(stderr, diags)
 		return exitErrors
 	}
 	prog := newProgress(stderr) // a line on a terminal for a long render
-	pages, cd := compose.Pages(res, compose.Options{Progress: prog.sheetFunc()})
+	copt := compose.Options{Progress: prog.sheetFunc()}
+	if o.since != "" {
+		ch, ok := sinceChanges(o.since, o.path, res, stderr)
+		if !ok {
+			return exitErrors
+		}
+		copt.Changes = ch
+	}
+	pages, cd := compose.Pages(res, copt)
+	compose.MarkChanges(pages, copt.Changes)
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)
@@ -53,8 +62,14 @@ func render(args []string, stdout, stderr io.Writer) int {
 		printDiags(stderr, diags)
 		return exitErrors
 	}
+	files, err := inputFiles(res, rec, o.path)
+	if err != nil {
+		printDiags(stderr, diags)
+		fmt.Fprintf(stderr, "plinth: %v\n", err)
+		return exitErrors
+	}
 	var buf bytes.Buffer
-	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Progress: prog.pageFunc(), Release: true})
+	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Progress: prog.pageFunc(), Release: true, Files: files})
 	prog.done()
 	if err != nil {
 		printDiags(stderr, diags)

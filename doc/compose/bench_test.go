@@ -6,7 +6,6 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
-
 )
 
 // writeBenchPackage writes an invented package of n calc sheets, each

@@ -21,6 +21,9 @@ type Options struct {
 	// Progress is passed to the layout (layout.Doc.Progress): sheets laid
 	// out, once per layout pass.
 	Progress func(done, total int)
+	// Changes, when set, prints a page "Changes since revision X" after
+	// the summary (plinth render --since).
+	Changes *Changes
 }
 
 // composer carries the state of one Document call.
@@ -110,8 +113,12 @@ func (c *composer) document() layout.Doc {
 		c.matter = append([]matterTitle{{"Appendix: further working", "appendix"}}, c.matter...)
 	}
 	doc.Sheets = append(doc.Sheets, c.cover(), c.summary())
+	if c.opt.Changes != nil {
+		c.sheetRows = append(c.sheetRows, len(doc.Sheets))
+		doc.Sheets = append(doc.Sheets, c.changesSheet())
+	}
 	for i := range sheets {
-		c.sheetRows = append(c.sheetRows, 2+i)
+		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+i)
 	}
 	doc.Sheets = append(doc.Sheets, sheets...)
 	if len(c.appendix) > 0 {

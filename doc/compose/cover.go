@@ -150,6 +150,11 @@ func (c *composer) cover() layout.Sheet {
 	c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
 		cell(txt("—")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
 	}})
+	if ch := c.opt.Changes; ch != nil {
+		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(txt("—")), nil, cell(layout.Run{Text: "Changes since revision ", Link: "changes", Own: true}, layout.Run{Text: ch.Since, Link: "changes"}), nil, nil,
+		}})
+	}
 	for _, s := range c.res.Sheets {
 		f := c.fields(s.Meta)
 		title := f.Title

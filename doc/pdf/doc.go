@@ -10,6 +10,11 @@
 // than a broken object. The document information carries the title,
 // author, subject, keywords and the full input fingerprint (in Keywords).
 //
+// Options.Files are embedded as attachments: an EmbeddedFile stream and a
+// Filespec per file, listed in the catalog's EmbeddedFiles name tree in
+// name order (embed.go, after pack); Files reads them back from a PDF
+// Write made, and refuses anything else with an error.
+//
 // Write draws into memory and copies the finished file to the writer; the
 // caller writes to a temporary file and renames it into place.
 package pdf

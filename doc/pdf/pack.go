@@ -17,39 +17,11 @@ import (
 // starting "n 0 obj", a classic xref table, then the trailer. An
 // uncompressed content stream is exactly "<<\n/Length L\n>>\nstream\n".
 func pack(in []byte) ([]byte, error) {
-	xref := bytes.LastIndex(in, []byte("\nxref\n"))
-	if xref < 0 {
-		return nil, errors.New("pdf: no cross-reference table")
+	offs, xref, trailer, err := xrefTable(in)
+	if err != nil {
+		return nil, err
 	}
-	xref++
-	trailer := bytes.Index(in[xref:], []byte("trailer\n"))
-	if trailer < 0 {
-		return nil, errors.New("pdf: no trailer")
-	}
-	trailer += xref
-	// read the object offsets
-	lines := bytes.Split(in[xref:trailer], []byte("\n"))
-	if len(lines) < 3 {
-		return nil, errors.New("pdf: short cross-reference table")
-	}
-	hdr := bytes.Fields(lines[1])
-	if len(hdr) != 2 {
-		return nil, errors.New("pdf: bad cross-reference header")
-	}
-	count, err := strconv.Atoi(string(hdr[1]))
-	if err != nil || count < 1 || len(lines) < count+2 {
-		return nil, errors.New("pdf: bad cross-reference count")
-	}
-	offs := make([]int, count) // offs[0] is the free entry
-	for i := 1; i < count; i++ {
-		f := bytes.Fields(lines[2+i])
-		if len(f) != 3 {
-			return nil, fmt.Errorf("pdf: bad cross-reference entry %d", i)
-		}
-		if offs[i], err = strconv.Atoi(string(f[0])); err != nil || offs[i] <= offs[i-1] || offs[i] >= xref {
-			return nil, fmt.Errorf("pdf: bad offset for object %d", i)
-		}
-	}
+	count := len(offs)
 	out := bytes.NewBuffer(make([]byte, 0, len(in)/3))
 	out.Write(in[:offs[1]])
 	newOffs := make([]int, count)
@@ -106,4 +78,44 @@ func pack(in []byte) ([]byte, error) {
 	out.Write(t[:sx])
 	fmt.Fprintf(out, "startxref\n%d\n%%%%EOF\n", start)
 	return out.Bytes(), nil
+}
+
+// xrefTable reads the classic cross-reference table of a PDF laid out as
+// gopdf writes it: offs[i] is the offset of object i (offs[0] unused),
+// xref the offset of the table and trailer that of its trailer.
+func xrefTable(in []byte) (offs []int, xref, trailer int, err error) {
+	xref = bytes.LastIndex(in, []byte("\nxref\n"))
+	if xref < 0 {
+		return nil, 0, 0, errors.New("pdf: no cross-reference table")
+	}
+	xref++
+	trailer = bytes.Index(in[xref:], []byte("trailer\n"))
+	if trailer < 0 {
+		return nil, 0, 0, errors.New("pdf: no trailer")
+	}
+	trailer += xref
+	// read the object offsets
+	lines := bytes.Split(in[xref:trailer], []byte("\n"))
+	if len(lines) < 3 {
+		return nil, 0, 0, errors.New("pdf: short cross-reference table")
+	}
+	hdr := bytes.Fields(lines[1])
+	if len(hdr) != 2 {
+		return nil, 0, 0, errors.New("pdf: bad cross-reference header")
+	}
+	count, err := strconv.Atoi(string(hdr[1]))
+	if err != nil || count < 1 || len(lines) < count+2 {
+		return nil, 0, 0, errors.New("pdf: bad cross-reference count")
+	}
+	offs = make([]int, count) // offs[0] is the free entry
+	for i := 1; i < count; i++ {
+		f := bytes.Fields(lines[2+i])
+		if len(f) != 3 {
+			return nil, 0, 0, fmt.Errorf("pdf: bad cross-reference entry %d", i)
+		}
+		if offs[i], err = strconv.Atoi(string(f[0])); err != nil || offs[i] <= offs[i-1] || offs[i] >= xref {
+			return nil, 0, 0, fmt.Errorf("pdf: bad offset for object %d", i)
+		}
+	}
+	return offs, xref, trailer, nil
 }

@@ -29,6 +29,9 @@ type Options struct {
 	// layout behind the written pages can be collected while the rest are
 	// drawn (for a caller that needs only the page count afterwards).
 	Release bool
+	// Files are embedded as attachments (the package's inputs), listed in
+	// the catalog's EmbeddedFiles name tree in name order.
+	Files []File
 }
 
 // Write draws pages as a PDF to w.
@@ -101,6 +104,11 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	}
 	if out, err = patchInfo(out, info, opt.Time); err != nil {
 		return err
+	}
+	if len(opt.Files) > 0 {
+		if out, err = embed(out, opt.Files); err != nil {
+			return err
+		}
 	}
 	_, err = w.Write(out)
 	return err
