@@ -168,7 +168,11 @@ func (c *calc) common() {
 		c.take("alpha", f.Alpha, "deg", trace.Ref{}, "inclination of the base")
 	}
 	if c.ap.Allowable() {
-		c.warn("allowable", trace.SevNote, trace.Ref{}, fmt.Sprintf("Allowable-stress design: characteristic actions and parameters, global factor %g on the net ultimate bearing pressure and %g on sliding (common practice).", c.ap.FS, c.ap.SlidingFS()))
+		on := "net ultimate bearing pressure (fs_on = net)"
+		if c.opt.FSOnGross {
+			on = "gross ultimate bearing pressure (fs_on = gross, as in the textbooks that divide the gross; for FS > 1 it gives a lower allowable pressure than the net convention)"
+		}
+		c.warn("allowable", trace.SevNote, trace.Ref{}, fmt.Sprintf("Allowable-stress design: characteristic actions and parameters, global factor %g on the %s and %g on sliding (common practice).", c.ap.FS, on, c.ap.SlidingFS()))
 	} else if strings.HasPrefix(c.ap.Name, "DA3") {
 		c.warn("da3-actions", trace.SevNote, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.4.4"}, "DA3: all actions on the footing are taken as structural actions (set A1).")
 	}

@@ -33,6 +33,8 @@ type calc struct {
 
 	creep   func(t float64) float64 // sand creep at time t (Schmertmann C_2, Burland & Burbidge f_t)
 	sandSec float64                 // sand creep at the design life
+
+	lifeShown bool // the design life has been recorded as a step
 }
 
 // sigmaV is the total vertical stress at z from a piecewise-linear profile
@@ -103,6 +105,23 @@ func (k *calc) add(cs, sym string, f trace.Expr, in []trace.Value, v float64, un
 		k.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: in, Value: v, Unit: unit, Ref: ref, Note: note, Case: cs})
 	}
 	return v
+}
+
+// life returns the design working life for secondary compression and
+// creep, recording it as a step the first time it is used: given (life),
+// or assumed, default 50 years (EN 1990:2002 Table 2.1, category 4).
+func (k *calc) life(cs string) float64 {
+	if k.lifeShown {
+		return k.c.life
+	}
+	k.lifeShown = true
+	note := "design working life for creep and secondary compression, given"
+	ref := trace.Ref{}
+	if !k.c.Life.Set {
+		note = "design working life for creep and secondary compression: assumed, default (category 4, building structures); give life to change it"
+		ref = trace.Ref{Source: trace.EN1990, Clause: "Table 2.1, category 4"}
+	}
+	return k.add(cs, "t_life", nil, nil, k.c.life, "yr", ref, note)
 }
 
 // warn records a caution raised by the latest step.

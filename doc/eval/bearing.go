@@ -58,6 +58,7 @@ func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts
 			*x.dst = site.Some(q.V)
 		}
 	}
+	in.Options.FSOnGross = o.word("fs_on", "net") == "gross"
 	ap, aok := e.approach(s, o)
 	in.Options.Approach = ap
 	return in, ok && aok
@@ -139,7 +140,12 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 	}
 	res, err := bearing.Check(in)
 	if err != nil {
-		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		e.siteErrors(err, headerSpan(b.Span), func(_ int, param string) source.Span {
+			if x := o[param]; x != nil && x.Value.Span.File != nil {
+				return x.Value.Span // an option the engine refused
+			}
+			return headerSpan(b.Span)
+		})
 		return false
 	}
 	blk.Bearing = res
