@@ -193,6 +193,8 @@ func (c *calc) common() {
 		c.warn("phi-high", trace.SevWarning, trace.Ref{}, fmt.Sprintf("φ′ = %.1f° of %s is above about 40°: the bearing factors grow very fast there and the resistance is sensitive to the value chosen.", l.Phi.V/degr, layerName(g, c.fi)),
 			val("phi'_k", l.Phi.V, "deg"))
 	}
+	c.founding()
+	c.factorNotes()
 	c.layers()
 	c.localShear()
 	if f.Alpha != 0 && (c.opt.Method == Meyerhof || c.opt.Method == Terzaghi) {
