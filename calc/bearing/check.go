@@ -251,7 +251,11 @@ func (c *calc) overburden() {
 	c.step("sigma_v0", f, c.sv0, "kPa", ref, note, in...)
 	if c.g.Water.Set {
 		c.take("z_w", c.zw, "m", trace.Ref{}, "depth of the groundwater table")
-		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, "unit weight of water")
+		gwNote := "unit weight of water, given"
+		if g.GammaW == 0 {
+			gwNote = "unit weight of water: assumed, default (common practice); give gamma_w in the ground block to change it"
+		}
+		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, gwNote)
 	}
 	c.u0 = g.PoreP(D)
 	if c.zw < D {

@@ -137,6 +137,8 @@ type Options struct {
 	// textbooks that do so) instead of the net (q_a = q_net,ult/FS + q,
 	// the default). Only with an allowable-stress approach.
 	FSOnGross bool
+
+	spreadSet bool // SpreadTan was given (set by validate)
 }
 
 // Input is everything one bearing calculation needs.
@@ -219,6 +221,7 @@ func validate(in Input) (Options, error) {
 	if o.Interface.KDelta == 0 {
 		o.Interface.KDelta = 1
 	}
+	o.spreadSet = o.SpreadTan != 0
 	if o.SpreadTan == 0 {
 		o.SpreadTan = 0.5
 	}

@@ -35,6 +35,7 @@ type calc struct {
 	sandSec float64                 // sand creep at the design life
 
 	lifeShown bool // the design life has been recorded as a step
+	gwShown   bool // γ_w has been recorded as a step
 }
 
 // sigmaV is the total vertical stress at z from a piecewise-linear profile
@@ -213,6 +214,14 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 		}
 	}
 	u = g.PoreP(z)
+	if u > 0 && !k.gwShown {
+		k.gwShown = true
+		note := "unit weight of water, given"
+		if g.GammaW == 0 {
+			note = "unit weight of water: assumed, default (common practice); give gamma_w in the ground block to change it"
+		}
+		k.add(cs, "gamma_w", nil, nil, g.Gw(), "kN/m3", trace.Ref{}, note)
+	}
 	if u > 0 {
 		k.add(cs, "u_0", fxU0, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val("z", z, "m"), val("z_w", g.Water.V, "m")}, u, "kPa", trace.Ref{}, "hydrostatic pore pressure")
 	} else {
@@ -344,6 +353,11 @@ func lb(f site.Footing) float64 {
 // boundaries, the count in each layer in proportion to its thickness
 // (largest remainder, at least one each), and fills the stress columns.
 func (k *calc) sublayers(top, bot float64) error {
+	note := "number of sublayers over the zone, given"
+	if k.c.Sublayers == 0 {
+		note = "number of sublayers over the zone: assumed, default; give sublayers to change it"
+	}
+	k.add("zone of influence", "n_sub", nil, nil, float64(k.c.n), "", trace.Ref{}, note)
 	type seg struct {
 		layer    int
 		top, bot float64

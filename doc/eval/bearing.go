@@ -48,14 +48,22 @@ func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts
 		ok = ok && qok
 		in.Options.Interface.Delta = site.Some(q.V)
 	}
+	var spread site.Opt
 	for _, x := range []struct {
 		name string
 		dst  *site.Opt
-	}{{"K_s", &in.Options.Ks}, {"r_a", &in.Options.CaRatio}} {
+	}{{"K_s", &in.Options.Ks}, {"r_a", &in.Options.CaRatio}, {"spread", &spread}} {
 		if opt := o[x.name]; opt != nil {
 			q, qok := e.quantity(scope{e: e, s: s}, opt, units.None, "a pure number")
 			ok = ok && qok
 			*x.dst = site.Some(q.V)
+		}
+	}
+	if spread.Set {
+		in.Options.SpreadTan = spread.V
+		if !(spread.V > 0) {
+			e.errs.Add(o["spread"].Value.Span, "spread = %s: expected a gradient more than 0 and at most 1 (horizontal per vertical)", o["spread"].Value.Value)
+			ok = false
 		}
 	}
 	in.Options.FSOnGross = o.word("fs_on", "net") == "gross"

@@ -161,8 +161,10 @@ func settleAt(o opts, header source.Span) func(int, string) source.Span {
 	names := map[string]string{"life": "life", "Skempton–Bjerrum A": "skempton_bjerrum", "depth ratio": "depth", "depth widths": "depth", "depth": "depth",
 		"limit": "limit", "time": "times", "sublayers": "sublayers", "grain": "grain"}
 	return func(_ int, param string) source.Span {
-		if x := o[names[param]]; x != nil && x.Value.Span.File != nil {
-			return x.Value.Span
+		for _, n := range []string{names[param], param} {
+			if x := o[n]; x != nil && x.Value.Span.File != nil {
+				return x.Value.Span
+			}
 		}
 		return header
 	}

@@ -40,6 +40,7 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "K_s", Form: "a number: the two-layer punching coefficient read from Meyerhof & Hanna's chart", Default: "from BR 470 Table A2"},
 		{Name: "r_a", Form: "a number from 0 to 1: the two-layer adhesion ratio c_a/c_1", Default: "0.6 + 0.4 q_2/q_1"},
 		{Name: "fs_on", Words: []string{"net", "gross"}, Default: "net (q_a = q_net,ult/FS + q; gross: q_ult/FS)"},
+		{Name: "spread", Form: "a number from 0 to 1: the two-layer load-spread gradient, horizontal per vertical", Default: "0.5 (1H:2V)"},
 	},
 	KindSettlement: {
 		{Name: "method", Words: []string{"elastic", "consolidation", "schmertmann", "burland-burbidge"}, Default: "chosen from the layers' data"},
@@ -66,6 +67,7 @@ var Options = map[Kind][]OptionSpec{
 		{Name: "local_shear", Words: []string{"auto", "yes", "no"}, Default: "auto"},
 		{Name: "two_layer", Words: []string{"auto", "no"}, Default: "auto"},
 		{Name: "fs_on", Words: []string{"net", "gross"}, Default: "net (q_a = q_net,ult/FS + q; gross: q_ult/FS)"},
+		{Name: "spread", Form: "a number from 0 to 1: the two-layer load-spread gradient, horizontal per vertical", Default: "0.5 (1H:2V)"},
 		{Name: "bearing_method", Words: []string{"ec7", "vesic", "meyerhof", "hansen", "terzaghi"}, Default: "ec7"},
 		{Name: "settlement_method", Words: []string{"elastic", "consolidation", "schmertmann", "burland-burbidge"}, Default: "chosen from the layers' data"},
 		{Name: "stress", Words: []string{"boussinesq", "2:1"}, Default: "boussinesq"},
