@@ -98,6 +98,9 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		caption += " on ground model " + on.Name
 	}
 	caption += "; characteristic actions as given, all rows added"
+	if w != 0 {
+		caption += " with the self-weight W plinth adds (self_weight = auto)"
+	}
 	if sk.BEff != nil {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
