@@ -40,6 +40,15 @@ func (c *calc) founding() {
 	}
 }
 
+// kDeltaNote describes the interface factor δ/φ′ of sliding: given, or
+// assumed, default 1 (concrete cast in situ, EN 1997-1 6.5.3(10)).
+func kDeltaNote(given bool) string {
+	if given {
+		return "δ/φ′ (1 for concrete cast in situ, 2/3 for smooth precast), given"
+	}
+	return "δ/φ′: assumed, default 1 (concrete cast in situ); give interface = precast or delta to change it"
+}
+
 // factorNotes states the rules of the factor set that the working would
 // otherwise leave to the reader: depth factors of a method other than
 // EN 1997-1 Annex D used with EN 1997-1 partial factors, and Meyerhof's

@@ -139,6 +139,7 @@ type Options struct {
 	FSOnGross bool
 
 	spreadSet bool // SpreadTan was given (set by validate)
+	kDeltaSet bool // Interface.KDelta was given (set by validate)
 }
 
 // Input is everything one bearing calculation needs.
@@ -218,6 +219,7 @@ func validate(in Input) (Options, error) {
 	if o.FSOnGross && !o.Approach.Allowable() {
 		errs = append(errs, &site.InputError{Where: "bearing", Param: "fs_on", Msg: "fs_on = gross needs an allowable-stress approach, FS(factor)"})
 	}
+	o.kDeltaSet = o.Interface.KDelta != 0
 	if o.Interface.KDelta == 0 {
 		o.Interface.KDelta = 1
 	}

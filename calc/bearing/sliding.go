@@ -64,7 +64,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 			dk = c.take("delta_k", c.opt.Interface.Delta.V, "deg", refDelta, "characteristic base friction angle (given)")
 		} else {
 			c.take("phi'_k", fl.Phi.V, "deg", trace.Ref{}, "characteristic angle of shearing resistance of "+layerName(c.g, c.fi))
-			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, "δ/φ′ (1 for concrete cast in situ, 2/3 for smooth precast)")
+			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, kDeltaNote(c.opt.kDeltaSet))
 			dk = c.step("delta_k", mul(sym("k_delta"), sym("phi'_k")), c.opt.Interface.KDelta*fl.Phi.V, "deg", refDelta, "characteristic base friction angle",
 				val("k_delta", c.opt.Interface.KDelta, ""), val("phi'_k", fl.Phi.V, "deg"))
 		}

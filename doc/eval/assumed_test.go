@@ -13,7 +13,7 @@ import (
 )
 
 const assumedSrc = "# T\n\n```ground g\nwater = 0.5 m\n\n| layer | top (m) | gamma (kN/m3) | gamma_sat (kN/m3) | phi' (deg) | c' (kPa) | E' (MPa) |\n| --- | --- | --- | --- | --- | --- | --- |\n| Sand | 0 | 18 | 20 | 32 | 0 | 20 |\n```\n\n" +
-	"```footing F\nshape = square\nB = 2 m\nD = 1 m\nself_weight = auto\n\n| action | type | V (kN) |\n| --- | --- | --- |\n| Dead | permanent | 500 |\n| Imposed | variable | 200 |\n| Wind | variable | 100 |\n```\n\n```bearing F on g\n```\n\n```settlement F on g\nmethod = elastic\n```\n"
+	"```footing F\nshape = square\nB = 2 m\nD = 1 m\nself_weight = auto\n\n| action | type | V (kN) |\n| --- | --- | --- |\n| Dead | permanent | 500 |\n| Imposed | variable | 200 |\n| Wind | variable | 100 |\n```\n\n```bearing F on g\nsliding = yes\n```\n\n```settlement F on g\nmethod = elastic\n```\n"
 
 func evalSet(t *testing.T, src string, set ...string) []*eval.Block {
 	t.Helper()
@@ -66,6 +66,7 @@ func TestAssumedDefaults(t *testing.T) {
 	}{
 		{b.Bearing.Trace, want{"gamma_w", 9.81e3}, "bearing"},
 		{b.Bearing.Trace, want{"psi_0", 0.7}, "bearing"},
+		{b.Bearing.Trace, want{"k_delta", 1}, "sliding"},
 		{b.SelfWeight, want{"gamma_c", 24e3}, "self-weight"},
 		{s.Settle.Trace, want{"gamma_w", 9.81e3}, "settlement"},
 		{s.Settle.Trace, want{"nu'", 0.3}, "settlement"},

@@ -40,8 +40,11 @@ func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts
 		in.Options.Sliding, _ = bearing.ParseSwitch(w)
 	}
 	in.Options.TwoLayer, _ = bearing.ParseSwitch(o.word("two_layer", "auto"))
-	if o.word("interface", "cast") == "precast" {
+	switch o.word("interface", "") {
+	case "precast":
 		in.Options.Interface.KDelta = 2.0 / 3
+	case "cast":
+		in.Options.Interface.KDelta = 1 // given: not printed as assumed
 	}
 	if x := o["delta"]; x != nil {
 		q, qok := e.quantity(scope{e: e, s: s}, x, units.Angle, "an angle")
