@@ -167,9 +167,21 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 		if und {
 			q0s = "q"
 		}
-		rd = g.Ap * ((qlim-q0)/c.ap.FS + q0)
-		c.step("R_d", mul(sym("A'"), add(div(sub(sym(qsym), sym(q0s)), sym("FS")), sym(q0s))), rd, c.uF, trace.Ref{},
-			"allowable bearing resistance: net ultimate pressure over FS plus overburden (common practice)", vA, vq, val(q0s, q0, "kPa"), val("FS", c.ap.FS, ""))
+		switch {
+		case c.opt.FSOnGross && cs.U0 > 0:
+			// gross total q_ult = q′_ult + u_0 over FS, less u_0 back to effective
+			rd = g.Ap * ((qlim+cs.U0)/c.ap.FS - cs.U0)
+			c.step("R_d", mul(sym("A'"), sub(div(add(sym(qsym), sym("u_0")), sym("FS")), sym("u_0"))), rd, c.uF, trace.Ref{},
+				"allowable bearing resistance, FS on the gross pressure (fs_on = gross): gross total ultimate pressure q′ + u_0 over FS, less u_0 (common practice)", vA, vq, val("u_0", cs.U0, "kPa"), val("FS", c.ap.FS, ""))
+		case c.opt.FSOnGross:
+			rd = g.Ap * qlim / c.ap.FS
+			c.step("R_d", mul(sym("A'"), div(sym(qsym), sym("FS"))), rd, c.uF, trace.Ref{},
+				"allowable bearing resistance, FS on the gross ultimate pressure (fs_on = gross; common practice)", vA, vq, val("FS", c.ap.FS, ""))
+		default:
+			rd = g.Ap * ((qlim-q0)/c.ap.FS + q0)
+			c.step("R_d", mul(sym("A'"), add(div(sub(sym(qsym), sym(q0s)), sym("FS")), sym(q0s))), rd, c.uF, trace.Ref{},
+				"allowable bearing resistance: net ultimate pressure over FS plus overburden (fs_on = net; common practice)", vA, vq, val(q0s, q0, "kPa"), val("FS", c.ap.FS, ""))
+		}
 	} else {
 		grv := c.take("gamma_Rv", ld.Set.Resistance.GammaRv, "", refA5, "partial factor on bearing resistance ("+ld.Set.Resistance.Name+")")
 		rd = c.step("R_d", fRd, rk/grv, c.uF, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design bearing resistance", val("R_k", rk, c.uF), val("gamma_Rv", grv, ""))

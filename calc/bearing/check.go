@@ -168,7 +168,11 @@ func (c *calc) common() {
 		c.take("alpha", f.Alpha, "deg", trace.Ref{}, "inclination of the base")
 	}
 	if c.ap.Allowable() {
-		c.warn("allowable", trace.SevNote, trace.Ref{}, fmt.Sprintf("Allowable-stress design: characteristic actions and parameters, global factor %g on the net ultimate bearing pressure and %g on sliding (common practice).", c.ap.FS, c.ap.SlidingFS()))
+		on := "net ultimate bearing pressure (fs_on = net)"
+		if c.opt.FSOnGross {
+			on = "gross ultimate bearing pressure (fs_on = gross, as in the textbooks that divide the gross; for FS > 1 it gives a lower allowable pressure than the net convention)"
+		}
+		c.warn("allowable", trace.SevNote, trace.Ref{}, fmt.Sprintf("Allowable-stress design: characteristic actions and parameters, global factor %g on the %s and %g on sliding (common practice).", c.ap.FS, on, c.ap.SlidingFS()))
 	} else if strings.HasPrefix(c.ap.Name, "DA3") {
 		c.warn("da3-actions", trace.SevNote, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.4.4"}, "DA3: all actions on the footing are taken as structural actions (set A1).")
 	}
@@ -189,6 +193,8 @@ func (c *calc) common() {
 		c.warn("phi-high", trace.SevCaution, trace.Ref{}, fmt.Sprintf("φ′ = %.1f° of %s is above about 40°: the bearing factors grow very fast there and the resistance is sensitive to the value chosen.", l.Phi.V/degr, layerName(g, c.fi)),
 			val("phi'_k", l.Phi.V, "deg"))
 	}
+	c.founding()
+	c.factorNotes()
 	c.layers()
 	c.localShear()
 	c.r.LocalShear = c.local
@@ -254,7 +260,11 @@ func (c *calc) overburden() {
 	c.step("sigma_v0", f, c.sv0, "kPa", ref, note, in...)
 	if c.g.Water.Set {
 		c.take("z_w", c.zw, "m", trace.Ref{}, "depth of the groundwater table")
-		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, "unit weight of water")
+		gwNote := "unit weight of water, given"
+		if g.GammaW == 0 {
+			gwNote = "unit weight of water: assumed, default (common practice); give gamma_w in the ground block to change it"
+		}
+		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, gwNote)
 	}
 	c.u0 = g.PoreP(D)
 	if c.zw < D {

@@ -112,7 +112,24 @@
 // q_net,ult/FS plus the overburden (q′ drained, effective; q undrained),
 // and the capacity table reports gross total pressures (a drained case's
 // effective pressure plus u_0), so the table, the footing's own check and
-// the settlement all compare like with like.
+// the settlement all compare like with like. With FSOnGross (fs_on =
+// gross) an allowable-stress approach divides the gross ultimate pressure
+// instead, q_a = q_ult/FS (drained: the gross total q′_ult + u_0 over FS,
+// less u_0), as in the textbooks that do so (common practice); for FS > 1
+// it gives the lower pressure.
+//
+// # Founding stratum and factor rules
+//
+// A founding layer named made ground, fill or topsoil raises a CAUTION
+// (its nominal parameters do not assure the resistance), and so does a
+// founding layer less than B/4 thick below the base with a layer under it
+// (a two-layer mechanism through a skin of fill means little; the layer
+// below governs). Meyerhof's (1963) s_q, s_γ, d_q, d_γ are given for
+// φ′ > 10° and as 1 at φ′ = 0: plinth takes 1 for a case's φ′ ≤ 10° (no
+// interpolation) and a NOTE says so. The depth factors of Meyerhof,
+// Hansen and Vesić used with EN 1997-1 partial factors raise a NOTE:
+// Annex D has none. Defaults the working takes (γ_w, δ/φ′, the load
+// spread n_s, ψ0) are input steps whose note says "assumed, default".
 //
 // # Local shear
 //

@@ -133,6 +133,14 @@ type Options struct {
 	Ks site.Opt
 	// CaRatio overrides the adhesion ratio c_a/c_1, [0, 1].
 	CaRatio site.Opt
+	// FSOnGross divides the gross ultimate pressure by the global factor
+	// of an allowable-stress approach (q_a = q_ult/FS, as in the
+	// textbooks that do so) instead of the net (q_a = q_net,ult/FS + q,
+	// the default). Only with an allowable-stress approach.
+	FSOnGross bool
+
+	spreadSet bool // SpreadTan was given (set by validate)
+	kDeltaSet bool // Interface.KDelta was given (set by validate)
 }
 
 // Input is everything one bearing calculation needs.
@@ -206,9 +214,14 @@ func validate(in Input) (Options, error) {
 	if o.CaRatio.Set {
 		rng("c_a/c_1", o.CaRatio.V, 1, 0, 1, "", false)
 	}
+	if o.FSOnGross && !o.Approach.Allowable() {
+		errs = append(errs, &site.InputError{Where: "bearing", Param: "fs_on", Msg: "fs_on = gross needs an allowable-stress approach, FS(factor)"})
+	}
+	o.kDeltaSet = o.Interface.KDelta != 0
 	if o.Interface.KDelta == 0 {
 		o.Interface.KDelta = 1
 	}
+	o.spreadSet = o.SpreadTan != 0
 	if o.SpreadTan == 0 {
 		o.SpreadTan = 0.5
 	}

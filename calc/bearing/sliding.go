@@ -81,7 +81,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 			}
 			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
 			ad := c.step(ds, fn("atan", div(fn("tan", sym(ks)), sym(gPhi))), math.Atan(math.Tan(ak)/g), "deg", refMat, "design value", val(ks, ak, "deg"), val(gPhi, g, ""))
-			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, "δ_d/φ′_cv,d (1 for concrete cast in situ, 2/3 for smooth precast)")
+			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, kDeltaNote(c.opt.kDeltaSet))
 			dd = c.step("delta_d", mul(sym("k_delta"), sym(ds)), c.opt.Interface.KDelta*ad, "deg", refDelta, "design base friction angle",
 				val("k_delta", c.opt.Interface.KDelta, ""), val(ds, ad, "deg"))
 		}

@@ -211,7 +211,11 @@ func (c *calc) twoLayer(ld design.Load, d Drainage, g *geo, top soil, qt float64
 func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H float64) {
 	n := c.opt.SpreadTan
 	vn, vH, vg1 := val("n_s", n, ""), val("H_1", H, "m"), val("gamma_1", gam1, "kN/m3")
-	c.take("n_s", n, "", trace.Ref{}, "load-spread gradient through the upper layer, horizontal per vertical (common practice: 1H:2V)")
+	note := "load-spread gradient through the upper layer, horizontal per vertical, given"
+	if !c.opt.spreadSet {
+		note = "load-spread gradient through the upper layer, horizontal per vertical: assumed, default 1H:2V (common practice); give spread to change it"
+	}
+	c.take("n_s", n, "", trace.Ref{}, note)
 	g3 := geo{strip: g.strip, Bf: g.Bf, D: g.D, alpha: g.alpha, V: g.V, H: g.H, noDepth: true}
 	g3.Bp = c.step("B_s", add(sym("B'"), mul(num(2), sym("n_s"), sym("H_1"))), g.Bp+2*n*H, "m", trace.Ref{}, "spread width at the top of the lower layer", val("B'", g.Bp, "m"), vn, vH)
 	if g.strip {

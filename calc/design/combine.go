@@ -371,7 +371,7 @@ func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM strin
 		if a.Kind == site.Variable && l.uses(i, Q) && i != l.Leading {
 			note := "combination factor of " + a.Name
 			if !a.Psi0.Set {
-				note += " (not given: default)"
+				note += ": assumed, default (EN 1990 Table A1.1, imposed loads); give psi_0 to change it"
 			}
 			t.Add(trace.Step{Symbol: "psi_0_" + tags[i], Value: l.Psi[i], Ref: refPsi, Note: note, Case: cas})
 		}

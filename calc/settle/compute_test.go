@@ -250,7 +250,7 @@ func TestInputErrors(t *testing.T) {
 		{"time", func(in *settle.Input) { in.Times = []float64{-1} }, "time"},
 		{"sublayers", func(in *settle.Input) { in.Sublayers = -3 }, "sublayers"},
 		{"fixed depth above base", func(in *settle.Input) { in.Depth = settle.Depth{Rule: settle.DepthFixed, Z: site.Some(0.5)} }, "depth"},
-		{"A", func(in *settle.Input) { in.SkemptonBjerrum = site.Some(3) }, "A"},
+		{"A", func(in *settle.Input) { in.SkemptonBjerrum = site.Some(3) }, "Skempton–Bjerrum A"},
 		{"method", func(in *settle.Input) { in.Method = 42 }, "method"},
 		{"ground", func(in *settle.Input) { in.Ground.Layers[1].Cc = site.Some(-1) }, "C_c"},
 	}

@@ -110,6 +110,9 @@ func (k *calc) consolidation(mode Method) error {
 		}
 		k.add(cs, sym, nil, nil, sum, "mm", ref,
 			fmt.Sprintf("consolidation settlement of %s: sum of the Δs column over its %d sublayers, %d to %d (stress table)", name, lr.end-lr.first, lr.first+1, lr.end))
+		if oc := (l.OCR.Set && l.OCR.V > 1) || (l.SigmaP.Set && l.SigmaP.V > k.r.Sub[lr.first].SigmaV0Eff); oc && mode == Combined && !k.c.SkemptonBjerrum.Set && k.imm[i] != "" {
+			k.warn(cs, "oc-sum", trace.SevCaution, refSB, fmt.Sprintf("%s: over-consolidated clay: the immediate settlement and the oedometer settlement are simply added, which overstates the total (the oedometer value holds part of the immediate movement); set skempton_bjerrum = A (about 0.2 to 0.5 for over-consolidated clay) to apply the Skempton–Bjerrum correction", name))
+		}
 		if l.Cc.Set && !useCc {
 			k.warn(cs, "cc-no-e0", trace.SevNote, trace.Ref{}, fmt.Sprintf("%s: C_c given without e_0, so m_v is used", name))
 		}

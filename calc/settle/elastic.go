@@ -206,6 +206,7 @@ func (k *calc) elastic(combined bool) {
 		var pending []func()
 		if kind == "E'" && !l.Nu.Set && !noted {
 			pending = append(pending, func() {
+				k.add(cs, "nu'", nil, nil, DefaultNu, "", trace.Ref{}, "Poisson's ratio: assumed, default (common practice); give nu in the layer table to change it")
 				k.warn(cs, "nu-default", trace.SevNote, trace.Ref{}, fmt.Sprintf("Poisson's ratio ν′ = %g assumed where not given (common practice)", DefaultNu))
 			})
 			noted = true

@@ -265,7 +265,7 @@ func (in Input) validate() (*config, error) {
 		errs = check(errs, w, "t_p", in.Tp.V, Year, 0, 1000, true, "yr")
 	}
 	if in.SkemptonBjerrum.Set {
-		errs = check(errs, w, "A", in.SkemptonBjerrum.V, 1, 0, 1.5, false, "")
+		errs = check(errs, w, "Skempton–Bjerrum A", in.SkemptonBjerrum.V, 1, 0, 1.5, false, "")
 	}
 	if in.Grain < Sand || in.Grain > Gravel {
 		errs = append(errs, &site.InputError{Where: w, Param: "grain", Msg: "expected sand, fine-silty or gravel"})

@@ -33,6 +33,9 @@ type calc struct {
 
 	creep   func(t float64) float64 // sand creep at time t (Schmertmann C_2, Burland & Burbidge f_t)
 	sandSec float64                 // sand creep at the design life
+
+	lifeShown bool // the design life has been recorded as a step
+	gwShown   bool // γ_w has been recorded as a step
 }
 
 // sigmaV is the total vertical stress at z from a piecewise-linear profile
@@ -103,6 +106,23 @@ func (k *calc) add(cs, sym string, f trace.Expr, in []trace.Value, v float64, un
 		k.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: in, Value: v, Unit: unit, Ref: ref, Note: note, Case: cs})
 	}
 	return v
+}
+
+// life returns the design working life for secondary compression and
+// creep, recording it as a step the first time it is used: given (life),
+// or assumed, default 50 years (EN 1990:2002 Table 2.1, category 4).
+func (k *calc) life(cs string) float64 {
+	if k.lifeShown {
+		return k.c.life
+	}
+	k.lifeShown = true
+	note := "design working life for creep and secondary compression, given"
+	ref := trace.Ref{}
+	if !k.c.Life.Set {
+		note = "design working life for creep and secondary compression: assumed, default (category 4, building structures); give life to change it"
+		ref = trace.Ref{Source: trace.EN1990, Clause: "Table 2.1, category 4"}
+	}
+	return k.add(cs, "t_life", nil, nil, k.c.life, "yr", ref, note)
 }
 
 // warn records a caution raised by the latest step.
@@ -203,6 +223,14 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 		}
 	}
 	u = g.PoreP(z)
+	if u > 0 && !k.gwShown {
+		k.gwShown = true
+		note := "unit weight of water, given"
+		if g.GammaW == 0 {
+			note = "unit weight of water: assumed, default (common practice); give gamma_w in the ground block to change it"
+		}
+		k.add(cs, "gamma_w", nil, nil, g.Gw(), "kN/m3", trace.Ref{}, note)
+	}
 	if u > 0 {
 		k.add(cs, "u_0", fxU0, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val("z", z, "m"), val("z_w", g.Water.V, "m")}, u, "kPa", trace.Ref{}, "hydrostatic pore pressure")
 	} else {
@@ -339,6 +367,11 @@ func lb(f site.Footing) float64 {
 // boundaries, the count in each layer in proportion to its thickness
 // (largest remainder, at least one each), and fills the stress columns.
 func (k *calc) sublayers(top, bot float64) error {
+	note := "number of sublayers over the zone, given"
+	if k.c.Sublayers == 0 {
+		note = "number of sublayers over the zone: assumed, default; give sublayers to change it"
+	}
+	k.add("zone of influence", "n_sub", nil, nil, float64(k.c.n), "", trace.Ref{}, note)
 	type seg struct {
 		layer    int
 		top, bot float64

@@ -153,9 +153,9 @@ func (k *calc) schmertmann() error {
 		k.add(cs, "Sigma_Iz", nil, nil, sum, "m3/MN", ref, "Σ I_z Δz / E_s over the sublayers (stress table)")
 		k.add(cs, "s_i", fMul(fS("C_1"), fS("q_net"), fS("Sigma_Iz")), []trace.Value{val("C_1", sm.C1, ""), val("q_net", k.qn, "kPa"), val("Sigma_Iz", sum, "m3/MN")}, si, "mm", ref, "settlement at t = 0.1 yr (C_2 = 1)")
 	}
-	life := c.life
+	life := k.life(cs)
 	sm.C2 = 1 + 0.2*math.Log10(life/(0.1*Year))
-	k.add(cs, "C_2", fAdd(fN(1), fMul(fN(0.2), fFn("log10", fDiv(fS("t"), yr01)))), []trace.Value{val("t", life, "yr")}, sm.C2, "", ref70, "creep factor at the design life t")
+	k.add(cs, "C_2", fAdd(fN(1), fMul(fN(0.2), fFn("log10", fDiv(fS("t_life"), yr01)))), []trace.Value{val("t_life", life, "yr")}, sm.C2, "", ref70, "creep factor at the design life t_life")
 	sec := si * (sm.C2 - 1)
 	k.add(cs, "s_creep", fMul(fS("s_i"), fSub(fS("C_2"), fN(1))), []trace.Value{val("s_i", si, "mm"), val("C_2", sm.C2, "")}, sec, "mm", ref70, "creep after 0.1 yr (secondary)")
 	k.creep = func(t float64) float64 {
@@ -349,9 +349,10 @@ func (k *calc) burland() error {
 		}
 		return 1 + r3 + rr*math.Log10(t/(3*Year))
 	}
-	bb.Ft = ft(c.life)
-	if c.life >= 3*Year {
-		k.add(cs, "f_t", fAdd(fN(1), fS("R_3"), fMul(fS("R"), fFn("log10", fDiv(fS("t"), yr3)))), []trace.Value{val("R_3", r3, ""), val("R", rr, ""), val("t", c.life, "yr")}, bb.Ft, "", trace.Ref{Source: BB1985, Clause: "time factor f_t (t ≥ 3 years)"}, "time factor at the design life t")
+	life := k.life(cs)
+	bb.Ft = ft(life)
+	if life >= 3*Year {
+		k.add(cs, "f_t", fAdd(fN(1), fS("R_3"), fMul(fS("R"), fFn("log10", fDiv(fS("t_life"), yr3)))), []trace.Value{val("R_3", r3, ""), val("R", rr, ""), val("t_life", life, "yr")}, bb.Ft, "", trace.Ref{Source: BB1985, Clause: "time factor f_t (t ≥ 3 years)"}, "time factor at the design life t_life")
 	} else {
 		k.add(cs, "f_t", nil, nil, 1, "", ref, "f_t is given for t ≥ 3 years only")
 	}

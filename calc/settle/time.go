@@ -299,15 +299,16 @@ func (k *calc) secondary() {
 		k.add(cs, ix("H_c,", i), fSub(fS("z_bot"), fS("z_top")), []trace.Value{val("z_bot", lr.Bot, "m"), val("z_top", lr.Top, "m")}, hc, "m", trace.Ref{}, "compressing thickness within the zone of influence")
 		k.add(cs, ix("e_p,", i), fSub(fS("e_0"), fMul(fAdd(fN(1), fS("e_0")), fDiv(fS(ssym), fS(ix("H_c,", i))))),
 			[]trace.Value{val("e_0", l.E0.V, ""), val(ssym, lr.Sc, "mm"), val(ix("H_c,", i), hc, "m")}, ep, "", refCc, "void ratio at the end of primary consolidation (average strain of the layer)")
+		k.life(cs)
 		if life <= tp {
 			k.add(cs, ix("s_sec,", i), nil, nil, 0, "mm", trace.Ref{}, "the design life ends before primary consolidation")
 			continue
 		}
 		v := l.Calpha.V * hc / (1 + ep) * math.Log10(life/tp)
 		lr.Ssec = v
-		k.add(cs, ix("s_sec,", i), fMul(fDiv(fMul(fS("C_alpha"), fS(ix("H_c,", i))), fAdd(fN(1), fS(ix("e_p,", i)))), fFn("log10", fDiv(fS("t"), fS(ix("t_p,", i))))),
-			[]trace.Value{val("C_alpha", l.Calpha.V, ""), val(ix("H_c,", i), hc, "m"), val(ix("e_p,", i), ep, ""), val("t", life, "yr"), val(ix("t_p,", i), tp, "yr")},
-			v, "mm", trace.Ref{Source: TPM1996, Clause: "secondary compression, C_α/(1 + e_p) per log cycle of time"}, "secondary compression at the design life t")
+		k.add(cs, ix("s_sec,", i), fMul(fDiv(fMul(fS("C_alpha"), fS(ix("H_c,", i))), fAdd(fN(1), fS(ix("e_p,", i)))), fFn("log10", fDiv(fS("t_life"), fS(ix("t_p,", i))))),
+			[]trace.Value{val("C_alpha", l.Calpha.V, ""), val(ix("H_c,", i), hc, "m"), val(ix("e_p,", i), ep, ""), val("t_life", life, "yr"), val(ix("t_p,", i), tp, "yr")},
+			v, "mm", trace.Ref{Source: TPM1996, Clause: "secondary compression, C_α/(1 + e_p) per log cycle of time"}, "secondary compression at the design life t_life")
 	}
 }
 

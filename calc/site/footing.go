@@ -39,8 +39,8 @@ func ParseShape(s string) (Shape, bool) {
 type Footing struct {
 	Name  string
 	Shape Shape
-	B     float64 // width (diameter of a circle), m, (0, 100]
-	L     float64 // length, m, B ≤ L ≤ 1000 (rectangle only)
+	B     float64 // width (diameter of a circle), m, (0, 1000] (a wide fill or embankment: hundreds of metres)
+	L     float64 // length, m, B ≤ L ≤ 10000 (rectangle only)
 	D     float64 // depth of the underside below ground level, m, 0–50
 	Alpha float64 // inclination of the base to the horizontal, rad, [0, 45) deg
 }
@@ -83,9 +83,9 @@ func (f Footing) Validate() error {
 	// 0.1 m is a practical lower bound: no shallow foundation is
 	// narrower, and below it the effective-area and stress formulas lose
 	// meaning (common practice).
-	errs.check(w, "B", f.B, 1, MinWidth, 100, false, "m")
+	errs.check(w, "B", f.B, 1, MinWidth, 1000, false, "m")
 	if f.Shape == Rectangle {
-		errs.check(w, "L", f.L, 1, MinWidth, 1000, false, "m")
+		errs.check(w, "L", f.L, 1, MinWidth, 10000, false, "m")
 		if f.L < f.B {
 			errs = append(errs, &InputError{Where: w, Param: "L", Msg: fmt.Sprintf("L = %g m is less than B = %g m: B is the shorter side", f.L, f.B)})
 		}

@@ -115,7 +115,7 @@ func TestRangeWords(t *testing.T) {
 	}{
 		{site.Footing{Name: "F", Shape: site.Square, B: 0, D: 1}, "F: B = 0 m: must be at least 0.1 m"},
 		{site.Footing{Name: "F", Shape: site.Square, B: 1e-300, D: 1}, "F: B = 1e-300 m: must be at least 0.1 m"},
-		{site.Footing{Name: "F", Shape: site.Square, B: 200, D: 1}, "F: B = 200 m: must be at most 100 m"},
+		{site.Footing{Name: "F", Shape: site.Square, B: 2000, D: 1}, "F: B = 2000 m: must be at most 1000 m"},
 		{site.Footing{Name: "F", Shape: site.Square, B: math.NaN(), D: 1}, "F: B = NaN m: not a number"},
 	} {
 		if err := c.f.Validate(); err == nil || !strings.Contains(err.Error(), c.want) {

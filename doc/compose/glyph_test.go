@@ -54,6 +54,15 @@ func allOptions() string {
 			}
 		}
 	}
+	// the options of every engine input (issue 10, points 6–8)
+	block("bearing", "P1 on site", "approach = FS(3.0)", "fs_on = gross", "drainage = both")
+	block("bearing", "OR1 on platform", "spread = 0.3")
+	block("settlement", "P1 on site", "life = 100 yr", "drainage_paths = one-way", "depth = stress(0.2)", "times = 1 yr")
+	block("settlement", "P1 on site", "skempton_bjerrum = 0.4", "depth = width(3)", "drainage_paths = two-way")
+	block("settlement", "P1 on site", "method = consolidation", "depth = 12 m", "sublayers = 20")
+	block("settlement", "S1 on east", "method = schmertmann", "schmertmann = 1970", "life = 25 yr")
+	block("settlement", "S1 on east", "method = burland-burbidge", "fluctuating = yes", "grain = fine-silty")
+	block("settlement", "S1 on east", "method = burland-burbidge", "grain = gravel")
 	block("capacity", "S1 on east", "widths = 0.6 m, 0.9 m, 1.5 m")
 	block("capacity", "P1 on site", "widths = 1.5 m, 2.7 m", "settlement_method = elastic", "local_shear = yes")
 	return b.String()

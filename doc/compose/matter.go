@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"plinth/calc/trace"
 	"plinth/doc/eval"
 	"plinth/doc/layout"
 	"plinth/doc/layout/eqn"
@@ -174,6 +175,13 @@ func (c *composer) assumedValues() []layout.Block {
 					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
 				}})
 			}
+			for _, st := range assumedSteps(b) {
+				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
+					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
+					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
+				}})
+			}
 		}
 	}
 	for _, r := range c.cautions {
@@ -194,6 +202,33 @@ func (c *composer) assumedValues() []layout.Block {
 		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why")), cell(txt("Used at"))},
 		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
 		Rows:   rows})
+}
+
+// assumedSteps are the steps of a block's engine working that record a
+// value the engine assumed because the sheet does not give it (their
+// note says "assumed, default"), each symbol and note once.
+func assumedSteps(b *eval.Block) []trace.Step {
+	var trs []*trace.Trace
+	switch {
+	case b.Bearing != nil:
+		trs = append(trs, &b.Bearing.Trace)
+	case b.Settle != nil:
+		trs = append(trs, &b.Settle.Load, &b.Settle.Trace)
+	case b.Capacity != nil:
+		trs = append(trs, &b.Capacity.Trace)
+	}
+	seen := map[string]bool{}
+	var out []trace.Step
+	for _, tr := range trs {
+		for _, st := range tr.Steps {
+			if !strings.Contains(st.Note, "assumed, default") || seen[st.Symbol+"\x00"+st.Note] {
+				continue
+			}
+			seen[st.Symbol+"\x00"+st.Note] = true
+			out = append(out, st)
+		}
+	}
+	return out
 }
 
 // references prints the references list, numbered as cited.

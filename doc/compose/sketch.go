@@ -13,7 +13,7 @@ import (
 
 // sketch draws the footing's section (doc/sketch) on the ground of the
 // first analysis that uses it, with the characteristic actions summed as
-// given and, when a bearing block checks it, the effective width of the
+// given (and the self-weight W the engine adds with self_weight = auto) and, when a bearing block checks it, the effective width of the
 // governing case. A footing no analysis uses is drawn on no ground.
 func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	f := b.Footing
@@ -52,6 +52,11 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			sk.Layers = append(sk.Layers, sketch.Layer{Name: l.Name, Top: l.Top})
 		}
 	}
+	w := 0.0
+	if on != nil {
+		w = f.SelfWeightOn(on) // the engine's self-weight, 0 unless self_weight = auto
+	}
+	sk.V = w
 	for _, a := range f.Actions {
 		sk.V += a.V
 		sk.H += a.HB
@@ -64,6 +69,9 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	if sk.V != 0 {
 		sk.VLabel = "ΣV = " + valueText(units.Quantity{V: sk.V, Dim: fu.Dim}, fu, -1)
+		if w != 0 {
+			sk.VLabel += " incl. W = " + valueText(units.Quantity{V: w, Dim: fu.Dim}, fu, -1)
+		}
 	}
 	if sk.H != 0 {
 		sk.HLabel = "ΣH = " + valueText(units.Quantity{V: sk.H, Dim: fu.Dim}, fu, -1)
@@ -90,6 +98,9 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		caption += " on ground model " + on.Name
 	}
 	caption += "; characteristic actions as given, all rows added"
+	if w != 0 {
+		caption += " with the self-weight W plinth adds (self_weight = auto)"
+	}
 	if sk.BEff != nil {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}

@@ -40,24 +40,36 @@ func (e *evaluator) bearingInput(s *Sheet, b *sheet.Analysis, blk *Block, o opts
 		in.Options.Sliding, _ = bearing.ParseSwitch(w)
 	}
 	in.Options.TwoLayer, _ = bearing.ParseSwitch(o.word("two_layer", "auto"))
-	if o.word("interface", "cast") == "precast" {
+	switch o.word("interface", "") {
+	case "precast":
 		in.Options.Interface.KDelta = 2.0 / 3
+	case "cast":
+		in.Options.Interface.KDelta = 1 // given: not printed as assumed
 	}
 	if x := o["delta"]; x != nil {
 		q, qok := e.quantity(scope{e: e, s: s}, x, units.Angle, "an angle")
 		ok = ok && qok
 		in.Options.Interface.Delta = site.Some(q.V)
 	}
+	var spread site.Opt
 	for _, x := range []struct {
 		name string
 		dst  *site.Opt
-	}{{"K_s", &in.Options.Ks}, {"r_a", &in.Options.CaRatio}} {
+	}{{"K_s", &in.Options.Ks}, {"r_a", &in.Options.CaRatio}, {"spread", &spread}} {
 		if opt := o[x.name]; opt != nil {
 			q, qok := e.quantity(scope{e: e, s: s}, opt, units.None, "a pure number")
 			ok = ok && qok
 			*x.dst = site.Some(q.V)
 		}
 	}
+	if spread.Set {
+		in.Options.SpreadTan = spread.V
+		if !(spread.V > 0) {
+			e.errs.Add(o["spread"].Value.Span, "spread = %s: expected a gradient more than 0 and at most 1 (horizontal per vertical)", o["spread"].Value.Value)
+			ok = false
+		}
+	}
+	in.Options.FSOnGross = o.word("fs_on", "net") == "gross"
 	ap, aok := e.approach(s, o)
 	in.Options.Approach = ap
 	return in, ok && aok
@@ -101,55 +113,26 @@ func withSelfWeight(f *Footing, g *Ground) []site.Action {
 }
 
 // selfWeight is the weight self_weight = auto adds (N, or N/m for a
-// strip), with its working recorded in tr:
-// W = γ_c·A·h + A·σ_v(D − h), the backfill taking the ground's total
-// vertical stress from ground level to the top of the footing (common
-// practice). 0 and no steps when self_weight is not auto.
+// strip), worked out by the engine (design.Weight) with its working
+// recorded in tr. 0 and no steps when self_weight is not auto (or the
+// footing's values were refused, which is reported at the footing).
 func selfWeight(f *Footing, g *Ground, tr *trace.Trace) float64 {
 	if !f.SelfWeight {
 		return 0
 	}
-	m := f.Model
-	areaUnit, forceUnit := "m2", "kN"
-	var area trace.Expr
-	switch m.Shape {
-	case site.Strip:
-		area, areaUnit, forceUnit = trace.S("B"), "m", "kN/m"
-	case site.Circle:
-		area = trace.Div(trace.Mul(trace.S("pi"), trace.Pow(trace.S("B"), trace.N(2))), trace.N(4))
-	case site.Rectangle:
-		area = trace.Mul(trace.S("B"), trace.S("L"))
-	default:
-		area = trace.Pow(trace.S("B"), trace.N(2))
+	in := design.SelfWeight{Footing: f.Model, Ground: g.Model}
+	if f.GammaCGiven {
+		in.GammaC = site.Some(f.GammaC)
 	}
-	v := func(sym string, x float64, unit string) trace.Value {
-		return trace.Value{Symbol: sym, V: x, Unit: unit}
+	if f.HGiven {
+		in.H = site.Some(f.H)
 	}
-	in := []trace.Value{v("B", m.B, "m")}
-	if m.Shape == site.Rectangle {
-		in = append(in, v("L", m.L, "m"))
+	var t trace.Trace
+	w, err := design.Weight(in, &t)
+	if err != nil {
+		return 0
 	}
-	if m.Shape == site.Circle {
-		in = append(in, v("pi", math.Pi, ""))
-	}
-	a := tr.Add(trace.Step{Symbol: "A", Formula: area, Inputs: in, Value: m.Area(), Unit: areaUnit, Note: "plan area of the footing" + map[bool]string{true: " per metre run", false: ""}[m.Shape == site.Strip]})
-	gcNote := "unit weight of the footing, given"
-	if !f.GammaCGiven {
-		gcNote = "unit weight of the footing: assumed, reinforced concrete (common practice); give gamma_c to change it"
-	}
-	tr.Add(trace.Step{Symbol: "gamma_c", Value: f.GammaC, Unit: "kN/m3", Note: gcNote})
-	hNote := "thickness of the footing, given"
-	if !f.HGiven {
-		hNote = "thickness of the footing: assumed equal to D (no backfill over it); give h to change it"
-	}
-	tr.Add(trace.Step{Symbol: "h", Value: f.H, Unit: "m", Note: hNote})
-	tr.Add(trace.Step{Symbol: "D", Value: m.D, Unit: "m", Note: "depth of the underside below ground level"})
-	sv := g.Model.SigmaV(m.D - f.H)
-	tr.Add(trace.Step{Symbol: "sigma_v,fill", Value: sv, Unit: "kPa", Note: "total vertical stress of the ground model at depth D − h (the backfill over the footing)"})
-	w := f.GammaC*a*f.H + a*sv
-	tr.Add(trace.Step{Symbol: "W", Formula: trace.Add(trace.Mul(trace.S("gamma_c"), trace.S("A"), trace.S("h")), trace.Mul(trace.S("A"), trace.S("sigma_v,fill"))),
-		Inputs: []trace.Value{v("gamma_c", f.GammaC, "kN/m3"), v("A", a, areaUnit), v("h", f.H, "m"), v("sigma_v,fill", sv, "kPa")},
-		Value:  w, Unit: forceUnit, Note: "self-weight and backfill, added by plinth as a permanent action (common practice)"})
+	*tr = t
 	return w
 }
 
@@ -168,7 +151,12 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 	}
 	res, err := bearing.Check(in)
 	if err != nil {
-		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		e.siteErrors(err, headerSpan(b.Span), func(_ int, param string) source.Span {
+			if x := o[param]; x != nil && x.Value.Span.File != nil {
+				return x.Value.Span // an option the engine refused
+			}
+			return headerSpan(b.Span)
+		})
 		return false
 	}
 	blk.Bearing = res

@@ -58,6 +58,7 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 		e.defs[i] = e.collect(s)
 	}
 	e.resolveUses()
+	e.collectAssumable()
 	e.parseOverrides(opt.Set)
 	for _, s := range e.order() {
 		e.sheet(s)
@@ -95,11 +96,15 @@ type def struct {
 }
 
 type evaluator struct {
-	pkg        *sheet.Package
-	res        *Result
-	errs       source.List
-	defs       []map[string]def // per sheet index
-	failed     map[string]bool  // "sheet\x00name" of symbols whose evaluation failed
+	pkg  *sheet.Package
+	res  *Result
+	errs source.List
+	defs []map[string]def // per sheet index
+	// assumable are the values the engine assumes when a block does not
+	// give them (ground gamma_w, footing gamma_c and h), per sheet index:
+	// --set may give them though no statement defines them.
+	assumable  []map[string]def
+	failed     map[string]bool // "sheet\x00name" of symbols whose evaluation failed
 	over       map[*Sheet]map[string]*Override
 	tables     map[*sheet.Grid]*table
 	blockNames []map[string][]string // per sheet: "ground"/"footing" → names defined

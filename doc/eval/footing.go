@@ -84,6 +84,8 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		e.errs.AddHint(b.Name.Span, "add a line: shape = rectangle (or strip, square, circle)", "footing %s has no shape", f.Name)
 		ok = false
 	}
+	e.assumedOverride(s, prefix+"gamma_c", b.Name.Span)
+	e.assumedOverride(s, prefix+"h", b.Name.Span)
 	get := func(name string, d units.Dim, what string, required bool) (float64, bool) {
 		y := s.local[prefix+name]
 		if y == nil {

@@ -69,6 +69,7 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	s.grounds[g.Name] = g
 	prefix := g.Name + "."
 	g.Water = s.local[prefix+"water"]
+	e.assumedOverride(s, prefix+"gamma_w", b.Name.Span)
 	g.GammaW = s.local[prefix+"gamma_w"]
 	g.Model = site.Ground{Name: g.Name}
 	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines, groundStmts)

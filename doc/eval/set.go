@@ -56,7 +56,7 @@ func (e *evaluator) parseOverrides(args []string) {
 		if t == nil {
 			continue
 		}
-		d := e.defs[t.Index][name]
+		d, _ := e.lookupDef(t.Index, name)
 		if !d.input {
 			e.errs.Add(spanOf(f, 0, len(lhs)), "%s on %s is calculated (%s), not an input: only inputs can be set", name, t.Name(), posText(d.span, nil))
 			continue
@@ -77,6 +77,56 @@ func (e *evaluator) parseOverrides(args []string) {
 	}
 }
 
+// collectAssumable records, per sheet, the assumed values --set may give
+// though no statement defines them: NAME.gamma_w of each ground block
+// (default 9.81 kN/m³) and NAME.gamma_c and NAME.h of each footing block
+// (defaults 24 kN/m³ and D).
+func (e *evaluator) collectAssumable() {
+	e.assumable = make([]map[string]def, len(e.res.Sheets))
+	for i := range e.res.Sheets {
+		m := map[string]def{}
+		for _, g := range e.blockNames[i]["ground"] {
+			m[g+".gamma_w"] = def{input: true, dim: units.UnitWeight}
+		}
+		for _, f := range e.blockNames[i]["footing"] {
+			m[f+".gamma_c"] = def{input: true, dim: units.UnitWeight}
+			m[f+".h"] = def{input: true, dim: units.Length}
+		}
+		for n := range m {
+			if _, ok := e.defs[i][n]; ok {
+				delete(m, n) // written: an ordinary input
+			}
+		}
+		e.assumable[i] = m
+	}
+}
+
+// lookupDef finds name on sheet index i: a definition, or an assumed
+// value --set may give.
+func (e *evaluator) lookupDef(i int, name string) (def, bool) {
+	if d, ok := e.defs[i][name]; ok {
+		return d, true
+	}
+	d, ok := e.assumable[i][name]
+	return d, ok
+}
+
+// assumedOverride returns the symbol a --set of an assumed value (one no
+// statement defines) makes, placed at the block's name; nil when there
+// is none.
+func (e *evaluator) assumedOverride(s *Sheet, name string, at source.Span) *Symbol {
+	o := e.over[s][name]
+	if o == nil || s.local[name] != nil {
+		return nil
+	}
+	y := &Symbol{Name: name, Q: o.Q, Unit: o.Unit, Decimals: -1, Span: at, Sheet: s, Input: true, Override: o,
+		Note: sheet.Str{Value: "assumed value given by --set"}}
+	o.Target = y
+	s.local[name] = y
+	s.Symbols = append(s.Symbols, y)
+	return y
+}
+
 // overrideTarget finds the sheet an override applies to.
 func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.Span) {
 	nameSpan := spanOf(f, 0, strings.Index(o.Arg, "="))
@@ -87,7 +137,7 @@ func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.
 			e.errs.Add(nameSpan, "no sheet named %s in this package", o.Sheet)
 			return nil, valSpan
 		}
-		if _, ok := e.defs[t.Index][o.Name]; !ok {
+		if _, ok := e.lookupDef(t.Index, o.Name); !ok {
 			e.errs.AddHint(nameSpan, e.nearest(o.Name, t), "%s is not defined on %s", o.Name, o.Sheet)
 			return nil, valSpan
 		}
@@ -95,7 +145,7 @@ func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.
 	}
 	var found []*Sheet
 	for _, s := range e.res.Sheets {
-		if _, ok := e.defs[s.Index][o.Name]; ok {
+		if _, ok := e.lookupDef(s.Index, o.Name); ok {
 			found = append(found, s)
 		}
 	}
@@ -108,7 +158,8 @@ func (e *evaluator) overrideTarget(f *source.File, o *Override) (*Sheet, source.
 	}
 	var where []string
 	for _, s := range found {
-		where = append(where, posText(e.defs[s.Index][o.Name].span, nil))
+		d, _ := e.lookupDef(s.Index, o.Name)
+		where = append(where, posText(d.span, nil))
 	}
 	e.errs.AddHint(nameSpan, fmt.Sprintf("write --set %s:%s=...", found[0].Name(), o.Name),
 		"%s is defined on several sheets: %s", o.Name, strings.Join(where, ", "))

@@ -90,7 +90,86 @@ func (e *evaluator) settleInput(s *Sheet, blk *Block, o opts, methodKey string) 
 		}
 		in.Sublayers = n
 	}
+	if x := o["life"]; x != nil {
+		q, qok := e.quantity(sc, x, units.Time, "a duration (the design working life)")
+		ok = ok && qok
+		in.Life = optOf(q.V)
+	}
+	in.Schmertmann1970 = o.word("schmertmann", "1978") == "1970"
+	switch o.word("drainage_paths", "auto") {
+	case "one-way":
+		in.Drainage = settle.DrainOneWay
+	case "two-way":
+		in.Drainage = settle.DrainTwoWay
+	}
+	if x := o["depth"]; x != nil {
+		d, dok := e.depthRule(sc, x)
+		ok = ok && dok
+		in.Depth = d
+	}
+	if x := o["skempton_bjerrum"]; x != nil && strings.TrimSpace(x.Value.Value) != "no" {
+		q, qok := e.quantity(sc, x, units.None, "no or the pore-pressure coefficient A")
+		ok = ok && qok
+		in.SkemptonBjerrum = optOf(q.V)
+	}
+	in.Fluctuating = o.word("fluctuating", "no") == "yes"
+	switch o.word("grain", "sand") {
+	case "fine-silty":
+		in.Grain = settle.FineSilty
+	case "gravel":
+		in.Grain = settle.Gravel
+	}
 	return in, ok
+}
+
+// depthRule reads the depth option: stress or stress(R) (down to where
+// Δσ = R·σ′_v0, default 0.1), width or width(n) (n·B below the base), or a
+// length (a fixed depth below ground level).
+func (e *evaluator) depthRule(sc scope, x *sheet.Option) (settle.Depth, bool) {
+	v := strings.TrimSpace(x.Value.Value)
+	for _, r := range []struct {
+		word string
+		rule settle.DepthRule
+	}{{"stress", settle.DepthStress}, {"width", settle.DepthWidth}} {
+		if v == r.word {
+			return settle.Depth{Rule: r.rule}, true
+		}
+		if rest, found := strings.CutPrefix(v, r.word+"("); found && strings.HasSuffix(rest, ")") {
+			n, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(rest, ")")), 64)
+			if err != nil {
+				e.errs.Add(x.Value.Span, "depth = %s: expected a number in the parentheses, as in %s(%s)", v, r.word, map[string]string{"stress": "0.2", "width": "2"}[r.word])
+				return settle.Depth{}, false
+			}
+			d := settle.Depth{Rule: r.rule}
+			if r.rule == settle.DepthStress {
+				d.Ratio = optOf(n)
+			} else {
+				d.Widths = optOf(n)
+			}
+			return d, true
+		}
+	}
+	if strings.HasPrefix(v, "stress") || strings.HasPrefix(v, "width") {
+		e.errs.Add(x.Value.Span, "depth = %s: expected stress, stress(ratio), width, width(multiple of B) or a length", v)
+		return settle.Depth{}, false
+	}
+	q, ok := e.quantity(sc, x, units.Length, "stress, stress(ratio), width, width(multiple of B) or a length below ground level")
+	return settle.Depth{Rule: settle.DepthFixed, Z: optOf(q.V)}, ok
+}
+
+// settleAt points an engine error about an option at the option's value
+// (the block's header otherwise).
+func settleAt(o opts, header source.Span) func(int, string) source.Span {
+	names := map[string]string{"life": "life", "Skempton–Bjerrum A": "skempton_bjerrum", "depth ratio": "depth", "depth widths": "depth", "depth": "depth",
+		"limit": "limit", "time": "times", "sublayers": "sublayers", "grain": "grain"}
+	return func(_ int, param string) source.Span {
+		for _, n := range []string{names[param], param} {
+			if x := o[n]; x != nil && x.Value.Span.File != nil {
+				return x.Value.Span
+			}
+		}
+		return header
+	}
 }
 
 func optOf(v float64) site.Opt { return site.Some(v) }
@@ -114,7 +193,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	in.V = optOf(svc.V)
 	r, err := settle.Compute(in)
 	if err != nil {
-		e.siteErrors(err, headerSpan(b.Span), func(int, string) source.Span { return headerSpan(b.Span) })
+		e.siteErrors(err, headerSpan(b.Span), settleAt(o, headerSpan(b.Span)))
 		return false
 	}
 	res.Result = r
@@ -172,7 +251,7 @@ func (e *evaluator) capacity(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 		if x := o["approach"]; x != nil && x.Value.Span.File != nil {
 			at = x.Value.Span
 		}
-		e.siteErrors(err, at, func(int, string) source.Span { return at })
+		e.siteErrors(err, at, settleAt(o, at))
 		return false
 	}
 	blk.Capacity = r
