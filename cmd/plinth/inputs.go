@@ -2,7 +2,6 @@ package main
 
 import (
 	"crypto/sha256"
-	"encoding/binary"
 	"encoding/hex"
 	"encoding/json"
 	"errors"
@@ -270,23 +269,13 @@ func (in *inputs) target(dir string) string {
 // fingerprint recomputes eval.Result.Fingerprint from the embedded files
 // the manifest names, in its order, and the --set arguments.
 func (in *inputs) fingerprint() (string, error) {
-	h := sha256.New()
-	var n [8]byte
-	put := func(b []byte) {
-		binary.BigEndian.PutUint64(n[:], uint64(len(b)))
-		h.Write(n[:])
-		h.Write(b)
-	}
+	var texts [][]byte
 	for _, name := range in.man.Fingerprinted {
 		d, ok := in.files[name]
 		if !ok {
 			return "", fmt.Errorf("%s, named in the manifest, is not embedded", name)
 		}
-		put([]byte(name))
-		put(d)
+		texts = append(texts, d)
 	}
-	for _, s := range in.man.Sets {
-		put([]byte("--set " + s))
-	}
-	return hex.EncodeToString(h.Sum(nil)), nil
+	return eval.Fingerprint(in.man.Fingerprinted, texts, in.man.Sets), nil
 }

@@ -211,6 +211,24 @@ func dimWords(d units.Dim) string {
 // same fingerprint wherever it lies and however its path was typed. A
 // printed document carries its first 12 hex digits on every page.
 func (r *Result) Fingerprint() string {
+	var names []string
+	var texts [][]byte
+	for _, f := range r.Src.Files {
+		names = append(names, filepath.Base(f.Path))
+		texts = append(texts, f.Text)
+	}
+	var sets []string
+	for _, o := range r.Overrides {
+		sets = append(sets, o.Arg)
+	}
+	return Fingerprint(names, texts, sets)
+}
+
+// Fingerprint is the one definition of the input fingerprint: the SHA-256
+// of each file's name and bytes in order (each preceded by its length)
+// and then each --set argument as "--set ARG". plinth verify recomputes it
+// from the files a PDF embeds with this same function.
+func Fingerprint(names []string, texts [][]byte, sets []string) string {
 	h := sha256.New()
 	var n [8]byte
 	put := func(b []byte) {
@@ -218,12 +236,12 @@ func (r *Result) Fingerprint() string {
 		h.Write(n[:])
 		h.Write(b)
 	}
-	for _, f := range r.Src.Files {
-		put([]byte(filepath.Base(f.Path)))
-		put(f.Text)
+	for i, name := range names {
+		put([]byte(name))
+		put(texts[i])
 	}
-	for _, o := range r.Overrides {
-		put([]byte("--set " + o.Arg))
+	for _, s := range sets {
+		put([]byte("--set " + s))
 	}
 	return hex.EncodeToString(h.Sum(nil))
 }
