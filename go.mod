@@ -1,4 +1,4 @@
-module plinth
+module github.com/plinth-calc/plinth
 
 go 1.26.0
 

@@ -3,9 +3,9 @@ package bearing_test
 import (
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // EN 1997-1:2004 Annex D factor formulas on spot values. Expected values

@@ -4,9 +4,9 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // TestBuoyancyConvention: plinth's one convention for water above the

@@ -3,8 +3,8 @@ package bearing
 import (
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Capacity is the bearing pressure a footing of one width can carry under

@@ -5,9 +5,9 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // geo is the effective geometry and load of one case.

@@ -5,9 +5,9 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // calc carries one calculation: input, trace, and what the common steps

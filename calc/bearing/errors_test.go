@@ -6,9 +6,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // params lists the parameter named by each error in err.

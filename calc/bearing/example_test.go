@@ -3,9 +3,9 @@ package bearing_test
 import (
 	"fmt"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // A pad on firm clay, EN 1997-1 Annex D, DA1: short and long term,

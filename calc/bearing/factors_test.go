@@ -4,7 +4,7 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/bearing"
 )
 
 const deg = math.Pi / 180

@@ -3,9 +3,9 @@ package bearing_test
 import (
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Water above ground level: σ′ is as with the water table at ground level,

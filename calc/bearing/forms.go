@@ -1,6 +1,6 @@
 package bearing
 
-import "plinth/calc/trace"
+import "github.com/plinth-calc/plinth/calc/trace"
 
 // Formula trees are built once per symbol set: the founding layer (main),
 // the lower layer of a two-layer check (lower, suffix _2) and the

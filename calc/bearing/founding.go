@@ -5,7 +5,7 @@ import (
 	"math"
 	"regexp"
 
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // thinRatio: an upper layer whose thickness below the base is less than

@@ -5,9 +5,9 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // TestFSOn: the two conventions of allowable-stress design (common

@@ -3,9 +3,9 @@ package bearing_test
 import (
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 const kPa, kN = 1e3, 1e3

@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Drainage selects the short-term (undrained) and long-term (drained)

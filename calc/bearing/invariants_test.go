@@ -6,10 +6,10 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 var methods = []bearing.Method{bearing.EC7, bearing.Vesic, bearing.Meyerhof, bearing.Hansen, bearing.Terzaghi}

@@ -5,8 +5,8 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // undrainedIn reports whether layer l acts undrained in a case of

@@ -4,7 +4,7 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/bearing"
 )
 
 // kumbhojkarNgamma evaluates Terzaghi's (1943) N_γ independently of the

@@ -3,7 +3,7 @@ package bearing
 import (
 	"math"
 
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // resist records the ultimate bearing pressure of one layer under one

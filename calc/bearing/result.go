@@ -1,6 +1,6 @@
 package bearing
 
-import "plinth/calc/trace"
+import "github.com/plinth-calc/plinth/calc/trace"
 
 // UtilCap is the utilisation reported when there is no resistance at all
 // (resultant outside the base, resistance zero): the check fails and the

@@ -4,10 +4,10 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // slidingDrainages returns the sliding checks to make: none when sliding

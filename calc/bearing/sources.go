@@ -1,6 +1,6 @@
 package bearing
 
-import "plinth/calc/trace"
+import "github.com/plinth-calc/plinth/calc/trace"
 
 // Publications the bearing engine cites (EN 1997-1 and EN 1990 are shared,
 // in package trace).

@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/design"
-	"plinth/calc/trace"
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // twoLayer checks the founding layer over the weaker layer c.weak by

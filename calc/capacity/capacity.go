@@ -5,10 +5,10 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/bearing"
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Input is one capacity table.

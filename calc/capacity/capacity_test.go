@@ -6,12 +6,12 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/bearing"
-	"plinth/calc/capacity"
-	"plinth/calc/design"
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/capacity"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 const deg = math.Pi / 180

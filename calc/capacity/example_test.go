@@ -3,7 +3,7 @@ package capacity_test
 import (
 	"fmt"
 
-	"plinth/calc/capacity"
+	"github.com/plinth-calc/plinth/calc/capacity"
 )
 
 func ExampleTable() {

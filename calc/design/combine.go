@@ -4,8 +4,8 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Components of an action's effect, the index into Load.Use and

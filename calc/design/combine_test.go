@@ -5,9 +5,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 type wantLoad struct {

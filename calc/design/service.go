@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // ServiceKind selects a serviceability combination (EN 1990 6.5.3).

@@ -4,9 +4,9 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Serviceability combinations worked by hand from EN 1990:2002 eqs.

@@ -5,7 +5,7 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // DefaultPsi0 is the combination factor ψ0 given to a variable action that

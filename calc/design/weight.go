@@ -3,8 +3,8 @@ package design
 import (
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // DefaultGammaC is the unit weight of a reinforced-concrete footing

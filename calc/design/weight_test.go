@@ -6,9 +6,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/design"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // TestWeight: the self-weight of a footing and its backfill,

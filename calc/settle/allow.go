@@ -4,10 +4,10 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/solve"
-	"plinth/calc/trace"
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/solve"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Try is one bearing pressure tried by Allowable and the settlement there.

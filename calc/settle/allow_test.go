@@ -6,9 +6,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 func TestAllowable(t *testing.T) {

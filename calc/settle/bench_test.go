@@ -3,7 +3,7 @@ package settle_test
 import (
 	"testing"
 
-	"plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/settle"
 )
 
 // Consolidation of a four-layer clay profile in 200 sublayers below a

@@ -5,9 +5,9 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/stress"
-	"plinth/calc/trace"
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Compute runs one settlement calculation: stresses by sublayer, immediate,

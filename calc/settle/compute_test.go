@@ -6,10 +6,10 @@ import (
 	"reflect"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // fourLayers is an invented profile (Marsh Lane depot): crust, soft clay,

@@ -4,8 +4,8 @@ import (
 	"errors"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // dasProfile is the profile of the consolidation example in Das,

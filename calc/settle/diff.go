@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Published limits of angular distortion β = δ/L between two footings.

@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Steinbrenner returns Steinbrenner's influence factors F1 and F2 for the

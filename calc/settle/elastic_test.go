@@ -5,9 +5,9 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
 )
 
 // Steinbrenner's F1, F2 for L/B = 1 against Bowles (1996), Foundation

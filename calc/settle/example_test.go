@@ -3,9 +3,9 @@ package settle_test
 import (
 	"fmt"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // A pad on the invented Riverside Yard site: fill over firm clay over sand.

@@ -4,9 +4,9 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Water above ground level: the effective stresses, and so the

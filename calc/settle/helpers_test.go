@@ -4,10 +4,10 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 const kPa = 1e3

@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
 )
 
 // Year is the length of a year in seconds (365.25 days); times are SI.

@@ -3,7 +3,7 @@ package settle
 import (
 	"testing"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 func benchInput() Input {

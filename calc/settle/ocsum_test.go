@@ -3,8 +3,8 @@ package settle_test
 import (
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // TestOCSumCaution: where immediate (E_u) and oedometer settlement of an

@@ -5,10 +5,10 @@ import (
 	"math"
 	"strconv"
 
-	"plinth/calc/site"
-	"plinth/calc/solve"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/solve"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // calc carries one settlement calculation.

@@ -1,9 +1,9 @@
 package settle
 
 import (
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Sublayer is one row of the stress table. Depths are below ground level

@@ -6,8 +6,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Schmertmann worked value: a 2.5 m square footing at 0.8 m in sand

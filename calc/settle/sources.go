@@ -1,6 +1,6 @@
 package settle
 
-import "plinth/calc/trace"
+import "github.com/plinth-calc/plinth/calc/trace"
 
 // Sources of the settlement methods. Keys are unique across the engine.
 var (

@@ -6,7 +6,7 @@ import (
 
 	"gonum.org/v1/gonum/integrate/quad"
 
-	"plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/settle"
 )
 
 // steinQuad evaluates Steinbrenner's F1 and F2 for the corner of a 1 × M

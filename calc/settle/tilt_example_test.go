@@ -3,8 +3,8 @@ package settle_test
 import (
 	"fmt"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // A 2.2 m square pad on clay (E′ = 12 MPa) under a 42 kNm permanent

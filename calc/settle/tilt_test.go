@@ -7,9 +7,9 @@ import (
 
 	"gonum.org/v1/gonum/integrate/quad"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 func tiltGround(l site.Layer) site.Ground {

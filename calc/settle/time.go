@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/solve"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/solve"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 var refU = trace.Ref{Source: Terzaghi1943, Clause: "one-dimensional consolidation, uniform initial excess pore pressure"}

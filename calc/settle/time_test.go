@@ -9,8 +9,8 @@ import (
 	"gonum.org/v1/gonum/blas/blas64"
 	"gonum.org/v1/gonum/lapack/lapack64"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // The standard U–T_v table for a uniform initial excess pore pressure

@@ -4,8 +4,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // TestNotVerifiedWithoutData: a layer in the zone of influence without

@@ -3,8 +3,8 @@ package settle_test
 import (
 	"testing"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // TestWideFill: a fill or embankment of large extent is given as a square

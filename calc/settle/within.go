@@ -3,9 +3,9 @@ package settle
 import (
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Within is the differential settlement within one flexible footing:

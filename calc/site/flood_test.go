@@ -4,7 +4,7 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Water above ground level (a flooded or tidal site): hand calculation

@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 const kN = 1e3

@@ -5,7 +5,7 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/solve"
+	"github.com/plinth-calc/plinth/calc/solve"
 )
 
 func pure(f func(float64) float64) solve.Func {

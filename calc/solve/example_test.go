@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/solve"
+	"github.com/plinth-calc/plinth/calc/solve"
 )
 
 func ExampleBrent() {

@@ -3,7 +3,7 @@ package stress
 import (
 	"math"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Circle returns Δσ_z/q at depth z below a point at distance r from the

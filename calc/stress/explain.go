@@ -3,8 +3,8 @@ package stress
 import (
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Explain appends to t the working of the stress increase Δσ = q_net · I

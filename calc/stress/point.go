@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Method is the stress solution used below a footing.

@@ -3,7 +3,7 @@ package stress
 import (
 	"math"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 const big = 1e60 // m, n beyond this give I to within 1e-60 of the limit

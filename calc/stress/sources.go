@@ -1,6 +1,6 @@
 package stress
 
-import "plinth/calc/trace"
+import "github.com/plinth-calc/plinth/calc/trace"
 
 // Sources of the stress solutions.
 var (

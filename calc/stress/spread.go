@@ -3,7 +3,7 @@ package stress
 import (
 	"math"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // DefaultAngle is the 2:1 spread: the load spreads at one horizontal to

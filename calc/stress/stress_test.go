@@ -7,9 +7,9 @@ import (
 
 	"gonum.org/v1/gonum/integrate/quad"
 
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Newmark/Fadum corner influence values I(m, n).

@@ -3,7 +3,7 @@ package stress
 import (
 	"math"
 
-	"plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/site"
 )
 
 // Strip returns Δσ_z/q at depth z and horizontal offset x from the centre

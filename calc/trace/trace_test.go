@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 func TestEvalAndVerify(t *testing.T) {

@@ -5,7 +5,7 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Display units are our own choice (doc comment of Display): the units of

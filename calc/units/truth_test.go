@@ -5,7 +5,7 @@ import (
 	"strconv"
 	"testing"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // factor is u's SI factor (1 for a pure number).

@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Conversion factors. Each row names its source. NIST SP 811 is B. N.

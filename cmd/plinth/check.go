@@ -3,16 +3,16 @@ package main
 import (
 	"encoding/json"
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/compose"
 	"io"
 	"os"
-	"plinth/calc/trace"
-	"plinth/doc/compose"
 	"sort"
 	"strings"
 	"text/tabwriter"
 
-	"plinth/doc/eval"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // check implements "plinth check".

@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/doc/eval"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // changes is what differs between two evaluated packages, in the order

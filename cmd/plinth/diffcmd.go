@@ -6,7 +6,7 @@ import (
 	"io"
 	"strings"
 
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // diffCmd implements "plinth diff OLD NEW [--json]". Exit status: 0 when

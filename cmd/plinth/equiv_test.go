@@ -7,8 +7,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/source"
-	"plinth/internal/badcase"
+	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/badcase"
 )
 
 // badCases lists every bad-input case: single sheets and package folders

@@ -6,12 +6,12 @@ import (
 	"path/filepath"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/pdf"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // FuzzPipeline runs the bytes of one sheet through every stage in

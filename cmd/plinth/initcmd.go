@@ -7,7 +7,7 @@ import (
 	"path/filepath"
 	"strings"
 
-	"plinth/templates"
+	"github.com/plinth-calc/plinth/templates"
 )
 
 // initPackage implements "plinth init DIR": it writes the starter package

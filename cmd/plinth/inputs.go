@@ -14,10 +14,10 @@ import (
 	"strings"
 	"sync"
 
-	"plinth/doc/eval"
-	"plinth/doc/pdf"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // manifestName is the embedded file that describes the others.

@@ -5,9 +5,9 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // The JSON printed by "plinth check --json". This is an interface: fields

@@ -2,14 +2,14 @@ package main
 
 import (
 	"encoding/json"
+	"github.com/plinth-calc/plinth/internal/tools"
 	"os"
 	"os/exec"
 	"path/filepath"
-	"plinth/internal/tools"
 	"strings"
 	"testing"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // TestPDFMatchesJSON renders the example and reads it back with

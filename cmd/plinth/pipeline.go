@@ -4,11 +4,11 @@ import (
 	"fmt"
 	"io"
 
-	"plinth/doc/eval"
-	"plinth/doc/load"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // evaluate runs load → parse → eval and returns the result with every

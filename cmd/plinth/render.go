@@ -9,8 +9,8 @@ import (
 	"strings"
 	"time"
 
-	"plinth/doc/compose"
-	"plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/pdf"
 )
 
 // render implements "plinth render PATH [-o FILE] [--set name=value]...".

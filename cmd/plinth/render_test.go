@@ -2,10 +2,10 @@ package main
 
 import (
 	"bytes"
+	"github.com/plinth-calc/plinth/internal/tools"
 	"os"
 	"os/exec"
 	"path/filepath"
-	"plinth/internal/tools"
 	"strings"
 	"testing"
 	"time"

@@ -13,8 +13,8 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/doc/eval"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // A side is one package that diff compares: a folder or sheet on disk, a

@@ -5,9 +5,9 @@ import (
 	"io"
 	"strings"
 
-	"plinth/doc/compose"
-	"plinth/doc/eval"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // sinceChanges compares the package being rendered with the earlier

@@ -8,7 +8,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/internal/tools"
+	"github.com/plinth-calc/plinth/internal/tools"
 )
 
 // TestRenderSince: --since adds the changes page after the summary (and a

@@ -2,9 +2,9 @@ package main
 
 import (
 	"encoding/json"
+	"github.com/plinth-calc/plinth/internal/tools"
 	"os/exec"
 	"path/filepath"
-	"plinth/internal/tools"
 	"strings"
 	"testing"
 )

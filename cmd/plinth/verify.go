@@ -14,7 +14,7 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/pdf"
 )
 
 // verifyCmd implements "plinth verify FILE.pdf [PATH] [--render]".

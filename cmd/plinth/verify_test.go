@@ -10,7 +10,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/internal/tools"
+	"github.com/plinth-calc/plinth/internal/tools"
 )
 
 // renderCopy renders a copy of the example and returns the package folder

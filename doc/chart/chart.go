@@ -5,10 +5,10 @@ import (
 	"math"
 	"strconv"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Chart is an x–y chart W × H points in size.

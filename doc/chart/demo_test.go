@@ -3,7 +3,7 @@ package chart_test
 import (
 	"math"
 
-	"plinth/doc/chart"
+	"github.com/plinth-calc/plinth/doc/chart"
 )
 
 // The demo charts: an invented pad footing at an invented site, with

@@ -5,8 +5,8 @@ import (
 	"math"
 	"sort"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // Sizes in points.

@@ -3,8 +3,8 @@ package chart
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // box is an axis-aligned rectangle by its corners.

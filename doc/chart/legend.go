@@ -1,8 +1,8 @@
 package chart
 
 import (
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 const (

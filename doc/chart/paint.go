@@ -3,8 +3,8 @@ package chart
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // paint draws the laid-out chart, back to front: grid, region dividers,

@@ -3,8 +3,8 @@ package chart
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // cost scores a label's box in the plot: curves and lines under it (by

@@ -7,10 +7,10 @@ import (
 	"testing"
 	"time"
 
-	"plinth/doc/chart"
-	"plinth/doc/layout"
-	"plinth/doc/pdf"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/chart"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var demo = flag.String("demo", "", "write the demo charts as a PDF to this path (look at it)")

@@ -7,7 +7,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/chart"
+	"github.com/plinth-calc/plinth/doc/chart"
 )
 
 func labels(s chart.Scale) string {

@@ -3,7 +3,7 @@ package chart
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
 )
 
 // look is how one series is drawn.

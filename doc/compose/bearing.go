@@ -4,12 +4,12 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/bearing"
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // maxCaseCols is the most case columns a compact table holds before it

@@ -11,8 +11,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/pdf"
 )
 
 var bigEngine = flag.Bool("big", false, "run BenchmarkRenderEngine1000")

@@ -1,11 +1,11 @@
 package compose
 
 import (
-	"plinth/doc/eval"
-	"plinth/doc/expr"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // calc converts a calc block: comments print as small group labels,

@@ -2,13 +2,13 @@ package compose
 
 import (
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/capacity"
 	"math"
-	"plinth/calc/capacity"
 	"strings"
 
-	"plinth/doc/chart"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/chart"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
 )
 
 // capacity prints a capacity block: allowable pressure against width from

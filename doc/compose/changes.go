@@ -1,10 +1,10 @@
 package compose
 
 import (
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Changes is what changed since an earlier revision of the package, as

@@ -3,9 +3,9 @@ package compose
 import (
 	"testing"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // TestMarkChanges: a statement's line is barred whole; of an engine

@@ -4,11 +4,11 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/trace"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Options control composition.

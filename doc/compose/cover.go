@@ -4,12 +4,12 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // packageMeta is the package's settings: package.yaml, or the first

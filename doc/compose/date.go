@@ -5,10 +5,10 @@ import (
 	"strings"
 	"time"
 
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // dateLayout is the one date form plinth reads: YYYY-MM-DD.

@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
 )
 
 // differential prints a differential block: the two settlements compared

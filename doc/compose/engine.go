@@ -4,14 +4,14 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // engineOut collects the blocks of one engine block's printout.

@@ -9,13 +9,13 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/compose"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // allOptions is a sheet added to the example package that runs every

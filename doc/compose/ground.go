@@ -4,13 +4,13 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/expr"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // blockLines prints the statements and word options of a ground or

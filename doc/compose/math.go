@@ -4,11 +4,11 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/expr"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // formula typesets a sheet expression twice: in symbols, and with every

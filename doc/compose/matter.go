@@ -5,11 +5,11 @@ import (
 	"sort"
 	"strings"
 
-	"plinth/calc/trace"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // endMatter is the check register, the input register, the references

@@ -6,8 +6,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/layout"
 )
 
 // The bearing method line names Terzaghi's local-shear reduction exactly

@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 var (

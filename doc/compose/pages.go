@@ -5,10 +5,10 @@ import (
 	"fmt"
 	"unicode/utf8"
 
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Pages composes the package and lays it out. The cover's contents list

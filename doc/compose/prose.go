@@ -4,10 +4,10 @@ import (
 	"net/url"
 	"strings"
 
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // blocks converts a sheet's body (or a nested list of blocks).

@@ -4,10 +4,10 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/trace"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // ref is one entry of the references list.

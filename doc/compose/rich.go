@@ -5,9 +5,9 @@ import (
 	"unicode"
 	"unicode/utf8"
 
-	"plinth/doc/expr"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // richText sets running text, printing each short symbol written in sheet

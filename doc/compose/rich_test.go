@@ -3,8 +3,8 @@ package compose
 import (
 	"testing"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // TestRichText: symbols in sheet notation inside plinth's own text print

@@ -5,13 +5,13 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/settle"
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/chart"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/chart"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // settlement prints a settlement block: the serviceability load, the

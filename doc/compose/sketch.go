@@ -4,11 +4,11 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/site"
-	"plinth/calc/units"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/sketch"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/sketch"
 )
 
 // sketch draws the footing's section (doc/sketch) on the ground of the

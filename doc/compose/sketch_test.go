@@ -5,9 +5,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/layout"
-	"plinth/doc/sketch"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/sketch"
 )
 
 // TestExampleSketchesClear: in every footing sketch of every example no

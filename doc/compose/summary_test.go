@@ -5,9 +5,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/compose"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
 )
 
 // cellText is the plain text of a table cell (math runs left out).

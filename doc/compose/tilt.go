@@ -3,7 +3,7 @@ package compose
 import (
 	"fmt"
 
-	"plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/eval"
 )
 
 // tilt prints a settlement block's tilt working (tilt = yes): the

@@ -8,11 +8,11 @@ import (
 	"testing"
 	"time"
 
-	"plinth/doc/compose"
-	"plinth/doc/eval"
-	"plinth/doc/layout"
-	"plinth/doc/load"
-	"plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/compose"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
 )
 
 // pkg writes files into a fresh folder and evaluates it.

@@ -5,11 +5,11 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 const assumedSrc = "# T\n\n```ground g\nwater = 0.5 m\n\n| layer | top (m) | gamma (kN/m3) | gamma_sat (kN/m3) | phi' (deg) | c' (kPa) | E' (MPa) |\n| --- | --- | --- | --- | --- | --- | --- |\n| Sand | 0 | 18 | 20 | 32 | 0 | 20 |\n```\n\n" +

@@ -3,11 +3,11 @@ package eval_test
 import (
 	"testing"
 
-	"plinth/doc/eval"
-	"plinth/doc/load"
-	"plinth/doc/parse"
-	"plinth/doc/source"
-	"plinth/internal/badcase"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/badcase"
 )
 
 // TestBad runs the evaluation-stage cases of testdata/bad/eval (see

@@ -5,10 +5,10 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // genPackage builds n sheets of m statements each: a mix of inputs with

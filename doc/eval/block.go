@@ -4,11 +4,11 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/bearing"
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/bearing"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Block is an evaluated plinth block other than calc: a ground model, a

@@ -3,10 +3,10 @@ package eval
 import (
 	"errors"
 
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/units"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // DiffResult is a differential block's result: the two settlement blocks

@@ -6,10 +6,10 @@ import (
 	"sort"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Options control an evaluation.

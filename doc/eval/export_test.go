@@ -1,6 +1,6 @@
 package eval
 
-import "plinth/doc/sheet"
+import "github.com/plinth-calc/plinth/doc/sheet"
 
 // SetTestHook installs f to run before each block is evaluated; nil
 // removes it.

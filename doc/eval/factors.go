@@ -5,7 +5,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/design"
 )
 
 // annex returns the partial-factor sets in force for a sheet: the

@@ -3,10 +3,10 @@ package eval
 import (
 	"math"
 
-	"plinth/calc/site"
-	"plinth/calc/units"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var (

@@ -5,10 +5,10 @@ import (
 	"path/filepath"
 	"testing"
 
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // FuzzEval parses and evaluates one arbitrary sheet: no panic, and every

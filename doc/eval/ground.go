@@ -4,10 +4,10 @@ import (
 	"errors"
 	"fmt"
 
-	"plinth/calc/site"
-	"plinth/calc/units"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // groundColumns are the columns a ground table may have (SHEET-FORMAT §3).

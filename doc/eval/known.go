@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // Statements a ground or footing block reads; any other is refused, so

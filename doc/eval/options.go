@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // opts are an analysis block's options by name, values checked against

@@ -3,7 +3,7 @@ package eval
 import (
 	"fmt"
 
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // cites checks the [KEY] references in a note and returns their keys.

@@ -4,10 +4,10 @@ import (
 	"fmt"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // scope resolves names for one statement: the block's own symbols (when

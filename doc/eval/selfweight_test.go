@@ -5,11 +5,11 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // TestSelfWeightWorking: an analysis of a footing with self_weight = auto

@@ -8,10 +8,10 @@ import (
 	"path/filepath"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // parseOverrides reads the --set arguments and finds the input each one

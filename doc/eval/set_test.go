@@ -4,10 +4,10 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/eval"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // setSheet is the README's tutorial ground model with a calc input.

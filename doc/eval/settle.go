@@ -5,15 +5,15 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/capacity"
-	"plinth/calc/design"
-	"plinth/calc/settle"
-	"plinth/calc/site"
-	"plinth/calc/stress"
-	"plinth/calc/trace"
-	"plinth/calc/units"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/capacity"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // SettleResult is a settlement block's result: the serviceability load

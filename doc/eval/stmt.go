@@ -1,9 +1,9 @@
 package eval
 
 import (
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // sheet evaluates the statements of one sheet in document order.

@@ -5,10 +5,10 @@ import (
 	"strings"
 	"unicode"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // colSpec describes a column a ground or footing table may have.

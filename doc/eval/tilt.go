@@ -1,11 +1,11 @@
 package eval
 
 import (
-	"plinth/calc/design"
-	"plinth/calc/settle"
-	"plinth/calc/trace"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // tiltNotes describe the tilt results of a settlement block (tilt = yes).

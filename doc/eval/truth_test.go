@@ -7,11 +7,11 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/eval"
-	"plinth/doc/load"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // evalSheet evaluates one sheet's text and fails on any diagnostic.

@@ -1,6 +1,6 @@
 package eval
 
-import "plinth/doc/source"
+import "github.com/plinth-calc/plinth/doc/source"
 
 func spanOf(f *source.File, start, end int) source.Span {
 	return source.Span{File: f, Start: start, End: end}

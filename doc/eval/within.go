@@ -1,9 +1,9 @@
 package eval
 
 import (
-	"plinth/calc/settle"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/settle"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var withinNames = []string{"s_centre", "s_corner", "s_edge", "delta_s_in", "beta_in", "s_mid_B", "beta_B", "s_mid_L", "beta_L"}

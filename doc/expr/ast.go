@@ -4,7 +4,7 @@ import (
 	"math"
 	"strconv"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Node is an expression node. Every node knows its byte span [pos, end)

@@ -3,8 +3,8 @@ package expr_test
 import (
 	"testing"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 var benchEnv = expr.MapEnv{

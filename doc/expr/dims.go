@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Env gives the values of symbols: SI value and dimension.

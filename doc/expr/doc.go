@@ -36,7 +36,7 @@
 //	exp        = ( "e" | "E" ) [ "+" | "-" ] digits .
 //	symbol     = part { "." part } .                (F1.R_d: a block result)
 //	part       = letter { letter | digit | "_" | "'" } .
-//	unit       = see package plinth/calc/units .
+//	unit       = see package github.com/plinth-calc/plinth/calc/units .
 //
 // "×", "·" and "⋅" are "*", "−" is "-", "÷" is "/", "→" is "->". A letter is
 // any Unicode letter, so φ and γ may be typed directly.

@@ -5,7 +5,7 @@ import (
 	"math"
 	"strconv"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Eval evaluates n: the dimension from Dims, the value from govaluate on

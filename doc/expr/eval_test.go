@@ -6,8 +6,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 var (

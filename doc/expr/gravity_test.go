@@ -4,8 +4,8 @@ import (
 	"math"
 	"testing"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 // g is the standard acceleration of gravity, 9.80665 m/s² (3rd CGPM 1901;

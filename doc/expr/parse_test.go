@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 // sexp writes a tree as an S-expression for the table tests.

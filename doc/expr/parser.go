@@ -5,7 +5,7 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/units"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // maxDepth bounds nesting so that hostile input cannot exhaust the stack.

@@ -6,8 +6,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/units"
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 // gen writes random well-formed expressions of a given dimension kind, so

@@ -2,17 +2,17 @@ package layout
 
 import (
 	"bytes"
+	"github.com/plinth-calc/plinth/doc/media"
 	"image"
 	_ "image/jpeg" // image formats accepted
 	_ "image/png"
 	"math"
-	"plinth/doc/media"
 	"strconv"
 	"strings"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var bodyStyle = textStyle{size: bodySize, lead: bodyLead, color: ink}

@@ -4,8 +4,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // TestBreakLongWord: a word wider than its line breaks into lines that

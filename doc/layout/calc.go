@@ -5,10 +5,10 @@ import (
 	"math"
 	"strings"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var noteStyle = textStyle{size: noteSize, lead: 1.3, color: muted}

@@ -1,8 +1,8 @@
 package layout
 
 import (
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // caution lays out a caution in the house style (cautionStyle): a panel

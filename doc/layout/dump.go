@@ -5,7 +5,7 @@ import (
 	"io"
 	"strconv"
 
-	"plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
 )
 
 // Dump writes the box tree as text, one item per line, positions rounded

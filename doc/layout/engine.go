@@ -5,8 +5,8 @@ import (
 	"runtime"
 	"sync"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // engine carries the state of one Document call.

@@ -3,9 +3,9 @@ package layout_test
 import (
 	"fmt"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 func ExampleDocument() {

@@ -6,9 +6,9 @@ import (
 	"strings"
 	"unicode/utf8"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // variantBanner is the band every page of a variant run carries under its

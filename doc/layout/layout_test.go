@@ -10,13 +10,13 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
-	"plinth/internal/golden"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")

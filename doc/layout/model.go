@@ -1,10 +1,10 @@
 package layout
 
 import (
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Doc is a whole calculation package to lay out: one or more sheets, each

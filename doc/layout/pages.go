@@ -1,8 +1,8 @@
 package layout
 
 import (
-	"plinth/doc/layout/draw"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var _ draw.Item // Box.Items

@@ -5,7 +5,7 @@ import (
 	"sort"
 	"strings"
 
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Problem is something that stopped the layout, at the source position of

@@ -1,6 +1,6 @@
 package layout
 
-import "plinth/doc/layout/draw"
+import "github.com/plinth-calc/plinth/doc/layout/draw"
 
 // The house design: sizes in points, colours restrained. One accent colour
 // (a dark slate blue) marks structure; red and green only ever support the

@@ -4,9 +4,9 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"github.com/plinth-calc/plinth/doc/media"
 	_ "image/jpeg" // logo formats
 	_ "image/png"
-	"plinth/doc/media"
 	"regexp"
 	"sort"
 	"strconv"
@@ -14,8 +14,8 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"plinth/doc/sheet"
-	"plinth/templates"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/templates"
 )
 
 // Length is a distance in points. In a template file it is written with a

@@ -9,9 +9,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/templates"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/templates"
 )
 
 func TestBuiltinTemplates(t *testing.T) {

@@ -10,7 +10,7 @@ import (
 	"sort"
 	"strings"
 
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // ConfigName is the name of the package settings file.

@@ -8,7 +8,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/load"
 )
 
 // write creates files under dir; a name ending in "/" is a folder.

@@ -11,7 +11,7 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/media"
+	"github.com/plinth-calc/plinth/doc/media"
 )
 
 func pngBytes(t *testing.T, w, h int) []byte {

@@ -3,10 +3,10 @@ package parse_test
 import (
 	"testing"
 
-	"plinth/doc/load"
-	"plinth/doc/parse"
-	"plinth/doc/source"
-	"plinth/internal/badcase"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/badcase"
 )
 
 // badDir holds the bad-input cases shared by every stage: see its README.

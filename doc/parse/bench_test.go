@@ -5,8 +5,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/parse"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // benchSheet is a sheet of 50 statements in five calc blocks with prose,

@@ -1,14 +1,14 @@
 package parse
 
 import (
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/expr"
 	"regexp"
 	"strings"
 
 	"github.com/yuin/goldmark/ast"
 
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // word is a word of a fence's info string, at body offsets [start, end).

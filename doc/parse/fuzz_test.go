@@ -5,9 +5,9 @@ import (
 	"path/filepath"
 	"testing"
 
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // FuzzSheet parses arbitrary bytes as a sheet: no panic, and every

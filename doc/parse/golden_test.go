@@ -9,10 +9,10 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/load"
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")

@@ -7,8 +7,8 @@ import (
 	"github.com/yuin/goldmark/ast"
 	"github.com/yuin/goldmark/util"
 
-	"plinth/doc/expr"
-	"plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // inlines converts the inline children of n, appending to out.

@@ -2,16 +2,16 @@ package parse
 
 import (
 	"errors"
+	"github.com/plinth-calc/plinth/doc/media"
 	"io/fs"
 	"net/url"
 	"path/filepath"
-	"plinth/doc/media"
 	"strings"
 	"time"
 
-	"plinth/doc/load"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Package parses a loaded package: package.yaml, then every sheet in

@@ -4,9 +4,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/parse"
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // TestSmall parses short sheets and checks one fact of each tree.

@@ -3,8 +3,8 @@ package parse
 import (
 	"strings"
 
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // cell is one cell of a pipe-table row: its text (trimmed, "\|" read as

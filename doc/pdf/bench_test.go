@@ -6,11 +6,11 @@ import (
 	"io"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/doc/layout"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/pdf"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // bigDoc is a generated package of about 10 pages per sheet: prose,

@@ -9,12 +9,12 @@ import (
 	"image/png"
 	"math"
 
-	"plinth/calc/trace"
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/eqn"
-	"plinth/doc/layout/fonts"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // The demo package: an invented site, firm and footing, for looking at the

@@ -9,9 +9,9 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/layout"
-	"plinth/doc/pdf"
-	"plinth/internal/tools"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/internal/tools"
 )
 
 func withFiles(t testing.TB, files []pdf.File) []byte {

@@ -3,17 +3,17 @@ package pdf_test
 import (
 	"bytes"
 	"flag"
+	"github.com/plinth-calc/plinth/internal/tools"
 	"io"
 	"os"
 	"os/exec"
-	"plinth/internal/tools"
 	"strings"
 	"testing"
 	"time"
 
-	"plinth/doc/layout"
-	"plinth/doc/layout/draw"
-	"plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/pdf"
 )
 
 var demo = flag.String("demo", "", "write the demo package PDF to this path")

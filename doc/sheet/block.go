@@ -1,8 +1,8 @@
 package sheet
 
 import (
-	"plinth/doc/expr"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Kind names a plinth block: the first word of a fenced block's info string.

@@ -5,8 +5,8 @@ import (
 	"io"
 	"strings"
 
-	"plinth/doc/expr"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Dump writes a readable outline of the sheet tree, one node per line with

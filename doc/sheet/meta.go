@@ -1,6 +1,6 @@
 package sheet
 
-import "plinth/doc/source"
+import "github.com/plinth-calc/plinth/doc/source"
 
 // Meta holds the fields of a sheet's front matter or of package.yaml. Every
 // field keeps its span; an absent field has a zero span (see Str.IsSet).

@@ -1,8 +1,8 @@
 package sheet
 
 import (
-	"plinth/doc/expr"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // Block is a block-level node: prose (Heading, Paragraph, List, Table,

@@ -1,6 +1,6 @@
 package sheet
 
-import "plinth/doc/source"
+import "github.com/plinth-calc/plinth/doc/source"
 
 // Node is any node of the tree. Where returns the span it was read from.
 type Node interface {

@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"testing"
 
-	"plinth/doc/sheet"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 func TestNearest(t *testing.T) {

@@ -3,7 +3,7 @@ package sketch
 import (
 	"math"
 
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // sk is a sketch laid out: the section's scale and place, the label

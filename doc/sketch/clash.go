@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
 )
 
 // Clash reports the first two labels that overlap, or a label a drawn

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"testing"
 
-	"plinth/doc/sketch"
+	"github.com/plinth-calc/plinth/doc/sketch"
 )
 
 // generated are footings round the awkward cases: groundwater at GL, just

@@ -4,8 +4,8 @@ import (
 	"math"
 	"slices"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // paint draws the sketch back to front: ground, water line, boundaries,

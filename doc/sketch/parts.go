@@ -5,9 +5,9 @@ import (
 	"strconv"
 	"strings"
 
-	"plinth/calc/units"
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // Sizes in points, inks.

@@ -3,8 +3,8 @@ package sketch
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // planView draws the pad in plan beside the section: its outline (B

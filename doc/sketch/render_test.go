@@ -7,10 +7,10 @@ import (
 	"testing"
 	"time"
 
-	"plinth/doc/layout"
-	"plinth/doc/pdf"
-	"plinth/doc/sketch"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/sketch"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var demo = flag.String("demo", "", "write the test sketches as a PDF to this path (look at it)")

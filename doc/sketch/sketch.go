@@ -5,8 +5,8 @@ import (
 	"math"
 	"strconv"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // Footing is what the sketch shows: a shallow footing, the ground round it

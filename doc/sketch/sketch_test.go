@@ -4,14 +4,14 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"github.com/plinth-calc/plinth/internal/golden"
 	"math"
 	"path/filepath"
-	"plinth/internal/golden"
 	"strings"
 	"testing"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/sketch"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/sketch"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")

@@ -3,7 +3,7 @@ package source_test
 import (
 	"testing"
 
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 func TestPosition(t *testing.T) {

@@ -16,8 +16,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/doc/load"
-	"plinth/doc/source"
+	"github.com/plinth-calc/plinth/doc/load"
+	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // annotation matches an expected diagnostic written in a case file:

@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // Color is an RGB colour.

@@ -3,8 +3,8 @@ package draw_test
 import (
 	"testing"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 func TestOffsetScale(t *testing.T) {

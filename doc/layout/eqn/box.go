@@ -5,8 +5,8 @@ import (
 	"math"
 	"strings"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // Box is a measured formula: its width and how far its ink reaches above

@@ -4,7 +4,7 @@ import (
 	"math"
 	"strings"
 
-	"plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Options control FromExpr.

@@ -5,8 +5,8 @@ import (
 	"strings"
 	"testing"
 
-	"plinth/calc/trace"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 var S, N = trace.S, trace.N

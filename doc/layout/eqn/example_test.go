@@ -3,8 +3,8 @@ package eqn_test
 import (
 	"fmt"
 
-	"plinth/calc/trace"
-	"plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
 // The bearing capacity factor N_q of EN 1997-1 Annex D (D.4), converted

@@ -3,8 +3,8 @@ package eqn
 import (
 	"math"
 
-	"plinth/doc/layout/draw"
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 // fence sets X between delimiters. Content no taller than ordinary text

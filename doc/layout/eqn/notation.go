@@ -3,7 +3,7 @@ package eqn
 import (
 	"strings"
 
-	"plinth/doc/expr"
+	"github.com/plinth-calc/plinth/doc/expr"
 )
 
 // Parts is a symbol name taken apart by the sheet notation.

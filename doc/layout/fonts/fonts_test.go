@@ -3,7 +3,7 @@ package fonts_test
 import (
 	"testing"
 
-	"plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
 func TestCoverage(t *testing.T) {
