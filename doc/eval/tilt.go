@@ -38,16 +38,28 @@ func (e *evaluator) tilt(s *Sheet, b *sheet.Analysis, blk *Block, o opts, res *S
 	t, err := settle.TiltOf(settle.TiltInput{Ground: blk.On.Model, Footing: blk.Of.Model,
 		Actions: withSelfWeight(blk.Of, blk.On), Factors: res.Service.Factor, LongTerm: res.Service.Kind == design.QuasiPermanent})
 	if err != nil {
-		e.siteErrors(err, at, func(int, string) source.Span { return at })
-		for _, n := range tiltNames {
-			e.fail(s, blk.Name+"."+n)
-		}
+		e.addOnFailed(s, blk, at, err, tiltNames)
 		return
 	}
 	res.Tilt = t
-	blk.Cautions = append(blk.Cautions, t.Trace.Cautions...)
-	blk.Sources = mergeSources(blk.Sources, t.Trace.Sources)
-	e.defineResults(s, blk, t.Values, tiltNotes)
+	e.addOn(s, blk, &t.Trace, t.Values, tiltNotes)
+}
+
+// addOnFailed reports the error of an add-on calculation of a settlement
+// block (tilt, within) at at and marks its result names as failed.
+func (e *evaluator) addOnFailed(s *Sheet, blk *Block, at source.Span, err error, names []string) {
+	e.siteErrors(err, at, func(int, string) source.Span { return at })
+	for _, n := range names {
+		e.fail(s, blk.Name+"."+n)
+	}
+}
+
+// addOn adds an add-on calculation's cautions, sources and results to
+// its settlement block.
+func (e *evaluator) addOn(s *Sheet, blk *Block, tr *trace.Trace, vals []trace.Value, notes map[string]string) {
+	blk.Cautions = append(blk.Cautions, tr.Cautions...)
+	blk.Sources = mergeSources(blk.Sources, tr.Sources)
+	e.defineResults(s, blk, vals, notes)
 }
 
 // TiltTrace is the tilt working of a settlement block, nil without tilt.

@@ -3,7 +3,6 @@ package eval
 import (
 	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/doc/sheet"
-	"github.com/plinth-calc/plinth/doc/source"
 )
 
 var withinNames = []string{"s_centre", "s_corner", "s_edge", "delta_s_in", "beta_in", "s_mid_B", "beta_B", "s_mid_L", "beta_L"}
@@ -35,14 +34,9 @@ func (e *evaluator) within(s *Sheet, b *sheet.Analysis, blk *Block, o opts, res 
 	at := o["within"].Value.Span
 	w, err := settle.WithinFooting(in)
 	if err != nil {
-		e.siteErrors(err, at, func(int, string) source.Span { return at })
-		for _, n := range withinNames {
-			e.fail(s, blk.Name+"."+n)
-		}
+		e.addOnFailed(s, blk, at, err, withinNames)
 		return
 	}
 	res.Within = w
-	blk.Cautions = append(blk.Cautions, w.Trace.Cautions...)
-	blk.Sources = mergeSources(blk.Sources, w.Trace.Sources)
-	e.defineResults(s, blk, w.Values, withinNotes)
+	e.addOn(s, blk, &w.Trace, w.Values, withinNotes)
 }
