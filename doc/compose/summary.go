@@ -236,7 +236,9 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 				slide = append(slide, c.verdictCell(a, "sliding", a.Bearing.GoverningSliding >= 0, func() string { return a.Bearing.Sliding[a.Bearing.GoverningSliding].Name })...)
 			case a.Settle != nil:
 				if ch := findCheck(a, "settlement"); ch != nil {
-					settl = append(settl, txt(eval.Format(ch.L, ch.Unit, 1)+" ≤ "+eval.Format(ch.R, ch.Unit, -1)+"  "), verdictRun(ch))
+					// the same digits and the relation that holds, as the check line prints them
+					lt, rt := ch.Values()
+					settl = append(settl, txt(lt+" "+ch.Unit.Name+" "+relText[ch.Relation()]+" "+rt+" "+ch.Unit.Name+"  "), verdictRun(ch))
 				}
 				if y := result(a, "t_90"); y != nil {
 					settl = append(settl, layout.Run{Text: "\n", Own: true}, layout.Run{Math: rowEq("t_90", y.Q.V, "yr"), Own: true})
