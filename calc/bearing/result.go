@@ -80,9 +80,10 @@ type Result struct {
 	OK                bool
 	// Uplift counts the design loads with V_d ≤ 0 (the base in tension
 	// or lifting), which bearing cannot check; UpliftV is the largest
-	// V_d among them. When every load lifts (Cases is empty), Unverified
+	// V_d among them. When every load lifts (Cases is empty), or the
+	// governing case has no resistance (utilisation UtilCap), Unverified
 	// says so and OK is false: no bearing check passes for lack of a
-	// downward load.
+	// downward load or of a resistance.
 	Uplift     int
 	UpliftV    float64
 	Unverified string

@@ -186,6 +186,12 @@ func (c *calc) summarise() {
 	if r.Governing >= 0 {
 		g := r.Cases[r.Governing]
 		r.GoverningDrainage = g.Drainage
+		if g.Util >= UtilCap {
+			// No effective area or no resistance: UtilCap is a placeholder,
+			// not a utilisation, so the result is not verified.
+			r.OK = false
+			r.Unverified = "not verified: no bearing resistance in " + g.Name + " (the resultant lies at or outside the edge of the base, or the resistance is nil): the footing overturns or fails"
+		}
 		c.completeWeak(g.Name)
 		c.whole("governing", fmt.Sprintf("Bearing governed by %s: utilisation %s; the %s case governs.", g.Name, units.Utilisation(g.Util), g.Drainage), val("util", g.Util, ""))
 		strip := c.f.Shape == site.Strip

@@ -169,19 +169,15 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 		ch := e.addCheck(s, blk, blk.Name+" bearing: V_d <= R_d", "<=",
 			units.Quantity{V: c.V, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
 			"bearing resistance, governing case: "+c.Name)
-		if c.Util >= bearing.UtilCap {
-			// No effective area or no resistance: the engine's placeholder
-			// utilisation is not a number to print.
-			ch.OK, ch.Util = false, math.NaN()
-			ch.Unverified = "not verified: no bearing resistance in " + c.Name + " (the resultant lies at or outside the edge of the base, or the resistance is nil): the footing overturns or fails"
-			ch.Note = sheet.Str{Value: ch.Unverified}
+		if res.Unverified != "" {
+			ch.unverified(res.Unverified, res.Unverified)
 		}
-	}
-	if res.Unverified != "" {
+	} else if res.Unverified != "" {
+		// every load lifts the base: the check that fails is V_d > 0
 		fu := forceUnit(in.Footing)
 		c := e.addCheck(s, blk, blk.Name+" bearing: V_d > 0", ">",
 			units.Quantity{V: res.UpliftV, Dim: fu.Dim}, units.Quantity{Dim: fu.Dim}, fu, math.NaN(), false, res.Unverified)
-		c.Unverified = res.Unverified
+		c.unverified(res.Unverified, res.Unverified)
 	}
 	if res.GoverningSliding >= 0 {
 		c := res.Sliding[res.GoverningSliding]

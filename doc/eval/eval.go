@@ -69,7 +69,7 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 	for _, s := range e.res.Sheets {
 		e.prose(s)
 	}
-	e.errs = e.errs.Without(opt.Prior)
+	e.errs = e.errs.OffLines(e.prior)
 	e.errs.Sort()
 	return e.res, e.errs
 }

@@ -1,7 +1,6 @@
 package eval
 
 import (
-	"math"
 	"strconv"
 	"strings"
 
@@ -216,9 +215,8 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 		units.Quantity{V: r.Total, Dim: units.Length}, units.Quantity{V: r.Limit, Dim: units.Length}, mm,
 		r.Util, r.OK, note)
 	if len(r.Unverified) > 0 {
-		c.Unverified = "not verified: " + strings.Join(r.Unverified, "; ")
-		c.OK, c.Util = false, math.NaN()
-		c.Note = sheet.Str{Value: c.Unverified + " (" + r.Method.String() + ")"}
+		why := "not verified: " + strings.Join(r.Unverified, "; ")
+		c.unverified(why, why+" ("+r.Method.String()+")")
 	}
 	return true
 }

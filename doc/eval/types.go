@@ -156,6 +156,13 @@ func (c *Check) UtilText() string {
 	return units.Utilisation(c.Util)
 }
 
+// unverified marks an engine check that cannot be verified: NOT OK, with
+// no utilisation, the reason kept and note printed beside it.
+func (c *Check) unverified(reason, note string) {
+	c.OK, c.Util, c.Unverified = false, math.NaN(), reason
+	c.Note = sheet.Str{Value: note}
+}
+
 // HasUtil reports whether the utilisation is defined.
 func (c *Check) HasUtil() bool { return !math.IsNaN(c.Util) && c.Unverified == "" }
 

@@ -206,7 +206,9 @@ func (e *engine) caption(runs []Run, width float64, pos source.Position) (items 
 }
 
 func (e *engine) image(im *Image, width float64) []*piece {
-	cfg, err := media.Check(im.Data)
+	// doc/parse decoded the figure in full (media.Check); the header is
+	// enough here.
+	cfg, err := media.Header(im.Data)
 	if err != nil {
 		e.probs.add(im.Pos, "image %v", err)
 		return nil

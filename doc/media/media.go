@@ -19,10 +19,10 @@ type Info struct {
 	Width, Height int
 }
 
-// Check reads data as a PNG or JPEG image: its header, its declared size
-// (at least one pixel, at most MaxPixels), then every pixel. The error
-// says what is wrong in words a user can act on.
-func Check(data []byte) (Info, error) {
+// Header reads data's PNG or JPEG header only: the format and a declared
+// size of at least one pixel and at most MaxPixels. It is what a stage
+// that lays out an image already checked in full needs.
+func Header(data []byte) (Info, error) {
 	cfg, format, err := image.DecodeConfig(bytes.NewReader(data))
 	if err != nil || (format != "png" && format != "jpeg") {
 		return Info{}, fmt.Errorf("is not a PNG or JPEG file")
@@ -34,8 +34,19 @@ func Check(data []byte) (Info, error) {
 	if px := int64(cfg.Width) * int64(cfg.Height); px > MaxPixels {
 		return in, fmt.Errorf("is %d × %d pixels (%.0f megapixels): the limit is %d megapixels; scale it down", cfg.Width, cfg.Height, float64(px)/1e6, MaxPixels/1_000_000)
 	}
+	return in, nil
+}
+
+// Check reads data as a PNG or JPEG image: its header (see Header), then
+// every pixel, so a damaged or truncated file is found. The error says
+// what is wrong in words a user can act on.
+func Check(data []byte) (Info, error) {
+	in, err := Header(data)
+	if err != nil {
+		return in, err
+	}
 	if _, _, err := image.Decode(bytes.NewReader(data)); err != nil {
-		return in, fmt.Errorf("is a damaged %s file: %v", map[string]string{"png": "PNG", "jpeg": "JPEG"}[format], err)
+		return in, fmt.Errorf("is a damaged %s file: %v", map[string]string{"png": "PNG", "jpeg": "JPEG"}[in.Format], err)
 	}
 	return in, nil
 }

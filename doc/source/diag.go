@@ -157,11 +157,10 @@ func (l List) Lines() map[Line]bool {
 	return out
 }
 
-// Without returns the diagnostics of l that lie on no line holding an
-// error of prior: a later stage's diagnostics where an earlier stage has
-// already reported the line would only repeat it in other words.
-func (l List) Without(prior List) List {
-	bad := prior.Lines()
+// OffLines returns the diagnostics of l that lie on none of the lines in
+// bad (a set from Lines): a later stage's diagnostics where an earlier
+// stage has already reported the line would only repeat it in other words.
+func (l List) OffLines(bad map[Line]bool) List {
 	if len(bad) == 0 {
 		return l
 	}
