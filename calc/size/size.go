@@ -79,7 +79,10 @@ type Input struct {
 	Ratio      float64 // Ratio: L/B, [1, 20]
 	Step       float64 // increment, m, (0, 1]; 0 means DefaultStep
 	Min, Max   float64 // widths tried, m; 0 means the larger of site.MinWidth and Step, and DefaultMax
-	Ecc        Ecc
+	// Sizes, when given, are the only widths allowed (a list of standard
+	// sizes, m, ascending); Step, Min and Max are then not used.
+	Sizes []float64
+	Ecc   Ecc
 }
 
 // Check is one check at one width.
@@ -147,12 +150,13 @@ func (z *sizer) noSize() error {
 }
 
 type sizer struct {
-	in    Input
-	step  float64
-	kmin  int
-	kmax  int
-	seen  map[int]*trial
-	evals int
+	in     Input
+	step   float64   // 0 with a list of sizes
+	widths []float64 // the grid, ascending
+	kmin   int       // 0
+	kmax   int       // len(widths) − 1
+	seen   map[int]*trial
+	evals  int
 }
 
 type trial struct {
@@ -189,6 +193,9 @@ func Size(in Input) (*Result, error) {
 
 func newSizer(in Input) (*sizer, error) {
 	var errs site.Errors
+	if len(in.Sizes) > 0 {
+		return listSizer(in)
+	}
 	step := in.Step
 	if step == 0 {
 		step = DefaultStep
@@ -232,10 +239,45 @@ func newSizer(in Input) (*sizer, error) {
 	if kmax-kmin+1 > MaxTrials {
 		return nil, &site.InputError{Where: "size", Param: "step", Msg: fmt.Sprintf("%d widths between %.3g m and %.3g m on a %.3g m increment: at most %d (use a larger increment)", kmax-kmin+1, lo, hi, step, MaxTrials)}
 	}
-	return &sizer{in: in, step: step, kmin: kmin, kmax: kmax, seen: map[int]*trial{}}, nil
+	ws := make([]float64, 0, kmax-kmin+1)
+	for k := kmin; k <= kmax; k++ {
+		ws = append(ws, float64(k)*step)
+	}
+	return &sizer{in: in, step: step, widths: ws, kmax: len(ws) - 1, seen: map[int]*trial{}}, nil
 }
 
-func (z *sizer) width(k int) float64 { return float64(k) * z.step }
+// listSizer is a sizer over a list of standard sizes.
+func listSizer(in Input) (*sizer, error) {
+	var errs site.Errors
+	if len(in.Sizes) > MaxTrials {
+		return nil, &site.InputError{Where: "size", Param: "sizes", Msg: fmt.Sprintf("%d sizes: at most %d", len(in.Sizes), MaxTrials)}
+	}
+	for i, w := range in.Sizes {
+		errs.Range("size", "sizes", w, 1, site.MinWidth, 1000, false, "m")
+		if i > 0 && w <= in.Sizes[i-1] {
+			errs = append(errs, &site.InputError{Where: "size", Param: "sizes", Msg: fmt.Sprintf("the sizes must rise: %.3g m after %.3g m", w, in.Sizes[i-1])})
+		}
+		if in.Plan == FixedL && w > in.L {
+			errs = append(errs, &site.InputError{Where: "size", Param: "sizes", Msg: fmt.Sprintf("the size %.3g m exceeds the fixed L = %.3g m (B ≤ L)", w, in.L)})
+		}
+	}
+	if len(errs) > 0 {
+		return nil, errs
+	}
+	return &sizer{in: in, widths: append([]float64(nil), in.Sizes...), kmax: len(in.Sizes) - 1, seen: map[int]*trial{}}, nil
+}
+
+func (z *sizer) width(k int) float64 { return z.widths[k] }
+
+// above is the index of the first grid width at or above B (kmax if none).
+func (z *sizer) above(B float64) int {
+	for k, w := range z.widths {
+		if w >= B-1e-9 {
+			return k
+		}
+	}
+	return z.kmax
+}
 
 // footing is the footing at width B.
 func (z *sizer) footing(B float64) site.Footing {
@@ -289,14 +331,17 @@ func (z *sizer) search() (int, float64, string, error) {
 		}
 		return t.Util() - 1, nil
 	}
-	root, err := solve.Brent(g, z.width(z.kmin), z.width(z.kmax), solve.Options{Tol: z.step / 20})
+	tol := z.step / 20
+	if tol == 0 {
+		tol = 0.001 // a list of sizes: 1 mm on the root
+	}
+	root, err := solve.Brent(g, z.width(z.kmin), z.width(z.kmax), solve.Options{Tol: tol})
 	if evalErr != nil {
 		return 0, 0, "", evalErr
 	}
 	why := ""
 	if err == nil {
-		k := int(math.Ceil(root.X/z.step - 1e-9))
-		k = max(z.kmin, min(k, z.kmax))
+		k := z.above(root.X)
 		// the grid width at or above the root passes and the one below fails
 		for tries := 0; tries < 3 && k <= z.kmax; tries++ {
 			t := z.at(k)

@@ -155,15 +155,20 @@ var (
 // record writes the sizing steps and the result symbols.
 func (z *sizer) record(r *Result) {
 	t := &r.Trace
-	t.Take(trace.Step{Symbol: "Delta_B", Value: z.step, Unit: "m", Note: "size increment"})
+	if z.step > 0 {
+		t.Take(trace.Step{Symbol: "Delta_B", Value: z.step, Unit: "m", Note: "size increment"})
+	}
 	t.Take(trace.Step{Symbol: "B_max", Value: z.width(z.kmax), Unit: "m", Note: "largest width tried"})
 	if !math.IsNaN(r.BReq) {
 		t.Take(trace.Step{Symbol: "B_req", Kind: trace.Solved, Value: r.BReq, Unit: "m", Ref: refSize,
 			Note: "width at which the governing utilisation reaches 1, solved by Brent's method"})
 	}
 	note := "smallest width on the increment for which every check holds"
+	if z.step == 0 {
+		note = "smallest of the standard sizes for which every check holds"
+	}
 	if r.Below != nil {
-		note += fmt.Sprintf(" (B − ΔB = %.3g m fails: %s %.2f)", r.Below.B, r.Below.Checks[r.Below.Governing].Name, r.Below.Util())
+		note += fmt.Sprintf(" (the next smaller, %.3g m, fails: %s %.2f)", r.Below.B, r.Below.Checks[r.Below.Governing].Name, r.Below.Util())
 	}
 	t.Take(trace.Step{Symbol: "B", Kind: trace.Solved, Value: r.B, Unit: "m", Note: note + "; " + r.Search})
 	switch {
