@@ -13,8 +13,8 @@ import (
 // report an unbracketed root). Common practice: the zone is at least B.
 func TestLightLoadZone(t *testing.T) {
 	g := site.Ground{Water: site.Some(1.5), Layers: []site.Layer{{Name: "Clay", Top: 0, Gamma: 19e3, GammaSat: site.Some(20e3), Mv: site.Some(0.1e-6), Eu: site.Some(30e6), Cu: site.Some(75e3)}}}
-	f := site.Footing{Name: "P", Shape: site.Square, B: 10, L: 10, D: 1}
-	r, err := settle.Compute(settle.Input{Ground: g, Footing: f, V: site.Some(467e3)})
+	f := site.Footing{Name: "P", Shape: site.Square, B: 5, L: 5, D: 1}
+	r, err := settle.Compute(settle.Input{Ground: g, Footing: f, V: site.Some(520e3)})
 	if err != nil {
 		t.Fatal(err)
 	}
