@@ -324,14 +324,19 @@ func (z *sizer) search() (int, float64, string, error) {
 	}
 	var evalErr error
 	g := func(B float64) (float64, error) {
-		t := z.eval(B)
+		var t *trial
+		if k := z.above(B); math.Abs(z.width(k)-B) < 1e-12 {
+			t = z.at(k) // a grid width (the bracket's ends): evaluated once
+		} else {
+			t = z.eval(B)
+		}
 		if t.err != nil {
 			evalErr = t.err
 			return 0, t.err
 		}
 		return t.Util() - 1, nil
 	}
-	tol := z.step / 20
+	tol := z.step / 4
 	if tol == 0 {
 		tol = 0.001 // a list of sizes: 1 mm on the root
 	}
