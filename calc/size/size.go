@@ -336,10 +336,7 @@ func (z *sizer) search() (int, float64, string, error) {
 		}
 		return t.Util() - 1, nil
 	}
-	tol := z.step / 4
-	if tol == 0 {
-		tol = 0.001 // a list of sizes: 1 mm on the root
-	}
+	tol := 0.001 // 1 mm on the root: B_req is printed to the millimetre
 	root, err := solve.Brent(g, z.width(z.kmin), z.width(z.kmax), solve.Options{Tol: tol})
 	if evalErr != nil {
 		return 0, 0, "", evalErr

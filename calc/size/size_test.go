@@ -64,7 +64,7 @@ func TestUndrainedClosedForm(t *testing.T) {
 	if math.Abs(r.B-want) > 1e-9 {
 		t.Errorf("B = %v, want %v (B_req by hand %.4f m, solver %.4f m)", r.B, want, need, r.BReq)
 	}
-	if math.Abs(r.BReq-need) > 0.005 {
+	if math.Abs(r.BReq-need) > 0.002 { // the solver's tolerance is 1 mm
 		t.Errorf("B_req = %.4f, hand %.4f", r.BReq, need)
 	}
 	if r.Search != "bracketed" || r.Below == nil || r.Below.OK || !r.At.OK {
