@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Block is an evaluated plinth block other than calc: a ground model, a
@@ -118,7 +119,7 @@ func (e *evaluator) missingBlock(s *Sheet, name sheet.Str, kind string, names fu
 		all = append(all, e.blockNames[t.Index][kind]...)
 	}
 	hint := ""
-	if n, ok := sheet.Nearest(name.Value, all); ok {
+	if n, ok := suggest.Nearest(name.Value, all); ok {
 		hint = fmt.Sprintf("did you mean %s?", n)
 	} else if len(all) == 0 {
 		hint = fmt.Sprintf("define it in a ```%s %s block", kind, name.Value)

@@ -10,6 +10,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Options control an evaluation.
@@ -282,7 +283,7 @@ func (e *evaluator) resolveUses() {
 			switch {
 			case t == nil:
 				hint := ""
-				if n, ok := sheet.Nearest(u.Value, names); ok {
+				if n, ok := suggest.Nearest(u.Value, names); ok {
 					hint = fmt.Sprintf("did you mean %s?", n)
 				}
 				e.errs.AddHint(u.Span, hint, "uses %q: no such sheet in this package", u.Value)

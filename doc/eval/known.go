@@ -6,6 +6,7 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Statements a ground or footing block reads; any other is refused, so
@@ -44,7 +45,7 @@ func (e *evaluator) unknownStmts(kind sheet.Kind, name string, lines []sheet.Lin
 // or more letters that the statement's name extends (water_table → water,
 // gamma_conc → gamma_c).
 func nearestStmt(name string, known []string) (string, bool) {
-	if n, ok := sheet.Nearest(name, known); ok {
+	if n, ok := suggest.Nearest(name, known); ok {
 		return n, true
 	}
 	best := ""

@@ -9,6 +9,7 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // word is a word of a fence's info string, at body offsets [start, end).
@@ -113,18 +114,10 @@ func (c *conv) container() string {
 	return "file"
 }
 
-// nearKind returns the block word w is one edit (or a letter case) away
-// from, or "".
+// nearKind returns the block word nearest to w (internal/suggest), or "".
 func nearKind(w string) string {
-	if len(w) < 3 {
-		return ""
-	}
-	for _, k := range sheet.Kinds {
-		if strings.EqualFold(w, k) || sheet.Distance(w, k) == 1 {
-			return k
-		}
-	}
-	return ""
+	k, _ := suggest.Nearest(w, sheet.Kinds)
+	return k
 }
 
 // looksPlinth reports whether the text of an unnamed code block reads as
