@@ -58,10 +58,8 @@ const Assumes = "vertical, central load"
 // the effective area) governs. The ratios are of the characteristic
 // resultant, Σ over the actions (common practice).
 func loadCaution(t *trace.Trace, in bearing.Input) {
-	var V, HB, HL, MB, ML float64
-	for _, a := range in.Actions {
-		V, HB, HL, MB, ML = V+a.V, HB+a.HB, HL+a.HL, MB+a.MB, ML+a.ML
-	}
+	sum := site.Sum(in.Actions)
+	V, HB, HL, MB, ML := sum.V, sum.HB, sum.HL, sum.MB, sum.ML
 	H := math.Hypot(HB, HL)
 	if H == 0 && MB == 0 && ML == 0 {
 		return

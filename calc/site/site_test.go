@@ -123,3 +123,28 @@ func TestRangeWords(t *testing.T) {
 		}
 	}
 }
+
+// Sum adds each component as given (hand-added, common practice); the
+// units follow the shape.
+func TestSumAndUnits(t *testing.T) {
+	acts := []site.Action{
+		{Name: "Dead", V: 500 * kN, HB: 10 * kN, MB: 20 * kN},
+		{Name: "Wind", Kind: site.Variable, V: -40 * kN, HB: 30 * kN, HL: -5 * kN, ML: 7 * kN},
+	}
+	s := site.Sum(acts)
+	if s.V != 460*kN || s.HB != 40*kN || s.HL != -5*kN || s.MB != 20*kN || s.ML != 7*kN {
+		t.Errorf("Sum = %+v", s)
+	}
+	if z := site.Sum(nil); z != (site.Action{}) {
+		t.Errorf("Sum(nil) = %+v", z)
+	}
+	for _, c := range []struct {
+		shape  site.Shape
+		fu, mu string
+	}{{site.Strip, "kN/m", "kNm/m"}, {site.Square, "kN", "kNm"}, {site.Rectangle, "kN", "kNm"}, {site.Circle, "kN", "kNm"}} {
+		f := site.Footing{Shape: c.shape}
+		if f.ForceUnit() != c.fu || f.MomentUnit() != c.mu {
+			t.Errorf("%v: %s, %s; want %s, %s", c.shape, f.ForceUnit(), f.MomentUnit(), c.fu, c.mu)
+		}
+	}
+}

@@ -24,7 +24,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	r := b.Bearing
 	o := c.engineOut(s, b)
 	tr := &r.Trace
-	fu := forceUnit(b.Of.Model)
+	fu := units.MustParse(b.Of.Model.ForceUnit())
 	names, steps := groups(tr)
 
 	o.head(fmt.Sprintf("Bearing resistance of %s on %s", b.Of.Name, b.On.Name))

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"strings"
 
-	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
@@ -353,14 +352,6 @@ func findCheck(b *eval.Block, kind string) *eval.Check {
 		}
 	}
 	return nil
-}
-
-// forceUnit is kN for a pad and kN/m for a strip.
-func forceUnit(f site.Footing) units.Unit {
-	if f.Shape == site.Strip {
-		return units.MustParse("kN/m")
-	}
-	return units.MustParse("kN")
 }
 
 // num formats an SI value in a unit, for table cells.

@@ -208,7 +208,7 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		for _, n := range resultNames[b.Kind] {
+		for _, n := range b.Kind.Spec().ResultNames() {
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue
 			}

@@ -72,7 +72,7 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	e.assumedOverride(s, prefix+"gamma_w", b.Name.Span)
 	g.GammaW = s.local[prefix+"gamma_w"]
 	g.Model = site.Ground{Name: g.Name}
-	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines, groundStmts)
+	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines)
 	if g.Water != nil {
 		if !e.wantDim(g.Water, units.Length, "water (depth of the groundwater table below ground level)") {
 			ok = false

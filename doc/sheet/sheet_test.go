@@ -9,21 +9,6 @@ import (
 )
 
 func TestOptions(t *testing.T) {
-	for k, specs := range sheet.Options {
-		seen := map[string]bool{}
-		for _, o := range specs {
-			if seen[o.Name] {
-				t.Errorf("%s: option %s listed twice", k, o.Name)
-			}
-			seen[o.Name] = true
-			if len(o.Words) == 0 && o.Form == "" {
-				t.Errorf("%s %s: neither words nor a form", k, o.Name)
-			}
-			if o.Default == "" {
-				t.Errorf("%s %s: no default documented", k, o.Name)
-			}
-		}
-	}
 	o, ok := sheet.LookupOption(sheet.KindBearing, "approach")
 	if !ok || !o.Allows("DA2") || o.Allows("DA4") {
 		t.Errorf("approach = %+v, %v", o, ok)
