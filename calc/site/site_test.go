@@ -148,3 +148,30 @@ func TestSumAndUnits(t *testing.T) {
 		}
 	}
 }
+
+// A working platform is the first layer, granular, on a layer below it.
+func TestPlatform(t *testing.T) {
+	g := site.Ground{Name: "p", Platform: true, Layers: []site.Layer{
+		{Name: "Crushed rock", Top: 0, Gamma: 20 * kN, Phi: site.Some(0.7)},
+		{Name: "Soft clay", Top: 0.8, Gamma: 17 * kN, Cu: site.Some(25e3)},
+	}}
+	if err := g.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	if d, ok := g.PlatformDepth(); !ok || d != 0.8 {
+		t.Errorf("PlatformDepth = %g, %v", d, ok)
+	}
+	g.Platform = false
+	if _, ok := g.PlatformDepth(); ok {
+		t.Error("no platform stated, one found")
+	}
+	one := site.Ground{Name: "p", Platform: true, Layers: g.Layers[:1]}
+	if err := one.Validate(); err == nil || !strings.Contains(err.Error(), "second layer") {
+		t.Errorf("one layer: %v", err)
+	}
+	fine := site.Ground{Name: "p", Platform: true, Layers: []site.Layer{g.Layers[1], {Name: "Sand", Top: 2, Gamma: 19 * kN}}}
+	fine.Layers[0].Top = 0
+	if err := fine.Validate(); err == nil || !strings.Contains(err.Error(), "granular") {
+		t.Errorf("fine platform: %v", err)
+	}
+}

@@ -2,7 +2,6 @@ package compose
 
 import (
 	"fmt"
-	"strings"
 
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
@@ -43,8 +42,8 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			sk.Water = &w
 		}
 		layers := g.Layers
-		if len(layers) > 1 && strings.Contains(strings.ToLower(layers[0].Name), "platform") && m.D < layers[1].Top {
-			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: layers[1].Top}
+		if t, ok := g.PlatformDepth(); ok && m.D < t { // the ground model states it (platform = yes)
+			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: t}
 			layers = layers[1:]
 		}
 		for _, l := range layers {
