@@ -156,7 +156,7 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 		u = units.Dimensionless
 	}
 	as, rs := units.Apart(a, r, u, -1, -1) // the demand and its resistance, never rounded onto each other
-	as, rs = strings.Replace(as, "-", "−", 1), strings.Replace(rs, "-", "−", 1)
+	as, rs = units.Minus(as), units.Minus(rs)
 	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(as)}, {txt(num(b, unit))}, {txt(rs)},
 		{mark(units.Utilisation(util))}, {verdict}}
 	if i == gov {

@@ -360,7 +360,7 @@ func num(v float64, unit string) string {
 	if unit == "" || err != nil {
 		u = units.Dimensionless
 	}
-	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+	return units.Printed(v, u, -1)
 }
 
 // unitHeader is a table header cell: a symbol over its unit.
