@@ -231,7 +231,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			case a.Bearing != nil:
 				bear = append(bear, c.verdictCell(a, "bearing", a.Bearing.Governing >= 0, func() string { return a.Bearing.Cases[a.Bearing.Governing].Name })...)
 				if u, d := result(a, "util_u"), result(a, "util_dr"); u != nil && d != nil {
-					bear = append(bear, txt("\nshort term " + units.Utilisation(u.Q.V) + ", long term " + units.Utilisation(d.Q.V)))
+					bear = append(bear, txt("\nshort term "+units.Utilisation(u.Q.V)+", long term "+units.Utilisation(d.Q.V)))
 				}
 				slide = append(slide, c.verdictCell(a, "sliding", a.Bearing.GoverningSliding >= 0, func() string { return a.Bearing.Sliding[a.Bearing.GoverningSliding].Name })...)
 			case a.Settle != nil:

@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
 // TestResultsAsDeclared: every result an analysis defines is declared in
@@ -18,18 +19,8 @@ import (
 // differential) and a Schmertmann and a Burland & Burbidge sheet.
 func TestResultsAsDeclared(t *testing.T) {
 	var blocks []*eval.Block
-	dirs, _ := filepath.Glob("../../examples/*")
-	for _, dir := range dirs {
-		lp, d := load.Path(dir)
-		if lp == nil {
-			t.Fatal(d)
-		}
-		pkg, _ := parse.Package(lp)
-		res, diags := eval.Package(pkg, eval.Options{})
-		if diags.HasErrors() {
-			t.Fatal(diags)
-		}
-		for _, s := range res.Sheets {
+	for _, ex := range examples(t) {
+		for _, s := range ex.res.Sheets {
 			blocks = append(blocks, s.Blocks()...)
 		}
 	}
@@ -64,4 +55,30 @@ func TestResultsAsDeclared(t *testing.T) {
 	if len(seen) < 40 {
 		t.Errorf("only %d results seen", len(seen))
 	}
+}
+
+type example struct {
+	pkg *sheet.Package
+	res *eval.Result
+}
+
+// examples parses and evaluates the packages in examples/, which must
+// have no errors.
+func examples(t *testing.T) []example {
+	t.Helper()
+	var out []example
+	dirs, _ := filepath.Glob("../../examples/*")
+	for _, dir := range dirs {
+		lp, d := load.Path(dir)
+		if lp == nil {
+			t.Fatal(d)
+		}
+		pkg, _ := parse.Package(lp)
+		res, diags := eval.Package(pkg, eval.Options{})
+		if diags.HasErrors() {
+			t.Fatal(diags)
+		}
+		out = append(out, example{pkg, res})
+	}
+	return out
 }
