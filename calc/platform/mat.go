@@ -85,7 +85,9 @@ func validateMat(m MatInput) error {
 	if m.Name != "" {
 		w = "mat " + strconv.Quote(m.Name)
 	}
-	rng := func(p string, v, scale, lo, hi float64, unit string, open bool) { errs.Range(w, p, v, scale, lo, hi, open, unit) }
+	rng := func(p string, v, scale, lo, hi float64, unit string, open bool) {
+		errs.Range(w, p, v, scale, lo, hi, open, unit)
+	}
 	rng("F", m.F, kN, 0, 50000, "kN", true)
 	rng("q_a", m.QAllow, kPa, 0, 10000, "kPa", true)
 	switch m.Plan {

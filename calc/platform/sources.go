@@ -50,8 +50,8 @@ var (
 	// SrcLook2016 states that the method does not apply for thick
 	// platforms or soft subgrades.
 	SrcLook2016 = trace.Source{Key: "LookHoneyfield2016", Citation: "Look, B. & Honeyfield, N. (2016) Working platforms – to BRE or not to BRE is the question. Australian Geomechanics, March 2016 (abstract: the BRE design method does not apply for thick platforms or for soft subgrades)."}
-	SrcVesic = bearing.SrcVesic1973
-	SrcBrent = trace.Source{Key: "Brent1973", Citation: "Brent, R. P. (1973). Algorithms for Minimization without Derivatives, ch. 4. Prentice-Hall, Englewood Cliffs."}
+	SrcVesic    = bearing.SrcVesic1973
+	SrcBrent    = trace.Source{Key: "Brent1973", Citation: "Brent, R. P. (1973). Algorithms for Minimization without Derivatives, ch. 4. Prentice-Hall, Englewood Cliffs."}
 )
 
 var (
