@@ -51,7 +51,7 @@ func (c *calc) cautions() {
 		if r.D > k.DMax+1e-9 {
 			t.WarnAll(trace.Caution{Code: "platform-thick", Severity: trace.SevCaution, Ref: refThick, Case: k.Name,
 				Values:  []trace.Value{val("D", r.D, "m"), val("D_max", k.DMax, "m"), val("W", k.W, "m")},
-				Message: fmt.Sprintf("%s: D = %.3g m exceeds D_max = %.3g m (%.3g W): the method is not used for platforms this thick against the track width; check the design by another method.", k.Name, r.D, k.DMax, c.o.dMaxRatio())})
+				Message: fmt.Sprintf("%s: D = %.3g m exceeds D_max = %.3g m (%.3g W; 1.5 W from memory): the method is not used for platforms this thick against the track width; check the design by another method.", k.Name, r.D, k.DMax, c.o.dMaxRatio())})
 		}
 	}
 	if r.Given && r.D < r.DMin-1e-9 {

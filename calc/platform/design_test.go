@@ -274,11 +274,27 @@ func BenchmarkDesign(b *testing.B) {
 // Without the EN 1997-1 comparison: the method alone.
 func BenchmarkDesignMethodOnly(b *testing.B) {
 	in := clay()
-	in.Options.EC7.Off = true
+	in.Options.EC7.Off, in.Subgrade.Gamma = true, 0
 	b.ReportAllocs()
 	for b.Loop() {
 		if _, err := platform.Design(in); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// γ_s of a cohesive subgrade is used only by the EN 1997-1 comparison:
+// with the comparison off it is refused, and not needed.
+func TestGammaSOnlyWhenUsed(t *testing.T) {
+	in := clay()
+	in.Options.EC7.Off = true
+	if _, err := platform.Design(in); err == nil || !strings.Contains(err.Error(), "used only by the EN 1997-1 comparison") {
+		t.Errorf("unused γ_s accepted: %v", err)
+	}
+	in.Subgrade.Gamma = 0
+	design(t, "no γ_s", in)
+	in.Options.EC7.Off = false
+	if _, err := platform.Design(in); err == nil || !strings.Contains(err.Error(), "gamma_s = 0 kN/m3") {
+		t.Errorf("missing γ_s accepted for the comparison: %v", err)
 	}
 }

@@ -72,7 +72,7 @@ type Subgrade struct {
 	Kind  SubgradeKind
 	Cu    float64 // c_u, Pa, cohesive: 1–1000 kPa (the method's range 20–80 kPa: a caution outside)
 	Phi   float64 // φ′_s, rad, granular: [15°, 50°)
-	Gamma float64 // γ_s, N/m³, 10–30 kN/m³: the N_γ term of a granular subgrade and the EN 1997-1 comparison
+	Gamma float64 // γ_s, N/m³, 10–30 kN/m³: the N_γ term of a granular subgrade and the EN 1997-1 comparison (refused when neither uses it)
 }
 
 // Case is one loading case: the characteristic track (or outrigger)
@@ -216,7 +216,12 @@ func validate(in Input) error {
 	default:
 		errs = append(errs, &site.InputError{Where: w + ": subgrade", Param: "kind", Msg: "expected cohesive or granular"})
 	}
-	rng(w+": subgrade", "gamma_s", s.Gamma, kNm3, 10, 30, "kN/m3", false)
+	switch {
+	case s.Kind == Granular || !in.Options.EC7.Off:
+		rng(w+": subgrade", "gamma_s", s.Gamma, kNm3, 10, 30, "kN/m3", false)
+	case s.Gamma != 0:
+		errs = append(errs, &site.InputError{Where: w + ": subgrade", Param: "gamma_s", Msg: "the unit weight of a cohesive subgrade is used only by the EN 1997-1 comparison, which is off"})
+	}
 	if n := len(in.Cases); n < 1 || n > 2 {
 		errs = append(errs, &site.InputError{Where: w, Param: "cases", Msg: fmt.Sprintf("the method has one or two loading cases; %d given", n)})
 	}

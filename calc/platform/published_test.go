@@ -30,7 +30,7 @@ func TestTableA1(t *testing.T) {
 	for _, r := range []struct{ phi, ng, half float64 }{{25, 10.9, 0.05}, {30, 22.4, 0.05}, {35, 48, 0.5}, {40, 109, 0.5}, {45, 272, 0.5}} {
 		in := clay()
 		in.Platform.Phi = r.phi * deg
-		in.Options.EC7.Off = true
+		in.Options.EC7.Off, in.Subgrade.Gamma = true, 0
 		res := design(t, "A1", in)
 		if got := step(t, res.Trace, "", "N_gamma_p").Value; math.Abs(got-r.ng) > r.half {
 			t.Errorf("φ′_p = %g°: N_γp = %.3f, Table A1 %g", r.phi, got, r.ng)
@@ -47,7 +47,7 @@ func TestTableA2(t *testing.T) {
 	for _, r := range []struct{ phi, kp float64 }{{35, 3.1}, {40, 5.5}, {45, 10.0}} {
 		in := clay()
 		in.Platform.Phi = r.phi * deg
-		in.Options.EC7.Off = true
+		in.Options.EC7.Off, in.Subgrade.Gamma = true, 0
 		s := step(t, design(t, "A2", in).Trace, "", "K_p_tan_delta")
 		if math.Abs(s.Value-r.kp) > 1e-9 || s.Kind != trace.Tabulated || s.Ref.Source.Key != "BR470" {
 			t.Errorf("φ′_p = %g°: K_p tanδ = %v (%v, %s), Table A2 %g", r.phi, s.Value, s.Kind, s.Ref.Source.Key, r.kp)
@@ -126,7 +126,7 @@ func TestEC7Comparison(t *testing.T) {
 	if h := s.Cases[0].EC7.Cases[s.Cases[0].EC7.Governing]; h.Drainage != bearing.Drained {
 		t.Errorf("sand compared %v", h.Drainage)
 	}
-	in.Options.EC7.Off = true
+	in.Options.EC7.Off, in.Subgrade.Gamma = true, 0
 	if r := design(t, "off", in); r.Cases[0].EC7 != nil {
 		t.Error("comparison made with Off")
 	}

@@ -70,7 +70,7 @@ func TestCrossings(t *testing.T) {
 func TestPlatformSensitivity(t *testing.T) {
 	in := platform.Input{
 		Platform: platform.Platform{Phi: 40 * math.Pi / 180, Gamma: 20e3},
-		Subgrade: platform.Subgrade{Kind: platform.Cohesive, Cu: 30e3, Gamma: 18e3},
+		Subgrade: platform.Subgrade{Kind: platform.Cohesive, Cu: 30e3},
 		Cases:    []platform.Case{{Kind: platform.Case1, Q: 150e3, W: 0.6, L: 3}, {Kind: platform.Case2, Q: 200e3, W: 0.6, L: 2}},
 		D:        site.Some(0.5),
 		Options:  platform.Options{EC7: platform.EC7{Off: true}},
