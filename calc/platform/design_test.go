@@ -261,6 +261,9 @@ func TestBadInput(t *testing.T) {
 	}
 }
 
+// Targets (2 shared cores): Design with the comparison under 2 ms and 400
+// kB an op (two bearing.Check calls dominate); the method alone under 0.3
+// ms and 40 kB.
 func BenchmarkDesign(b *testing.B) {
 	in := clay()
 	b.ReportAllocs()

@@ -31,7 +31,11 @@ import (
 //   - Load factors: 1.6 (case 1) and 1.2 (case 2) with a platform, 2.0
 //     and 1.5 for the subgrade alone: the first pair from memory, both
 //     pairs confirmed against one public reproduction of the method's
-//     factor table. BR 470's lower factors where the track pressures are
+//     factor table; a published letter on the method (Ground
+//     Engineering, 2006, printed by New Civil Engineer, letter 539870)
+//     states that its factors range from 1.2 to 2.0 by loading case and
+//     by whether a platform is present, and are its only partial factors
+//     other than 1.0 (so φ′ and c_u enter unfactored). BR 470's lower factors where the track pressures are
 //     well known were recalled from memory without their values: enter
 //     them as Case.Factor.
 //   - Limits: 0.3 m least thickness (from memory, and in one public
