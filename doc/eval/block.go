@@ -31,6 +31,7 @@ type Block struct {
 	Settle   *SettleResult
 	Capacity *CapacityResult
 	Diff     *DiffResult // differential blocks
+	Size     *SizeResult // size blocks
 	Options  []string    // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
@@ -149,8 +150,16 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 	for _, o := range b.Options() {
 		blk.Options = append(blk.Options, o.Name.Value+" = "+o.Value.Value)
 	}
+	if f.NoB && b.Kind != sheet.KindSize {
+		e.errs.AddHint(b.Footing.Span, "size it with a block such as ```size "+f.Name+" on "+b.Ground.Value+"```, or give the footing its B",
+			"footing %s has no B, which a %s block needs", f.Name, b.Kind)
+		e.failResults(s, blk)
+		return
+	}
 	var ok bool
 	switch b.Kind {
+	case sheet.KindSize:
+		ok = e.sizeBlock(s, b, blk, opts)
 	case sheet.KindBearing:
 		ok = e.bearing(s, b, blk, opts)
 	case sheet.KindSettlement:

@@ -17,6 +17,7 @@ const (
 	KindSettlement
 	KindCapacity
 	KindDifferential
+	KindSize
 )
 
 // Kinds are the block words in Kind order (from Specs).

@@ -6,6 +6,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/kind"
 	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/size"
 )
 
 // OptionSpec describes one option of a block: its name, the words it
@@ -29,6 +30,7 @@ var Specs = []*kind.Spec{
 	KindSettlement:   &settle.Spec,
 	KindCapacity:     &capacity.Spec,
 	KindDifferential: &settle.DiffSpec,
+	KindSize:         &size.Spec,
 }
 
 // Spec is the declaration of kind k.
