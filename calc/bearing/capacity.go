@@ -60,7 +60,7 @@ func CapacityAt(in Input, B float64) (*Capacity, error) {
 	}
 	for _, cs := range r.Cases {
 		if cs.Name == cp.Case && cs.U0 > 0 {
-			cp.Trace.Add(trace.Step{Symbol: "q_a", Formula: add(sym("q_Rd"), sym("u_0")), Value: cp.QRd, Unit: "kPa", Case: cs.Name,
+			cp.Trace.Add(trace.Step{Symbol: "q_a", Formula: trace.Add(trace.S("q_Rd"), trace.S("u_0")), Value: cp.QRd, Unit: "kPa", Case: cs.Name,
 				Inputs: []trace.Value{val("q_Rd", cs.QRd, "kPa"), val("u_0", cs.U0, "kPa")}, Ref: ref6521,
 				Note: "gross allowable pressure: the effective resistance pressure with the pore pressure at the base added back (q_net/FS + σ_v0)"})
 		}

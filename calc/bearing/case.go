@@ -40,25 +40,25 @@ var (
 
 // Formulas that do not depend on the input, built once.
 var (
-	fRkUlt  = mul(sym("q_ult"), sym("A'"))
-	fRkLim  = mul(sym("q_lim"), sym("A'"))
-	fRd     = div(sym("R_k"), sym("gamma_Rv"))
-	fQEd    = div(sym("V_d"), sym("A'"))
-	fQRd    = div(sym("R_d"), sym("A'"))
-	fUtil   = div(sym("V_d"), sym("R_d"))
-	fHd     = fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2))))
-	feB     = div(fn("abs", sym("M_B_d")), sym("V_d"))
-	feL     = div(fn("abs", sym("M_L_d")), sym("V_d"))
-	fBpB    = sub(sym("B"), mul(num(2), sym("e_B")))
-	fBpL    = sub(sym("L"), mul(num(2), sym("e_L")))
-	fApStr  = sym("B'")
-	fApRect = mul(sym("B'"), sym("L'"))
-	fBeta   = fn("atan", div(sym("H_d"), sym("V_d")))
-	fk1     = div(sym("D"), sym("B"))
-	fk2     = fn("atan", div(sym("D"), sym("B")))
-	fThB    = fn("atan2", fn("abs", sym("H_B_d")), fn("abs", sym("H_L_d")))
-	fThL    = fn("atan2", fn("abs", sym("H_L_d")), fn("abs", sym("H_B_d")))
-	fIdent  = map[string]expr{"sigma_v0": sym("sigma_v0"), "sigma'_v0": sym("sigma'_v0"), "gamma'_k": sym("gamma'_k")}
+	fRkUlt  = trace.Mul(trace.S("q_ult"), trace.S("A'"))
+	fRkLim  = trace.Mul(trace.S("q_lim"), trace.S("A'"))
+	fRd     = trace.Div(trace.S("R_k"), trace.S("gamma_Rv"))
+	fQEd    = trace.Div(trace.S("V_d"), trace.S("A'"))
+	fQRd    = trace.Div(trace.S("R_d"), trace.S("A'"))
+	fUtil   = trace.Div(trace.S("V_d"), trace.S("R_d"))
+	fHd     = trace.Fn("sqrt", trace.Add(trace.Pow(trace.S("H_B_d"), trace.N(2)), trace.Pow(trace.S("H_L_d"), trace.N(2))))
+	feB     = trace.Div(trace.Fn("abs", trace.S("M_B_d")), trace.S("V_d"))
+	feL     = trace.Div(trace.Fn("abs", trace.S("M_L_d")), trace.S("V_d"))
+	fBpB    = trace.Sub(trace.S("B"), trace.Mul(trace.N(2), trace.S("e_B")))
+	fBpL    = trace.Sub(trace.S("L"), trace.Mul(trace.N(2), trace.S("e_L")))
+	fApStr  = trace.S("B'")
+	fApRect = trace.Mul(trace.S("B'"), trace.S("L'"))
+	fBeta   = trace.Fn("atan", trace.Div(trace.S("H_d"), trace.S("V_d")))
+	fk1     = trace.Div(trace.S("D"), trace.S("B"))
+	fk2     = trace.Fn("atan", trace.Div(trace.S("D"), trace.S("B")))
+	fThB    = trace.Fn("atan2", trace.Fn("abs", trace.S("H_B_d")), trace.Fn("abs", trace.S("H_L_d")))
+	fThL    = trace.Fn("atan2", trace.Fn("abs", trace.S("H_L_d")), trace.Fn("abs", trace.S("H_B_d")))
+	fIdent  = map[string]expr{"sigma_v0": trace.S("sigma_v0"), "sigma'_v0": trace.S("sigma'_v0"), "gamma'_k": trace.S("gamma'_k")}
 	fSoil   = map[soilKey]expr{}
 )
 
@@ -83,13 +83,13 @@ func init() {
 			var f expr
 			switch {
 			case k.angle && local:
-				f = fn("atan", div(mul(num(2.0/3), fn("tan", sym(k.k))), sym(k.g)))
+				f = trace.Fn("atan", trace.Div(trace.Mul(trace.N(2.0/3), trace.Fn("tan", trace.S(k.k))), trace.S(k.g)))
 			case k.angle:
-				f = fn("atan", div(fn("tan", sym(k.k)), sym(k.g)))
+				f = trace.Fn("atan", trace.Div(trace.Fn("tan", trace.S(k.k)), trace.S(k.g)))
 			case local:
-				f = div(mul(num(2.0/3), sym(k.k)), sym(k.g))
+				f = trace.Div(trace.Mul(trace.N(2.0/3), trace.S(k.k)), trace.S(k.g))
 			default:
-				f = div(sym(k.k), sym(k.g))
+				f = trace.Div(trace.S(k.k), trace.S(k.g))
 			}
 			fSoil[soilKey{k.k, k.g, k.angle, local}] = f
 		}
@@ -171,15 +171,15 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 		case c.opt.FSOnGross && cs.U0 > 0:
 			// gross total q_ult = q′_ult + u_0 over FS, less u_0 back to effective
 			rd = g.Ap * ((qlim+cs.U0)/c.ap.FS - cs.U0)
-			c.step("R_d", mul(sym("A'"), sub(div(add(sym(qsym), sym("u_0")), sym("FS")), sym("u_0"))), rd, c.uF, trace.Ref{},
+			c.step("R_d", trace.Mul(trace.S("A'"), trace.Sub(trace.Div(trace.Add(trace.S(qsym), trace.S("u_0")), trace.S("FS")), trace.S("u_0"))), rd, c.uF, trace.Ref{},
 				"allowable bearing resistance, FS on the gross pressure (fs_on = gross): gross total ultimate pressure q′ + u_0 over FS, less u_0 (common practice)", vA, vq, val("u_0", cs.U0, "kPa"), val("FS", c.ap.FS, ""))
 		case c.opt.FSOnGross:
 			rd = g.Ap * qlim / c.ap.FS
-			c.step("R_d", mul(sym("A'"), div(sym(qsym), sym("FS"))), rd, c.uF, trace.Ref{},
+			c.step("R_d", trace.Mul(trace.S("A'"), trace.Div(trace.S(qsym), trace.S("FS"))), rd, c.uF, trace.Ref{},
 				"allowable bearing resistance, FS on the gross ultimate pressure (fs_on = gross; common practice)", vA, vq, val("FS", c.ap.FS, ""))
 		default:
 			rd = g.Ap * ((qlim-q0)/c.ap.FS + q0)
-			c.step("R_d", mul(sym("A'"), add(div(sub(sym(qsym), sym(q0s)), sym("FS")), sym(q0s))), rd, c.uF, trace.Ref{},
+			c.step("R_d", trace.Mul(trace.S("A'"), trace.Add(trace.Div(trace.Sub(trace.S(qsym), trace.S(q0s)), trace.S("FS")), trace.S(q0s))), rd, c.uF, trace.Ref{},
 				"allowable bearing resistance: net ultimate pressure over FS plus overburden (fs_on = net; common practice)", vA, vq, val(q0s, q0, "kPa"), val("FS", c.ap.FS, ""))
 		}
 	} else {
@@ -194,7 +194,7 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 		cs.Util = c.take("util", UtilCap, "", trace.Ref{}, "no bearing resistance: the check fails")
 	case c.hcLim:
 		u := math.Max(ld.V/rd, g.H/(g.Ap*s.cu))
-		cs.Util = c.step("util", fn("max", div(sym("V_d"), sym("R_d")), div(sym("H_d"), mul(sym("A'"), sym("c_u_d")))), u, "", refD3,
+		cs.Util = c.step("util", trace.Fn("max", trace.Div(trace.S("V_d"), trace.S("R_d")), trace.Div(trace.S("H_d"), trace.Mul(trace.S("A'"), trace.S("c_u_d")))), u, "", refD3,
 			"utilisation: H_d exceeds A′c_u,d, the limit of D.3", vV, val("R_d", rd, c.uF), val("H_d", g.H, c.uF), vA, val("c_u_d", s.cu, "kPa"))
 	default:
 		cs.Util = c.step("util", fUtil, ld.V/rd, "", ref652, "utilisation V_d/R_d", vV, val("R_d", rd, c.uF))
@@ -218,7 +218,7 @@ func (c *calc) overStep(s, from string, v, gg float64, note string) float64 {
 		c.pf[3] = true
 		c.take("gamma_gamma", gg, "", refA4, "partial factor on unit weight")
 	}
-	return c.step(s, div(sym(from), sym("gamma_gamma")), v/gg, unit, refMat, note, val(from, v, unit), val("gamma_gamma", gg, ""))
+	return c.step(s, trace.Div(trace.S(from), trace.S("gamma_gamma")), v/gg, unit, refMat, note, val(from, v, unit), val("gamma_gamma", gg, ""))
 }
 
 // factors collects every factor recorded since step start.
@@ -266,8 +266,8 @@ func (c *calc) buoyant(start int, v float64) (float64, float64) {
 	}
 	A := c.f.Area()
 	c.take("A_b", A, c.uA, trace.Ref{}, "plan area of the base")
-	U := c.step("U", mul(sym("u_0"), sym("A_b")), c.u0*A, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
-	vp := c.step("V_d", sub(sym("V_d_tot"), sym("U")), v-U, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
+	U := c.step("U", trace.Mul(trace.S("u_0"), trace.S("A_b")), c.u0*A, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
+	vp := c.step("V_d", trace.Sub(trace.S("V_d_tot"), trace.S("U")), v-U, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
 	return vp, U
 }
 
@@ -368,23 +368,23 @@ func (c *calc) circle(g *geo, e float64) {
 	vB := val("B", f.B, "m")
 	if c.opt.Method == Terzaghi && e == 0 {
 		g.circC = true
-		g.Bp = c.step("B'", sym("B"), f.B, "m", refTerz, "diameter (Terzaghi's circular footing)", vB)
-		g.Lp = c.step("L'", sym("B"), f.B, "m", refTerz, "diameter", vB)
-		g.Ap = c.step("A'", div(mul(sym("pi"), pow(sym("B"), num(2))), num(4)), math.Pi*f.B*f.B/4, c.uA, refTerz, "area of the circle", vB)
+		g.Bp = c.step("B'", trace.S("B"), f.B, "m", refTerz, "diameter (Terzaghi's circular footing)", vB)
+		g.Lp = c.step("L'", trace.S("B"), f.B, "m", refTerz, "diameter", vB)
+		g.Ap = c.step("A'", trace.Div(trace.Mul(trace.S("pi"), trace.Pow(trace.S("B"), trace.N(2))), trace.N(4)), math.Pi*f.B*f.B/4, c.uA, refTerz, "area of the circle", vB)
 		return
 	}
-	R := c.step("R", div(sym("B"), num(2)), f.B/2, "m", trace.Ref{}, "radius", vB)
+	R := c.step("R", trace.Div(trace.S("B"), trace.N(2)), f.B/2, "m", trace.Ref{}, "radius", vB)
 	vR := val("R", R, "m")
-	e = c.step("e", fn("sqrt", add(pow(sym("e_B"), num(2)), pow(sym("e_L"), num(2)))), e, "m", refCircle, "resultant eccentricity", val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+	e = c.step("e", trace.Fn("sqrt", trace.Add(trace.Pow(trace.S("e_B"), trace.N(2)), trace.Pow(trace.S("e_L"), trace.N(2)))), e, "m", refCircle, "resultant eccentricity", val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
 	ve := val("e", e, "m")
 	A := 2 * (R*R*math.Acos(e/R) - e*math.Sqrt(R*R-e*e))
-	g.Ap = c.step("A'", mul(num(2), sub(mul(pow(sym("R"), num(2)), fn("acos", div(sym("e"), sym("R")))), mul(sym("e"), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))))),
+	g.Ap = c.step("A'", trace.Mul(trace.N(2), trace.Sub(trace.Mul(trace.Pow(trace.S("R"), trace.N(2)), trace.Fn("acos", trace.Div(trace.S("e"), trace.S("R")))), trace.Mul(trace.S("e"), trace.Fn("sqrt", trace.Sub(trace.Pow(trace.S("R"), trace.N(2)), trace.Pow(trace.S("e"), trace.N(2))))))),
 		A, c.uA, refCircle, "effective area (circular segment)", vR, ve)
-	be := c.step("b_e", mul(num(2), sub(sym("R"), sym("e"))), 2*(R-e), "m", refCircle, "width of the effective segment", vR, ve)
-	le := c.step("l_e", mul(num(2), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))), 2*math.Sqrt(R*R-e*e), "m", refCircle, "chord length of the effective segment", vR, ve)
+	be := c.step("b_e", trace.Mul(trace.N(2), trace.Sub(trace.S("R"), trace.S("e"))), 2*(R-e), "m", refCircle, "width of the effective segment", vR, ve)
+	le := c.step("l_e", trace.Mul(trace.N(2), trace.Fn("sqrt", trace.Sub(trace.Pow(trace.S("R"), trace.N(2)), trace.Pow(trace.S("e"), trace.N(2))))), 2*math.Sqrt(R*R-e*e), "m", refCircle, "chord length of the effective segment", vR, ve)
 	vA, vbe, vle := val("A'", A, c.uA), val("b_e", be, "m"), val("l_e", le, "m")
-	g.Lp = c.step("L'", fn("sqrt", div(mul(sym("A'"), sym("l_e")), sym("b_e"))), math.Sqrt(A*le/be), "m", refCircle, "equivalent effective length", vA, vle, vbe)
-	g.Bp = c.step("B'", div(mul(sym("L'"), sym("b_e")), sym("l_e")), g.Lp*be/le, "m", refCircle, "equivalent effective width", val("L'", g.Lp, "m"), vbe, vle)
+	g.Lp = c.step("L'", trace.Fn("sqrt", trace.Div(trace.Mul(trace.S("A'"), trace.S("l_e")), trace.S("b_e"))), math.Sqrt(A*le/be), "m", refCircle, "equivalent effective length", vA, vle, vbe)
+	g.Bp = c.step("B'", trace.Div(trace.Mul(trace.S("L'"), trace.S("b_e")), trace.S("l_e")), g.Lp*be/le, "m", refCircle, "equivalent effective width", val("L'", g.Lp, "m"), vbe, vle)
 }
 
 // theta records the angle of H to the direction of L′ (EN 1997-1 D.4).
@@ -397,7 +397,7 @@ func (c *calc) theta(g *geo, ld design.Load) {
 		// B′ lies along the resultant eccentricity
 		hb := math.Abs(ld.HB*g.eB + ld.HL*g.eL)
 		hl := math.Abs(ld.HL*g.eB - ld.HB*g.eL)
-		c.step("theta", fn("atan2", fn("abs", add(mul(sym("H_B_d"), sym("e_B")), mul(sym("H_L_d"), sym("e_L")))), fn("abs", sub(mul(sym("H_L_d"), sym("e_B")), mul(sym("H_B_d"), sym("e_L"))))),
+		c.step("theta", trace.Fn("atan2", trace.Fn("abs", trace.Add(trace.Mul(trace.S("H_B_d"), trace.S("e_B")), trace.Mul(trace.S("H_L_d"), trace.S("e_L")))), trace.Fn("abs", trace.Sub(trace.Mul(trace.S("H_L_d"), trace.S("e_B")), trace.Mul(trace.S("H_B_d"), trace.S("e_L"))))),
 			math.Atan2(hb, hl), "deg", refD4, note+" (B′ along the eccentricity)", vHB, vHL, val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
 	case c.f.Shape != site.Circle && c.f.B-2*g.eB > c.f.L-2*g.eL:
 		c.step("theta", fThL, math.Atan2(HL, HB), "deg", refD4, note+" (B′ lies along L)", vHB, vHL)
@@ -438,7 +438,7 @@ func (c *calc) designSoil(i int, und bool, mat design.MaterialSet, lower bool) s
 	f := soilForm(s.kPhi, gPhi, true, s.local)
 	if phi < phiMin {
 		phi, s.phiClamp = phiMin, true
-		f = fn("max", f, num(phiMin))
+		f = trace.Fn("max", f, trace.N(phiMin))
 		note += "; φ′ ≈ 0 is replaced by 0.0001 rad so the factors take their φ′ → 0 limits"
 	}
 	s.phi = c.step(s.nPhi, f, phi, "deg", ref, note, val(s.kPhi, phik, "deg"), val(gPhi, g, ""))

@@ -232,17 +232,17 @@ func (c *calc) overburden() {
 		c.warnOnce("water-above-ground", trace.SevCaution, trace.Ref{},
 			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; the actions must account for the water on the footing and the uplift on its base.",
 			val("h_w0", h0, "m"))
-		f = mul(sym("gamma_w"), sym("h_w0"))
+		f = trace.Mul(trace.S("gamma_w"), trace.S("h_w0"))
 		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
 		parts = append(parts, "0: free water above ground level")
 	}
 	for k, st := range g.Strata(D) {
 		gs, hs := fmt.Sprintf("gamma_s%d", k+1), fmt.Sprintf("h_s%d", k+1)
-		term := mul(sym(gs), sym(hs))
+		term := trace.Mul(trace.S(gs), trace.S(hs))
 		if f == nil {
 			f = term
 		} else {
-			f = add(f, term)
+			f = trace.Add(f, term)
 		}
 		in = append(in, val(gs, st.Gamma, "kN/m3"), val(hs, st.H(), "m"))
 		w := ""
@@ -268,13 +268,13 @@ func (c *calc) overburden() {
 	}
 	c.u0 = g.PoreP(D)
 	if c.zw < D {
-		c.step("u_0", mul(sym("gamma_w"), sub(sym("D"), sym("z_w"))), c.u0, "kPa", trace.Ref{}, "pore pressure at the base",
+		c.step("u_0", trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("D"), trace.S("z_w"))), c.u0, "kPa", trace.Ref{}, "pore pressure at the base",
 			val("gamma_w", g.Gw(), "kN/m3"), val("D", D, "m"), val("z_w", c.zw, "m"))
 	} else {
 		c.take("u_0", 0, "kPa", trace.Ref{}, "pore pressure at the base (water table at or below it)")
 	}
 	c.sv0e = c.sv0 - c.u0
-	c.step("sigma'_v0", sub(sym("sigma_v0"), sym("u_0")), c.sv0e, "kPa", trace.Ref{}, "effective vertical stress at the base",
+	c.step("sigma'_v0", trace.Sub(trace.S("sigma_v0"), trace.S("u_0")), c.sv0e, "kPa", trace.Ref{}, "effective vertical stress at the base",
 		val("sigma_v0", c.sv0, "kPa"), val("u_0", c.u0, "kPa"))
 }
 
@@ -291,18 +291,18 @@ func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, 
 		if c.cas == "" {
 			c.warn("water-above-base", trace.SevNote, refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
 		}
-		return c.step(name, sub(sym(gss), sym("gamma_w")), gsat-gw, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
+		return c.step(name, trace.Sub(trace.S(gss), trace.S("gamma_w")), gsat-gw, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
 	case c.zw < z+b:
 		d := c.zw - z
 		if c.cas == "" {
 			c.warn("water-within-B", trace.SevNote, refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
 		}
-		sub1 := sub(sym(gss), sym("gamma_w"))
-		f := add(sub1, mul(div(sub(sym("z_w"), sym(zs)), sym(bs)), sub(sym(gs), sub1)))
+		sub1 := trace.Sub(trace.S(gss), trace.S("gamma_w"))
+		f := trace.Add(sub1, trace.Mul(trace.Div(trace.Sub(trace.S("z_w"), trace.S(zs)), trace.S(bs)), trace.Sub(trace.S(gs), sub1)))
 		v := gsat - gw + d/b*(gam-(gsat-gw))
 		return c.step(name, f, v, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
 	}
-	return c.step(name, sym(gs), gam, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
+	return c.step(name, trace.S(gs), gam, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
 }
 
 // caseValue is a value recorded for one case.
