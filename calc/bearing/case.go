@@ -17,8 +17,8 @@ type geo struct {
 	Bf, D, alpha float64
 	V, H         float64
 	eB, eL       float64
-	noDepth      bool // no depth factors (lower layer, load spread)
-	swap         bool // B′ lies along L (the shorter effective side)
+	noDepth      bool    // no depth factors (lower layer, load spread)
+	swap         bool    // B′ lies along L (the shorter effective side)
 	beta         float64 // inclination of the load, atan(H/V), when H > 0
 	k            float64 // Hansen's depth ratio, when recorded
 }
