@@ -72,7 +72,7 @@ func (c *calc) layers() {
 			if !ok {
 				continue
 			}
-			if r := q2 / q1; r < 1 && r < bestR {
+			if r := c.compute("r_q", fRq, val("q_2", q2, "kPa"), val("q_1", q1, "kPa")); r < 1 && r < bestR {
 				best, bestR = i, r
 			}
 		}
