@@ -308,12 +308,30 @@ func (c *calc) buoyant(start int, v float64) (float64, float64) {
 			break
 		}
 	}
-	A := c.f.Area()
-	c.take("A_b", A, c.uA, trace.Ref{}, "plan area of the base")
+	A := c.planArea()
 	U := c.eval("U", fU, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
 	vp := c.eval("V_d", fVdEff, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
 	return vp, U
 }
+
+// planArea records the plan area of the base A_b (per metre run for a
+// strip).
+func (c *calc) planArea() float64 {
+	f := c.f
+	vB := val("B", f.B, "m")
+	switch f.Shape {
+	case site.Strip:
+		return c.eval("A_b", fAbStrip, c.uA, trace.Ref{}, "plan area of the base", vB)
+	case site.Circle:
+		return c.eval("A_b", fCircA, c.uA, trace.Ref{}, "plan area of the base", vB)
+	}
+	return c.eval("A_b", fApRectBL, c.uA, trace.Ref{}, "plan area of the base", vB, val("L", f.L, "m"))
+}
+
+var (
+	fAbStrip  = trace.S("B")
+	fApRectBL = trace.Mul(trace.S("B"), trace.S("L"))
+)
 
 // geometry records H_d, the eccentricities and the effective dimensions
 // of one case. ok is false when the resultant lies outside the base.

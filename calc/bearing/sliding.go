@@ -85,8 +85,7 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 		}
 		vp := ld.V
 		if c.u0 > 0 {
-			A := c.f.Area()
-			c.take("A_b", A, c.uA, trace.Ref{}, "plan area of the base")
+			A := c.planArea()
 			U := c.eval("U", fU, c.uF, trace.Ref{}, "water pressure on the base", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
 			vp = c.eval("V'_d", fVpU, c.uF, refSlide, "effective vertical action", vV, val("U", U, c.uF))
 		} else {
