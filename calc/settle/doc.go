@@ -106,21 +106,11 @@
 // Step.Case names the layer, sublayer or time a step belongs to; cautions
 // sit beside the step that raised them.
 //
-// Result.Symbols, in this order (SI values; display unit in Unit):
-//
-//	q        gross bearing pressure           kPa
-//	q_net    net bearing pressure             kPa
-//	z_inf    bottom of the zone considered    m (below ground level)
-//	s_i      immediate settlement             mm
-//	s_c      consolidation settlement         mm
-//	s_sec    secondary compression and creep  mm
-//	s_total  s_i + s_c + s_sec                mm
-//	s_lim    settlement limit                 mm
-//	util     s_total/s_lim
-//	t_50     time to 50 % consolidation       yr   (only with consolidating layers having c_v)
-//	t_90     time to 90 % consolidation       yr   (ditto)
-//	C_1, C_2, I_zp                            (Schmertmann only)
-//	N_bar, I_c, z_I, f_s, f_l, f_t            (Burland & Burbidge only)
+// Result.Symbols holds, in this order, the symbols of Spec.Results that
+// Compute gives (their units and meanings are there): q_SLS, q_net,
+// z_inf, s_i, s_c, s_sec, s_total, s_lim, util_s; t_50, t_90 with
+// consolidating layers having c_v; C_1, C_2, I_zp (Schmertmann) or
+// N_bar, I_c, z_I, f_s, f_l, f_t (Burland & Burbidge).
 //
 // Allowable brackets q upward from σ_v0 at the base (no net load),
 // doubling the trial net pressure from 100 kPa, and solves s_total(q) =
@@ -132,7 +122,7 @@
 //
 // Differential checks β = |s_A − s_B|/L against 1/500 by default, with
 // cautions at 1/500 (Bjerrum 1963; EN 1997-1 Annex H), 1/300 and 1/150
-// (Skempton & MacDonald 1956). Diff.Symbols: delta_s, beta, beta_lim, util.
+// (Skempton & MacDonald 1956). Diff.Symbols: the symbols of DiffSpec.
 //
 // WithinFooting runs Compute's calculation (without its working) at the
 // centre and at a corner of a flexible footing and gives Δs and

@@ -27,6 +27,19 @@ import (
 // would round it onto or across the other.
 func Format(v float64, u Unit, decimals int) string { return format(v, u, decimals, 0) }
 
+// Printed is Format as the document prints it: a negative value with
+// the minus sign U+2212 ("−12.5"), not a hyphen.
+func Printed(v float64, u Unit, decimals int) string { return Minus(Format(v, u, decimals)) }
+
+// Minus writes the leading hyphen-minus of a formatted number as the
+// minus sign U+2212.
+func Minus(s string) string {
+	if strings.HasPrefix(s, "-") {
+		return "−" + s[1:]
+	}
+	return s
+}
+
 // format is Format with extra digits: decimals+extra places when decimals
 // are fixed, else extra more than the automatic rule gives.
 func format(v float64, u Unit, decimals, extra int) string {

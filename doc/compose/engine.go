@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"strings"
 
-	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
@@ -355,21 +354,13 @@ func findCheck(b *eval.Block, kind string) *eval.Check {
 	return nil
 }
 
-// forceUnit is kN for a pad and kN/m for a strip.
-func forceUnit(f site.Footing) units.Unit {
-	if f.Shape == site.Strip {
-		return units.MustParse("kN/m")
-	}
-	return units.MustParse("kN")
-}
-
 // num formats an SI value in a unit, for table cells.
 func num(v float64, unit string) string {
 	u, err := units.Parse(unit)
 	if unit == "" || err != nil {
 		u = units.Dimensionless
 	}
-	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+	return units.Printed(v, u, -1)
 }
 
 // unitHeader is a table header cell: a symbol over its unit.

@@ -128,6 +128,9 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 	if g.Water == nil {
 		o.para(txt("No groundwater is given: the ground is taken as dry to the depth considered."))
 	}
+	if t, ok := g.Model.PlatformDepth(); ok {
+		o.para(txt(fmt.Sprintf("The first layer, %s, is a granular working platform %s m thick on the layer below (platform = yes).", g.Model.Layers[0].Name, f(t, mU))))
+	}
 	if src.Table != nil {
 		a := c.anchor("ground")
 		o.add(&layout.Anchor{Pos: pos(src.Table.Span), Name: a})

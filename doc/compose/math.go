@@ -178,7 +178,7 @@ func numberNode(s string) eqn.Node {
 
 // valueText prints a quantity as plain text ("245.7 kPa", "30°").
 func valueText(q units.Quantity, u units.Unit, decimals int) string {
-	s := strings.Replace(units.Format(q.V, u, decimals), "-", "−", 1)
+	s := units.Printed(q.V, u, decimals)
 	switch u.Name {
 	case "":
 		return s

@@ -2,9 +2,7 @@ package compose
 
 import (
 	"fmt"
-	"strings"
 
-	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -44,29 +42,18 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			sk.Water = &w
 		}
 		layers := g.Layers
-		if len(layers) > 1 && strings.Contains(strings.ToLower(layers[0].Name), "platform") && m.D < layers[1].Top {
-			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: layers[1].Top}
+		if t, ok := g.PlatformDepth(); ok && m.D < t { // the ground model states it (platform = yes)
+			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: t}
 			layers = layers[1:]
 		}
 		for _, l := range layers {
 			sk.Layers = append(sk.Layers, sketch.Layer{Name: l.Name, Top: l.Top})
 		}
 	}
-	w := 0.0
-	if on != nil {
-		w = f.SelfWeightOn(on) // the engine's self-weight, 0 unless self_weight = auto
-	}
-	sk.V = w
-	for _, a := range f.Actions {
-		sk.V += a.V
-		sk.H += a.HB
-		sk.M += a.MB
-	}
-	fu := forceUnit(m)
-	mu := units.MustParse("kNm")
-	if m.Shape == site.Strip {
-		mu = units.MustParse("kNm/m")
-	}
+	sum, w := f.Resultant(on) // the engine's sum, with its self-weight W (0 unless self_weight = auto)
+	sk.V, sk.H, sk.M = sum.V, sum.HB, sum.MB
+	fu := units.MustParse(m.ForceUnit())
+	mu := units.MustParse(m.MomentUnit())
 	if sk.V != 0 {
 		sk.VLabel = "ΣV = " + valueText(units.Quantity{V: sk.V, Dim: fu.Dim}, fu, -1)
 		if w != 0 {

@@ -231,7 +231,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			case a.Bearing != nil:
 				bear = append(bear, c.verdictCell(a, "bearing", a.Bearing.Governing >= 0, func() string { return a.Bearing.Cases[a.Bearing.Governing].Name })...)
 				if u, d := result(a, "util_u"), result(a, "util_dr"); u != nil && d != nil {
-					bear = append(bear, txt(fmt.Sprintf("\nshort term %.2f, long term %.2f", u.Q.V, d.Q.V)))
+					bear = append(bear, txt("\nshort term "+units.Utilisation(u.Q.V)+", long term "+units.Utilisation(d.Q.V)))
 				}
 				slide = append(slide, c.verdictCell(a, "sliding", a.Bearing.GoverningSliding >= 0, func() string { return a.Bearing.Sliding[a.Bearing.GoverningSliding].Name })...)
 			case a.Settle != nil:
@@ -283,7 +283,7 @@ func (c *composer) verdictCell(a *eval.Block, kind string, has bool, gov func() 
 	if ch == nil || !has {
 		return nil
 	}
-	cl := layout.Cell{txt(fmt.Sprintf("%.2f  ", ch.Util)), verdictRun(ch), txt("\n" + gov())}
+	cl := layout.Cell{txt(units.Utilisation(ch.Util) + "  "), verdictRun(ch), txt("\n" + gov())}
 	return cl
 }
 

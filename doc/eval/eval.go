@@ -10,6 +10,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Options control an evaluation.
@@ -207,7 +208,7 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		for _, n := range resultNames[b.Kind] {
+		for _, n := range b.Kind.Spec().ResultNames() {
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue
 			}
@@ -282,7 +283,7 @@ func (e *evaluator) resolveUses() {
 			switch {
 			case t == nil:
 				hint := ""
-				if n, ok := sheet.Nearest(u.Value, names); ok {
+				if n, ok := suggest.Nearest(u.Value, names); ok {
 					hint = fmt.Sprintf("did you mean %s?", n)
 				}
 				e.errs.AddHint(u.Span, hint, "uses %q: no such sheet in this package", u.Value)

@@ -57,7 +57,7 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 	s.blocks[b] = &Block{Kind: sheet.KindFooting, Name: f.Name, Span: b.Span, Sheet: s, Footing: f}
 	s.footings[f.Name] = f
 	prefix := f.Name + "."
-	ok := e.unknownStmts(sheet.KindFooting, f.Name, b.Lines, footingStmts)
+	ok := e.unknownStmts(sheet.KindFooting, f.Name, b.Lines)
 	f.Model.Name = f.Name
 	shapeSet := false
 	for _, o := range b.Options() {

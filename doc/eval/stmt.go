@@ -24,7 +24,7 @@ func (e *evaluator) sheet(s *Sheet) {
 			// The block's header has an earlier error: its names may be
 			// wrong, so it is not evaluated and its results count as failed.
 			if a, ok := b.(*sheet.Analysis); ok {
-				for _, n := range resultNames[a.Kind] {
+				for _, n := range a.Kind.Spec().ResultNames() {
 					e.fail(s, a.ResultPrefix().Value+"."+n)
 				}
 			}

@@ -14,7 +14,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/internal/suggest"
 	"github.com/plinth-calc/plinth/templates"
 )
 
@@ -202,7 +202,7 @@ func fieldHint(name string) string {
 		names = append(names, n)
 	}
 	sort.Strings(names)
-	if n, ok := sheet.Nearest(name, names); ok {
+	if n, ok := suggest.Nearest(name, names); ok {
 		return "did you mean {" + n + "}?"
 	}
 	return "fields are: " + strings.Join(names, ", ")

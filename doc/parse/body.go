@@ -16,6 +16,7 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 var (
@@ -326,7 +327,7 @@ func (c *conv) quote(n *ast.Blockquote) sheet.Block {
 	}
 	if kind < 0 {
 		hint := "write > [!WARNING], > [!CAUTION] or > [!NOTE] (highest severity first)"
-		if s, ok := sheet.Nearest(word, sheet.Alerts); ok {
+		if s, ok := suggest.Nearest(word, sheet.Alerts); ok {
 			hint = "did you mean [!" + s + "]?"
 		}
 		c.diags.AddHint(mark, hint, "unknown caution [!%s]", g[1])
