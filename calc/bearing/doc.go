@@ -16,7 +16,23 @@
 // no), Interface (base friction δ, and whether water or air can reach the
 // interface), SpreadTan, and optional overrides Ks and CaRatio. All values
 // are SI. Out-of-range input returns site.Errors of *site.RangeError and
-// *site.InputError; the engine does no I/O and never returns NaN or Inf.
+// *site.InputError; the engine does no I/O and never returns NaN or Inf: a
+// step whose formula cannot be evaluated with the values reached (an
+// action so large that a pressure overflows) is the trace's
+// *trace.DomainError, returned wrapped with the case it arose in.
+//
+// # Working
+//
+// Each step's value is its printed formula evaluated by the trace's
+// recorder (trace.Trace.Eval): the formula trees of forms.go and the
+// package-level trees beside each check are the only definition of the
+// numbers, and Factors, CaRatio and the strip capacities that pick the
+// weaker layer evaluate the same trees. A step no formula gives says its
+// kind (trace.Trace.Take): given (an input, a default, a factor the method
+// takes as 1), interpolated (Kumbhojkar's N_γ table, BR 470's K_p·tanδ).
+// The two-layer check works its numbers dry (computed, not recorded)
+// through the same steps to decide whether the lower layer is weaker,
+// then records them.
 //
 // # Cases
 //

@@ -47,6 +47,9 @@ type Result struct {
 	Values    []trace.Value // q_allow, q_a_b, q_a_s at the footing's own width
 }
 
+// fAllow is the allowable pressure of a row: the lower of the two.
+var fAllow = trace.Fn("min", trace.S("q_a_b"), trace.S("q_a_s"))
+
 // Crossing is a width where the bearing- and settlement-limited
 // pressures are equal, found by Brent's method (Brent 1973, ch. 4) on
 // q_a_b(B) − q_a_s(B) = 0 between the two rows that bracket it, to
@@ -139,32 +142,34 @@ func Table(in Input) (*Result, error) {
 		widths = append(widths, f.B)
 		r.Own = len(widths) - 1
 	}
-	r.Trace.Add(trace.Step{Symbol: "s_lim", Value: in.Limit, Unit: "mm", Note: "settlement limit"})
+	r.Trace.Take(trace.Step{Symbol: "s_lim", Kind: trace.Given, Value: in.Limit, Unit: "mm", Note: "settlement limit"})
 	for i, b := range widths {
 		cp, al, err := pressures(in, b)
 		if err != nil {
 			return nil, err
 		}
 		row := Row{B: b, L: cp.L, QBearing: cp.QRd, QSettle: al.Q, Drainage: cp.Drainage.String(), Iter: al.Iter, Own: i == r.Own}
-		row.QAllow, row.Governs = row.QBearing, "bearing"
+		row.Governs = "bearing"
 		if row.QSettle < row.QBearing {
-			row.QAllow, row.Governs = row.QSettle, "settlement"
-		}
-		if math.IsNaN(row.QAllow) || math.IsInf(row.QAllow, 0) {
-			return nil, fmt.Errorf("capacity: no finite allowable pressure at B = %g m", b)
+			row.Governs = "settlement"
 		}
 		cas := fmt.Sprintf("B = %.3g m", b)
 		if al.Result != nil && len(al.Result.Unverified) > 0 {
 			r.Trace.Warn(trace.Caution{Code: "not-verified", Severity: trace.SevWarning, Step: -1, Case: cas,
 				Message: cas + ": the settlement-limited pressure is not verified: " + strings.Join(al.Result.Unverified, "; ") + "; q_a_s leaves that layer out, so the allowable pressure may be unsafe."})
 		}
-		qb := r.Trace.Add(trace.Step{Symbol: "q_a_b", Value: row.QBearing, Unit: "kPa", Case: cas,
+		// q_a_b is the bearing check's result at this width (its working is
+		// the bearing block's), q_a_s the root of s(q) = s_lim
+		qb := r.Trace.Take(trace.Step{Symbol: "q_a_b", Kind: trace.Given, Value: row.QBearing, Unit: "kPa", Case: cas,
 			Note: fmt.Sprintf("bearing-limited allowable pressure (%s, %s governs)", ap.Name, row.Drainage)})
-		qs := r.Trace.Add(trace.Step{Symbol: "q_a_s", Value: row.QSettle, Unit: "kPa", Case: cas,
+		qs := r.Trace.Take(trace.Step{Symbol: "q_a_s", Kind: trace.Solved, Value: row.QSettle, Unit: "kPa", Case: cas,
 			Note: fmt.Sprintf("pressure giving s = s_lim (Brent, %d iterations, tolerance %.2g Pa)", al.Iter, al.Tol)})
-		r.Trace.Add(trace.Step{Symbol: "q_allow", Formula: trace.Fn("min", trace.S("q_a_b"), trace.S("q_a_s")),
+		row.QAllow = r.Trace.Eval(trace.Step{Symbol: "q_allow", Formula: fAllow,
 			Inputs: []trace.Value{{Symbol: "q_a_b", V: qb, Unit: "kPa"}, {Symbol: "q_a_s", V: qs, Unit: "kPa"}},
-			Value:  row.QAllow, Unit: "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})
+			Unit:   "kPa", Case: cas, Ref: refMin, Note: row.Governs + " governs"})
+		if err := r.Trace.Err(); err != nil {
+			return nil, fmt.Errorf("capacity: no finite allowable pressure at B = %g m: %w", b, err)
+		}
 		for _, s := range cp.Trace.Sources {
 			r.Trace.Cite(s)
 		}
@@ -238,7 +243,10 @@ func (r *Result) crossings(in Input) error {
 			return err
 		}
 		c.B, c.Iter = root.X, root.Iter
-		c.Q = math.Min(c.QB, c.QS)
+		c.Q, err = trace.Eval(fAllow, []trace.Value{{Symbol: "q_a_b", V: c.QB}, {Symbol: "q_a_s", V: c.QS}})
+		if err != nil || math.IsNaN(c.Q) || math.IsInf(c.Q, 0) {
+			return fmt.Errorf("capacity: no finite pressure at the crossing B = %g m (%v)", c.B, err)
+		}
 		r.Crossings = append(r.Crossings, c)
 	}
 	return nil

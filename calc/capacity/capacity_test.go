@@ -43,6 +43,14 @@ func TestTable(t *testing.T) {
 	if err := trace.Verify(r.Trace, 1e-9); err != nil {
 		t.Error(err)
 	}
+	// each step says how its value was reached: the settlement-limited
+	// pressure is a Brent root, q_allow its formula evaluated
+	for _, s := range r.Trace.Steps {
+		want := map[string]trace.Kind{"s_lim": trace.Given, "q_a_b": trace.Given, "q_a_s": trace.Solved, "q_allow": trace.ByFormula}[s.Symbol]
+		if s.Kind != want {
+			t.Errorf("%s %s: kind %v, want %v", s.Case, s.Symbol, s.Kind, want)
+		}
+	}
 	if len(r.Rows) != 4 || !r.Rows[r.Own].Own || r.Rows[r.Own].B != 2 {
 		t.Fatalf("rows %+v own %d", r.Rows, r.Own)
 	}
