@@ -15,8 +15,8 @@ import (
 // and settlement results at it (printed as those blocks print them).
 type SizeResult struct {
 	*size.Result
-	Ecc        size.Ecc
-	NoSettle   bool   // settlement = no
+	Ecc      size.Ecc
+	NoSettle bool // settlement = no
 }
 
 // sizeBlock runs the sizing engine for a size block. The footing it sizes
