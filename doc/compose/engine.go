@@ -387,6 +387,8 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return c.capacity(s, b)
 	case b.Diff != nil:
 		return c.differential(s, b)
+	case b.Size != nil:
+		return c.size(s, b)
 	}
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))
