@@ -318,7 +318,10 @@ func (k *calc) depth() (float64, error) {
 	case DepthFixed:
 		return k.take(cs, "z_inf", trace.Given, c.Depth.Z.V, "m", trace.Ref{}, "depth of influence, given"), nil
 	case DepthWidth:
-		kw := c.Depth.Widths.Or(widthsDefault(f))
+		kw := c.Depth.Widths.V
+		if !c.Depth.Widths.Set {
+			kw = k.widths(cs)
+		}
 		return k.eval(cs, "z_inf", fxZkB, []trace.Value{val("D", D, "m"), val("k", kw, ""), val("B", f.B, "m")}, "m",
 			trace.Ref{Source: Schmertmann1978, Clause: "depth of the strain influence diagram (2B to 4B)"}, "depth of influence: k·B below the base"), nil
 	}
@@ -367,9 +370,22 @@ func (k *calc) depth() (float64, error) {
 	return z, nil
 }
 
-// widthsDefault is 2 for L/B = 1 rising linearly to 4 at L/B = 10.
-func widthsDefault(f site.Footing) float64 {
-	return 2 + 2*(lb(f)-1)/9
+var fxWidths = trace.Add(trace.N(2), trace.Div(trace.Mul(trace.N(2), trace.Sub(trace.Div(trace.S("L"), trace.S("B")), trace.N(1))), trace.N(9)))
+
+// widths records k, the default depth of influence in widths below the
+// base: 2 for L/B = 1 rising linearly to 4 at L/B ≥ 10, the depth of
+// Schmertmann's strain influence diagram (the interpolation is common
+// practice).
+func (k *calc) widths(cs string) float64 {
+	f := k.f
+	ref := trace.Ref{Source: Schmertmann1978, Clause: "depth of the strain influence diagram (2B to 4B)"}
+	switch lb(f) {
+	case 1:
+		return k.take(cs, "k", trace.Tabulated, 2, "", ref, "depth of influence in widths: 2 for a square or circle; give widths to change it")
+	case 10:
+		return k.take(cs, "k", trace.Tabulated, 4, "", ref, "depth of influence in widths: 4 for a strip (L/B ≥ 10); give widths to change it")
+	}
+	return k.eval(cs, "k", fxWidths, []trace.Value{val("B", f.B, "m"), val("L", f.L, "m")}, "", ref, "depth of influence in widths: 2 for L/B = 1 rising linearly to 4 at L/B = 10 (common practice); give widths to change it")
 }
 
 // lb returns L/B capped to [1, 10] (a strip is 10).
