@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/stress"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // The stress table is computed sublayer by sublayer in Go (ccSettle,
@@ -68,5 +69,42 @@ func TestTableAgreesWithWorking(t *testing.T) {
 	}
 	if n < 50 {
 		t.Errorf("only %d steps compared", n)
+	}
+}
+
+// Each value that no formula gives says how it was reached, and every
+// formula step is one: the zone's depth is Brent's root, a layer's
+// consolidation the sum of its table column, the design life given,
+// Schmertmann's I_z0 read from his diagram; T_50 is the engine function
+// T_v(U) evaluated (0.197 for U = 0.5: Terzaghi 1943, the value quoted
+// in soil mechanics texts such as Craig's Soil Mechanics; from memory).
+func TestStepKinds(t *testing.T) {
+	kinds := func(r *settle.Result) map[string]trace.Step {
+		m := map[string]trace.Step{}
+		for _, s := range r.Trace.Steps {
+			if (s.Formula != nil) != (s.Kind == trace.ByFormula) {
+				t.Errorf("%s (%s): kind %v with formula %v", s.Symbol, s.Case, s.Kind, s.Formula)
+			}
+			if _, ok := m[s.Symbol]; !ok {
+				m[s.Symbol] = s
+			}
+		}
+		return m
+	}
+	r := mustCompute(t, fourLayerInput(40))
+	m := kinds(r)
+	for sym, want := range map[string]trace.Kind{"z_inf": trace.Solved, "s_c,1": trace.Summed, "t_life": trace.Given, "q": trace.Given, "q_net": trace.ByFormula, "T_50": trace.ByFormula} {
+		if got := m[sym].Kind; got != want {
+			t.Errorf("%s: kind %v, want %v", sym, got, want)
+		}
+	}
+	near(t, "T_50", m["T_50"].Value, 0.1967, 5e-5, "Terzaghi 1943")
+	sand := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18e3, E: site.Some(30e6)}}}
+	r = mustCompute(t, settle.Input{Ground: sand, Footing: site.Footing{Name: "Q", Shape: site.Square, B: 2, D: 1}, Q: site.Some(150 * kPa), Method: settle.Schmertmann})
+	m = kinds(r)
+	for sym, want := range map[string]trace.Kind{"I_z0": trace.Tabulated, "Sigma_Iz": trace.Summed, "C_1": trace.ByFormula, "E_s": trace.Given} {
+		if got := m[sym].Kind; got != want {
+			t.Errorf("Schmertmann %s: kind %v, want %v", sym, got, want)
+		}
 	}
 }
