@@ -183,18 +183,6 @@ func (t *Trace) Take(s Step) float64 {
 	return s.Value
 }
 
-// Add appends s as it is. Deprecated and transitional: engine packages are
-// moving to Eval (formula steps) and Take (all others); it goes when none
-// calls it.
-func (t *Trace) Add(s Step) float64 {
-	if s.Formula == nil && s.Kind == ByFormula {
-		s.Kind = Given
-	}
-	t.Steps = append(t.Steps, s)
-	t.Cite(s.Ref.Source)
-	return s.Value
-}
-
 // Err returns the first step the recorder could not evaluate, or nil.
 func (t *Trace) Err() error { return t.err }
 

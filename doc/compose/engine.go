@@ -90,12 +90,27 @@ func (o *engineOut) label(text string) {
 	o.add(&layout.Para{Pos: o.p, Runs: []layout.Run{{Text: text, Style: layout.BoldItalic}}})
 }
 
+// kindWords say how a step with no formula was reached (trace.Kind); a
+// given value says so in its own note.
+var kindWords = map[trace.Kind]string{
+	trace.Tabulated:    "tabulated",
+	trace.Interpolated: "interpolated",
+	trace.Solved:       "solved numerically",
+	trace.Summed:       "summed",
+}
+
 // stepLine prints one engine step: a value taken as given prints as an
 // input; a computed one as symbol = formula = values substituted =
 // result, the note and the reference beside it.
 func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	sym := eqn.Sym{Name: st.Symbol}
 	var note []layout.Run
+	if w := kindWords[st.Kind]; w != "" {
+		note = append(note, layout.Run{Text: w, Style: layout.Italic, Own: true})
+		if st.Note != "" {
+			note = append(note, txt(": "))
+		}
+	}
 	if st.Note != "" {
 		note = append(note, richText(st.Note, layout.Regular)...)
 	}
@@ -109,7 +124,7 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	if isUtil(st.Symbol, st.Unit) {
 		res = numberNode(units.Utilisation(st.Value)) // two decimals, as in the check line and the register
 	}
-	if st.Formula == nil {
+	if st.Formula == nil || st.Kind != trace.ByFormula {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
 	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note, Own: true}
