@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -61,7 +62,7 @@ type pageRef struct {
 type raised struct {
 	sheet  *eval.Sheet
 	block  *eval.Block
-	sev    layout.Severity
+	sev    severity.Level
 	text   string
 	where  string // case or step
 	anchor string

@@ -259,36 +259,13 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 // printed beside them; they are left out.
 var restates = map[string]bool{"governing": true, "governing-sliding": true}
 
-// engineSeverity is the box an engine caution prints in: the same word
-// (an unknown severity prints as the highest, WARNING).
-func engineSeverity(s trace.Severity) layout.Severity {
-	switch s {
-	case trace.SevNote:
-		return layout.SevNote
-	case trace.SevCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
-// alertSeverity is the box a "> [!WORD]" blockquote prints in.
-func alertSeverity(k sheet.Alert) layout.Severity {
-	switch k {
-	case sheet.AlertNote:
-		return layout.SevNote
-	case sheet.AlertCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
 		return
 	}
 	a := o.c.anchor("caution")
-	sev := engineSeverity(ca.Severity)
+	sev := ca.Severity
 	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	body := richText(ca.Message, layout.Regular)

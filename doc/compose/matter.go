@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -185,7 +186,7 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 	}
 	for _, r := range c.cautions {
-		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= layout.SevWarning {
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
 			continue
 		}
 		rows = append(rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
@@ -287,8 +288,15 @@ var standing = []string{
 	"The input fingerprint in every page footer identifies the inputs of this print. A print showing a different fingerprint was made from different inputs.",
 }
 
-// severityOrder states the order of the caution words (calc/trace.Severity).
-const severityOrder = "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): WARNING, a result that may be unsafe or is missing (a limit exceeded, a check not made, a layer left out); CAUTION, a method used near its limits or an assumption the engineer must confirm; NOTE, information (a choice made, a value assumed)."
+// severityOrder states the order of the caution words and what each
+// means (calc/severity), highest first.
+func severityOrder() string {
+	var parts []string
+	for l := severity.Warning; l >= severity.Note; l-- {
+		parts = append(parts, l.String()+", "+l.Meaning())
+	}
+	return "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): " + strings.Join(parts, "; ") + "."
+}
 
 // cautionSheet lists every engine caution with where it was raised, then
 // the standing cautions.
@@ -297,7 +305,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 	p := out.Pos
 	out.Blocks = append(out.Blocks, heading(p, 1, "Cautions"))
 	out.Blocks = append(out.Blocks, heading(p, 2, "Cautions raised by the engine"))
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder)}})
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder())}})
 	if len(c.cautions) == 0 {
 		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {
@@ -317,7 +325,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 	for _, s := range standing {
 		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: []layout.Run{txt(s)}}})
 	}
-	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: layout.SevCaution, Title: []layout.Run{txt("Standing cautions")},
+	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: severity.Caution, Title: []layout.Run{txt("Standing cautions")},
 		Body: []layout.Block{&layout.List{Pos: p, Items: items}}})
 	return out
 }

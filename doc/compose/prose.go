@@ -45,7 +45,7 @@ func (c *composer) block(s *eval.Sheet, b sheet.Block) []layout.Block {
 	case *sheet.CodeBlock:
 		return []layout.Block{&layout.Code{Pos: p, Text: b.Text}}
 	case *sheet.Caution:
-		return []layout.Block{&layout.Caution{Pos: p, Severity: alertSeverity(b.Kind), Body: c.blocks(s, b.Body)}}
+		return []layout.Block{&layout.Caution{Pos: p, Severity: b.Kind, Body: c.blocks(s, b.Body)}}
 	case *sheet.Quote:
 		c.quote++
 		defer func() { c.quote-- }()

@@ -10,6 +10,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -60,7 +61,7 @@ func TestGoldenBasic(t *testing.T) {
 			RightValue: eqn.Quantity("25", "mm"), Util: 0.5, OK: true, Anchor: "c1"},
 		&layout.Table{Pos: at(8), Header: []layout.Cell{{txt("a")}, {txt("b")}}, Align: []layout.Align{0, layout.AlignRight},
 			Rows: []layout.Row{{Pos: at(10), Cells: []layout.Cell{{txt("one")}, {txt("1.0")}}}}},
-		&layout.Caution{Pos: at(12), Severity: layout.SevWarning, Title: []layout.Run{txt("Watch")}, Body: []layout.Block{para(13, "Body text.")}},
+		&layout.Caution{Pos: at(12), Severity: severity.Warning, Title: []layout.Run{txt("Watch")}, Body: []layout.Block{para(13, "Body text.")}},
 		&layout.Drawing{Pos: at(15), W: 100, H: 40, Items: []draw.Item{
 			draw.Line{X1: 0, Y1: 0, X2: 100, Y2: 40, Paint: draw.Paint{Stroke: draw.Gray(0), Width: 1, Dash: []float64{2, 1}}},
 			draw.Text{X: 50, Y: 20, Face: fonts.Regular, Size: 8, Align: draw.Center, Text: "mid"}}},

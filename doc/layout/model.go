@@ -1,6 +1,7 @@
 package layout
 
 import (
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
@@ -217,31 +218,12 @@ type Check struct {
 	Anchor     string // the check register links here
 }
 
-// Severity is a caution's heading word, lowest first: NOTE, CAUTION,
-// WARNING (the order of calc/trace.Severity).
-type Severity uint8
-
-const (
-	SevNote Severity = iota
-	SevCaution
-	SevWarning
-)
-
-func (s Severity) String() string {
-	switch s {
-	case SevWarning:
-		return "WARNING"
-	case SevCaution:
-		return "CAUTION"
-	}
-	return "NOTE"
-}
-
-// Caution is a boxed caution: the word NOTE, CAUTION or WARNING, an
-// optional title, and body blocks. A long one may run onto the next page.
+// Caution is a boxed caution: the word of its Severity (NOTE, CAUTION or
+// WARNING, calc/severity), an optional title, and body blocks. A long one
+// may run onto the next page.
 type Caution struct {
 	Pos      source.Position
-	Severity Severity
+	Severity severity.Level
 	Title    []Run
 	Body     []Block
 }

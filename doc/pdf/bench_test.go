@@ -6,6 +6,7 @@ import (
 	"io"
 	"testing"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
@@ -47,7 +48,7 @@ func bigDoc(sheets int) layout.Doc {
 		}
 		bs = append(bs, &layout.Table{Pos: pos(699), Header: []layout.Cell{{txt("Layer")}, {txt("Description")}, {txt("γ (kN/m³)")}, {txt("c_u (kPa)")}},
 			Align: []layout.Align{0, 0, layout.AlignRight, layout.AlignRight}, Rows: rows})
-		bs = append(bs, &layout.Caution{Pos: pos(800), Severity: layout.SevNote, Body: []layout.Block{&layout.Para{Pos: pos(801), Runs: []layout.Run{txt(prose)}}}})
+		bs = append(bs, &layout.Caution{Pos: pos(800), Severity: severity.Note, Body: []layout.Block{&layout.Para{Pos: pos(801), Runs: []layout.Run{txt(prose)}}}})
 		f := d.Sheets[1].Fields
 		f.Calc = fmt.Sprintf("C-%02d", s+1)
 		out = append(out, layout.Sheet{Pos: pos(1), Fields: f, Blocks: bs})

@@ -9,6 +9,7 @@ import (
 	"image/png"
 	"math"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -205,10 +206,10 @@ func demoDoc(longTable int) layout.Doc {
 			Util: 1.105, OK: false, Note: []layout.Run{txt("settlement limit for the frame [S1]")}},
 		&layout.Check{Pos: at(29), Anchor: "chk-ecc", Left: sym("e_B"), LeftValue: q("0.10", "m"), Rel: "<=", Right: eqn.Frac{Num: sym("B"), Den: eqn.Num{Text: "6"}}, RightValue: q("0.40", "m"),
 			Util: 0.25, OK: true},
-		&layout.Caution{Pos: at(31), Severity: layout.SevWarning, Title: []layout.Run{txt("Settlement exceeds the limit")},
+		&layout.Caution{Pos: at(31), Severity: severity.Warning, Title: []layout.Run{txt("Settlement exceeds the limit")},
 			Body: []layout.Block{para(32, txt("The immediate settlement alone exceeds the 20 mm limit. Consider widening the footing to 2.8 m or founding on the dense sand at 5.0 m; the consolidation settlement of the clay has not yet been added."))}},
-		&layout.Caution{Pos: at(34), Severity: layout.SevNote, Body: []layout.Block{para(35, txt("Short-term (undrained) case is on sheet C-03."))}},
-		&layout.Caution{Pos: at(36), Severity: layout.SevCaution, Title: []layout.Run{txt("Method near its limits")},
+		&layout.Caution{Pos: at(34), Severity: severity.Note, Body: []layout.Block{para(35, txt("Short-term (undrained) case is on sheet C-03."))}},
+		&layout.Caution{Pos: at(36), Severity: severity.Caution, Title: []layout.Run{txt("Method near its limits")},
 			Body: []layout.Block{para(37, txt("Load inclination H/V = 0.19: inclination factors from EN 1997-1 Annex D are approximate beyond 0.2."))}},
 		&layout.Heading{Pos: at(39), Level: 2, Runs: []layout.Run{txt("Footing sketch")}},
 		sketch(),
