@@ -113,13 +113,13 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	if st.Formula == nil {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
-	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note, Own: true}
+	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: fromExpr(st.Formula, exprOptions{Number: constant}), Result: res, Note: note, Own: true}
 	if _, lone := st.Formula.(trace.Sym); !lone && len(st.Inputs) > 0 {
 		vals := map[string]trace.Value{}
 		for _, in := range st.Inputs {
 			vals[in.Symbol] = in
 		}
-		stmt.Subst = eqn.FromExpr(st.Formula, eqn.Options{Number: constant, Subst: func(name string) (eqn.Node, bool) {
+		stmt.Subst = fromExpr(st.Formula, exprOptions{Number: constant, Subst: func(name string) (eqn.Node, bool) {
 			v, ok := vals[name]
 			if !ok {
 				return nil, false

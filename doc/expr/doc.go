@@ -65,8 +65,8 @@
 //
 // pi is the constant π; pi, check and the function names cannot be
 // assigned; names with "." are block results and cannot be assigned either.
-// SplitSymbol and Greek give the typesetter a symbol's base, primes and
-// subscript.
+// How a name prints (base, primes, subscript, Greek letters) is
+// doc/notation's.
 //
 // # Dimensions
 //

@@ -32,8 +32,9 @@
 // Text is a list of Runs, each in one Style (Regular, Bold, Italic,
 // BoldItalic, Mono), optionally raised or lowered (Sup, Sub), optionally a
 // link to a named anchor, or an inline formula (Math). Formulas are
-// eqn.Nodes: build them with the eqn package (eqn.FromExpr converts the
-// engine's trace.Expr, eqn.Quantity and eqn.Unit print values with units).
+// eqn.Nodes: build them with the eqn package (eqn.Quantity and eqn.Unit
+// print values with units; compose converts the engine's formulas into
+// them, so the layout knows no engine type).
 //
 // # Output
 //

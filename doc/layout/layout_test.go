@@ -11,7 +11,6 @@ import (
 	"testing"
 
 	"github.com/plinth-calc/plinth/calc/severity"
-	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
@@ -48,14 +47,15 @@ func goldenPages(t *testing.T, name string, p *layout.Pages) {
 }
 
 func TestGoldenBasic(t *testing.T) {
-	S, N := trace.S, trace.N
-	e := trace.Div(trace.Mul(S("q"), S("B")), trace.Fn("sqrt", trace.Add(S("E'"), N(1))))
+	// q·B / √(E′ + 1), as compose converts the engine's formula
+	e := eqn.Frac{Num: eqn.Row{eqn.Sym{Name: "q"}, eqn.Op{Text: "·"}, eqn.Sym{Name: "B"}},
+		Den: eqn.Sqrt{X: eqn.Row{eqn.Sym{Name: "E'"}, eqn.Op{Text: "+"}, eqn.Num{Text: "1"}}}}
 	doc := sheet(
 		&layout.Heading{Pos: at(2), Level: 1, Anchor: "top", Runs: []layout.Run{txt("Loads")}},
 		&layout.Para{Pos: at(3), Runs: []layout.Run{txt("Plain, "), {Text: "bold", Style: layout.Bold}, txt(", "),
 			{Text: "italic", Style: layout.Italic}, txt(" and "), {Text: "mono", Style: layout.Mono}, txt(" with a "), {Text: "link", Link: "top"},
 			txt(" and x"), {Text: "2", Shift: layout.Sup}, txt(".")}},
-		&layout.Statement{Pos: at(5), Symbol: eqn.Sym{Name: "s"}, Expr: eqn.FromExpr(e, eqn.Options{}), Result: eqn.Quantity("12.5", "mm"),
+		&layout.Statement{Pos: at(5), Symbol: eqn.Sym{Name: "s"}, Expr: e, Result: eqn.Quantity("12.5", "mm"),
 			Note: []layout.Run{txt("settlement")}, Ref: "Ref 1"},
 		&layout.Check{Pos: at(6), Left: eqn.Sym{Name: "s"}, LeftValue: eqn.Quantity("12.5", "mm"), Rel: "<=", Right: eqn.Sym{Name: "s_lim"},
 			RightValue: eqn.Quantity("25", "mm"), Util: 0.5, OK: true, Anchor: "c1"},

@@ -36,7 +36,7 @@ func bigDoc(sheets int) layout.Doc {
 			bs = append(bs, &layout.Heading{Pos: pos(sec * 100), Level: 1, Runs: []layout.Run{txt(fmt.Sprintf("Section %d", sec+1))}})
 			bs = append(bs, &layout.Para{Pos: pos(sec*100 + 1), Runs: []layout.Run{txt(prose + prose), {Text: "Bold words", Style: layout.Bold}, txt(" and " + prose)}})
 			for i := 0; i < 14; i++ {
-				bs = append(bs, &layout.Statement{Pos: pos(sec*100 + 2 + i), Symbol: sym(fmt.Sprintf("q_ult_%d", i)), Expr: eqn.FromExpr(e, eqn.Options{}),
+				bs = append(bs, &layout.Statement{Pos: pos(sec*100 + 2 + i), Symbol: sym(fmt.Sprintf("q_ult_%d", i)), Expr: conv(e, nil),
 					Subst: v.subst(e), Result: q("473", "kPa"), Note: []layout.Run{txt("drained bearing resistance")}, Ref: "EN 1997-1 D.4"})
 			}
 			bs = append(bs, &layout.Check{Pos: pos(sec*100 + 20), Left: sym("V_d"), LeftValue: q("1883", "kN"), Rel: "<=", Right: sym("R_d"),

@@ -29,12 +29,82 @@ func sym(s string) eqn.Node { return eqn.Sym{Name: s} }
 
 type vals map[string]eqn.Node
 
-func (v vals) subst(e trace.Expr) eqn.Node {
-	return eqn.FromExpr(e, eqn.Options{Subst: func(n string) (eqn.Node, bool) { x, ok := v[n]; return x, ok }})
+func (v vals) subst(e trace.Expr) eqn.Node { return conv(e, v) }
+
+// conv typesets an engine formula for the demo, with the values of v put
+// in for its symbols: a small stand-in for compose's converter
+// (parentheses by precedence, stacked fractions, powers as superscripts,
+// tan² for the power of a function, √ for sqrt, × between values), enough
+// to give the writer every kind of formula node.
+func conv(e trace.Expr, v vals) eqn.Node {
+	n, _ := convPrec(e, v)
+	return n
+}
+
+// convPrec converts e and says how tightly it binds: 1 sum, 2 product,
+// 3 negation, 4 fraction, 5 power, 6 atom.
+func convPrec(e trace.Expr, v vals) (eqn.Node, int) {
+	wrap := func(n eqn.Node, p, min int) eqn.Node {
+		if p < min {
+			return eqn.Paren(n)
+		}
+		return n
+	}
+	switch e := e.(type) {
+	case trace.Sym:
+		if x, ok := v[e.Name]; ok {
+			if _, row := x.(eqn.Row); row {
+				return x, 2
+			}
+			return x, 6
+		}
+		return eqn.Sym{Name: e.Name}, 6
+	case trace.Num:
+		if e.Unit == "deg" {
+			return eqn.Num{Text: eqn.FormatNumber(e.V*180/math.Pi, 6) + "°"}, 6
+		}
+		return eqn.Number(e.V, 6), 6
+	case trace.Neg:
+		x, p := convPrec(e.X, v)
+		return eqn.Row{eqn.Op{Text: "−"}, wrap(x, p, 4)}, 3
+	case trace.Call:
+		var args []eqn.Node
+		for _, a := range e.Args {
+			args = append(args, conv(a, v))
+		}
+		if e.Fn == "sqrt" && len(args) == 1 {
+			return eqn.Sqrt{X: args[0]}, 6
+		}
+		return eqn.Func{Name: e.Fn, Args: args}, 6
+	case trace.Op:
+		l, lp := convPrec(e.L, v)
+		r, rp := convPrec(e.R, v)
+		switch e.Op {
+		case '+':
+			return eqn.Row{l, eqn.Op{Text: "+"}, r}, 1
+		case '-':
+			return eqn.Row{l, eqn.Op{Text: "−"}, wrap(r, rp, 2)}, 1
+		case '*':
+			sign := "·"
+			if v != nil {
+				sign = "×"
+			}
+			return eqn.Row{wrap(l, lp, 2), eqn.Op{Text: sign}, wrap(r, rp, 2)}, 2
+		case '/':
+			return eqn.Frac{Num: l, Den: r}, 4
+		case '^':
+			if f, ok := l.(eqn.Func); ok && f.Name != "sqrt" {
+				f.Sup = r
+				return f, 6
+			}
+			return eqn.Script{Base: wrap(l, lp, 6), Sup: r}, 5
+		}
+	}
+	return eqn.Text{Text: "?"}, 6
 }
 
 func stmt(line int, name string, e trace.Expr, v vals, result eqn.Node, note string, ref string) *layout.Statement {
-	s := &layout.Statement{Pos: at(line), Symbol: sym(name), Expr: eqn.FromExpr(e, eqn.Options{}), Result: result, Ref: ref}
+	s := &layout.Statement{Pos: at(line), Symbol: sym(name), Expr: conv(e, nil), Result: result, Ref: ref}
 	if v != nil {
 		s.Subst = v.subst(e)
 	}
