@@ -106,7 +106,8 @@ func MarkChanges(pages *layout.Pages, ch *Changes) {
 	for _, pg := range pages.Pages {
 		for _, b := range pg.Boxes {
 			walk(b, func(b *layout.Box) bool {
-				k := key{b.Pos.Path, b.Pos.Line}
+				p := b.Pos.Pos()
+				k := key{p.Path, p.Line}
 				if _, ok := values[k]; ok {
 					count[k]++
 					return true
@@ -134,7 +135,8 @@ func MarkChanges(pages *layout.Pages, ch *Changes) {
 	for _, pg := range pages.Pages {
 		for _, b := range pg.Boxes {
 			walk(b, func(b *layout.Box) bool {
-				k := key{b.Pos.Path, b.Pos.Line}
+				p := b.Pos.Pos()
+				k := key{p.Path, p.Line}
 				vs, ok := values[k]
 				if !ok {
 					return false

@@ -1,6 +1,7 @@
 package compose
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -12,8 +13,9 @@ import (
 // block's many boxes only the first and those printing a changed value;
 // title blocks and boxes of other lines never.
 func TestMarkChanges(t *testing.T) {
+	f := source.NewFile("a.md", []byte(strings.Repeat("    x = 1\n", 10)))
 	at := func(line int, kind string, text ...string) *layout.Box {
-		b := &layout.Box{Kind: kind, Pos: source.Position{Path: "a.md", Line: line, Col: 3}, H: 12}
+		b := &layout.Box{Kind: kind, Pos: source.Span{File: f, Start: f.LineStart(line) + 2}, H: 12}
 		for _, s := range text {
 			b.Items = append(b.Items, draw.Text{Text: s})
 		}

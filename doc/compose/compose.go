@@ -149,7 +149,7 @@ func (c *composer) appendixSheet() layout.Sheet {
 // sheet converts one evaluated sheet.
 func (c *composer) sheet(s *eval.Sheet) layout.Sheet {
 	out := layout.Sheet{
-		Pos:    source.Position{Path: s.Src.File.Path, Line: 1, Col: 1},
+		Pos:    source.Span{File: s.Src.File},
 		Fields: c.fields(s.Meta),
 	}
 	c.level = 0
@@ -226,13 +226,6 @@ func (c *composer) fields(m sheet.Meta) layout.Fields {
 	return f
 }
 
-// pos is the position of a span (zero for an empty span).
-func pos(sp source.Span) source.Position {
-	if sp.File == nil {
-		return source.Position{}
-	}
-	return sp.Pos()
-}
 
 func plural(n int, word string) string {
 	if n == 1 {

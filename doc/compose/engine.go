@@ -19,7 +19,7 @@ type engineOut struct {
 	c       *composer
 	s       *eval.Sheet
 	b       *eval.Block
-	p       source.Position
+	p       source.Span
 	blocks  []layout.Block
 	apx     []layout.Block    // working moved to the appendix (detail = governing)
 	printed map[string]bool   // steps printed in full (stepKey)
@@ -33,7 +33,7 @@ type shownKey struct {
 
 func (c *composer) engineOut(s *eval.Sheet, b *eval.Block) *engineOut {
 	c.refSeen = map[trace.Ref]bool{} // each citation once per block
-	o := &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+	o := &engineOut{c: c, s: s, b: b, p: b.Span, shown: map[shownKey]bool{}}
 	o.add(&layout.Anchor{Pos: o.p, Name: blockAnchor(b)})
 	return o
 }
@@ -94,7 +94,7 @@ func (o *engineOut) label(text string) {
 // stepLine prints one engine step: a value taken as given prints as an
 // input; a computed one as symbol = formula = values substituted =
 // result, the note and the reference beside it.
-func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
+func (c *composer) stepLine(p source.Span, st trace.Step) layout.Block {
 	sym := eqn.Sym{Name: st.Symbol}
 	var note []layout.Run
 	if st.Note != "" {
@@ -306,7 +306,7 @@ func (c *composer) sources(b *eval.Block) {
 
 // checkBlock prints an engine check (one that entered the check register)
 // with both sides, named by their symbols.
-func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
+func (c *composer) checkBlock(p source.Span, ch *eval.Check, left, right string) layout.Block {
 	if !ch.HasUtil() {
 		// No utilisation (a check not verified, with no resistance): the
 		// relation and the verdict on one line, as for a calc check.

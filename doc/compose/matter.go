@@ -61,7 +61,7 @@ func (c *composer) checkRegister() layout.Sheet {
 		}
 		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
 		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
+		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(c.checkMath(ch)...),
 			cell(c.noteRuns(ch.Sheet, ch.Note)...),
@@ -127,14 +127,14 @@ func (c *composer) inputRegister() layout.Sheet {
 			if a := c.inputs[y]; a != "" {
 				at.Link = a
 			}
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(layout.Run{Math: eqn.Sym{Name: y.Name}}), cell(val), cell(note...), cell(at),
 			}})
 		}
 		for _, a := range order {
 			y := first[a]
 			block, _, _ := strings.Cut(y.Name, ".")
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(user(block + ".*")), cell(txt(plural(tables[a], "value"))),
 				cell(txt("every cell of the table of " + block + ", with the source given in its row; see the table")),
 				cell(layout.Run{Text: where(y.Span), Link: a, Own: true}),
@@ -170,14 +170,14 @@ func (c *composer) assumedValues() []layout.Block {
 				if st.Symbol != "W" && !strings.Contains(st.Note, "assumed") {
 					continue
 				}
-				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
 					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
 					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
 					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
 				}})
 			}
 			for _, st := range assumedSteps(b) {
-				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
 					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
 					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
 					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
@@ -189,7 +189,7 @@ func (c *composer) assumedValues() []layout.Block {
 		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
 			continue
 		}
-		rows = append(rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+		rows = append(rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
 			cell(txt("—")), cell(txt("—")), cell(richText(r.where+": "+r.text, layout.Regular)...),
 			cell(layout.Run{Text: sheetLabel(r.sheet), Link: r.anchor, Own: true}),
 		}})
@@ -314,7 +314,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 		list := append([]raised(nil), c.cautions...)
 		sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
 		for i, r := range list {
-			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+			t.Rows = append(t.Rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
 				cell(txt(fmt.Sprint(i + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...),
 				cell(layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}),
 			}})

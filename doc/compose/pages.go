@@ -1,9 +1,7 @@
 package compose
 
 import (
-	"errors"
 	"fmt"
-	"unicode/utf8"
 
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -31,10 +29,10 @@ func Pages(res *eval.Result, opt Options) (pages *layout.Pages, diags source.Lis
 	}
 	doc.Progress = c.opt.Progress
 	for pass := 0; pass < 3; pass++ {
-		var err error
-		pages, err = layout.Document(doc)
-		if err != nil {
-			c.layoutErrors(err)
+		var ld source.List
+		pages, ld = layout.Document(doc)
+		if ld.HasErrors() {
+			c.diags.Append(ld)
 			c.diags.Sort()
 			return nil, c.diags
 		}
@@ -82,35 +80,6 @@ func (c *composer) fillPages(pages *layout.Pages) bool {
 		}
 	}
 	return changed
-}
-
-// layoutErrors turns layout problems into diagnostics.
-func (c *composer) layoutErrors(err error) {
-	var probs layout.Problems
-	if !errors.As(err, &probs) {
-		c.diags = append(c.diags, source.Diagnostic{Path: c.res.Src.Dir, Msg: err.Error()})
-		return
-	}
-	for _, p := range probs {
-		c.diags = append(c.diags, source.Diagnostic{Span: c.spanAt(p.Pos), Path: p.Pos.Path, Msg: p.Msg})
-	}
-}
-
-// spanAt finds the source span of a layout position (a zero-width span;
-// zero when the file is not one of the package's).
-func (c *composer) spanAt(p source.Position) source.Span {
-	for _, f := range c.res.Src.Files {
-		if f.Path != p.Path || p.Line < 1 || p.Line > f.LineCount() {
-			continue
-		}
-		off := f.LineStart(p.Line)
-		for col := 1; col < p.Col && off < len(f.Text); col++ {
-			_, n := utf8.DecodeRune(f.Text[off:])
-			off += n
-		}
-		return source.Span{File: f, Start: off, End: off}
-	}
-	return source.Span{}
 }
 
 // fillRefs writes the page of each referenced anchor into its run and

@@ -272,7 +272,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		}
 		// the page run is registered once the cell is complete (appends move it)
 		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
+		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
 	}
 	return t
 }

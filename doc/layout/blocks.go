@@ -19,7 +19,7 @@ var bodyStyle = textStyle{size: bodySize, lead: bodyLead, color: ink}
 
 // linePieces turns set lines into one piece each, keeping the first two
 // and the last two lines of a paragraph together.
-func linePieces(kind string, pos source.Position, lines []line, width, before float64) []*piece {
+func linePieces(kind string, pos source.Span, lines []line, width, before float64) []*piece {
 	ps := make([]*piece, len(lines))
 	for i, ln := range lines {
 		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.items}
@@ -43,7 +43,7 @@ func (e *engine) para(p *Para, width float64) []*piece {
 func (e *engine) heading(h *Heading, width float64) []*piece {
 	lvl := h.Level
 	if lvl < 1 || lvl > 3 {
-		e.probs.add(h.Pos, "heading level %d: want 1, 2 or 3", h.Level)
+		e.diags.Add(h.Pos, "heading level %d: want 1, 2 or 3", h.Level)
 		lvl = min(max(lvl, 1), 3)
 	}
 	number := h.Number
@@ -193,7 +193,7 @@ func (e *engine) code(c *Code, width float64) []*piece {
 }
 
 // caption sets a caption centred under (or over) a figure.
-func (e *engine) caption(runs []Run, width float64, pos source.Position) (items []draw.Item, h float64) {
+func (e *engine) caption(runs []Run, width float64, pos source.Span) (items []draw.Item, h float64) {
 	if len(runs) == 0 {
 		return nil, 0
 	}
@@ -210,7 +210,7 @@ func (e *engine) image(im *Image, width float64) []*piece {
 	// enough here.
 	cfg, err := media.Header(im.Data)
 	if err != nil {
-		e.probs.add(im.Pos, "image %v", err)
+		e.diags.Add(im.Pos, "image %v", err)
 		return nil
 	}
 	w := float64(cfg.Width) * 0.75 // 96 px per inch
@@ -236,7 +236,7 @@ func (e *engine) image(im *Image, width float64) []*piece {
 
 func (e *engine) drawing(d *Drawing, width float64) []*piece {
 	if d.W <= 0 || d.H <= 0 {
-		e.probs.add(d.Pos, "drawing has no size (%.1f × %.1f pt)", d.W, d.H)
+		e.diags.Add(d.Pos, "drawing has no size (%.1f × %.1f pt)", d.W, d.H)
 		return nil
 	}
 	s := math.Min(1, width/d.W)
@@ -249,7 +249,7 @@ func (e *engine) drawing(d *Drawing, width float64) []*piece {
 		}
 		if t, ok := it.(draw.Text); ok {
 			if !t.Face.Valid() {
-				e.probs.add(d.Pos, "drawing text %q has no valid face", t.Text)
+				e.diags.Add(d.Pos, "drawing text %q has no valid face", t.Text)
 				continue
 			}
 			t.Text = e.checkGlyphs(t.Text, t.Face, d.Pos)

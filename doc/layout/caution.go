@@ -14,7 +14,7 @@ import (
 func (e *engine) caution(c *Caution, width float64) []*piece {
 	sev := c.Severity
 	if !sev.Valid() {
-		e.probs.add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", int(sev))
+		e.diags.Add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", int(sev))
 		sev = severity.Warning
 	}
 	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 5.0

@@ -1,5 +1,5 @@
 // Package layout sets plinth's calculation packages on pages: plinth's own
-// layout engine, in points, producing a tree of boxes with source positions
+// layout engine, in points, producing a tree of boxes with source spans
 // before any PDF byte is written (doc/pdf draws the result).
 //
 // # Input: the contract
@@ -9,8 +9,8 @@
 // optional page Template (nil = built-in A4), and Sheets. Each Sheet starts
 // on a new page; its Fields fill the title block (a blank Checked prints
 // NOT CHECKED), its Bookmark names its one PDF bookmark, and its Blocks are
-// the body. Every block carries the source.Position that problems with it
-// are reported at.
+// the body. Every block carries the source.Span (Pos) that problems with
+// it are reported at.
 //
 // Blocks (all used as pointers):
 //
@@ -38,13 +38,13 @@
 //
 // # Output
 //
-// Document returns Pages: each Page holds Boxes (kind, source position,
+// Document returns Pages: each Page holds Boxes (kind, source span,
 // rectangle on the page, draw.Items relative to the box's top-left corner,
 // kids), and the Outline holds one bookmark per sheet. Pages.Dump writes the tree as text for golden
 // tests. Problems — a character missing from the fonts, a link to an anchor
 // that does not exist, an anchor defined twice, a calculation line taller
 // than a page, an image that is not PNG or JPEG — are collected and
-// returned together as a Problems error, sorted by position.
+// returned together as a source.List, sorted, each at its span.
 //
 // # Rules of the page
 //

@@ -12,7 +12,7 @@ import (
 // engine carries the state of one Document call.
 type engine struct {
 	tpl   *Template
-	probs Problems
+	diags source.List
 	// the text column of every page
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
@@ -32,23 +32,23 @@ type piece struct {
 }
 
 // Document lays out doc: every sheet's body into pages, then the title
-// block, variant banner and footer on each page. Problems (with their
-// source positions) come back as a Problems error; no pages are returned
-// then.
-func Document(doc Doc) (pages *Pages, err error) {
+// block, variant banner and footer on each page. Problems come back as
+// diagnostics at the source span of the block they concern, every one
+// found, sorted; no pages are returned then.
+func Document(doc Doc) (pages *Pages, diags source.List) {
 	defer func() {
 		if r := recover(); r != nil { // a defect here must not take the caller down
-			pages, err = nil, fmt.Errorf("layout: internal error: %v", r)
+			pages, diags = nil, internal(doc, fmt.Sprintf("layout: internal error: %v", r))
 		}
 	}()
 	if len(doc.Sheets) == 0 {
-		return nil, Problems{{Msg: "layout: no sheets to lay out"}}
+		return nil, internal(doc, "layout: no sheets to lay out")
 	}
 	tpl := doc.Template
 	if tpl == nil {
 		var err error
 		if tpl, err = BuiltinTemplate("a4"); err != nil {
-			return nil, err
+			return nil, internal(doc, err.Error())
 		}
 	}
 	e := &engine{tpl: tpl}
@@ -61,7 +61,7 @@ func Document(doc Doc) (pages *Pages, err error) {
 	out := &Pages{Info: doc.Info}
 	laid, err := e.sheets(doc.Sheets)
 	if err != nil {
-		return nil, err
+		return nil, internal(doc, err.Error())
 	}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
@@ -83,10 +83,21 @@ func Document(doc Doc) (pages *Pages, err error) {
 	}
 	e.furnish(doc, out, banner)
 	e.checkLinks(out)
-	if len(e.probs) > 0 {
-		return nil, e.probs.sorted()
+	if e.diags.HasErrors() {
+		e.diags.Sort()
+		return nil, e.diags
 	}
 	return out, nil
+}
+
+// internal is a problem of the layout itself, not of a block: reported
+// at the document's first file (its path only), so it still says where.
+func internal(doc Doc, msg string) source.List {
+	d := source.Diagnostic{Msg: msg}
+	if len(doc.Sheets) > 0 && doc.Sheets[0].Pos.File != nil {
+		d.Path = doc.Sheets[0].Pos.File.Path
+	}
+	return source.List{d}
 }
 
 // sheets lays out the body of every sheet into pieces, the sheets in
@@ -94,7 +105,7 @@ func Document(doc Doc) (pages *Pages, err error) {
 // own copy of the engine state; the problems are gathered in sheet order.
 func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
 	laid := make([][]*piece, len(shs))
-	probs := make([]Problems, len(shs))
+	diags := make([]source.List, len(shs))
 	fails := make([]error, len(shs))
 	workers := min(runtime.GOMAXPROCS(0), len(shs))
 	next := make(chan int)
@@ -111,9 +122,9 @@ func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
 						}
 					}()
 					se := *e
-					se.probs, se.num, se.listDepth = nil, [4]int{}, 0
+					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
 					laid[si] = se.blocks(shs[si].Blocks, se.bodyW)
-					probs[si] = se.probs
+					diags[si] = se.diags
 				}()
 			}
 		}()
@@ -127,7 +138,7 @@ func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
 		if fails[si] != nil {
 			return nil, fails[si]
 		}
-		e.probs = append(e.probs, probs[si]...)
+		e.diags = append(e.diags, diags[si]...)
 	}
 	return laid, nil
 }
@@ -169,18 +180,18 @@ func (e *engine) block(b Block, width float64) []*piece {
 		return []*piece{{box: &Box{Kind: "page-break", Pos: b.Pos}, brk: true}}
 	case *Anchor:
 		if b.Name == "" {
-			e.probs.add(b.Pos, "anchor with no name")
+			e.diags.Add(b.Pos, "anchor with no name")
 		}
 		return []*piece{{box: &Box{Kind: "anchor", Pos: b.Pos, W: width, Items: []draw.Item{draw.Anchor{Name: b.Name}}}, keep: true}}
 	case nil:
 		return nil
 	}
-	e.probs.add(b.Position(), "layout: unknown block %T", b)
+	e.diags.Add(b.Where(), "layout: unknown block %T", b)
 	return nil
 }
 
 // paginate stacks pieces into pages for sheet si.
-func (e *engine) paginate(si int, pos source.Position, ps []*piece, out *Pages) {
+func (e *engine) paginate(si int, pos source.Span, ps []*piece, out *Pages) {
 	var page *Page
 	y, empty := 0.0, true
 	bottom := e.bodyY + e.bodyH
@@ -232,7 +243,7 @@ func (e *engine) paginate(si int, pos source.Position, ps []*piece, out *Pages) 
 			}
 		}
 		if p.box.H > e.bodyH+1e-6 {
-			e.probs.add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
+			e.diags.Add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
 		}
 		place(p, p.before)
 	}
@@ -278,10 +289,10 @@ func shift(ps []*piece, dx float64) {
 // checkLinks reports duplicate anchors and links to anchors that do not
 // exist (the PDF writer would otherwise write a dangling link).
 func (e *engine) checkLinks(out *Pages) {
-	anchors := map[string]source.Position{}
+	anchors := map[string]source.Span{}
 	type ref struct {
 		target string
-		pos    source.Position
+		pos    source.Span
 	}
 	var links []ref
 	for _, pg := range out.Pages {
@@ -291,7 +302,7 @@ func (e *engine) checkLinks(out *Pages) {
 					switch it := it.(type) {
 					case draw.Anchor:
 						if prev, dup := anchors[it.Name]; dup {
-							e.probs.add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
+							e.diags.Add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
 						} else {
 							anchors[it.Name] = b.Pos
 						}
@@ -304,7 +315,7 @@ func (e *engine) checkLinks(out *Pages) {
 	}
 	for _, l := range links {
 		if _, ok := anchors[l.target]; !ok {
-			e.probs.add(l.pos, "link to %q, which is not an anchor in this document", l.target)
+			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.target)
 		}
 	}
 }

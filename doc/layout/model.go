@@ -48,16 +48,16 @@ type Fields struct {
 
 // Sheet is one calc sheet: its title block fields and its body.
 type Sheet struct {
-	Pos      source.Position
+	Pos      source.Span
 	Fields   Fields
 	Bookmark string // the sheet's PDF bookmark; "" = Calc and Title
 	Blocks   []Block
 }
 
 // Block is one piece of a sheet's body. Every block carries the source
-// position problems are reported at.
+// span (Pos) problems are reported at; Where returns it.
 type Block interface {
-	Position() source.Position
+	Where() source.Span
 	isBlock()
 }
 
@@ -112,7 +112,7 @@ const (
 // next number in the sheet (1, 1.1, 1.1.1); NoNumber prints none. A
 // heading is kept on the page with what follows it.
 type Heading struct {
-	Pos      source.Position
+	Pos      source.Span
 	Level    int
 	Number   string
 	NoNumber bool
@@ -122,14 +122,14 @@ type Heading struct {
 
 // Para is a paragraph of text.
 type Para struct {
-	Pos  source.Position
+	Pos  source.Span
 	Runs []Run
 }
 
 // List is a bullet list, or a numbered one from Start (0 means 1). Each
 // item is a list of blocks; lists nest.
 type List struct {
-	Pos     source.Position
+	Pos     source.Span
 	Ordered bool
 	Start   int
 	Items   [][]Block
@@ -140,7 +140,7 @@ type Cell = []Run
 
 // Row is a table body row.
 type Row struct {
-	Pos   source.Position
+	Pos   source.Span
 	Cells []Cell
 }
 
@@ -148,7 +148,7 @@ type Row struct {
 // page the table runs onto. Column widths follow the content; cell text
 // wraps. Align gives each column's alignment (missing = left).
 type Table struct {
-	Pos     source.Position
+	Pos     source.Span
 	Header  []Cell
 	Rows    []Row
 	Align   []Align
@@ -158,7 +158,7 @@ type Table struct {
 // Image is a PNG or JPEG picture, scaled to fit the text width (and at
 // most Width points wide when Width > 0), with an optional caption below.
 type Image struct {
-	Pos     source.Position
+	Pos     source.Span
 	Data    []byte
 	Width   float64
 	Caption []Run
@@ -166,7 +166,7 @@ type Image struct {
 
 // Code is preformatted text in the monospaced face on a shaded ground.
 type Code struct {
-	Pos  source.Position
+	Pos  source.Span
 	Text string
 }
 
@@ -178,7 +178,7 @@ type Code struct {
 // when the formula leaves no room. A statement never splits across pages;
 // a formula too wide for the column wraps at its top-level = or +.
 type Statement struct {
-	Pos    source.Position
+	Pos    source.Span
 	Symbol eqn.Node
 	Expr   eqn.Node // the formula in symbols
 	Subst  eqn.Node // the formula with values substituted
@@ -191,7 +191,7 @@ type Statement struct {
 
 // Input is a given value: Symbol = Value, with its note and reference.
 type Input struct {
-	Pos    source.Position
+	Pos    source.Span
 	Symbol eqn.Node
 	Value  eqn.Node
 	Note   []Run
@@ -205,7 +205,7 @@ type Input struct {
 // supports them). Rel is one of ≤ ≥ < > = ≠ (or <= >= !=): the relation
 // the printed sides stand in, so a failing ≤ check is given as >.
 type Check struct {
-	Pos        source.Position
+	Pos        source.Span
 	Left       eqn.Node // the left symbol, e.g. q_Ed
 	LeftValue  eqn.Node // its value with unit
 	Rel        string
@@ -222,7 +222,7 @@ type Check struct {
 // WARNING, calc/severity), an optional title, and body blocks. A long one
 // may run onto the next page.
 type Caution struct {
-	Pos      source.Position
+	Pos      source.Span
 	Severity severity.Level
 	Title    []Run
 	Body     []Block
@@ -233,34 +233,34 @@ type Caution struct {
 // the text column is scaled down to fit (Template.BodyWidth tells a
 // component the width to draw at). It never splits across pages.
 type Drawing struct {
-	Pos     source.Position
+	Pos     source.Span
 	W, H    float64
 	Items   []draw.Item
 	Caption []Run
 }
 
 // PageBreak starts a new page.
-type PageBreak struct{ Pos source.Position }
+type PageBreak struct{ Pos source.Span }
 
 // Anchor names the current place, for links.
 type Anchor struct {
-	Pos  source.Position
+	Pos  source.Span
 	Name string
 }
 
-func (b *Heading) Position() source.Position   { return b.Pos }
-func (b *Para) Position() source.Position      { return b.Pos }
-func (b *List) Position() source.Position      { return b.Pos }
-func (b *Table) Position() source.Position     { return b.Pos }
-func (b *Image) Position() source.Position     { return b.Pos }
-func (b *Code) Position() source.Position      { return b.Pos }
-func (b *Statement) Position() source.Position { return b.Pos }
-func (b *Input) Position() source.Position     { return b.Pos }
-func (b *Check) Position() source.Position     { return b.Pos }
-func (b *Caution) Position() source.Position   { return b.Pos }
-func (b *Drawing) Position() source.Position   { return b.Pos }
-func (b *PageBreak) Position() source.Position { return b.Pos }
-func (b *Anchor) Position() source.Position    { return b.Pos }
+func (b *Heading) Where() source.Span   { return b.Pos }
+func (b *Para) Where() source.Span      { return b.Pos }
+func (b *List) Where() source.Span      { return b.Pos }
+func (b *Table) Where() source.Span     { return b.Pos }
+func (b *Image) Where() source.Span     { return b.Pos }
+func (b *Code) Where() source.Span      { return b.Pos }
+func (b *Statement) Where() source.Span { return b.Pos }
+func (b *Input) Where() source.Span     { return b.Pos }
+func (b *Check) Where() source.Span     { return b.Pos }
+func (b *Caution) Where() source.Span   { return b.Pos }
+func (b *Drawing) Where() source.Span   { return b.Pos }
+func (b *PageBreak) Where() source.Span { return b.Pos }
+func (b *Anchor) Where() source.Span    { return b.Pos }
 
 func (*Heading) isBlock()   {}
 func (*Para) isBlock()      {}

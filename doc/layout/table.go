@@ -45,7 +45,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 			continue
 		}
 		pos := t.Pos
-		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
+		if ri > 0 && t.Rows[ri-1].Pos.File != nil {
 			pos = t.Rows[ri-1].Pos
 		}
 		st := cellStyle
@@ -126,7 +126,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		kind := "table-header"
 		if ri > 0 {
 			kind = "row"
-			if t.Rows[ri-1].Pos.Line > 0 {
+			if t.Rows[ri-1].Pos.File != nil {
 				pos = t.Rows[ri-1].Pos
 			}
 		}

@@ -31,8 +31,8 @@ func TestBuiltinTemplates(t *testing.T) {
 		}
 		doc := sheet(para(2, "x"))
 		doc.Template = tpl
-		if _, err := layout.Document(doc); err != nil {
-			t.Errorf("%s: %v", tt.name, err)
+		if _, diags := layout.Document(doc); diags.HasErrors() {
+			t.Errorf("%s: %v", tt.name, diags)
 		}
 	}
 	if _, err := layout.BuiltinTemplate("a3"); err == nil {
@@ -102,9 +102,9 @@ func TestTemplateLogo(t *testing.T) {
 	}
 	doc := sheet(para(2, "x"))
 	doc.Template = tpl
-	p, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	found := false
 	for _, it := range p.Pages[0].Boxes[0].Items {

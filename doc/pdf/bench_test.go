@@ -11,7 +11,6 @@ import (
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/pdf"
-	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // bigDoc is a generated package of about 10 pages per sheet: prose,
@@ -28,9 +27,7 @@ func bigDoc(sheets int) layout.Doc {
 	prose := "The footing is founded in firm clay below the made ground; the groundwater table lies above the underside, so effective stresses are used throughout and the buoyant unit weight below the water table. "
 	var out []layout.Sheet
 	for s := 0; s < sheets; s++ {
-		pos := func(l int) source.Position {
-			return source.Position{Path: fmt.Sprintf("%02d.md", s+1), Line: l, Col: 1}
-		}
+		pos := lines(fmt.Sprintf("%02d.md", s+1))
 		var bs []layout.Block
 		for sec := 0; sec < 6; sec++ {
 			bs = append(bs, &layout.Heading{Pos: pos(sec * 100), Level: 1, Runs: []layout.Run{txt(fmt.Sprintf("Section %d", sec+1))}})
@@ -58,9 +55,9 @@ func bigDoc(sheets int) layout.Doc {
 }
 
 func TestBigDocPages(t *testing.T) {
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	t.Logf("%d pages", len(p.Pages))
 	if len(p.Pages) < 250 {
@@ -74,9 +71,9 @@ func BenchmarkRender(b *testing.B) {
 	doc := bigDoc(25)
 	b.ReportAllocs()
 	for b.Loop() {
-		p, err := layout.Document(doc)
-		if err != nil {
-			b.Fatal(err)
+		p, diags := layout.Document(doc)
+		if diags.HasErrors() {
+			b.Fatal(diags)
 		}
 		if err := pdf.Write(io.Discard, p, pdf.Options{Time: when}); err != nil {
 			b.Fatal(err)
@@ -88,16 +85,16 @@ func BenchmarkLayout(b *testing.B) {
 	doc := bigDoc(25)
 	b.ReportAllocs()
 	for b.Loop() {
-		if _, err := layout.Document(doc); err != nil {
-			b.Fatal(err)
+		if _, diags := layout.Document(doc); diags.HasErrors() {
+			b.Fatal(diags)
 		}
 	}
 }
 
 func BenchmarkWrite(b *testing.B) {
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		b.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		b.Fatal(diags)
 	}
 	b.ReportAllocs()
 	for b.Loop() {
@@ -115,9 +112,9 @@ func TestBigRender(t *testing.T) {
 	if !*big {
 		t.Skip("run with -big")
 	}
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var n countWriter
 	if err := pdf.Write(&n, p, pdf.Options{Time: when}); err != nil {

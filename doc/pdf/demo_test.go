@@ -8,6 +8,7 @@ import (
 	"image/jpeg"
 	"image/png"
 	"math"
+	"strings"
 
 	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
@@ -21,7 +22,14 @@ import (
 // The demo package: an invented site, firm and footing, for looking at the
 // output as a user would.
 
-func at(line int) source.Position { return source.Position{Path: "02-bearing.md", Line: line, Col: 1} }
+// lines is a stand-in source file of the given name: a span at the start
+// of each line prints as name:line:1.
+func lines(name string) func(line int) source.Span {
+	f := source.NewFile(name, []byte(strings.Repeat("\n", 2000)))
+	return func(line int) source.Span { return source.Span{File: f, Start: f.LineStart(line)} }
+}
+
+var at = lines("02-bearing.md")
 
 func q(num, unit string) eqn.Node { return eqn.Quantity(num, unit) }
 
@@ -296,8 +304,8 @@ func demoDoc(longTable int) layout.Doc {
 		Info: layout.Info{Title: "Kestrel Park: foundation calculations", Author: "AB", Subject: "Pad footing design",
 			Keywords: "bearing settlement", Fingerprint: "9f2c41d07be35a6e1c0d2b8f44a91e7d5c3b2a190f8e7d6c5b4a39281706f5e4"},
 		Sheets: []layout.Sheet{
-			{Pos: source.Position{Path: "01-ground.md", Line: 1, Col: 1}, Fields: f1, Blocks: ground},
-			{Pos: source.Position{Path: "02-bearing.md", Line: 1, Col: 1}, Fields: f2, Blocks: bearing},
+			{Pos: lines("01-ground.md")(1), Fields: f1, Blocks: ground},
+			{Pos: at(1), Fields: f2, Blocks: bearing},
 		},
 	}
 }

@@ -106,3 +106,7 @@ func (s Span) Text() string {
 
 // IsZero reports whether the span points nowhere.
 func (s Span) IsZero() bool { return s.File == nil }
+
+// String is the human position of the span's start ("calcs/03-pad.md:12:5"),
+// "" for a span that points nowhere.
+func (s Span) String() string { return s.Pos().String() }
