@@ -56,6 +56,19 @@ func users(rs []layout.Run) []layout.Run {
 	}
 	return rs
 }
+
+// pageOf prints the page an anchor lands on after prefix ("page 12"),
+// linked to it; the layout fills it in (layout.PageRef).
+func pageOf(anchor, prefix string) layout.Run {
+	return layout.Run{Page: layout.PageRef{Anchor: anchor, Prefix: prefix}, Link: anchor, Own: true}
+}
+
+// sheetPages prints the pages of the sheet an anchor opens ("3–5"), for
+// the contents.
+func sheetPages(anchor string) layout.Run {
+	return layout.Run{Page: layout.PageRef{Anchor: anchor, Sheet: true}, Own: true}
+}
+
 func cell(runs ...layout.Run) layout.Cell {
 	return layout.Cell(runs)
 }
@@ -146,14 +159,14 @@ func (c *composer) cover() layout.Sheet {
 	add(data)
 
 	add(heading(p, 2, "Contents"))
-	c.contents = &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
+	contents := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
 		Align: []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft}}
-	c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-		cell(txt("—")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
+	contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+		cell(sheetPages("summary")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
 	}})
 	if ch := c.opt.Changes; ch != nil {
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(txt("—")), nil, cell(layout.Run{Text: "Changes since revision ", Link: "changes", Own: true}, layout.Run{Text: ch.Since, Link: "changes"}), nil, nil,
+		contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(sheetPages("changes")), nil, cell(layout.Run{Text: "Changes since revision ", Link: "changes", Own: true}, layout.Run{Text: ch.Since, Link: "changes"}), nil, nil,
 		}})
 	}
 	for _, s := range c.res.Sheets {
@@ -162,16 +175,16 @@ func (c *composer) cover() layout.Sheet {
 		if title == "" {
 			title = s.Name()
 		}
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: s.Src.Meta.Title.Span, Cells: []layout.Cell{
-			cell(txt("—")), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
+		contents.Rows = append(contents.Rows, layout.Row{Pos: s.Src.Meta.Title.Span, Cells: []layout.Cell{
+			cell(sheetPages(sheetAnchor(s.Index))), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
 		}})
 	}
 	for _, mt := range c.matter {
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(txt("—")), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
+		contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(sheetPages(mt.anchor)), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
 		}})
 	}
-	add(c.contents)
+	add(contents)
 
 	add(heading(p, 2, "Revision history"))
 	if len(m.Revisions) == 0 {

@@ -62,10 +62,7 @@ func apxAnchor(b *eval.Block) string { return "apx-" + blockAnchor(b) }
 // toAppendix says where working left out of the main flow is: a
 // sentence linked to the block's part of the appendix, with its page.
 func (o *engineOut) toAppendix(what string) {
-	runs := []layout.Run{txt(what + " "), {Text: "appendix, page —", Link: apxAnchor(o.b), Own: true}, txt(".")}
-	para := &layout.Para{Pos: o.p, Runs: runs}
-	o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[1], anchor: apxAnchor(o.b), format: "appendix, page %d"})
-	o.add(para)
+	o.para(txt(what+" "), pageOf(apxAnchor(o.b), "appendix, page "), txt("."))
 }
 
 // governingOnly reports whether the package prints the governing working
@@ -390,10 +387,8 @@ func (o *engineOut) selfWeight() {
 	if first, ok := o.c.selfShown[o.b.Of]; ok && o.c.governingOnly() {
 		runs := []layout.Run{txt("Self-weight added by plinth (self_weight = auto): "),
 			{Math: eqn.Row{eqn.Sym{Name: w.Symbol}, eqn.Op{Text: "="}, siNode(w.Value, w.Unit)}, Own: true},
-			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), {Text: "page —", Link: blockAnchor(first), Own: true}, txt(".")}
-		para := &layout.Para{Pos: o.p, Runs: runs}
-		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[3], anchor: blockAnchor(first), format: "page %d"})
-		o.add(para)
+			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), pageOf(blockAnchor(first), "page "), txt(".")}
+		o.add(&layout.Para{Pos: o.p, Runs: runs})
 		return
 	}
 	if o.c.selfShown == nil {

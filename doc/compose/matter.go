@@ -59,8 +59,7 @@ func (c *composer) checkRegister() layout.Sheet {
 		if ch.Op == ">=" || ch.Op == ">" {
 			demand, capacity = ch.R, ch.L
 		}
-		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
-		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
+		page := cell(pageOf(ch.Anchor, ""))
 		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(c.checkMath(ch)...),

@@ -124,7 +124,7 @@ func TestFileErrors(t *testing.T) {
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			res, _ := pkg(t, c.files)
-			pages, d := compose.Pages(res, compose.Options{})
+			pages, d := pagesOf(res, compose.Options{})
 			if pages != nil || !strings.Contains(d.Error(), c.want) {
 				t.Errorf("diagnostics lack %q:\n%s", c.want, d.Error())
 			}
@@ -191,7 +191,7 @@ func TestTemplateFile(t *testing.T) {
 	if doc.Template == nil || doc.Template.Name != "Firm letter" {
 		t.Fatalf("template %+v", doc.Template)
 	}
-	if _, d := compose.Pages(res, compose.Options{}); d.HasErrors() {
+	if _, d := pagesOf(res, compose.Options{}); d.HasErrors() {
 		t.Fatal(d)
 	}
 }

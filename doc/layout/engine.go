@@ -13,6 +13,8 @@ import (
 type engine struct {
 	tpl   *Template
 	diags source.List
+	fills map[PageRef]string // the text of each page reference known so far (refs.go)
+	used  map[PageRef]refUse // the page references set in this sheet, with their text
 	// the text column of every page
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
@@ -31,10 +33,12 @@ type piece struct {
 	base   float64 // first baseline below the top
 }
 
-// Document lays out doc: every sheet's body into pages, then the title
-// block, variant banner and footer on each page. Problems come back as
-// diagnostics at the source span of the block they concern, every one
-// found, sorted; no pages are returned then.
+// Document lays out doc: every sheet's body into pages, the page
+// references filled in (refs.go: a sheet whose filled text changes is laid
+// out again, a bounded number of times), then the title block, variant
+// banner and footer on each page. Problems come back as diagnostics at
+// the source span of the block they concern, every one found, sorted; no
+// pages are returned then.
 func Document(doc Doc) (pages *Pages, diags source.List) {
 	defer func() {
 		if r := recover(); r != nil { // a defect here must not take the caller down
@@ -58,17 +62,13 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 		e.bodyY += banner.H + 8
 		e.bodyH -= banner.H + 8
 	}
-	out := &Pages{Info: doc.Info}
-	laid, err := e.sheets(doc.Sheets)
+	laid, err := e.passes(doc)
 	if err != nil {
 		return nil, internal(doc, err.Error())
 	}
+	out := &Pages{Info: doc.Info}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
-		pieces := laid[si]
-		laid[si] = nil
-		first := len(out.Pages)
-		e.paginate(si, sh.Pos, pieces, out)
 		title := sh.Bookmark
 		if title == "" {
 			title = joinNonEmpty(" ", sh.Fields.Calc, sh.Fields.Title)
@@ -76,12 +76,12 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 		if title == "" {
 			title = fmt.Sprintf("Sheet %d", si+1)
 		}
-		out.Outline = append(out.Outline, Bookmark{Title: title, Page: first})
-		if doc.Progress != nil {
-			doc.Progress(si+1, len(doc.Sheets))
-		}
+		out.Outline = append(out.Outline, Bookmark{Title: title, Page: len(out.Pages)})
+		out.Pages = append(out.Pages, laid[si].pages...)
+		e.diags = append(e.diags, laid[si].diags...)
 	}
 	e.furnish(doc, out, banner)
+	markChanges(out, doc.Bars)
 	e.checkLinks(out)
 	if e.diags.HasErrors() {
 		e.diags.Sort()
@@ -100,16 +100,26 @@ func internal(doc Doc, msg string) source.List {
 	return source.List{d}
 }
 
-// sheets lays out the body of every sheet into pieces, the sheets in
-// parallel: each is independent until it is paginated. Each sheet gets its
-// own copy of the engine state; the problems are gathered in sheet order.
-func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
-	laid := make([][]*piece, len(shs))
-	diags := make([]source.List, len(shs))
-	fails := make([]error, len(shs))
-	workers := min(runtime.GOMAXPROCS(0), len(shs))
+// laidSheet is one sheet laid out and paginated: its pages (Sheet set,
+// numbered within the sheet), the problems found, and the text each page
+// reference in it was set with.
+type laidSheet struct {
+	pages []*Page
+	diags source.List
+	refs  map[PageRef]refUse
+}
+
+// sheets lays out and paginates the sheets numbered in which, in
+// parallel: each is independent of the others (a page reference's text
+// comes from fills, read only). Each sheet gets its own copy of the
+// engine state. done counts the sheets finished for doc.Progress, out of
+// total.
+func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []laidSheet, done *int, total int) error {
+	fails := make([]error, len(doc.Sheets))
+	workers := min(runtime.GOMAXPROCS(0), len(which))
 	next := make(chan int)
 	var wg sync.WaitGroup
+	var mu sync.Mutex
 	for range workers {
 		wg.Add(1)
 		go func() {
@@ -123,24 +133,31 @@ func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
 					}()
 					se := *e
 					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
-					laid[si] = se.blocks(shs[si].Blocks, se.bodyW)
-					diags[si] = se.diags
+					se.fills, se.used = fills, map[PageRef]refUse{}
+					pieces := se.blocks(doc.Sheets[si].Blocks, se.bodyW)
+					pages := se.paginate(si, pieces)
+					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used}
 				}()
+				if doc.Progress != nil {
+					mu.Lock()
+					*done++
+					doc.Progress(*done, total)
+					mu.Unlock()
+				}
 			}
 		}()
 	}
-	for si := range shs {
+	for _, si := range which {
 		next <- si
 	}
 	close(next)
 	wg.Wait()
-	for si := range shs {
+	for _, si := range which {
 		if fails[si] != nil {
-			return nil, fails[si]
+			return fails[si]
 		}
-		e.diags = append(e.diags, diags[si]...)
 	}
-	return laid, nil
+	return nil
 }
 
 // blocks lays out a list of blocks at width.
@@ -190,19 +207,14 @@ func (e *engine) block(b Block, width float64) []*piece {
 	return nil
 }
 
-// paginate stacks pieces into pages for sheet si.
-func (e *engine) paginate(si int, pos source.Span, ps []*piece, out *Pages) {
+// paginate stacks pieces into pages for sheet si, numbered from 1.
+func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 	var page *Page
 	y, empty := 0.0, true
 	bottom := e.bodyY + e.bodyH
 	newPage := func() {
-		page = &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si}
-		if n := len(out.Pages); n > 0 && out.Pages[n-1].Sheet == si {
-			page.Number = out.Pages[n-1].Number + 1
-		} else {
-			page.Number = 1
-		}
-		out.Pages = append(out.Pages, page)
+		page = &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: len(pages) + 1}
+		pages = append(pages, page)
 		y, empty = e.bodyY, true
 	}
 	place := func(p *piece, gap float64) {
@@ -247,6 +259,7 @@ func (e *engine) paginate(si int, pos source.Span, ps []*piece, out *Pages) {
 		}
 		place(p, p.before)
 	}
+	return pages
 }
 
 func kindName(k string) string {

@@ -14,8 +14,13 @@ type Doc struct {
 	Info     Info
 	Template *Template // nil = the built-in A4 template
 	Sheets   []Sheet
+	// Bars, when set, are change bars beside what the given source lines
+	// print (bars.go).
+	Bars *Bars
 	// Progress, when set, is called after each sheet is laid out with the
-	// sheets done and the total (it does not change the pages).
+	// sheet layouts done and the total, which grows when sheets are laid
+	// out again with their page references filled in (it does not change
+	// the pages).
 	Progress func(done, total int)
 }
 
@@ -90,12 +95,27 @@ type Run struct {
 	Shift Shift
 	Link  string   // name of the anchor this run links to; "" = none
 	Math  eqn.Node // inline formula; replaces Text
+	// Page, when its Anchor is set, makes the run print where that anchor
+	// lands, filled in by the layout; it replaces Text.
+	Page PageRef
 	// Own marks text plinth wrote (engine notes, cautions, references,
 	// fixed wording) rather than the user. It is spelled with
 	// fonts.Spell (⅔ as 2/3); a character still missing from the fonts
 	// is plinth's defect, reported as an internal error that names
 	// plinth, never at the user's line.
 	Own bool
+}
+
+// PageRef is a page number the layout fills in once it knows where an
+// anchor lands: Prefix then the page, counted from 1 across the document
+// ("page 12", "appendix, page 40"), or with Sheet the pages of the sheet
+// holding the anchor ("3" or "3–5"). Until then (the first pass) it
+// prints Prefix and a dash ("page —"). A reference to an anchor the
+// document does not have is a problem.
+type PageRef struct {
+	Anchor string
+	Prefix string
+	Sheet  bool
 }
 
 // Align is a table column's alignment.

@@ -139,6 +139,9 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Span) []word {
 		}
 		f := fonts.Get(face)
 		text := r.Text
+		if r.Page.Anchor != "" {
+			text = e.pageText(r.Page, pos)
+		}
 		if r.Own {
 			text = e.ownGlyphs(text, face, pos)
 		} else {
