@@ -91,14 +91,10 @@ func (c *composer) gridCell(s *eval.Sheet, y *eval.Symbol, text sheet.Str, ancho
 	if y.Override != nil {
 		return layout.Cell{{Math: val}, bold(" (VARIANT)")}
 	}
-	if len(y.Uses) == 0 {
+	if len(y.Uses) == 0 || y.Expr == nil {
 		return layout.Cell{{Math: val}}
 	}
-	n, errs := expr.ParseExpr(text.Value, 0)
-	if len(errs) > 0 || n == nil {
-		return layout.Cell{{Math: val}}
-	}
-	f := newFormula(n, y.Uses)
+	f := newFormula(y.Expr, y.Uses)
 	return layout.Cell{{Math: eqn.Row{f.symbolic(), eqn.Op{Text: "="}, val}}}
 }
 
