@@ -110,8 +110,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	var out []*piece
 	var header, pristine *piece
 	if capRuns := t.Caption; len(capRuns) > 0 {
-		st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
-		lines := e.setText(capRuns, total, st, t.Pos)
+		lines := e.setText(capRuns, total, captionStyle, t.Pos)
 		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
 		for _, p := range ps {
 			p.keep = true
