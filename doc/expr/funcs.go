@@ -2,7 +2,6 @@ package expr
 
 import (
 	"math"
-	"strings"
 )
 
 // function is one built-in function: its arity and its value on SI
@@ -46,17 +45,14 @@ func fold(op func(x, y float64) float64) func(a []float64) float64 {
 	}
 }
 
-// IsFunction reports whether name is a built-in function.
-func IsFunction(name string) bool { _, ok := functions[name]; return ok }
+// isFunction reports whether name is a built-in function.
+func isFunction(name string) bool { _, ok := functions[name]; return ok }
 
-// Reserved reports whether name cannot be a symbol: a function name, the
+// reserved reports whether name cannot be a symbol: a function name, the
 // constants pi and g, or the keyword check.
-func Reserved(name string) bool {
-	return IsFunction(name) || name == "pi" || name == "g" || name == "check"
+func reserved(name string) bool {
+	return isFunction(name) || name == "pi" || name == "g" || name == "check"
 }
-
-// Functions returns the built-in function names.
-func Functions() []string { return strings.Fields(functionList) }
 
 func arity(f function) string {
 	switch {

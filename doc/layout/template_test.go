@@ -11,12 +11,14 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
+	sheetmodel "github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/templates"
 )
 
 func TestBuiltinTemplates(t *testing.T) {
-	if got := strings.Join(layout.BuiltinTemplates(), ","); got != "a4,letter" {
-		t.Errorf("built-in templates %q", got)
+	// the names the parser accepts are the templates built in
+	if got, want := strings.Join(templates.PageNames(), ","), strings.Join(sheetmodel.Templates, ","); got != want || got != "a4,letter" {
+		t.Errorf("built-in templates %q, the sheet model knows %q", got, want)
 	}
 	for _, tt := range []struct {
 		name string

@@ -71,22 +71,6 @@ func (f *File) LineStart(n int) int {
 	return f.lines[n-1]
 }
 
-// Line returns the text of 1-based line n without its line ending.
-func (f *File) Line(n int) string {
-	start := f.LineStart(n)
-	end := len(f.Text)
-	if n < len(f.lines) {
-		end = f.lines[n] - 1
-	}
-	if end > start && f.Text[end-1] == '\r' {
-		end--
-	}
-	if end < start {
-		end = start
-	}
-	return string(f.Text[start:end])
-}
-
 // Span is a half-open byte range [Start, End) in a file.
 type Span struct {
 	File       *File
