@@ -73,6 +73,7 @@ func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []u
 				text = r.Cells[j]
 			}
 			row.Cells = append(row.Cells, c.gridCell(s, y, text, anchor))
+			row.CellPos = append(row.CellPos, text.Span)
 		}
 		t.Rows = append(t.Rows, row)
 	}

@@ -82,6 +82,7 @@ func (c *composer) proseTable(s *eval.Sheet, b *sheet.Table) *layout.Table {
 				row.Pos = cell.Span
 			}
 			row.Cells = append(row.Cells, c.inlines(s, cell.Text))
+			row.CellPos = append(row.CellPos, cell.Span)
 		}
 		t.Rows = append(t.Rows, row)
 	}

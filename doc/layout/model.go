@@ -158,10 +158,12 @@ type List struct {
 // Cell is a table cell's content.
 type Cell = []Run
 
-// Row is a table body row.
+// Row is a table body row. CellPos, when given, holds each cell's span,
+// where a problem in that cell is reported (else at the row's).
 type Row struct {
-	Pos   source.Span
-	Cells []Cell
+	Pos     source.Span
+	Cells   []Cell
+	CellPos []source.Span
 }
 
 // Table is a table with one header row, which repeats at the top of each

@@ -55,7 +55,11 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		row := make([]cellWords, ncol)
 		for c := 0; c < ncol; c++ {
 			if c < len(cells) {
-				row[c] = cellWords{e.words(cells[c], st, pos), st}
+				at := pos
+				if ri > 0 && c < len(t.Rows[ri-1].CellPos) && t.Rows[ri-1].CellPos[c].File != nil {
+					at = t.Rows[ri-1].CellPos[c]
+				}
+				row[c] = cellWords{e.words(cells[c], st, at), st}
 			} else {
 				row[c] = cellWords{style: st}
 			}
