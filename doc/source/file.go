@@ -57,9 +57,6 @@ func (f *File) Position(off int) Position {
 	return Position{Path: f.Path, Line: i + 1, Col: col}
 }
 
-// LineCount is the number of lines in the file.
-func (f *File) LineCount() int { return len(f.lines) }
-
 // LineStart is the byte offset of the first byte of 1-based line n.
 func (f *File) LineStart(n int) int {
 	if n < 1 {
