@@ -18,7 +18,7 @@ type engineOut struct {
 	c       *composer
 	s       *eval.Sheet
 	b       *eval.Block
-	p       source.Position
+	p       source.Span
 	blocks  []layout.Block
 	apx     []layout.Block    // working moved to the appendix (detail = governing)
 	printed map[string]bool   // steps printed in full (stepKey)
@@ -32,7 +32,7 @@ type shownKey struct {
 
 func (c *composer) engineOut(s *eval.Sheet, b *eval.Block) *engineOut {
 	c.refSeen = map[trace.Ref]bool{} // each citation once per block
-	o := &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+	o := &engineOut{c: c, s: s, b: b, p: b.Span, shown: map[shownKey]bool{}}
 	o.add(&layout.Anchor{Pos: o.p, Name: blockAnchor(b)})
 	return o
 }
@@ -61,10 +61,7 @@ func apxAnchor(b *eval.Block) string { return "apx-" + blockAnchor(b) }
 // toAppendix says where working left out of the main flow is: a
 // sentence linked to the block's part of the appendix, with its page.
 func (o *engineOut) toAppendix(what string) {
-	runs := []layout.Run{txt(what + " "), {Text: "appendix, page —", Link: apxAnchor(o.b), Own: true}, txt(".")}
-	para := &layout.Para{Pos: o.p, Runs: runs}
-	o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[1], anchor: apxAnchor(o.b), format: "appendix, page %d"})
-	o.add(para)
+	o.para(txt(what+" "), pageOf(apxAnchor(o.b), "appendix, page "), txt("."))
 }
 
 // governingOnly reports whether the package prints the governing working
@@ -102,7 +99,7 @@ var kindWords = map[trace.Kind]string{
 // stepLine prints one engine step: a value taken as given prints as an
 // input; a computed one as symbol = formula = values substituted =
 // result, the note and the reference beside it.
-func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
+func (c *composer) stepLine(p source.Span, st trace.Step) layout.Block {
 	sym := eqn.Sym{Name: st.Symbol}
 	var note []layout.Run
 	if w := kindWords[st.Kind]; w != "" {
@@ -127,13 +124,13 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	if st.Formula == nil || st.Kind != trace.ByFormula {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
-	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note, Own: true}
+	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: fromExpr(st.Formula, exprOptions{Number: constant}), Result: res, Note: note, Own: true}
 	if _, lone := st.Formula.(trace.Sym); !lone && len(st.Inputs) > 0 {
 		vals := map[string]trace.Value{}
 		for _, in := range st.Inputs {
 			vals[in.Symbol] = in
 		}
-		stmt.Subst = eqn.FromExpr(st.Formula, eqn.Options{Number: constant, Subst: func(name string) (eqn.Node, bool) {
+		stmt.Subst = fromExpr(st.Formula, exprOptions{Number: constant, Subst: func(name string) (eqn.Node, bool) {
 			v, ok := vals[name]
 			if !ok {
 				return nil, false
@@ -273,36 +270,13 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 // printed beside them; they are left out.
 var restates = map[string]bool{"governing": true, "governing-sliding": true}
 
-// engineSeverity is the box an engine caution prints in: the same word
-// (an unknown severity prints as the highest, WARNING).
-func engineSeverity(s trace.Severity) layout.Severity {
-	switch s {
-	case trace.SevNote:
-		return layout.SevNote
-	case trace.SevCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
-// alertSeverity is the box a "> [!WORD]" blockquote prints in.
-func alertSeverity(k sheet.Alert) layout.Severity {
-	switch k {
-	case sheet.AlertNote:
-		return layout.SevNote
-	case sheet.AlertCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
 		return
 	}
 	a := o.c.anchor("caution")
-	sev := engineSeverity(ca.Severity)
+	sev := ca.Severity
 	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	body := richText(ca.Message, layout.Regular)
@@ -343,7 +317,7 @@ func (c *composer) sources(b *eval.Block) {
 
 // checkBlock prints an engine check (one that entered the check register)
 // with both sides, named by their symbols.
-func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
+func (c *composer) checkBlock(p source.Span, ch *eval.Check, left, right string) layout.Block {
 	if !ch.HasUtil() {
 		// No utilisation (a check not verified, with no resistance): the
 		// relation and the verdict on one line, as for a calc check.
@@ -421,10 +395,8 @@ func (o *engineOut) selfWeight() {
 	if first, ok := o.c.selfShown[o.b.Of]; ok && o.c.governingOnly() {
 		runs := []layout.Run{txt("Self-weight added by plinth (self_weight = auto): "),
 			{Math: eqn.Row{eqn.Sym{Name: w.Symbol}, eqn.Op{Text: "="}, siNode(w.Value, w.Unit)}, Own: true},
-			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), {Text: "page —", Link: blockAnchor(first), Own: true}, txt(".")}
-		para := &layout.Para{Pos: o.p, Runs: runs}
-		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[3], anchor: blockAnchor(first), format: "page %d"})
-		o.add(para)
+			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), pageOf(blockAnchor(first), "page "), txt(".")}
+		o.add(&layout.Para{Pos: o.p, Runs: runs})
 		return
 	}
 	if o.c.selfShown == nil {

@@ -91,5 +91,5 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if sk.BEff != nil {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
-	return []layout.Block{&layout.Drawing{Pos: pos(b.Span), W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+	return []layout.Block{&layout.Drawing{Pos: b.Span, W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
 }

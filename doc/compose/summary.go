@@ -151,7 +151,7 @@ func (c *composer) summary() layout.Sheet {
 		seen[r.where+r.text] = true
 		runs := []layout.Run{bold(r.sev.String()), txt(" " + sheetLabel(r.sheet) + ", " + r.where + ": ")}
 		runs = append(runs, richText(r.text, layout.Regular)...)
-		runs = append(runs, txt(" ("), layout.Run{Text: "page —", Link: r.anchor, Own: true}, txt(")"))
+		runs = append(runs, txt(" ("), pageOf(r.anchor, "page "), txt(")"))
 		open = append(open, runs)
 	}
 	add(heading(p, 2, "Open items"))
@@ -163,13 +163,7 @@ func (c *composer) summary() layout.Sheet {
 		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
-		para := &layout.Para{Pos: p, Runs: runs}
-		for i := range para.Runs {
-			if para.Runs[i].Text == "page —" && para.Runs[i].Link != "" {
-				c.pageRefs = append(c.pageRefs, pageRef{run: &para.Runs[i], anchor: para.Runs[i].Link, format: "page %d"})
-			}
-		}
-		items = append(items, []layout.Block{para})
+		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: runs}})
 	}
 	add(&layout.List{Pos: p, Items: items})
 	return out
@@ -179,7 +173,7 @@ func (c *composer) summary() layout.Sheet {
 func (c *composer) openAt(b *eval.Block, text, sym string, v float64, unit string) []layout.Run {
 	runs := richText(text, layout.Regular)
 	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(sym, v, unit), Own: true}, txt("; "),
-		layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}, txt(")."))
+		pageOf(blockAnchor(b), "page "), txt(")."))
 	return runs
 }
 
@@ -208,7 +202,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	for _, fr := range rows {
 		b := fr.footing
 		f := b.Footing
-		page := layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}
+		page := pageOf(blockAnchor(b), "page ")
 		name := layout.Cell{userBold(f.Name), txt("\n" + sheetLabel(b.Sheet) + ", "), page}
 		size := layout.Cell{txt(shortShape(f.Model))}
 		strata := map[string]bool{}
@@ -270,9 +264,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			}
 			settl = append(settl, allow...)
 		}
-		// the page run is registered once the cell is complete (appends move it)
-		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
+		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
 	}
 	return t
 }

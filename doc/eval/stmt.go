@@ -100,7 +100,7 @@ func (e *evaluator) assign(sc scope, st *sheet.Stmt, a *expr.Assign, name string
 	}
 	y := &Symbol{
 		Name: name, Q: q, Decimals: -1, Note: st.Note(), Span: symSpan(st, a),
-		Sheet: s, Stmt: a, Input: e.defs[s.Index][name].input, Uses: used,
+		Sheet: s, Stmt: a, Expr: a.X, Input: e.defs[s.Index][name].input, Uses: used,
 	}
 	if o := e.over[s][name]; o != nil {
 		y.Q = o.Q

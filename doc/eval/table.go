@@ -270,7 +270,7 @@ func (e *evaluator) evalCells(sc scope, t *table) ([][]*Symbol, []bool) {
 			}
 			y := &Symbol{
 				Name: name, Q: q, Unit: hu, Decimals: -1, Span: cell.Span, Sheet: sc.s,
-				Input: len(used) == 0, Uses: used,
+				Expr: n, Input: len(used) == 0, Uses: used,
 			}
 			if y.Unit.Dim != q.Dim {
 				y.Unit = units.Display(q.Dim)

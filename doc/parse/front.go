@@ -14,8 +14,8 @@ import (
 	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
-// Config parses a package.yaml file into the package settings.
-func Config(f *source.File) (sheet.Meta, source.List) {
+// config parses a package.yaml file into the package settings.
+func config(f *source.File) (sheet.Meta, source.List) {
 	var diags source.List
 	if !utf8.Valid(f.Text) {
 		checkText(f, &diags)

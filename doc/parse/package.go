@@ -24,7 +24,7 @@ func Package(p *load.Package) (*sheet.Package, source.List) {
 	var diags source.List
 	pkg := &sheet.Package{Dir: p.Dir, Files: p.Files(), Inside: p}
 	if p.Config != nil {
-		m, d := Config(p.Config)
+		m, d := config(p.Config)
 		pkg.Meta = m
 		diags.Append(d)
 	}
