@@ -241,7 +241,7 @@ func newSizer(in Input) (*sizer, error) {
 	}
 	ws := make([]float64, 0, kmax-kmin+1)
 	for k := kmin; k <= kmax; k++ {
-		ws = append(ws, float64(k)*step)
+		ws = append(ws, math.Round(float64(k)*step*1e6)/1e6) // to the micrometre: 2.3, not 2.3000000000000003
 	}
 	return &sizer{in: in, step: step, widths: ws, kmax: len(ws) - 1, seen: map[int]*trial{}}, nil
 }

@@ -36,7 +36,7 @@ var Spec = kind.Spec{
 	),
 	Results: []kind.Result{
 		{Symbol: "B", Unit: "m", Meaning: "width chosen: the smallest on the increment that passes every check"},
-		{Symbol: "L", Unit: "m", Meaning: "length at the chosen width", When: "not a strip"},
+		{Symbol: "L", Unit: "m", Meaning: "length at the chosen width", When: "not a strip or a fixed L"},
 		{Symbol: "util", Meaning: "governing utilisation at the chosen width"},
 		{Symbol: "util_below", Meaning: "governing utilisation one increment smaller (above 1: it fails)", When: "a smaller width was tried"},
 		{Symbol: "B_req", Unit: "m", Meaning: "width at which the governing utilisation reaches 1 (Brent's method)", When: "the solver's answer"},

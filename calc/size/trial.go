@@ -182,7 +182,7 @@ func (z *sizer) record(r *Result) {
 		t.Take(trace.Step{Symbol: "L", Value: r.L, Unit: "m", Note: "L = B (" + r.Footing.Shape.String() + ")"})
 	}
 	r.Values = []trace.Value{{Symbol: "B", V: r.B, Unit: "m"}}
-	if r.Footing.Shape != site.Strip {
+	if r.Footing.Shape != site.Strip && z.in.Plan != FixedL { // a fixed L is the footing's own
 		r.Values = append(r.Values, trace.Value{Symbol: "L", V: r.L, Unit: "m"})
 	}
 	r.Values = append(r.Values, trace.Value{Symbol: "util", V: r.At.Util()})

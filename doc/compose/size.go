@@ -20,11 +20,12 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	r := b.Size
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
-	dims := units.Printed(r.B, m, -1)
+	width := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	dims := "B = " + width(r.B)
 	if r.Footing.Shape == site.Strip {
-		dims += " wide (strip)"
+		dims += " (strip)"
 	} else if r.L != r.B {
-		dims += " × " + units.Printed(r.L, m, -1)
+		dims += " × L = " + width(r.L)
 	}
 	o.head(fmt.Sprintf("Size of %s on %s", b.Of.Name, b.On.Name))
 	checks := []string{"bearing (short and long term as the drainage option gives)", "sliding where horizontal load is present"}
@@ -44,10 +45,10 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o.para(txt(intro))
 
 	// Every check at the chosen size and one increment smaller.
-	head := []layout.Cell{{txt("Check")}, {txt("At B = " + units.Printed(r.B, m, -1))}, {txt("Verdict")}}
+	head := []layout.Cell{{txt("Check")}, {txt("At B = " + width(r.B))}, {txt("Verdict")}}
 	al := []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft}
 	if r.Below != nil {
-		head = append(head, layout.Cell{txt("At B = " + units.Printed(r.Below.B, m, -1))}, layout.Cell{txt("Verdict")})
+		head = append(head, layout.Cell{txt("At B = " + width(r.Below.B))}, layout.Cell{txt("Verdict")})
 		al = append(al, layout.AlignRight, layout.AlignLeft)
 	}
 	t := &layout.Table{Pos: o.p, Header: head, Align: al,
@@ -86,7 +87,7 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	o.add(t)
 	if ch := findCheck(b, "size"); ch != nil {
-		o.add(c.checkBlock(o.p, ch, "u_max", "1"))
+		o.add(c.checkBlock(o.p, ch, "u_gov", "u_lim"))
 	}
 	o.label("Sizing")
 	o.steps(&r.Trace, indices(len(r.Trace.Steps)), "sizing")

@@ -16,10 +16,6 @@ import (
 func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	f := b.Footing
 	m := f.Model
-	sk := sketch.Footing{Shape: m.Shape.String(), B: m.B, L: m.L, D: m.D}
-	if f.SelfWeight {
-		sk.Thickness = f.H
-	}
 	var on *eval.Ground
 	var gov *eval.Block
 	for _, t := range c.res.Sheets {
@@ -30,10 +26,20 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			if on == nil {
 				on = x.On
 			}
+			if f.NoB && x.Size != nil && m.B == 0 {
+				m = x.Size.Footing // drawn at the size its size block chose
+			}
 			if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
 				gov = x
 			}
 		}
+	}
+	if m.B == 0 {
+		return nil // a footing to be sized that no size block sized: nothing to draw
+	}
+	sk := sketch.Footing{Shape: m.Shape.String(), B: m.B, L: m.L, D: m.D}
+	if f.SelfWeight {
+		sk.Thickness = f.H
 	}
 	if on != nil {
 		g := on.Model

@@ -157,7 +157,7 @@ func (e *evaluator) collect(s *Sheet) map[string]def {
 		for _, c := range e.tableDefs(b) {
 			add(c.name, c.def)
 		}
-		e.blockDefs(s, b, add)
+		e.blockDefs(s, b, add, func(name string) bool { _, ok := defs[name]; return ok })
 	}
 	return defs
 }
@@ -186,7 +186,7 @@ func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
 
 // blockDefs records ground, footing and analysis names, and the result
 // symbols an analysis will define.
-func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
+func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), has func(string) bool) {
 	names := e.blockNames[s.Index]
 	if names == nil {
 		names = map[string][]string{}
@@ -210,6 +210,11 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
 		p := b.ResultPrefix()
 		for _, n := range b.Kind.Spec().ResultNames() {
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
+				continue
+			}
+			if b.Kind == sheet.KindSize && (n == "B" || n == "L") && has(p.Value+"."+n) {
+				// the footing's own B or L: a size block reports a given B
+				// itself, and a rectangle's given L is the fixed length
 				continue
 			}
 			add(p.Value+"."+n, def{span: headerSpan(b.Span)})

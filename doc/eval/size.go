@@ -1,6 +1,7 @@
 package eval
 
 import (
+	"errors"
 	"fmt"
 
 	"github.com/plinth-calc/plinth/calc/design"
@@ -50,6 +51,10 @@ func (e *evaluator) sizeBlock(s *Sheet, b *sheet.Analysis, blk *Block, o opts) b
 			return 0, true
 		}
 		q, qok := e.quantity(sc, x, units.Length, "a length")
+		if qok && !(q.V > 0) {
+			e.errs.Add(x.Value.Span, "%s = %s: must be greater than 0", name, x.Value.Value)
+			qok = false
+		}
 		return q.V, qok
 	}
 	var good bool
@@ -117,6 +122,18 @@ func (e *evaluator) sizeBlock(s *Sheet, b *sheet.Analysis, blk *Block, o opts) b
 	}
 	r, err := size.Size(in)
 	if err != nil {
+		var ns *size.NoSize
+		if errors.As(err, &ns) {
+			at := headerSpan(b.Span)
+			hint := "a larger max, a deeper or stronger founding layer, or a smaller load"
+			if x := o["max"]; x != nil && !ns.FixedL {
+				at = x.Value.Span
+			} else if ns.FixedL {
+				at, hint = fspan, "a longer L for footing "+f.Name+", or a ratio"
+			}
+			e.errs.AddHint(at, hint, "%v", err)
+			return false
+		}
 		e.siteErrors(err, headerSpan(b.Span), func(_ int, param string) source.Span {
 			if x := o[param]; x != nil && x.Value.Span.File != nil {
 				return x.Value.Span
