@@ -5,8 +5,8 @@ import (
 	"math"
 	"strings"
 
-	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/calc/size"
+	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/source"
 )
