@@ -1,6 +1,7 @@
 package compose
 
 import (
+	"github.com/plinth-calc/plinth/calc/units"
 	"math"
 	"strings"
 
@@ -209,9 +210,9 @@ func defaultNumber(v float64, unit string) eqn.Node {
 	case "":
 		return eqn.Number(v, 6)
 	case "deg":
-		return eqn.Num{Text: eqn.FormatNumber(v*180/math.Pi, 6) + "°"}
+		return eqn.Num{Text: units.Significant(v*180/math.Pi, 6) + "°"}
 	}
-	return eqn.Quantity(eqn.FormatNumber(v, 6), unit)
+	return eqn.Quantity(units.Significant(v, 6), unit)
 }
 
 // flatten lists the nodes of a row, nested rows opened.

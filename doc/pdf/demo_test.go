@@ -3,6 +3,7 @@ package pdf_test
 import (
 	"bytes"
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/units"
 	"image"
 	"image/color"
 	"image/jpeg"
@@ -69,7 +70,7 @@ func convPrec(e trace.Expr, v vals) (eqn.Node, int) {
 		return eqn.Sym{Name: e.Name}, 6
 	case trace.Num:
 		if e.Unit == "deg" {
-			return eqn.Num{Text: eqn.FormatNumber(e.V*180/math.Pi, 6) + "°"}, 6
+			return eqn.Num{Text: units.Significant(e.V*180/math.Pi, 6) + "°"}, 6
 		}
 		return eqn.Number(e.V, 6), 6
 	case trace.Neg:
