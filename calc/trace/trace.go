@@ -16,6 +16,16 @@ type Value struct {
 	Unit   string
 }
 
+// Find returns the value named sym in vs (an engine's summary values).
+func Find(vs []Value, sym string) (Value, bool) {
+	for _, v := range vs {
+		if v.Symbol == sym {
+			return v, true
+		}
+	}
+	return Value{}, false
+}
+
 // Source is a publication an engine method comes from. Key is short and
 // unique across the engine ("EN1997-1", "Vesic1973"); Citation is the full
 // reference as printed in the references list.
