@@ -21,6 +21,11 @@ import (
 // error, never a NaN in the result.
 func Compute(in Input) (*Result, error) { return compute(in, true) }
 
+// Quiet is Compute without the working: the same numbers by the same
+// formulas (Result.Trace holds no steps), for callers that try many
+// footings and print one (calc/size's trials).
+func Quiet(in Input) (*Result, error) { return compute(in, false) }
+
 func compute(in Input, full bool) (*Result, error) {
 	r, k, err := run(in, full)
 	if k != nil && k.err() != nil {

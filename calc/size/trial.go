@@ -72,7 +72,8 @@ func (z *sizer) eval(B float64) *trial {
 		sin := *z.in.Settle
 		sin.Ground, sin.Footing = z.in.Bearing.Ground, f
 		sin.Q, sin.V = site.Opt{}, site.Some(svc.V)
-		sr, err := settle.Compute(sin)
+		sr, err := settle.Quiet(sin) // the working is written for the chosen width only
+		t.sin = sin
 		if err != nil {
 			t.err = err
 			return t
