@@ -150,7 +150,11 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 	}
 	f := b.Footing
 	o := c.engineOut(s, b)
-	o.label(fmt.Sprintf("Footing %s: %s", f.Name, shapeWords(f.Model)))
+	if f.NoB {
+		o.label(fmt.Sprintf("Footing %s: %s, width to be chosen by its size block", f.Name, toSize(f.Model)))
+	} else {
+		o.label(fmt.Sprintf("Footing %s: %s", f.Name, shapeWords(f.Model)))
+	}
 	lines, _ := c.blockLines(s, src.Lines)
 	o.add(lines...)
 	if f.SelfWeight {
@@ -175,6 +179,18 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 	}
 	o.add(c.sketch(s, b)...)
 	return o.blocks
+}
+
+// toSize describes a footing a size block sizes: its shape, the fixed L
+// of a rectangle that gives one, and its depth.
+func toSize(f site.Footing) string {
+	m := units.MustParse("m")
+	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	plan := f.Shape.String()
+	if f.Shape == site.Rectangle && f.L > 0 {
+		plan += " of fixed length " + l(f.L)
+	}
+	return plan + ", underside " + l(f.D) + " below ground level"
 }
 
 // shapeWords describes a footing's plan: "rectangle 2.7 m × 3.2 m,

@@ -108,3 +108,41 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	return out
 }
+
+// sizeCells are a size block's bearing, sliding and settlement cells in
+// the summary of results: each check's utilisation and verdict at the
+// chosen width, as the block's table prints them.
+func sizeCells(a *eval.Block) (bear, slide, settl layout.Cell) {
+	r := a.Size
+	for i, ch := range r.At.Checks {
+		if strings.HasPrefix(ch.Detail, "not computed") {
+			continue
+		}
+		v := txt("OK")
+		if !ch.OK {
+			v = bold("NOT OK")
+		}
+		line := layout.Cell{txt(units.Utilisation(ch.Util) + "  "), v, txt("\n" + ch.Name)}
+		if i == r.At.Governing {
+			line = append(line, txt(" (governs the size)"))
+		}
+		switch {
+		case strings.HasPrefix(ch.Name, "bearing"), strings.HasPrefix(ch.Name, "eccentricity"):
+			if len(bear) > 0 {
+				bear = append(bear, txt("\n"))
+			}
+			bear = append(bear, line...)
+		case ch.Name == "sliding":
+			slide = line
+		case ch.Name == "settlement" && r.Settle != nil:
+			mm := units.MustParse("mm")
+			st, lt := units.Apart(r.Settle.Total, r.Settle.Limit, mm, -1, -1) // never rounded onto the limit
+			rel := "≤"
+			if r.Settle.Total > r.Settle.Limit {
+				rel = ">"
+			}
+			settl = append(layout.Cell{txt(st + " mm " + rel + " " + lt + " mm  "), v}, line[2:]...)
+		}
+	}
+	return bear, slide, settl
+}

@@ -87,6 +87,9 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		return nil
 	}
 	caption := fmt.Sprintf("Footing %s: section through B", f.Name)
+	if f.NoB {
+		caption += " at the width its size block chose"
+	}
 	if on != nil {
 		caption += " on ground model " + on.Name
 	}

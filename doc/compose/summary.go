@@ -241,6 +241,9 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 				if y := result(a, "q_allow"); y != nil {
 					allow = append(allow, layout.Run{Math: rowEq("q_allow", y.Q.V, "kPa"), Own: true})
 				}
+			case a.Size != nil:
+				size = layout.Cell{txt("sized: " + shortShape(a.Size.Footing))}
+				bear, slide, settl = sizeCells(a)
 			}
 		}
 		dash := func(c layout.Cell) layout.Cell {
@@ -330,6 +333,8 @@ func governingAnalyses(as []*eval.Block) []*eval.Block {
 			kind = "settlement"
 		case a.Capacity != nil:
 			kind = "capacity"
+		case a.Size != nil:
+			kind = "size"
 		default:
 			continue
 		}
