@@ -17,6 +17,13 @@ import (
 // working at the chosen size as the bearing and settlement blocks print
 // it.
 func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
+	return c.sizeWorking(s, b, true)
+}
+
+// sizeWorking prints a size block; without settle the settlement's
+// working is left out (its result stays in the table of checks): a
+// schedule's rows other than the governing one under detail = governing.
+func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, settle bool) []layout.Block {
 	r := b.Size
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
@@ -101,7 +108,7 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	bb := &eval.Block{Kind: sheet.KindBearing, Name: b.Name, Span: b.Span, Sheet: b.Sheet, On: b.On, Of: &f,
 		Bearing: r.Bearing, Options: b.Options, SelfWeight: r.WeightT}
 	out = append(out, c.bearing(s, bb)...)
-	if r.Settle != nil {
+	if r.Settle != nil && settle {
 		sb := &eval.Block{Kind: sheet.KindSettlement, Name: b.Name, Span: b.Span, Sheet: b.Sheet, On: b.On, Of: &f,
 			Settle: &eval.SettleResult{Service: r.Service, Load: r.Load, Result: r.Settle}, Options: b.Options, SelfWeight: r.WeightT}
 		out = append(out, c.settlement(s, sb)...)

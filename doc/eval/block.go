@@ -32,6 +32,7 @@ type Block struct {
 	Capacity *CapacityResult
 	Diff     *DiffResult // differential blocks
 	Size     *SizeResult // size blocks
+	Schedule *ScheduleResult
 	Options  []string    // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
@@ -137,6 +138,15 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 	s.blocks[b] = blk
 	if b.Kind == sheet.KindDifferential {
 		e.differential(s, b, blk)
+		return
+	}
+	if b.Kind == sheet.KindSchedule {
+		g, gok := e.findGround(s, b.Ground)
+		blk.On = g
+		opts := e.options(b)
+		if !gok || opts == nil || !e.schedule(s, b, blk, opts) {
+			e.failResults(s, blk)
+		}
 		return
 	}
 	f, fok := e.findFooting(s, b.Footing)
