@@ -4,11 +4,11 @@ package kind
 type Header int
 
 const (
-	Bare  Header = iota // calc
-	Named               // ground NAME, footing NAME
-	On                  // bearing FOOTING on GROUND [as PREFIX]
-	To                  // differential FOOTING to FOOTING [as PREFIX]
-	NamedOn             // schedule NAME on GROUND [as PREFIX]
+	Bare    Header = iota // calc
+	Named                 // ground NAME, footing NAME
+	On                    // bearing FOOTING on GROUND [as PREFIX]
+	To                    // differential FOOTING to FOOTING [as PREFIX]
+	NamedOn               // schedule NAME on GROUND [as PREFIX]
 )
 
 // Value is the kind of value an option or statement takes.

@@ -33,7 +33,7 @@ type Block struct {
 	Diff     *DiffResult // differential blocks
 	Size     *SizeResult // size blocks
 	Schedule *ScheduleResult
-	Options  []string    // the options in force, "method = ec7", for printing
+	Options  []string // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order
