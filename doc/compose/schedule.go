@@ -35,7 +35,7 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	intro += fmt.Sprintf(". Depth %s unless a row gives its own. Each footing's working is in the appendix", length(r.Footing.D))
 	if c.governingOnly() {
-		intro += " (the settlement working in full for the footing of highest utilisation; with detail = full for every footing)"
+		intro += " (for each footing its checks at the chosen width and one increment smaller and the sizing, and the bearing and settlement working in full for the footing of highest utilisation; with detail = full for every footing)"
 	}
 	intro += "."
 	if len(b.Options) > 0 {
@@ -47,6 +47,14 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 	head := []layout.Cell{{txt("Footing")}, unitHeader("x", "m"), unitHeader("y", "m"), {txt("Size")}, unitHeader("D", "m"),
 		{txt("Governing check")}, {txt("Utilisation")}, unitHeader("s_total", "mm"), {txt("Verdict")}}
 	al := []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft}
+	sourced := false
+	for _, src := range r.Sources {
+		sourced = sourced || src != ""
+	}
+	if sourced {
+		head = append(head, layout.Cell{txt("Source")})
+		al = append(al, layout.AlignLeft)
+	}
 	t := &layout.Table{Pos: o.p, Header: head, Align: al,
 		Caption: []layout.Run{txt("Every footing at its chosen size; the highest utilisation in bold. Each name links to its working.")}}
 	for i, row := range r.Rows {
@@ -68,8 +76,12 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 			verdict = bold("NOT OK")
 		}
 		name := layout.Run{Text: r.Names[i], Link: rowAnchor(b, i), Own: false}
-		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{{name}, {txt(units.Printed(r.X[i], m, -1))}, {txt(units.Printed(r.Y[i], m, -1))},
-			{txt(sz)}, {txt(units.Printed(row.Footing.D, m, -1))}, {txt(gov.Name)}, {u}, {txt(st)}, {verdict}}})
+		cells := []layout.Cell{{name}, {txt(units.Printed(r.X[i], m, -1))}, {txt(units.Printed(r.Y[i], m, -1))},
+			{txt(sz)}, {txt(units.Printed(row.Footing.D, m, -1))}, {txt(gov.Name)}, {u}, {txt(st)}, {verdict}}
+		if sourced {
+			cells = append(cells, richText(r.Sources[i], layout.Regular))
+		}
+		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: cells})
 	}
 	o.add(t)
 	o.add(c.planDrawing(b))
@@ -109,7 +121,8 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 			Size: &eval.SizeResult{Result: row, Ecc: r.Ecc, NoSettle: r.NoSettle}, Options: b.Options, Checks: b.Checks}
 		c.appendix = append(c.appendix, &layout.Anchor{Pos: b.Span, Name: rowAnchor(b, i)})
 		// Under detail = governing only the governing row prints its
-		// settlement working in full; the others give its result.
+		// bearing and settlement working in full; the others their checks
+		// at both widths and the sizing.
 		c.appendix = append(c.appendix, c.sizeWorking(s, rb, !c.governingOnly() || i == r.RowMax)...)
 	}
 	return out

@@ -20,10 +20,11 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	return c.sizeWorking(s, b, true)
 }
 
-// sizeWorking prints a size block; without settle the settlement's
-// working is left out (its result stays in the table of checks): a
-// schedule's rows other than the governing one under detail = governing.
-func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, settle bool) []layout.Block {
+// sizeWorking prints a size block; with full false only its answer, the
+// table of checks at both widths and the sizing steps (the bearing and
+// settlement working left out): a schedule's rows other than the governing
+// one under detail = governing.
+func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, full bool) []layout.Block {
 	r := b.Size
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
@@ -99,6 +100,9 @@ func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, settle bool) []layo
 	o.label("Sizing")
 	o.steps(&r.Trace, indices(len(r.Trace.Steps)), "sizing")
 	out := o.done()
+	if !full {
+		return out
+	}
 
 	// The working at the chosen size, as a bearing and a settlement block
 	// print it: the footing as sized, the same ground and options.
@@ -108,7 +112,7 @@ func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, settle bool) []layo
 	bb := &eval.Block{Kind: sheet.KindBearing, Name: b.Name, Span: b.Span, Sheet: b.Sheet, On: b.On, Of: &f,
 		Bearing: r.Bearing, Options: b.Options, SelfWeight: r.WeightT}
 	out = append(out, c.bearing(s, bb)...)
-	if r.Settle != nil && settle {
+	if r.Settle != nil {
 		sb := &eval.Block{Kind: sheet.KindSettlement, Name: b.Name, Span: b.Span, Sheet: b.Sheet, On: b.On, Of: &f,
 			Settle: &eval.SettleResult{Service: r.Service, Load: r.Load, Result: r.Settle}, Options: b.Options, SelfWeight: r.WeightT}
 		out = append(out, c.settlement(s, sb)...)

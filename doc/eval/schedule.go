@@ -37,6 +37,7 @@ type ScheduleResult struct {
 	*size.Schedule
 	Names    []string // the footings' names, by row
 	Keys     []string // their symbol form (NAME.KEY.B)
+	Sources  []string // each row's source column ("" when none)
 	X, Y     []float64
 	Ecc      size.Ecc
 	NoSettle bool
@@ -179,6 +180,7 @@ func (e *evaluator) schedule(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 			r.D = site.Some(d)
 		}
 		res.Names = append(res.Names, name)
+		res.Sources = append(res.Sources, t.text(i, "source"))
 		res.Keys = append(res.Keys, t.keys[i])
 		res.X, res.Y = append(res.X, x), append(res.Y, y)
 		in.Rows = append(in.Rows, r)
