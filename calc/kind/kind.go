@@ -165,3 +165,19 @@ func PerRun(unit string) string {
 	}
 	return unit
 }
+
+// RowResult returns the row result named sym.
+func (s *Spec) RowResult(sym string) (Result, bool) {
+	for _, r := range s.RowResults {
+		if r.Symbol == sym {
+			return r, true
+		}
+	}
+	return Result{}, false
+}
+
+// RowMeaning is the meaning of the row result sym ("" if none).
+func (s *Spec) RowMeaning(sym string) string {
+	r, _ := s.RowResult(sym)
+	return r.Meaning
+}

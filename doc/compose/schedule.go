@@ -108,6 +108,9 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 				{txt(units.Printed(p.Diff.Delta, mm, -1))}, {bc}, {verdict}}})
 		}
 		o.add(pt)
+		pm := r.Pairs[r.PairMax]
+		o.para(txt(fmt.Sprintf("Largest distortion: %s to %s, ", r.Names[pm.A], r.Names[pm.B])), layout.Run{Math: eqn.Sym{Name: "beta_max"}, Own: true},
+			txt(fmt.Sprintf(" = %s = 1/%.0f.", units.Printed(r.BetaMax, units.Dimensionless, -1), 1/math.Max(r.BetaMax, 1e-12))))
 		if ch := findCheck(b, "differential"); ch != nil {
 			o.add(c.checkBlock(o.p, ch, "beta_max", "beta_lim"))
 		}

@@ -249,13 +249,14 @@ func (e *evaluator) scheduleResults(s *Sheet, blk *Block, r *ScheduleResult) {
 	}
 	for i, row := range r.Rows {
 		k := r.Keys[i]
-		def(k+".B", units.Quantity{V: row.B, Dim: units.Length}, m, "width chosen for "+r.Names[i], false)
+		of := func(sym string) string { return size.ScheduleSpec.RowMeaning(sym) + " (" + r.Names[i] + ")" }
+		def(k+".B", units.Quantity{V: row.B, Dim: units.Length}, m, of("B"), false)
 		if r.Footing.Shape == site.Rectangle {
-			def(k+".L", units.Quantity{V: row.L, Dim: units.Length}, m, "length of "+r.Names[i], false)
+			def(k+".L", units.Quantity{V: row.L, Dim: units.Length}, m, of("L"), false)
 		}
-		def(k+".util", units.Quantity{V: row.At.Util()}, units.Dimensionless, "governing utilisation of "+r.Names[i], true)
+		def(k+".util", units.Quantity{V: row.At.Util()}, units.Dimensionless, of("util"), true)
 		if row.Settle != nil {
-			def(k+".s_total", units.Quantity{V: row.Settle.Total, Dim: units.Length}, mm, "total settlement of "+r.Names[i], false)
+			def(k+".s_total", units.Quantity{V: row.Settle.Total, Dim: units.Length}, mm, of("s_total"), false)
 		}
 		gov := row.At.Checks[row.At.Governing]
 		note := fmt.Sprintf("%s at B = %s governs", gov.Name, units.Printed(row.B, m, -1))

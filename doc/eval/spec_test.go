@@ -2,6 +2,7 @@ package eval_test
 
 import (
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/plinth-calc/plinth/calc/kind"
@@ -35,6 +36,15 @@ func TestResultsAsDeclared(t *testing.T) {
 		for _, y := range b.Results {
 			sym := y.Name[len(b.Name)+1:]
 			r, ok := spec.Result(sym)
+			if _, rowSym, row := strings.Cut(sym, "."); row && len(spec.RowResults) > 0 {
+				// a schedule row's result, NAME.ROW.sym: the row's name after the meaning
+				rr, rok := spec.RowResult(rowSym)
+				if !rok || y.Unit.Name != rr.Unit || !strings.HasPrefix(y.Note.Value, rr.Meaning+" (") {
+					t.Errorf("%s %s: row result %s %q %q not as declared", b.Kind, b.Name, sym, y.Unit.Name, y.Note.Value)
+				}
+				seen[b.Kind.String()+" "+rowSym] = true
+				continue
+			}
 			if !ok {
 				t.Errorf("%s %s: %s is not in the spec", b.Kind, b.Name, sym)
 				continue
