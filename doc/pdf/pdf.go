@@ -60,23 +60,35 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 		Producer:     "plinth",
 		CreationDate: opt.Time,
 	})
+	p := &painter{gp: gp, images: map[string]int{}}
 	faces := usedFaces(pages)
+	n := 0
 	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
 		if !faces[f] {
 			continue
 		}
-		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), gopdf.TtfOption{UseKerning: true}); err != nil {
+		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), ttfOption); err != nil {
 			return fmt.Errorf("pdf: embedding %s: %w", f, err)
 		}
+		g, err := newGlyphs(f, n)
+		if err != nil {
+			return err
+		}
+		p.glyphs[f] = g
+		n++
 	}
 	marks := map[int][]layout.Bookmark{}
 	for _, b := range pages.Outline {
 		marks[b.Page] = append(marks[b.Page], b)
 	}
-	p := &painter{gp: gp}
+	// Each page's stream is compressed as soon as it is drawn; only the
+	// compressed bytes are kept (pack puts them in place), and with
+	// Release the page's boxes go too.
+	streams := make([][]byte, len(pages.Pages))
+	z := newZipper()
 	for i, pg := range pages.Pages {
 		gp.AddPageWithOption(gopdf.PageOption{PageSize: &gopdf.Rect{W: pg.W, H: pg.H}})
-		p.reset()
+		p.page(pg.H)
 		for _, b := range marks[i] {
 			gp.SetY(b.Y + 20)
 			gp.AddOutlineWithPosition(b.Title)
@@ -86,6 +98,13 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
 			}
 		}
+		if p.opened {
+			s, err := z.compress(p.c.b)
+			if err != nil {
+				return err
+			}
+			streams[i] = s
+		}
 		if opt.Release {
 			pg.Boxes = nil
 		}
@@ -93,12 +112,14 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			opt.Progress(i+1, len(pages.Pages))
 		}
 	}
+	if err := p.subsetFonts(); err != nil {
+		return err
+	}
 	var buf bytes.Buffer
-	buf.Grow(64<<10 + 56<<10*len(pages.Pages)) // spare the doublings of a growing buffer
 	if _, err := gp.WriteTo(&buf); err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
-	out, err := pack(buf.Bytes())
+	out, err := pack(buf.Bytes(), streams)
 	if err != nil {
 		return err
 	}
