@@ -22,7 +22,7 @@ var bodyStyle = textStyle{size: bodySize, lead: bodyLead, color: ink}
 func linePieces(kind string, pos source.Position, lines []line, width, before float64) []*piece {
 	ps := make([]*piece, len(lines))
 	for i, ln := range lines {
-		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.items}
+		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.appendItems(nil, 0, 0)}
 		ps[i] = &piece{box: b, base: ln.base}
 	}
 	if n := len(ps); n > 1 {
@@ -81,7 +81,7 @@ func (e *engine) heading(h *Heading, width float64) []*piece {
 			e.checkGlyphs(number, fonts.Bold, h.Pos)
 			b.Items = append(b.Items, draw.Text{X: 0, Y: ln.base, Face: fonts.Bold, Size: size, Color: accent, Text: number})
 		}
-		b.Items = appendOffset(b.Items, ln.items, numW, y)
+		b.Items = ln.appendItems(b.Items, numW, y)
 		y += ln.h
 	}
 	if lvl == 1 {
@@ -199,7 +199,7 @@ func (e *engine) caption(runs []Run, width float64, pos source.Position) (items 
 	}
 	st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
 	for _, ln := range e.setText(runs, width*0.9, st, pos) {
-		items = appendOffset(items, ln.items, (width-ln.w)/2, h)
+		items = ln.appendItems(items, (width-ln.w)/2, h)
 		h += ln.h
 	}
 	return items, h

@@ -127,7 +127,7 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 			y = pad + f.base - lines[0].base
 		}
 		for _, ln := range lines {
-			b.Items = appendOffset(b.Items, ln.items, x, y)
+			b.Items = ln.appendItems(b.Items, x, y)
 			y += ln.h
 		}
 		h = math.Max(h, y)
@@ -174,7 +174,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	if len(c.Note) > 0 {
 		y := h + 1
 		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
-			noteItems = appendOffset(noteItems, ln.items, pad, y)
+			noteItems = ln.appendItems(noteItems, pad, y)
 			y += ln.h
 		}
 		h = y

@@ -26,7 +26,7 @@ func (e *engine) variantBanner(variant []string) *Box {
 	h := pad
 	var text []draw.Item
 	for _, ln := range lines {
-		text = appendOffset(text, ln.items, pad+4, h)
+		text = ln.appendItems(text, pad+4, h)
 		h += ln.h
 	}
 	h += pad

@@ -61,10 +61,11 @@ type word struct {
 	hard  bool    // a forced line break follows
 }
 
-// line is a set line: items relative to the left end of its baseline.
+// line is a set line: its words, measured; appendItems draws them.
 type line struct {
 	w, h, base float64 // width, height, baseline from the top
-	items      []draw.Item
+	ws         []word
+	st         textStyle
 }
 
 func (st textStyle) faceOf(s Style) fonts.Face {
@@ -90,11 +91,19 @@ func (st textStyle) faceOf(s Style) fonts.Face {
 
 // words cuts runs into words, checking every character against its font.
 func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
-	var ws []word
+	n := 0
+	for _, r := range runs {
+		n += len(r.Text)/6 + 1
+	}
+	ws := make([]word, 0, n)
+	// the frags of every word, each word's a full slice of its own part
+	frags := make([]frag, 0, n)
 	var cur word
+	from := 0 // where cur's frags begin in frags
 	open := false
 	end := func(space float64, hard bool) {
 		if open || hard {
+			cur.frags = frags[from:len(frags):len(frags)]
 			cur.space, cur.hard = space, hard
 			if !open && len(ws) > 0 && hard { // a break right after a space
 				ws[len(ws)-1].hard = true
@@ -105,6 +114,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			ws[len(ws)-1].space = space
 		}
 		cur, open = word{}, false
+		from = len(frags)
 	}
 	for _, r := range runs {
 		color := st.color
@@ -121,7 +131,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			if n, ok := leadNum(r.Math); ok {
 				fr.text, fr.face = n, fonts.Regular // a number (with its unit): its digits, for decimal alignment
 			}
-			cur.frags = append(cur.frags, fr)
+			frags = append(frags, fr)
 			cur.w += b.W
 			open = true
 			continue
@@ -150,7 +160,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			if i > start {
 				s := text[start:i]
 				w := f.Width(s, size)
-				cur.frags = append(cur.frags, frag{text: s, face: face, size: size, rise: rise, color: color, link: r.Link, w: w})
+				frags = append(frags, frag{text: s, face: face, size: size, rise: rise, color: color, link: r.Link, w: w})
 				cur.w += w
 				open = true
 			}
@@ -266,44 +276,50 @@ func excerpt(s string, r rune) string {
 // characters of the text.
 func breakLines(ws []word, width float64, st textStyle) []line {
 	var lines []line
-	var cur []word
+	// the words of every line, each line's a full slice of its own part
+	placed := make([]word, 0, len(ws)+2)
+	from := 0
 	x := 0.0
 	flush := func() {
-		lines = append(lines, setLine(cur, st))
-		cur, x = nil, 0
+		lines = append(lines, setLine(placed[from:len(placed):len(placed)], st))
+		from, x = len(placed), 0
 	}
-	for i := 0; i < len(ws); i++ {
+	var tail word // the rest of ws[i] once its head is set
+	split := false
+	for i := 0; i < len(ws); {
 		w := ws[i]
+		if split {
+			w = tail
+		}
 		gap := 0.0
-		if len(cur) > 0 {
-			gap = cur[len(cur)-1].space
+		if len(placed) > from {
+			gap = placed[len(placed)-1].space
 		}
 		switch {
 		case x+gap+w.w <= width+1e-9:
-			cur = append(cur, w)
+			placed = append(placed, w)
 			x += gap + w.w
-		case len(cur) > 0:
+		case len(placed) > from:
 			flush()
-			i--
 			continue
 		default: // alone and too long: split it
-			head, tail, ok := splitWord(w, width)
+			head, t, ok := splitWord(w, width)
 			if !ok { // nothing to split: set it as it is
-				cur = append(cur, w)
+				placed = append(placed, w)
 				x += w.w
 				break
 			}
-			cur = append(cur, head)
+			placed = append(placed, head)
 			flush()
-			ws[i] = tail
-			i--
+			tail, split = t, true
 			continue
 		}
+		i, split = i+1, false
 		if w.hard {
 			flush()
 		}
 	}
-	if len(cur) > 0 || len(lines) == 0 {
+	if len(placed) > from || len(lines) == 0 {
 		flush()
 	}
 	return lines
@@ -402,13 +418,11 @@ done:
 	return head, tail, true
 }
 
-// setLine places words on a line and measures it. Items are relative to
-// the top-left of the line; the baseline is at ln.base.
+// setLine measures a line of words; appendItems places them.
 func setLine(ws []word, st textStyle) line {
 	f := fonts.Get(st.face)
 	asc, desc := f.Ascent(st.size), f.Descent(st.size)
 	leading := st.lead*st.size - asc - desc
-	textAsc := asc
 	for _, w := range ws { // inline formulas may make the line taller
 		for _, fr := range w.frags {
 			if fr.math != nil {
@@ -417,22 +431,55 @@ func setLine(ws []word, st textStyle) line {
 			}
 		}
 	}
-	var ln line
+	ln := line{ws: ws, st: st}
 	ln.h = math.Max(st.lead*st.size, asc+desc+leading)
 	ln.base = leading/2 + asc
+	x := 0.0
+	for i, w := range ws {
+		for _, fr := range w.frags {
+			x += fr.w
+		}
+		if i < len(ws)-1 {
+			x += w.space
+		}
+	}
+	ln.w = x
+	return ln
+}
+
+// appendItems appends the line's primitives to dst with the top-left of
+// the line at (dx, dy), and returns the extended slice. Consecutive words
+// in one face, size, colour and baseline, a space apart, are one text
+// item.
+func (ln *line) appendItems(dst []draw.Item, dx, dy float64) []draw.Item {
+	st := ln.st
+	f := fonts.Get(st.face)
+	textAsc := f.Ascent(st.size)
 	base := ln.base
 	x := 0.0
 	var linkTarget string
 	var linkX float64
 	closeLink := func(at float64) {
 		if linkTarget != "" {
-			ln.items = append(ln.items, draw.Link{X: linkX, Y: base - textAsc, W: at - linkX, H: textAsc + f.Descent(st.size), Target: linkTarget})
+			dst = append(dst, draw.Link{X: linkX + dx, Y: base - textAsc + dy, W: at - linkX, H: textAsc + f.Descent(st.size), Target: linkTarget})
 		}
 		linkTarget = ""
 	}
-	lastText := -1 // index in ln.items of a text item the next frag may extend
-	pending := ""  // the space between that item and the next frag
-	for i, w := range ws {
+	lastText := -1 // index in dst of the text item the next frag may extend (cur)
+	var cur draw.Text
+	var curY float64  // cur's baseline before the move by dy
+	var joined []byte // cur's text once words are joined to it
+	closeText := func() {
+		if lastText >= 0 {
+			if joined != nil {
+				cur.Text = string(joined)
+			}
+			dst[lastText] = cur
+		}
+		lastText, joined = -1, nil
+	}
+	pending := false // a space between cur and the next frag
+	for i, w := range ln.ws {
 		for _, fr := range w.frags {
 			if fr.link != linkTarget {
 				closeLink(x)
@@ -441,43 +488,44 @@ func setLine(ws []word, st textStyle) line {
 				}
 			}
 			if fr.math != nil {
-				ln.items = fr.math.AppendItems(ln.items, x, base)
-				lastText = -1
+				closeText()
+				dst = fr.math.AppendItemsThen(dst, x, base, dx, dy)
 			} else {
-				t := draw.Text{X: x, Y: base - fr.rise, Face: fr.face, Size: fr.size, Color: fr.color, Text: fr.text}
-				if lastText >= 0 {
-					prev := ln.items[lastText].(draw.Text)
-					if prev.Face == t.Face && prev.Size == t.Size && prev.Color == t.Color && prev.Y == t.Y {
-						prev.Text += pending + t.Text
-						ln.items[lastText] = prev
-						t.Text = ""
+				y := base - fr.rise
+				t := draw.Text{X: x + dx, Y: y + dy, Face: fr.face, Size: fr.size, Color: fr.color, Text: fr.text}
+				if lastText >= 0 && cur.Face == t.Face && cur.Size == t.Size && cur.Color == t.Color && curY == y {
+					if joined == nil {
+						joined = append(make([]byte, 0, 2*len(cur.Text)+len(t.Text)+8), cur.Text...)
 					}
+					if pending {
+						joined = append(joined, ' ')
+					}
+					joined = append(joined, t.Text...)
+				} else if t.Text != "" {
+					closeText()
+					cur, curY, lastText = t, y, len(dst)
+					dst = append(dst, nil) // cur's place, filled when it closes
 				}
-				if t.Text != "" {
-					ln.items = append(ln.items, t)
-					lastText = len(ln.items) - 1
-				}
-				pending = ""
+				pending = false
 			}
 			x += fr.w
 		}
-		if i < len(ws)-1 {
+		if i < len(ln.ws)-1 {
 			x += w.space
 			// a gap of exactly one space of the last face keeps the text
 			// item open; any other gap closes it
 			if lastText >= 0 {
-				prev := ln.items[lastText].(draw.Text)
-				if sp := fonts.Get(prev.Face).Width(" ", prev.Size); math.Abs(sp-w.space) < 1e-9 {
-					pending = " "
+				if sp := fonts.Get(cur.Face).Width(" ", cur.Size); math.Abs(sp-w.space) < 1e-9 {
+					pending = true
 				} else {
-					lastText = -1
+					closeText()
 				}
 			}
 		}
 	}
+	closeText()
 	closeLink(x)
-	ln.w = x
-	return ln
+	return dst
 }
 
 // setText breaks runs into lines of at most width.

@@ -16,6 +16,10 @@ type Box struct {
 	W, Ascent, Descent float64
 	items              []draw.Item // its own primitives
 	kids               []kid       // boxes placed inside it
+	// a box of text (ctx.text) holds its one primitive here, so it is
+	// boxed into an Item only once, when placed
+	text    draw.Text
+	hasText bool
 }
 
 type kid struct {
@@ -29,15 +33,43 @@ func (b *Box) Items() []draw.Item { return b.AppendItems(nil, 0, 0) }
 // AppendItems appends every primitive of the box to dst, moved by
 // (dx, dy), and returns the extended slice.
 func (b *Box) AppendItems(dst []draw.Item, dx, dy float64) []draw.Item {
+	return b.appendItems(dst, dx, dy, 0, 0, false)
+}
+
+// AppendItemsThen appends every primitive of the box to dst, moved by
+// (dx, dy) and then by (ex, ey): the values AppendItems followed by
+// draw.Offset gives, without the second copy.
+func (b *Box) AppendItemsThen(dst []draw.Item, dx, dy, ex, ey float64) []draw.Item {
+	return b.appendItems(dst, dx, dy, ex, ey, true)
+}
+
+func (b *Box) appendItems(dst []draw.Item, dx, dy, ex, ey float64, then bool) []draw.Item {
+	if b.hasText {
+		t := b.text
+		if dx != 0 || dy != 0 {
+			t.X += dx
+			t.Y += dy
+		}
+		if then {
+			t.X += ex
+			t.Y += ey
+		}
+		dst = append(dst, t)
+	}
 	for _, it := range b.items {
-		if dx == 0 && dy == 0 {
+		switch {
+		case then && dx == 0 && dy == 0:
+			dst = append(dst, draw.Offset(it, ex, ey))
+		case then:
+			dst = append(dst, draw.OffsetThen(it, dx, dy, ex, ey))
+		case dx == 0 && dy == 0:
 			dst = append(dst, it)
-		} else {
+		default:
 			dst = append(dst, draw.Offset(it, dx, dy))
 		}
 	}
 	for _, k := range b.kids {
-		dst = k.b.AppendItems(dst, dx+k.x, dy+k.y)
+		dst = k.b.appendItems(dst, dx+k.x, dy+k.y, ex, ey, then)
 	}
 	return dst
 }
@@ -100,6 +132,9 @@ func (c *ctx) sub(d *ctx) {
 }
 
 func (b *Box) place(c *Box, x, dy float64) {
+	if b.kids == nil {
+		b.kids = make([]kid, 0, 4)
+	}
 	b.kids = append(b.kids, kid{c, x, dy})
 	b.Ascent = math.Max(b.Ascent, c.Ascent-dy)
 	b.Descent = math.Max(b.Descent, c.Descent+dy)
@@ -135,9 +170,8 @@ func (c *ctx) text(s string, face fonts.Face) *Box {
 		c.err = &GlyphError{Rune: r, Face: face, Text: s}
 	}
 	a, d := f.Ink(s, c.size)
-	return &Box{W: f.Width(s, c.size), Ascent: a, Descent: d, items: []draw.Item{
-		draw.Text{Face: face, Size: c.size, Color: c.color, Text: s},
-	}}
+	return &Box{W: f.Width(s, c.size), Ascent: a, Descent: d, hasText: true,
+		text: draw.Text{Face: face, Size: c.size, Color: c.color, Text: s}}
 }
 
 func (c *ctx) axis() float64 { return fonts.Get(fonts.Regular).XHeight(c.size)/2 + 0.01*c.size }
@@ -242,7 +276,7 @@ func (c *ctx) opSpace(k opClass) (before, after float64) {
 }
 
 func (c *ctx) row(r Row) *Box {
-	nodes := flatten(r, nil)
+	nodes := flatten(r, make([]Node, 0, len(r)))
 	return c.assemble(nodes, c.boxes(nodes), false)
 }
 
@@ -294,7 +328,7 @@ func (c *ctx) spacing(nodes []Node, i int, cont bool) (before, after float64) {
 
 // assemble sets laid-out nodes side by side with operator spacing.
 func (c *ctx) assemble(nodes []Node, boxes []*Box, cont bool) *Box {
-	b := &Box{}
+	b := &Box{kids: make([]kid, 0, len(nodes))}
 	x := 0.0
 	for i := range nodes {
 		before, after := c.spacing(nodes, i, cont)
