@@ -47,6 +47,7 @@ type composer struct {
 	appendix  []layout.Block                // working left out of the main flow (detail = governing)
 	pageRefs  []pageRef                     // runs that print the page of an anchor
 	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
+	uses      map[*eval.Footing]footingUse  // each footing's ground and governing analysis (sketch.go)
 }
 
 // pageRef is a run that prints the page an anchor is on, filled in once

@@ -22,21 +22,8 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if f.SelfWeight {
 		sk.Thickness = f.H
 	}
-	var on *eval.Ground
-	var gov *eval.Block
-	for _, t := range c.res.Sheets {
-		for _, x := range t.Blocks() {
-			if x.Of != f {
-				continue
-			}
-			if on == nil {
-				on = x.On
-			}
-			if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
-				gov = x
-			}
-		}
-	}
+	u := c.footingUses()[f]
+	on, gov := u.on, u.gov
 	if on != nil {
 		g := on.Model
 		if g.Water.Set {
@@ -105,4 +92,37 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
 	return []layout.Block{&layout.Drawing{Pos: pos(b.Span), W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+}
+
+// footingUse is what the analyses of a footing say about it: the ground
+// of the first, and the first bearing analysis with a governing case.
+type footingUse struct {
+	on  *eval.Ground
+	gov *eval.Block
+}
+
+// footingUses indexes every analysis by its footing, once per document (a
+// search of every sheet for each footing's sketch grew with the square of
+// the sheets).
+func (c *composer) footingUses() map[*eval.Footing]footingUse {
+	if c.uses != nil {
+		return c.uses
+	}
+	c.uses = map[*eval.Footing]footingUse{}
+	for _, t := range c.res.Sheets {
+		for _, x := range t.Blocks() {
+			if x.Of == nil {
+				continue
+			}
+			u := c.uses[x.Of]
+			if u.on == nil {
+				u.on = x.On
+			}
+			if u.gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
+				u.gov = x
+			}
+			c.uses[x.Of] = u
+		}
+	}
+	return c.uses
 }

@@ -35,10 +35,10 @@ type painter struct {
 	hasFont, hasText, hasStroke, hasFill bool
 }
 
-// page starts a page h points high.
-func (p *painter) page(h float64) {
+// page starts a page h points high, its stream written into buf.
+func (p *painter) page(h float64, buf []byte) {
 	p.hasFont, p.hasText, p.hasStroke, p.hasFill = false, false, false, false
-	p.c.b, p.c.h, p.opened = p.c.b[:0], h, false
+	p.c.b, p.c.h, p.opened = buf[:0], h, false
 }
 
 // open makes sure gopdf has the page's content object, so the objects of

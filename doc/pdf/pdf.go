@@ -81,14 +81,14 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	for _, b := range pages.Outline {
 		marks[b.Page] = append(marks[b.Page], b)
 	}
-	// Each page's stream is compressed as soon as it is drawn; only the
-	// compressed bytes are kept (pack puts them in place), and with
-	// Release the page's boxes go too.
-	streams := make([][]byte, len(pages.Pages))
-	z := newZipper()
+	// Each page's stream is compressed as soon as it is drawn (on another
+	// core); only the compressed bytes are kept (pack puts them in place),
+	// and with Release the page's boxes go too.
+	zp := newZipPool(len(pages.Pages))
+	defer zp.close()
 	for i, pg := range pages.Pages {
 		gp.AddPageWithOption(gopdf.PageOption{PageSize: &gopdf.Rect{W: pg.W, H: pg.H}})
-		p.page(pg.H)
+		p.page(pg.H, zp.buffer())
 		for _, b := range marks[i] {
 			gp.SetY(b.Y + 20)
 			gp.AddOutlineWithPosition(b.Title)
@@ -99,11 +99,8 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			}
 		}
 		if p.opened {
-			s, err := z.compress(p.c.b)
-			if err != nil {
-				return err
-			}
-			streams[i] = s
+			zp.add(i, p.c.b)
+			p.c.b = nil
 		}
 		if opt.Release {
 			pg.Boxes = nil
@@ -114,6 +111,10 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	}
 	if err := p.subsetFonts(); err != nil {
 		return err
+	}
+	streams, err := zp.streams()
+	if err != nil {
+		return fmt.Errorf("pdf: %w", err)
 	}
 	var buf bytes.Buffer
 	if _, err := gp.WriteTo(&buf); err != nil {
