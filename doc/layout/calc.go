@@ -101,16 +101,14 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 		eqW = width - noteW - gap
 	}
 	const pad = 1.5
-	f, ok := e.stackFormula(row, eqW, 0, pad, pos, own)
+	// The note goes beside a formula that is one line no wider than eqW;
+	// such a formula is that same line at the full width, so one
+	// breaking at the full width serves both cases.
+	f, ok := e.stackFormula(row, width, 0, pad, pos, own)
 	if !ok {
 		return nil
 	}
 	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
-	if !beside {
-		if f, ok = e.stackFormula(row, width, 0, pad, pos, own); !ok {
-			return nil
-		}
-	}
 	if f.w > width+float64(e.tpl.Margin.Right)-4 {
 		e.probs.add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
 	}
