@@ -307,7 +307,13 @@ func (k *calc) depth() (float64, error) {
 	var root float64
 	found := false
 	prev := lo
-	for zb := step; zb <= capZ+step/2; zb += step {
+	if v, _ := gfun(lo); v <= 0 {
+		// the net pressure is already below the ratio at the base (a light
+		// load, or none net of the overburden): the zone ends there, and the
+		// minimum of B below the base applies
+		root, found = lo, true
+	}
+	for zb := step; !found && zb <= capZ+step/2; zb += step {
 		v, _ := gfun(zb)
 		if v <= 0 {
 			rt, err := solve.Brent(gfun, prev, zb, solve.Options{Tol: 1e-9 * f.B})

@@ -207,7 +207,7 @@ func (a *analyzer) call(n *Call) (units.Dim, bool) {
 			return units.Angle, true
 		}
 		return ds[0], true
-	case "sin", "cos", "tan":
+	case "sin", "cos", "tan", "cot":
 		if ds[0] == units.Angle {
 			return units.None, true
 		}

@@ -29,7 +29,7 @@
 //	primary    = number [ unit ] | symbol | "pi" | "g" | call | "(" expr ")" .
 //	call       = function "(" [ expr { "," expr } ] ")" .
 //	function   = "sqrt" | "abs" | "min" | "max" | "exp" | "ln" | "log10"
-//	           | "sin" | "cos" | "tan" | "asin" | "acos" | "atan" | "atan2"
+//	           | "sin" | "cos" | "tan" | "cot" | "asin" | "acos" | "atan" | "atan2"
 //	           | "floor" | "ceil" | "round" .
 //
 //	number     = digits [ "." { digit } ] [ exp ] | "." digits [ exp ] .

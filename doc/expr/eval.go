@@ -222,6 +222,11 @@ func (e *evaluator) call(n *Call) (float64, *Error) {
 		if math.Abs(math.Cos(x)) < 1e-12 {
 			return 0, domain(n, "tan is infinite at an odd multiple of 90°; got %s°", fmtNum(x*180/math.Pi))
 		}
+	case "cot":
+		// At a multiple of 180° the cotangent is infinite.
+		if math.Abs(math.Sin(x)) < 1e-12 {
+			return 0, domain(n, "cot is infinite at a multiple of 180°; got %s°", fmtNum(x*180/math.Pi))
+		}
 	case "asin", "acos":
 		if x < -1 || x > 1 {
 			return 0, domain(n, "%s needs a value from -1 to 1; got %s", n.Fn, fmtNum(x))
