@@ -17,6 +17,7 @@ type engine struct {
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
+	sp                         space // word and frag chunks (space.go)
 }
 
 // piece is an unbreakable strip of a sheet's body, stacked by the

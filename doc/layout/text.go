@@ -43,13 +43,13 @@ type textStyle struct {
 // frag is a stretch of one word in one face, or one inline formula.
 type frag struct {
 	text  string
-	face  fonts.Face
+	link  string
 	size  float64
 	rise  float64 // baseline shift, up
-	color draw.Color
-	link  string
 	w     float64
 	math  *eqn.Box // an inline formula (text then holds a lone number's digits, else "")
+	face  fonts.Face
+	color draw.Color
 }
 
 // word is what the line breaker moves: frags with no break opportunity
@@ -95,9 +95,10 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 	for _, r := range runs {
 		n += len(r.Text)/6 + 1
 	}
-	ws := make([]word, 0, n)
+	sp := e.space()
+	ws := sp.words(n)
 	// the frags of every word, each word's a full slice of its own part
-	frags := make([]frag, 0, n)
+	frags := sp.frags(n)
 	var cur word
 	from := 0 // where cur's frags begin in frags
 	open := false
@@ -182,7 +183,8 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 	if open {
 		end(0, false)
 	}
-	return ws
+	sp.used(ws, frags)
+	return ws[:len(ws):len(ws)]
 }
 
 // checkGlyphs reports each character the face lacks and drops it.
@@ -276,51 +278,75 @@ func excerpt(s string, r rune) string {
 // characters of the text.
 func breakLines(ws []word, width float64, st textStyle) []line {
 	var lines []line
-	// the words of every line, each line's a full slice of its own part
-	placed := make([]word, 0, len(ws)+2)
-	from := 0
+	// The line being filled: lead (the rest of a word split at the end of
+	// the line before) when leadIn, then the whole words ws[from:to]. A
+	// line of whole words only is set from ws itself, not a copy.
+	from, to := 0, 0
+	var lead, pend word // pend: the rest of a split word, still to place
+	leadIn, hasPend := false, false
 	x := 0.0
-	flush := func() {
-		lines = append(lines, setLine(placed[from:len(placed):len(placed)], st))
-		from, x = len(placed), 0
+	flush := func(head *word) {
+		lw := ws[from:to:to]
+		if leadIn || head != nil {
+			lw = make([]word, 0, to-from+2)
+			if leadIn {
+				lw = append(lw, lead)
+			}
+			lw = append(lw, ws[from:to]...)
+			if head != nil {
+				lw = append(lw, *head)
+			}
+		}
+		lines = append(lines, setLine(lw, st))
+		from, x, leadIn = to, 0, false
 	}
-	var tail word // the rest of ws[i] once its head is set
-	split := false
-	for i := 0; i < len(ws); {
-		w := ws[i]
-		if split {
-			w = tail
+	place := func(w word, isPend bool) {
+		if isPend {
+			lead, leadIn, hasPend = w, true, false
+		} else {
+			to++
+		}
+	}
+	for hasPend || to < len(ws) {
+		w, isPend := pend, hasPend
+		if !isPend {
+			w = ws[to]
 		}
 		gap := 0.0
-		if len(placed) > from {
-			gap = placed[len(placed)-1].space
+		if to > from {
+			gap = ws[to-1].space
+		} else if leadIn {
+			gap = lead.space
 		}
+		empty := to == from && !leadIn
 		switch {
 		case x+gap+w.w <= width+1e-9:
-			placed = append(placed, w)
+			place(w, isPend)
 			x += gap + w.w
-		case len(placed) > from:
-			flush()
+		case !empty:
+			flush(nil)
 			continue
 		default: // alone and too long: split it
-			head, t, ok := splitWord(w, width)
+			head, tail, ok := splitWord(w, width)
 			if !ok { // nothing to split: set it as it is
-				placed = append(placed, w)
+				place(w, isPend)
 				x += w.w
 				break
 			}
-			placed = append(placed, head)
-			flush()
-			tail, split = t, true
+			flush(&head)
+			if !isPend {
+				to++ // its head is set, its tail comes next
+				from = to
+			}
+			pend, hasPend = tail, true
 			continue
 		}
-		i, split = i+1, false
 		if w.hard {
-			flush()
+			flush(nil)
 		}
 	}
-	if len(placed) > from || len(lines) == 0 {
-		flush()
+	if to > from || leadIn || len(lines) == 0 {
+		flush(nil)
 	}
 	return lines
 }

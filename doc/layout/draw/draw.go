@@ -54,11 +54,11 @@ type Item interface {
 // Text is a string set in one face at one size; Y is the baseline.
 type Text struct {
 	X, Y  float64
-	Face  fonts.Face
 	Size  float64
+	Text  string
+	Face  fonts.Face // the small fields last: 48 bytes in all, not 56
 	Color Color
 	Align Align
-	Text  string
 }
 
 // Line is a straight stroke.
