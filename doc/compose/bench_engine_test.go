@@ -64,6 +64,26 @@ func BenchmarkRenderEngine1000(b *testing.B) {
 
 func benchEngine(b *testing.B, n int) { benchPackage(b, writeEngineBenchPackage, n) }
 
+// BenchmarkEvalEngine100 loads, parses and evaluates the 100 engine
+// sheets (the engine's bearing checks included): the part of plinth
+// render before BenchmarkRenderEngine100's.
+func BenchmarkEvalEngine100(b *testing.B) {
+	dir := b.TempDir()
+	if err := writeEngineBenchPackage(dir, 100); err != nil {
+		b.Fatal(err)
+	}
+	cpu0 := cpuSeconds()
+	b.ReportAllocs()
+	b.ResetTimer()
+	for b.Loop() {
+		evaluate(b, dir)
+	}
+	b.StopTimer()
+	if cpu := cpuSeconds() - cpu0; cpu > 0 {
+		b.ReportMetric(cpu/float64(b.N), "cpu-s/op")
+	}
+}
+
 // benchPackage renders a generated package of n sheets from its
 // evaluated form as plinth render does (compose, layout, the PDF with
 // each page's boxes released once drawn) and reports pages, PDF size,

@@ -6,6 +6,7 @@ import (
 	"sync"
 
 	"github.com/signintech/gopdf"
+	"github.com/signintech/gopdf/fontmaker/core"
 
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
@@ -42,6 +43,7 @@ func parsedFace(f fonts.Face) (*gopdf.SubsetFontObj, error) {
 // met them drawing the text itself.
 type glyphs struct {
 	font   *gopdf.SubsetFontObj
+	kerns  core.KernMap // gopdf's kerning pairs, left glyph → right glyph → TTF units (nil: none)
 	number int // the face's font resource, /F<number>
 	upem   int
 	low    []uint32 // rune → glyph+1 for runes below len(low); 0 = not looked up
@@ -56,8 +58,12 @@ func newGlyphs(f fonts.Face, number int) (*glyphs, error) {
 	if err != nil {
 		return nil, err
 	}
-	return &glyphs{font: font, number: number, upem: int(font.GetTTFParser().UnitsPerEm()),
-		low: make([]uint32, lowRunes), high: map[rune]uint32{}}, nil
+	g := &glyphs{font: font, number: number, upem: int(font.GetTTFParser().UnitsPerEm()),
+		low: make([]uint32, lowRunes), high: map[rune]uint32{}}
+	if k := font.GetTTFParser().Kern(); k != nil && ttfOption.UseKerning {
+		g.kerns = k.Kerning
+	}
+	return g, nil
 }
 
 // glyph is the glyph r is drawn with and the character gopdf writes for
@@ -113,13 +119,10 @@ func (g *glyphs) lookup(r rune) (uint, error) {
 }
 
 // kern is gopdf's kerning adjustment between two glyphs in thousandths of
-// an em (TTF units converted as gopdf converts them).
+// an em (TTF units converted as gopdf converts them): its table read as
+// SubsetFontObj.KernValueByLeft reads it, without the copy that makes.
 func (g *glyphs) kern(left, right uint) int {
-	ok, kv := g.font.KernValueByLeft(left)
-	if !ok {
-		return 0
-	}
-	ok, v := kv.ValueByRight(right)
+	v, ok := g.kerns[left][right]
 	if !ok {
 		return 0
 	}

@@ -15,10 +15,37 @@ import (
 type content struct {
 	b []byte
 	h float64 // page height: PDF y runs up from the bottom
+	// the last font size written, and its text
+	size     float64
+	sizeText []byte
 }
 
 // f2 appends x as "%.2f".
-func (c *content) f2(x float64) { c.b = strconv.AppendFloat(c.b, x, 'f', 2, 64) }
+func (c *content) f2(x float64) { c.b = appendF2(c.b, x) }
+
+// appendF2 appends x as strconv formats it with two decimals, through
+// integers when that is certainly the same: x·100 is rounded to the
+// nearest integer (ties to even, as strconv rounds an exact half), unless
+// it lies so near a half that the error of the product could decide, or
+// x is too large for the product to be that close; strconv does those.
+func appendF2(b []byte, x float64) []byte {
+	a := math.Abs(x)
+	if !(a < 1e7) { // also NaN; below 1e7, x·100 is within 1e-7 of exact
+		return strconv.AppendFloat(b, x, 'f', 2, 64)
+	}
+	y := a * 100
+	r := math.RoundToEven(y)
+	if d := math.Abs(y - math.Trunc(y) - 0.5); d < 1e-6 {
+		return strconv.AppendFloat(b, x, 'f', 2, 64)
+	}
+	n := uint64(r)
+	if math.Signbit(x) {
+		b = append(b, '-')
+	}
+	b = strconv.AppendUint(b, n/100, 10)
+	f := n % 100
+	return append(b, '.', byte('0'+f/10), byte('0'+f%10))
+}
 
 func (c *content) s(s string) { c.b = append(c.b, s...) }
 
@@ -144,7 +171,11 @@ func (c *content) textStart(x, y float64, font int, size float64, r, g, b uint8)
 	c.s(" TD\n/F")
 	c.b = strconv.AppendInt(c.b, int64(font), 10)
 	c.sp()
-	c.b = strconv.AppendFloat(c.b, math.Round(1000*size)/1000, 'f', -1, 64)
+	if size != c.size || c.sizeText == nil {
+		c.size = size
+		c.sizeText = strconv.AppendFloat(c.sizeText[:0], math.Round(1000*size)/1000, 'f', -1, 64)
+	}
+	c.b = append(c.b, c.sizeText...)
 	c.s(" Tf 0 Tc 0 Ts\n")
 	c.color(r, g, b, "rg")
 	c.s("[<")
