@@ -44,6 +44,7 @@ func parsedFace(f fonts.Face) (*gopdf.SubsetFontObj, error) {
 type glyphs struct {
 	font   *gopdf.SubsetFontObj
 	kerns  core.KernMap // gopdf's kerning pairs, left glyph → right glyph → TTF units (nil: none)
+	lefts  []bool       // lefts[g]: glyph g begins a pair in kerns (most begin none)
 	number int // the face's font resource, /F<number>
 	upem   int
 	low    []uint32 // rune → glyph+1 for runes below len(low); 0 = not looked up
@@ -62,6 +63,14 @@ func newGlyphs(f fonts.Face, number int) (*glyphs, error) {
 		low: make([]uint32, lowRunes), high: map[rune]uint32{}}
 	if k := font.GetTTFParser().Kern(); k != nil && ttfOption.UseKerning {
 		g.kerns = k.Kerning
+		for l := range g.kerns {
+			if l < 1<<16 {
+				if int(l) >= len(g.lefts) {
+					g.lefts = append(g.lefts, make([]bool, int(l)+1-len(g.lefts))...)
+				}
+				g.lefts[l] = true
+			}
+		}
 	}
 	return g, nil
 }
@@ -122,6 +131,9 @@ func (g *glyphs) lookup(r rune) (uint, error) {
 // an em (TTF units converted as gopdf converts them): its table read as
 // SubsetFontObj.KernValueByLeft reads it, without the copy that makes.
 func (g *glyphs) kern(left, right uint) int {
+	if left < uint(len(g.lefts)) && !g.lefts[left] {
+		return 0
+	}
 	v, ok := g.kerns[left][right]
 	if !ok {
 		return 0

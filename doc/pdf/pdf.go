@@ -116,15 +116,21 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	if err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
+	// gopdf's part is small now the page streams are apart: fonts, page
+	// objects, links, outlines (about 1.6 kB a page)
 	var buf bytes.Buffer
+	buf.Grow(256<<10 + 2<<10*len(pages.Pages))
 	if _, err := gp.WriteTo(&buf); err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
-	out, err := pack(buf.Bytes(), streams)
+	// the information is completed in gopdf's trailer, which pack copies
+	// as it is, rather than in a copy of the finished file
+	small, err := patchInfo(buf.Bytes(), info, opt.Time)
 	if err != nil {
 		return err
 	}
-	if out, err = patchInfo(out, info, opt.Time); err != nil {
+	out, err := pack(small, streams)
+	if err != nil {
 		return err
 	}
 	if len(opt.Files) > 0 {

@@ -165,12 +165,11 @@ func (c *ctx) opFace(s string) fonts.Face {
 
 // text sets s in one face at the current size.
 func (c *ctx) text(s string, face fonts.Face) *Box {
-	f := fonts.Get(face)
-	if r, bad := f.Missing(s); bad && c.err == nil {
+	w, a, d, r, bad := fonts.Get(face).Measure(s, c.size)
+	if bad && c.err == nil {
 		c.err = &GlyphError{Rune: r, Face: face, Text: s}
 	}
-	a, d := f.Ink(s, c.size)
-	return &Box{W: f.Width(s, c.size), Ascent: a, Descent: d, hasText: true,
+	return &Box{W: w, Ascent: a, Descent: d, hasText: true,
 		text: draw.Text{Face: face, Size: c.size, Color: c.color, Text: s}}
 }
 
