@@ -55,7 +55,7 @@ func pack(in []byte, pages [][]byte) ([]byte, error) {
 	for _, p := range pages {
 		size += len(p)
 	}
-	out := bytes.NewBuffer(make([]byte, 0, size/2+len(in)/3))
+	out := bytes.NewBuffer(make([]byte, 0, size+len(in)-xref+1<<10)) // at most: the other streams only shrink
 	out.Write(in[:offs[1]])
 	newOffs := make([]int, count)
 	z := newZipper()
