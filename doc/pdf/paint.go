@@ -11,34 +11,49 @@ import (
 )
 
 // painter draws items into the page's content stream, setting graphics
-// state only when it changes. It writes the stream itself (stream.go);
-// gopdf is asked only for what lives outside the stream: the page's
-// content object (opened on the first operator, where gopdf would have
-// opened it), images, links, anchors and, at the end, the characters each
-// font subset needs.
+// and text state only when it changes. It writes the stream itself
+// (stream.go); gopdf is asked only for what lives outside the stream: the
+// page's content object (opened on the first operator), images, links,
+// anchors and, at the end, the characters each font subset needs.
 type painter struct {
-	gp     *gopdf.GoPdf
-	c      content
-	opened bool // gopdf has made the page's content object
-	glyphs [fonts.NumFaces]*glyphs
-	images map[string]int // image ID → gopdf object index
+	gp      *gopdf.GoPdf
+	c       content
+	opened  bool // gopdf has made the page's content object
+	inText  bool // a text object is open
+	glyphs  [fonts.NumFaces]*glyphs
+	images  map[string]int // image ID → gopdf object index
+	scratch []glyphKern    // one text's glyphs
 
-	face   fonts.Face
-	size   float64
-	text   draw.Color
+	size   float64 // size of the last text drawn (anchors are placed by it)
+	font   *glyphs // the font set, at fontSize
+	fontSz float64
 	stroke draw.Color
-	fill   draw.Color
+	fill   draw.Color // the fill colour, text's included
 	width  float64
 	dash   []float64
 	// which of the above hold on the current page (a new page's content
 	// stream starts from the default graphics state)
-	hasFont, hasText, hasStroke, hasFill bool
+	hasFont, hasStroke, hasFill bool
+}
+
+// glyphKern is a glyph and the kerning before it.
+type glyphKern struct {
+	g    uint
+	kern int
 }
 
 // page starts a page h points high, its stream written into buf.
 func (p *painter) page(h float64, buf []byte) {
-	p.hasFont, p.hasText, p.hasStroke, p.hasFill = false, false, false, false
+	p.hasFont, p.hasStroke, p.hasFill, p.inText = false, false, false, false
 	p.c.b, p.c.h, p.opened = buf[:0], h, false
+}
+
+// finish ends the page's stream: it closes the open text object.
+func (p *painter) finish() {
+	if p.inText {
+		p.c.textEnd()
+		p.inText = false
+	}
 }
 
 // open makes sure gopdf has the page's content object, so the objects of
@@ -48,6 +63,16 @@ func (p *painter) open() {
 	if !p.opened {
 		p.gp.SetStrokeColor(0, 0, 0)
 		p.opened = true
+	}
+}
+
+// shapes makes ready for a path or image: the page's stream open and no
+// text object.
+func (p *painter) shapes() {
+	p.open()
+	if p.inText {
+		p.c.textEnd()
+		p.inText = false
 	}
 }
 
@@ -65,37 +90,22 @@ func (p *painter) box(b *layout.Box) error {
 	return nil
 }
 
-func (p *painter) setFont(f fonts.Face, size float64) {
-	if !p.hasFont || f != p.face || size != p.size {
-		p.face, p.size, p.hasFont = f, size, true
-	}
-}
-
-func (p *painter) setText(c draw.Color) {
-	if !p.hasText || c != p.text {
-		p.text, p.hasText = c, true
-	}
-}
-
 func (p *painter) setStroke(pt draw.Paint) {
 	fresh := !p.hasStroke
 	p.hasStroke = true
 	if fresh || pt.Stroke != p.stroke {
-		p.open()
 		p.c.color(pt.Stroke.R, pt.Stroke.G, pt.Stroke.B, "RG")
 		p.stroke = pt.Stroke
 	}
 	if fresh || pt.Width != p.width {
-		p.open()
 		p.c.lineWidth(pt.Width)
 		p.width = pt.Width
 	}
 	if fresh || !slices.Equal(pt.Dash, p.dash) {
-		p.open()
 		if len(pt.Dash) == 0 {
 			p.c.solid()
 		} else {
-			p.c.dash(pt.Dash, 0)
+			p.c.dash(pt.Dash)
 		}
 		p.dash = append(p.dash[:0], pt.Dash...)
 	}
@@ -103,7 +113,6 @@ func (p *painter) setStroke(pt draw.Paint) {
 
 func (p *painter) setFill(c draw.Color) {
 	if !p.hasFill || c != p.fill {
-		p.open()
 		p.c.color(c.R, c.G, c.B, "rg")
 		p.fill, p.hasFill = c, true
 	}
@@ -114,49 +123,80 @@ func (p *painter) setFill(c draw.Color) {
 func (p *painter) style(pt draw.Paint) string {
 	s := ""
 	if pt.Filled {
-		p.setFill(pt.Fill)
 		s += "F"
 	}
 	if pt.Width > 0 {
-		p.setStroke(pt)
 		s += "D"
+	}
+	if s == "" {
+		return s
+	}
+	p.shapes()
+	if pt.Filled {
+		p.setFill(pt.Fill)
+	}
+	if pt.Width > 0 {
+		p.setStroke(pt)
 	}
 	return s
 }
 
-// glyphsOf is the glyph table of face f (made when the face is embedded).
-func (p *painter) glyphsOf(f fonts.Face) *glyphs {
-	if !f.Valid() {
-		return nil
-	}
-	return p.glyphs[f]
-}
-
-// drawText writes a text object: the font and colour, then the glyphs
-// with gopdf's kerning adjustments between them.
+// drawText writes a text item: in the open text object (or a new one),
+// its font and colour if they changed, its position, then the glyphs with
+// gopdf's kerning adjustments between them (TJ when there are any).
 func (p *painter) drawText(v draw.Text, x, y float64) error {
-	g := p.glyphsOf(p.face)
+	var g *glyphs
+	if v.Face.Valid() {
+		g = p.glyphs[v.Face]
+	}
 	if g == nil {
 		return gopdf.ErrMissingFontFamily
 	}
-	p.open()
-	p.c.textStart(x, y, g.number+1, p.size, p.text.R, p.text.G, p.text.B)
+	p.size = v.Size
+	gs := p.scratch[:0]
+	kerned := false
 	var prev uint
-	first := true
-	for _, r := range v.Text {
+	for i, r := range v.Text {
 		_, gi, err := g.glyph(r)
 		if err != nil {
 			return err
 		}
-		if !first {
-			if k := g.kern(prev, gi); k != 0 {
-				p.c.kern(-k)
-			}
+		k := 0
+		if i > 0 {
+			k = g.kern(prev, gi)
+			kerned = kerned || k != 0
 		}
-		p.c.glyph(gi)
-		prev, first = gi, false
+		gs = append(gs, glyphKern{gi, k})
+		prev = gi
 	}
-	p.c.textEnd()
+	p.scratch = gs
+	p.open()
+	if !p.inText {
+		p.c.textBegin()
+		p.inText = true
+	}
+	if !p.hasFont || g != p.font || v.Size != p.fontSz {
+		p.c.font(g.number+1, v.Size)
+		p.font, p.fontSz, p.hasFont = g, v.Size, true
+	}
+	p.setFill(v.Color)
+	p.c.textAt(x, y)
+	if kerned {
+		p.c.s("[<")
+	} else {
+		p.c.s("<")
+	}
+	for _, gk := range gs {
+		if gk.kern != 0 {
+			p.c.kern(-gk.kern)
+		}
+		p.c.glyph(gk.g)
+	}
+	if kerned {
+		p.c.s(">] TJ\n")
+	} else {
+		p.c.s("> Tj\n")
+	}
 	return nil
 }
 
@@ -167,26 +207,18 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 		if v.Text == "" {
 			return nil
 		}
-		p.setFont(v.Face, v.Size)
-		p.setText(v.Color)
-		// the text colour is written as the fill colour ("rg") inside the
-		// text object, so the fill we last set no longer holds.
-		p.hasFill = false
 		return p.drawText(v, v.Start()+dx, v.Y+dy)
 	case draw.Line:
 		if v.Width <= 0 {
 			return nil
 		}
+		p.shapes()
 		p.setStroke(v.Paint)
-		p.open()
 		p.c.line(v.X1+dx, v.Y1+dy, v.X2+dx, v.Y2+dy)
 	case draw.Rect:
-		s := p.style(v.Paint)
-		if s == "" {
-			return nil
+		if s := p.style(v.Paint); s != "" {
+			p.c.rect(v.X+dx, v.Y+dy, v.W, v.H, s)
 		}
-		p.open()
-		p.c.rect(v.X+dx, v.Y+dy, v.W, v.H, s)
 	case draw.Poly:
 		if len(v.Points) < 2 {
 			return nil
@@ -196,8 +228,6 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 			if s == "" {
 				return nil
 			}
-			p.open()
-			p.c.polygonStart()
 			for i, q := range v.Points {
 				p.c.polygonPoint(q.X+dx, q.Y+dy, i == 0)
 			}
@@ -207,8 +237,8 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 		if v.Width <= 0 {
 			return nil
 		}
+		p.shapes()
 		p.setStroke(v.Paint)
-		p.open()
 		for i := 1; i < len(v.Points); i++ {
 			a, b := v.Points[i-1], v.Points[i]
 			p.c.line(a.X+dx, a.Y+dy, b.X+dx, b.Y+dy)
@@ -219,7 +249,7 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 			return err
 		}
 		// gopdf adds a new image's object before it opens the page's
-		// content object, as it did when it drew the page itself.
+		// content object
 		index, seen := p.images[h.ID()]
 		if !seen {
 			index = p.gp.GetNextObjectID() - 1
@@ -231,6 +261,7 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 			p.images[h.ID()] = index
 		}
 		p.opened = true
+		p.shapes()
 		p.c.image(index, v.X+dx, v.Y+dy, v.W, v.H)
 	case draw.Link:
 		p.gp.AddInternalLink(v.Target, v.X+dx, v.Y+dy, v.W, v.H)

@@ -98,6 +98,7 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
 			}
 		}
+		p.finish()
 		if p.opened {
 			zp.add(i, p.c.b)
 			p.c.b = nil

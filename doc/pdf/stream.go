@@ -7,11 +7,11 @@ import (
 
 // content is one page's content stream, written operator by operator
 // with strconv into a reused buffer: no fmt, no value boxed in an
-// interface, nothing kept once the page is compressed. Each operator is
-// spelt exactly as gopdf's own content writer spells it (its formats are
-// quoted beside each method), so the page streams are the bytes gopdf
-// would write; gopdf still writes everything else (fonts, pages,
-// outlines, links, images, the cross-reference table).
+// interface, nothing kept once the page is compressed. It is lean: text
+// items that follow one another share one text object, and the font and
+// colours are written only when they change (the painter keeps the state).
+// gopdf writes everything else (fonts, pages, outlines, links, images,
+// the cross-reference table).
 type content struct {
 	b []byte
 	h float64 // page height: PDF y runs up from the bottom
@@ -71,18 +71,17 @@ func (c *content) color(r, g, b uint8, op string) {
 	c.b = append(c.b, '\n')
 }
 
-// lineWidth: "%.2f w\n".
+// lineWidth: "w".
 func (c *content) lineWidth(w float64) {
 	c.f2(w)
 	c.s(" w\n")
 }
 
-// solid: gopdf's line type "solid", "[] 0 d\n".
+// solid: an empty dash array.
 func (c *content) solid() { c.s("[] 0 d\n") }
 
-// dash: "%0.2f %0.2f d\n" of the dash array and phase, fmt printing the
-// array as "[a b]".
-func (c *content) dash(a []float64, phase float64) {
+// dash: the dash array a, phase 0.
+func (c *content) dash(a []float64) {
 	c.b = append(c.b, '[')
 	for i, x := range a {
 		if i > 0 {
@@ -90,35 +89,43 @@ func (c *content) dash(a []float64, phase float64) {
 		}
 		c.f2(x)
 	}
-	c.s("] ")
-	c.f2(phase)
-	c.s(" d\n")
+	c.s("] 0 d\n")
 }
 
-// line: "q\n", "%0.2f %0.2f m %0.2f %0.2f l S\n", "Q\n".
+// point appends a point, y turned up from the bottom, and the operator.
+func (c *content) point(x, y float64, op string) {
+	c.f2(x)
+	c.sp()
+	c.f2(c.h - y)
+	c.sp()
+	c.s(op)
+}
+
+// line strokes a segment.
 func (c *content) line(x1, y1, x2, y2 float64) {
-	c.s("q\n")
-	c.f2(x1)
-	c.sp()
-	c.f2(c.h - y1)
-	c.s(" m ")
-	c.f2(x2)
-	c.sp()
-	c.f2(c.h - y2)
-	c.s(" l S\nQ\n")
+	c.point(x1, y1, "m ")
+	c.point(x2, y2, "l S\n")
 }
 
-// rect from the upper-left corner: "q\n%0.2f %0.2f %0.2f %0.2f re %s\nQ\n"
-// with gopdf's paint style for style (F → f, DF or FD → B, else S).
-func (c *content) rect(x, y, w, h float64, style string) {
-	op := "S"
-	switch style {
-	case "F":
-		op = "f"
-	case "FD", "DF":
-		op = "B"
+// paintOp is the operator painting a closed shape with style letters F
+// (fill) and D (stroke): f, B (both) or S; closing ones for a polygon.
+func paintOp(style string, closing bool) string {
+	switch {
+	case style == "F":
+		return "f"
+	case style == "FD" || style == "DF":
+		if closing {
+			return "b"
+		}
+		return "B"
+	case closing:
+		return "s"
 	}
-	c.s("q\n")
+	return "S"
+}
+
+// rect paints a rectangle from its upper-left corner.
+func (c *content) rect(x, y, w, h float64, style string) {
 	c.f2(x)
 	c.sp()
 	c.f2(c.h - (y + h))
@@ -127,48 +134,35 @@ func (c *content) rect(x, y, w, h float64, style string) {
 	c.sp()
 	c.f2(h)
 	c.s(" re ")
-	c.s(op)
-	c.s("\nQ\n")
+	c.s(paintOp(style, false))
+	c.b = append(c.b, '\n')
 }
 
-// polygonStart opens a polygon: "q\n".
-func (c *content) polygonStart() { c.s("q\n") }
-
-// polygonPoint: "%.2f %.2f" then " m " for the first point, " l " after.
+// polygonPoint adds a vertex: the first moves to it, the rest draw to it.
 func (c *content) polygonPoint(x, y float64, first bool) {
-	c.f2(x)
-	c.sp()
-	c.f2(c.h - y)
 	if first {
-		c.s(" m ")
+		c.point(x, y, "m ")
 	} else {
-		c.s(" l ")
+		c.point(x, y, "l ")
 	}
 }
 
-// polygonEnd closes it: " f\n" (F), " b\n" (FD, DF) or " s\n", "Q\n".
+// polygonEnd closes and paints the polygon.
 func (c *content) polygonEnd(style string) {
-	switch style {
-	case "F":
-		c.s(" f\n")
-	case "FD", "DF":
-		c.s(" b\n")
-	default:
-		c.s(" s\n")
-	}
-	c.s("Q\n")
+	c.s(paintOp(style, true))
+	c.b = append(c.b, '\n')
 }
 
-// textStart opens a text object at (x, y) with font number font at size
-// and the fill colour col: "BT\n", "%0.2f %0.2f TD\n",
-// "/F%d %s Tf %s Tc %s Ts\n" (sizes trimmed to three decimals, no
-// character spacing, no rise), the colour as "rg", then "[<".
-func (c *content) textStart(x, y float64, font int, size float64, r, g, b uint8) {
-	c.s("BT\n")
-	c.f2(x)
-	c.sp()
-	c.f2(c.h - y)
-	c.s(" TD\n/F")
+// textBegin opens a text object.
+func (c *content) textBegin() { c.s("BT\n") }
+
+// textEnd closes it.
+func (c *content) textEnd() { c.s("ET\n") }
+
+// font selects font resource /F<font> at size (trimmed to three
+// decimals).
+func (c *content) font(font int, size float64) {
+	c.s("/F")
 	c.b = strconv.AppendInt(c.b, int64(font), 10)
 	c.sp()
 	if size != c.size || c.sizeText == nil {
@@ -176,14 +170,18 @@ func (c *content) textStart(x, y float64, font int, size float64, r, g, b uint8)
 		c.sizeText = strconv.AppendFloat(c.sizeText[:0], math.Round(1000*size)/1000, 'f', -1, 64)
 	}
 	c.b = append(c.b, c.sizeText...)
-	c.s(" Tf 0 Tc 0 Ts\n")
-	c.color(r, g, b, "rg")
-	c.s("[<")
+	c.s(" Tf\n")
+}
+
+// textAt places the next text's baseline start at (x, y).
+func (c *content) textAt(x, y float64) {
+	c.s("1 0 0 1 ")
+	c.point(x, y, "Tm\n")
 }
 
 const hexDigits = "0123456789ABCDEF"
 
-// glyph: "%04X" of the glyph index.
+// glyph appends a glyph index as four hex digits (more above 0xFFFF).
 func (c *content) glyph(g uint) {
 	if g > 0xFFFF {
 		c.b = append(c.b, []byte(strconv.FormatUint(uint64(g), 16))...)
@@ -192,46 +190,19 @@ func (c *content) glyph(g uint) {
 	c.b = append(c.b, hexDigits[g>>12&15], hexDigits[g>>8&15], hexDigits[g>>4&15], hexDigits[g&15])
 }
 
-// kern: ">%d<" of the adjustment.
+// kern appends a kerning adjustment inside a TJ array: ">n<".
 func (c *content) kern(n int) {
 	c.b = append(c.b, '>')
 	c.b = strconv.AppendInt(c.b, int64(n), 10)
 	c.b = append(c.b, '<')
 }
 
-// textEnd: ">] TJ\n", "ET\n".
-func (c *content) textEnd() { c.s(">] TJ\nET\n") }
-
 // image draws image object index (0-based) with its top-left corner at
-// (x, y), w by h, as gopdf does for an unrotated, unmasked image: a
-// rotation by 0° about its centre around "q\n", "q\n %s %0.2f 0 0\n
-// %0.2f %0.2f %0.2f cm /I%d Do \nQ\n", "Q\n".
+// (x, y), w by h.
 func (c *content) image(index int, x, y, w, h float64) {
-	cx, cy := x+w/2, y+h/2
-	rad := 0 * (math.Pi / 180)
-	cos, sin := math.Cos(rad), math.Sin(rad)
-	py := c.h - cy
-	// "q\n %.5f %.5f %.5f\n %.5f %.2f %.2f cm\n 1 0 0\n 1 %.2f %.2f cm\n"
-	c.s("q\n ")
-	c.b = strconv.AppendFloat(c.b, cos, 'f', 5, 64)
-	c.sp()
-	c.b = strconv.AppendFloat(c.b, sin, 'f', 5, 64)
-	c.sp()
-	c.b = strconv.AppendFloat(c.b, -sin, 'f', 5, 64)
-	c.s("\n ")
-	c.b = strconv.AppendFloat(c.b, cos, 'f', 5, 64)
-	c.sp()
-	c.f2(cx)
-	c.sp()
-	c.f2(py)
-	c.s(" cm\n 1 0 0\n 1 ")
-	c.f2(-cx)
-	c.sp()
-	c.f2(-py)
-	c.s(" cm\n")
-	c.s("q\nq\n  ")
+	c.s("q ")
 	c.f2(w)
-	c.s(" 0 0\n ")
+	c.s(" 0 0 ")
 	c.f2(h)
 	c.sp()
 	c.f2(x)
@@ -239,5 +210,5 @@ func (c *content) image(index int, x, y, w, h float64) {
 	c.f2(c.h - y - h)
 	c.s(" cm /I")
 	c.b = strconv.AppendInt(c.b, int64(index+1), 10)
-	c.s(" Do \nQ\nQ\nQ\n")
+	c.s(" Do Q\n")
 }
