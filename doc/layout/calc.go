@@ -66,7 +66,7 @@ type formula struct {
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
 func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position, own bool) (formula, bool) {
-	st := eqn.Style{Size: bodySize, Color: ink}
+	st := eqn.Style{Size: bodySize, Color: ink, Texts: e.texts()}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
 		e.mathProblem(pos, own, err)

@@ -1,5 +1,7 @@
 package layout
 
+import "github.com/plinth-calc/plinth/doc/layout/eqn"
+
 // space hands out the word and frag slices of words() from shared chunks,
 // so cutting a table's hundreds of short cells into words costs a few
 // allocations rather than two a cell. Each chunk holds the words of
@@ -10,6 +12,7 @@ type space struct {
 	owner *engine // the engine the chunks belong to
 	ws    []word
 	fs    []frag
+	texts *eqn.Texts // the boxes of the formulas' texts, for eqn to reuse
 }
 
 // chunk is the least a new chunk holds, in elements.
@@ -23,6 +26,16 @@ func (e *engine) space() *space {
 		e.sp = space{owner: e}
 	}
 	return &e.sp
+}
+
+// texts is the engine's store of formula texts (eqn.Style.Texts): a
+// sheet sets the same symbols, numbers and units over and over.
+func (e *engine) texts() *eqn.Texts {
+	sp := e.space()
+	if sp.texts == nil {
+		sp.texts = eqn.NewTexts()
+	}
+	return sp.texts
 }
 
 // words is an empty slice with room for at least n words.

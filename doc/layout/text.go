@@ -123,7 +123,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			color = linkInk
 		}
 		if r.Math != nil {
-			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color})
+			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color, Texts: e.texts()})
 			if err != nil {
 				e.mathProblem(pos, r.Own, err)
 				continue

@@ -78,6 +78,10 @@ func (b *Box) appendItems(dst []draw.Item, dx, dy, ex, ey float64, then bool) []
 type Style struct {
 	Size  float64    // size of the main line in points
 	Color draw.Color // ink colour
+	// Texts, when set, keeps the box of every text set (cache.go), so a
+	// caller setting many formulas measures each symbol, number and
+	// operator once. One goroutine's at a time.
+	Texts *Texts
 }
 
 // GlyphError reports a character the font cannot draw.
@@ -93,7 +97,7 @@ func (e *GlyphError) Error() string {
 
 // Layout measures n and returns its box.
 func Layout(n Node, st Style) (*Box, error) {
-	c := &ctx{size: st.Size, base: st.Size, color: st.Color}
+	c := &ctx{size: st.Size, base: st.Size, color: st.Color, texts: st.Texts}
 	b := c.layout(n)
 	if c.err != nil {
 		return nil, c.err
@@ -108,6 +112,7 @@ type ctx struct {
 	bold       bool
 	color      draw.Color
 	err        error
+	texts      *Texts // boxes of texts set before, when the caller keeps them
 }
 
 func (c *ctx) em(f float64) float64 { return f * c.size }
@@ -165,12 +170,29 @@ func (c *ctx) opFace(s string) fonts.Face {
 
 // text sets s in one face at the current size.
 func (c *ctx) text(s string, face fonts.Face) *Box {
-	w, a, d, r, bad := fonts.Get(face).Measure(s, c.size)
-	if bad && c.err == nil {
-		c.err = &GlyphError{Rune: r, Face: face, Text: s}
+	key := textKey{s, face, c.size, c.color}
+	if c.texts != nil {
+		if t, ok := c.texts.m[key]; ok {
+			if t.err != nil && c.err == nil {
+				c.err = t.err
+			}
+			return t.box
+		}
 	}
-	return &Box{W: w, Ascent: a, Descent: d, hasText: true,
+	w, a, d, r, bad := fonts.Get(face).Measure(s, c.size)
+	var err error
+	if bad {
+		err = &GlyphError{Rune: r, Face: face, Text: s}
+		if c.err == nil {
+			c.err = err
+		}
+	}
+	b := &Box{W: w, Ascent: a, Descent: d, hasText: true,
 		text: draw.Text{Face: face, Size: c.size, Color: c.color, Text: s}}
+	if c.texts != nil {
+		c.texts.m[key] = textBox{b, err}
+	}
+	return b
 }
 
 func (c *ctx) axis() float64 { return fonts.Get(fonts.Regular).XHeight(c.size)/2 + 0.01*c.size }
@@ -184,7 +206,7 @@ func (c *ctx) layout(n Node) *Box {
 	case Row:
 		return c.row(n)
 	case Sym:
-		return c.sym(n, nil)
+		return c.symbol(n)
 	case Num:
 		s := n.Text
 		if strings.HasPrefix(s, "-") {
