@@ -45,7 +45,7 @@ type glyphs struct {
 	font   *gopdf.SubsetFontObj
 	kerns  core.KernMap // gopdf's kerning pairs, left glyph → right glyph → TTF units (nil: none)
 	lefts  []bool       // lefts[g]: glyph g begins a pair in kerns (most begin none)
-	number int // the face's font resource, /F<number>
+	number int          // the face's font resource, /F<number>
 	upem   int
 	low    []uint32 // rune → glyph+1 for runes below len(low); 0 = not looked up
 	high   map[rune]uint32
