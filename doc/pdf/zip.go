@@ -5,8 +5,8 @@ import (
 	"sync"
 )
 
-// zipPool compresses the page streams on the other cores while the
-// painter draws the next pages. Each page is compressed alone by one
+// zipPool compresses the page streams on every core while the painter
+// draws the next pages. Each page is compressed alone by one
 // reused compressor, so the bytes do not depend on which worker did it.
 type zipPool struct {
 	out  [][]byte
@@ -24,7 +24,9 @@ type zipJob struct {
 }
 
 func newZipPool(pages int) *zipPool {
-	workers := max(1, runtime.GOMAXPROCS(0)-1)
+	// compressing a page takes about twice as long as painting it, so
+	// every core compresses (the painter shares one)
+	workers := max(1, runtime.GOMAXPROCS(0))
 	zp := &zipPool{out: make([][]byte, pages), jobs: make(chan zipJob, 2*workers), free: make(chan []byte, 3*workers)}
 	for range workers {
 		zp.wg.Add(1)
