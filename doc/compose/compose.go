@@ -7,6 +7,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -48,6 +49,7 @@ type composer struct {
 	pageRefs  []pageRef                     // runs that print the page of an anchor
 	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
 	uses      map[*eval.Footing]footingUse  // each footing's ground and governing analysis (sketch.go)
+	texts     *eqn.Texts                    // formula texts set by fits, reused
 }
 
 // pageRef is a run that prints the page an anchor is on, filled in once
@@ -89,7 +91,7 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, texts: eqn.NewTexts()}
 	c.refs.linked = !opt.Bare
 	return c
 }
