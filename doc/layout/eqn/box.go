@@ -242,6 +242,17 @@ func (c *ctx) layout(n Node) *Box {
 	return &Box{}
 }
 
+// flat is r with its nested rows spliced in and nils dropped: r itself
+// when it has neither (the nodes are only read).
+func flat(r Row) []Node {
+	for _, n := range r {
+		if _, nested := n.(Row); nested || n == nil {
+			return flatten(r, make([]Node, 0, len(r)+4))
+		}
+	}
+	return r
+}
+
 func flatten(r Row, out []Node) []Node {
 	for _, n := range r {
 		if rr, ok := n.(Row); ok {
@@ -297,7 +308,7 @@ func (c *ctx) opSpace(k opClass) (before, after float64) {
 }
 
 func (c *ctx) row(r Row) *Box {
-	nodes := flatten(r, make([]Node, 0, len(r)))
+	nodes := flat(r)
 	return c.assemble(nodes, c.boxes(nodes), false)
 }
 
