@@ -91,9 +91,17 @@ func (st textStyle) faceOf(s Style) fonts.Face {
 
 // words cuts runs into words, checking every character against its font.
 func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
+	// at most one word and one frag a run and a separator (the room
+	// asked of the chunks; more only if spelling adds spaces)
 	n := 0
 	for _, r := range runs {
-		n += len(r.Text)/6 + 1
+		n++
+		for i := 0; i < len(r.Text); i++ {
+			switch r.Text[i] {
+			case ' ', '\t', '\r', '\n':
+				n++
+			}
+		}
 	}
 	sp := e.space()
 	ws := sp.words(n)
