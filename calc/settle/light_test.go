@@ -22,3 +22,19 @@ func TestLightLoadZone(t *testing.T) {
 		t.Errorf("s_total = %v m under a net pressure near zero", r.Total)
 	}
 }
+
+// Quiet gives Compute's numbers without the working.
+func TestQuietAgrees(t *testing.T) {
+	in := fourLayerInput(40)
+	a, err := settle.Compute(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := settle.Quiet(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if a.Total != b.Total || a.Util != b.Util || a.OK != b.OK || len(b.Trace.Steps) != 0 {
+		t.Errorf("Compute %v %v %v, Quiet %v %v %v (%d steps)", a.Total, a.Util, a.OK, b.Total, b.Util, b.OK, len(b.Trace.Steps))
+	}
+}

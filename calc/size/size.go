@@ -169,6 +169,7 @@ type trial struct {
 	w    float64
 	wt   trace.Trace
 	f    site.Footing
+	sin  settle.Input // the settlement input of the trial
 }
 
 // Size finds the smallest width on the increment that passes every check.
@@ -241,7 +242,7 @@ func newSizer(in Input) (*sizer, error) {
 	}
 	ws := make([]float64, 0, kmax-kmin+1)
 	for k := kmin; k <= kmax; k++ {
-		ws = append(ws, float64(k)*step)
+		ws = append(ws, math.Round(float64(k)*step*1e6)/1e6) // to the micrometre: 2.3, not 2.3000000000000003
 	}
 	return &sizer{in: in, step: step, widths: ws, kmax: len(ws) - 1, seen: map[int]*trial{}}, nil
 }
@@ -399,6 +400,13 @@ func (z *sizer) at(k int) *trial {
 
 func (z *sizer) result(k int, breq float64, search string) (*Result, error) {
 	t := z.at(k)
+	if t.s != nil {
+		full, err := settle.Compute(t.sin) // the same numbers, with the working
+		if err != nil {
+			return nil, err
+		}
+		t.s = full
+	}
 	r := &Result{B: t.B, L: t.L, At: t.Trial, BReq: breq, Search: search, Trials: z.evals,
 		Footing: t.f, Bearing: t.b, Settle: t.s, Service: t.svc, Load: t.load, Weight: t.w, WeightT: t.wt}
 	if k > z.kmin {

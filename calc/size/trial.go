@@ -72,7 +72,8 @@ func (z *sizer) eval(B float64) *trial {
 		sin := *z.in.Settle
 		sin.Ground, sin.Footing = z.in.Bearing.Ground, f
 		sin.Q, sin.V = site.Opt{}, site.Some(svc.V)
-		sr, err := settle.Compute(sin)
+		sr, err := settle.Quiet(sin) // the working is written for the chosen width only
+		t.sin = sin
 		if err != nil {
 			t.err = err
 			return t
@@ -182,7 +183,7 @@ func (z *sizer) record(r *Result) {
 		t.Take(trace.Step{Symbol: "L", Value: r.L, Unit: "m", Note: "L = B (" + r.Footing.Shape.String() + ")"})
 	}
 	r.Values = []trace.Value{{Symbol: "B", V: r.B, Unit: "m"}}
-	if r.Footing.Shape != site.Strip {
+	if r.Footing.Shape != site.Strip && z.in.Plan != FixedL { // a fixed L is the footing's own
 		r.Values = append(r.Values, trace.Value{Symbol: "L", V: r.L, Unit: "m"})
 	}
 	r.Values = append(r.Values, trace.Value{Symbol: "util", V: r.At.Util()})

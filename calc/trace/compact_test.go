@@ -16,9 +16,9 @@ func TestCompact(t *testing.T) {
 	for i := 0; i < 5; i++ {
 		n := len(arena)
 		arena = append(arena, trace.Value{Symbol: "x", V: float64(i), Unit: "m"}, trace.Value{Symbol: "y", V: 2})
-		tr.Add(trace.Step{Symbol: "s", Inputs: arena[n:len(arena):len(arena)], Value: float64(i)})
+		tr.Take(trace.Step{Symbol: "s", Inputs: arena[n:len(arena):len(arena)], Value: float64(i)})
 	}
-	tr.Add(trace.Step{Symbol: "given", Value: 7})
+	tr.Take(trace.Step{Symbol: "given", Value: 7})
 	want := append([]trace.Step(nil), tr.Steps...)
 	tr.Compact()
 	if !reflect.DeepEqual(tr.Steps, want) {

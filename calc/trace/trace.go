@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+
+	"github.com/plinth-calc/plinth/calc/severity"
 )
 
 // Value is one number used in or produced by a step: SI value, and the
@@ -12,6 +14,16 @@ type Value struct {
 	Symbol string
 	V      float64
 	Unit   string
+}
+
+// Find returns the value named sym in vs (an engine's summary values).
+func Find(vs []Value, sym string) (Value, bool) {
+	for _, v := range vs {
+		if v.Symbol == sym {
+			return v, true
+		}
+	}
+	return Value{}, false
 }
 
 // Source is a publication an engine method comes from. Key is short and
@@ -81,34 +93,16 @@ type Step struct {
 	Case    string  // the case it belongs to ("" = common to all)
 }
 
-// Severity ranks a caution, lowest first, in the order of the hazard
-// statements of ANSI Z535.4 and ISO 3864-2 (WARNING above CAUTION) without
-// their DANGER:
-//
-//	SevNote     NOTE     information: a choice made, a value assumed
-//	SevCaution  CAUTION  a method used near its limits, or an assumption
-//	                     the engineer must confirm
-//	SevWarning  WARNING  a result that may be unsafe or is missing: a limit
-//	                     exceeded, a check not made, a layer left out
-//
-// The document boxes them with these words.
-type Severity int
+// Severity ranks a caution, lowest first: NOTE, CAUTION, WARNING. It is
+// severity.Level (the one definition of the order, the words and what
+// each means); the constants are the engine's names for its levels.
+type Severity = severity.Level
 
 const (
-	SevNote Severity = iota
-	SevCaution
-	SevWarning
+	SevNote    = severity.Note    // information: a choice made, a value assumed
+	SevCaution = severity.Caution // a method used near its limits, or an assumption the engineer must confirm
+	SevWarning = severity.Warning // a result that may be unsafe or is missing
 )
-
-func (s Severity) String() string {
-	switch s {
-	case SevWarning:
-		return "WARNING"
-	case SevCaution:
-		return "CAUTION"
-	}
-	return "NOTE"
-}
 
 // Caution records a method near or past its limits, or an input that needs
 // the engineer's attention. Step is the index of the step that raised it
@@ -177,18 +171,6 @@ func (t *Trace) Take(s Step) float64 {
 	}
 	if math.IsNaN(s.Value) || math.IsInf(s.Value, 0) {
 		t.fail(&DomainError{Symbol: s.Symbol, Value: s.Value, Inputs: s.Inputs})
-	}
-	t.Steps = append(t.Steps, s)
-	t.Cite(s.Ref.Source)
-	return s.Value
-}
-
-// Add appends s as it is. Deprecated and transitional: engine packages are
-// moving to Eval (formula steps) and Take (all others); it goes when none
-// calls it.
-func (t *Trace) Add(s Step) float64 {
-	if s.Formula == nil && s.Kind == ByFormula {
-		s.Kind = Given
 	}
 	t.Steps = append(t.Steps, s)
 	t.Cite(s.Ref.Source)

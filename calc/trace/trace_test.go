@@ -24,7 +24,7 @@ func TestEvalAndVerify(t *testing.T) {
 		t.Fatalf("Eval = %v, %v; want 18.401", v, err)
 	}
 	var tr trace.Trace
-	tr.Add(trace.Step{Symbol: "N_q", Formula: f, Inputs: in, Value: v, Ref: trace.Ref{Source: trace.EN1997, Clause: "Annex D, D.4"}})
+	tr.Eval(trace.Step{Symbol: "N_q", Formula: f, Inputs: in, Ref: trace.Ref{Source: trace.EN1997, Clause: "Annex D, D.4"}})
 	tr.Warn(trace.Caution{Code: "x", Message: "m"})
 	if err := trace.Verify(tr, 1e-12); err != nil {
 		t.Fatal(err)
@@ -47,8 +47,8 @@ func TestEvalAndVerify(t *testing.T) {
 
 func TestAppendShiftsCautions(t *testing.T) {
 	var a, b trace.Trace
-	a.Add(trace.Step{Symbol: "x", Value: 1})
-	b.Add(trace.Step{Symbol: "y", Value: 2})
+	a.Take(trace.Step{Symbol: "x", Value: 1})
+	b.Take(trace.Step{Symbol: "y", Value: 2})
 	b.Warn(trace.Caution{Code: "c"})
 	a.Append(b, "drained")
 	if a.Cautions[0].Step != 1 || a.Steps[1].Case != "drained" || a.Cautions[0].Case != "drained" {

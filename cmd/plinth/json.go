@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/source"
@@ -229,6 +230,24 @@ func blockJSON(b *eval.Block) jsonBlock {
 			if i == cr.Own {
 				g := jc
 				jb.Governing = &g
+			}
+		}
+	}
+	if zr := b.Size; zr != nil {
+		// one case per check at the chosen width, then at one increment
+		// smaller; the governing case is the chosen width's governing check
+		for _, t := range []*size.Trial{&zr.At, zr.Below} {
+			if t == nil {
+				continue
+			}
+			for i, ch := range t.Checks {
+				jc := jsonCase{Name: fmt.Sprintf("B = %g m · %s", t.B, ch.Name), Check: "size", Combination: ch.Detail,
+					Util: ch.Util, OK: ch.OK, Factors: map[string]float64{"B": t.B, "L": t.L}}
+				jb.Cases = append(jb.Cases, jc)
+				if t == &zr.At && i == t.Governing {
+					g := jc
+					jb.Governing = &g
+				}
 			}
 		}
 	}

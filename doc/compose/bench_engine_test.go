@@ -102,7 +102,7 @@ func benchPackage(b *testing.B, write func(string, int) error, n int) {
 	b.ResetTimer()
 	var pages, size int
 	for b.Loop() {
-		p, d := compose.Pages(res, compose.Options{})
+		p, d := pagesOf(res, compose.Options{})
 		if d.HasErrors() {
 			b.Fatal(d)
 		}

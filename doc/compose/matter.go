@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -58,9 +59,8 @@ func (c *composer) checkRegister() layout.Sheet {
 		if ch.Op == ">=" || ch.Op == ">" {
 			demand, capacity = ch.R, ch.L
 		}
-		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
-		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
+		page := cell(pageOf(ch.Anchor, ""))
+		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(c.checkMath(ch)...),
 			cell(c.noteRuns(ch.Sheet, ch.Note)...),
@@ -126,14 +126,14 @@ func (c *composer) inputRegister() layout.Sheet {
 			if a := c.inputs[y]; a != "" {
 				at.Link = a
 			}
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(layout.Run{Math: eqn.Sym{Name: y.Name}}), cell(val), cell(note...), cell(at),
 			}})
 		}
 		for _, a := range order {
 			y := first[a]
 			block, _, _ := strings.Cut(y.Name, ".")
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(user(block + ".*")), cell(txt(plural(tables[a], "value"))),
 				cell(txt("every cell of the table of " + block + ", with the source given in its row; see the table")),
 				cell(layout.Run{Text: where(y.Span), Link: a, Own: true}),
@@ -169,14 +169,14 @@ func (c *composer) assumedValues() []layout.Block {
 				if st.Symbol != "W" && !strings.Contains(st.Note, "assumed") {
 					continue
 				}
-				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
 					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
 					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
 					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
 				}})
 			}
 			for _, st := range assumedSteps(b) {
-				rows = append(rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{
+				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
 					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
 					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
 					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
@@ -185,10 +185,10 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 	}
 	for _, r := range c.cautions {
-		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= layout.SevWarning {
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
 			continue
 		}
-		rows = append(rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+		rows = append(rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
 			cell(txt("—")), cell(txt("—")), cell(richText(r.where+": "+r.text, layout.Regular)...),
 			cell(layout.Run{Text: sheetLabel(r.sheet), Link: r.anchor, Own: true}),
 		}})
@@ -287,8 +287,15 @@ var standing = []string{
 	"The input fingerprint in every page footer identifies the inputs of this print. A print showing a different fingerprint was made from different inputs.",
 }
 
-// severityOrder states the order of the caution words (calc/trace.Severity).
-const severityOrder = "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): WARNING, a result that may be unsafe or is missing (a limit exceeded, a check not made, a layer left out); CAUTION, a method used near its limits or an assumption the engineer must confirm; NOTE, information (a choice made, a value assumed)."
+// severityOrder states the order of the caution words and what each
+// means (calc/severity), highest first.
+func severityOrder() string {
+	var parts []string
+	for l := severity.Warning; l >= severity.Note; l-- {
+		parts = append(parts, l.String()+", "+l.Meaning())
+	}
+	return "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): " + strings.Join(parts, "; ") + "."
+}
 
 // cautionSheet lists every engine caution with where it was raised, then
 // the standing cautions.
@@ -297,7 +304,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 	p := out.Pos
 	out.Blocks = append(out.Blocks, heading(p, 1, "Cautions"))
 	out.Blocks = append(out.Blocks, heading(p, 2, "Cautions raised by the engine"))
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder)}})
+	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder())}})
 	if len(c.cautions) == 0 {
 		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {
@@ -306,7 +313,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 		list := append([]raised(nil), c.cautions...)
 		sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
 		for i, r := range list {
-			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+			t.Rows = append(t.Rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
 				cell(txt(fmt.Sprint(i + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...),
 				cell(layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}),
 			}})
@@ -317,7 +324,7 @@ func (c *composer) cautionSheet() layout.Sheet {
 	for _, s := range standing {
 		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: []layout.Run{txt(s)}}})
 	}
-	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: layout.SevCaution, Title: []layout.Run{txt("Standing cautions")},
+	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: severity.Caution, Title: []layout.Run{txt("Standing cautions")},
 		Body: []layout.Block{&layout.List{Pos: p, Items: items}}})
 	return out
 }

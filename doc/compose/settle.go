@@ -137,7 +137,7 @@ func capital(s string) string {
 }
 
 func f(v float64, u units.Unit) string {
-	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+	return units.Printed(v, u, -1)
 }
 
 // stressTable lists every sublayer: depth, stresses, how it settles.
@@ -202,7 +202,7 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 		Caption: richText(fmt.Sprintf("Settlement with time after loading: U is the average degree of consolidation; total s = s_i + s_c + s_sec (final %s).", valueText(units.Quantity{V: r.Total, Dim: units.Length}, mm, -1)), layout.Regular)}
 	for _, p := range r.Curve {
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(f(p.T, yr))}, {txt(fmt.Sprintf("%.3f", p.U))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
+			{txt(f(p.T, yr))}, {txt(units.Printed(p.U, units.Dimensionless, 3))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
 		}})
 	}
 	return t

@@ -10,6 +10,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Options control an evaluation.
@@ -156,7 +157,7 @@ func (e *evaluator) collect(s *Sheet) map[string]def {
 		for _, c := range e.tableDefs(b) {
 			add(c.name, c.def)
 		}
-		e.blockDefs(s, b, add)
+		e.blockDefs(s, b, add, func(name string) bool { _, ok := defs[name]; return ok })
 	}
 	return defs
 }
@@ -185,7 +186,7 @@ func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
 
 // blockDefs records ground, footing and analysis names, and the result
 // symbols an analysis will define.
-func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
+func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), has func(string) bool) {
 	names := e.blockNames[s.Index]
 	if names == nil {
 		names = map[string][]string{}
@@ -207,8 +208,13 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		for _, n := range resultNames[b.Kind] {
+		for _, n := range b.Kind.Spec().ResultNames() {
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
+				continue
+			}
+			if b.Kind == sheet.KindSize && (n == "B" || n == "L") && has(p.Value+"."+n) {
+				// the footing's own B or L: a size block reports a given B
+				// itself, and a rectangle's given L is the fixed length
 				continue
 			}
 			add(p.Value+"."+n, def{span: headerSpan(b.Span)})
@@ -282,7 +288,7 @@ func (e *evaluator) resolveUses() {
 			switch {
 			case t == nil:
 				hint := ""
-				if n, ok := sheet.Nearest(u.Value, names); ok {
+				if n, ok := suggest.Nearest(u.Value, names); ok {
 					hint = fmt.Sprintf("did you mean %s?", n)
 				}
 				e.errs.AddHint(u.Span, hint, "uses %q: no such sheet in this package", u.Value)

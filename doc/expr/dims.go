@@ -32,10 +32,10 @@ func Dims(n Node, env Env) (units.Dim, []Error) {
 	return d, a.errs
 }
 
-// StmtDims is Dims for a statement: for an *Assign the dimension of its
+// stmtDims is Dims for a statement: for an *Assign the dimension of its
 // expression, which its display unit must share; for a *Check the common
 // dimension of both sides, which must agree. A *Comment has none.
-func StmtDims(s Stmt, env Env) (units.Dim, []Error) {
+func stmtDims(s Stmt, env Env) (units.Dim, []Error) {
 	a := analyzer{env: env}
 	switch s := s.(type) {
 	case *Assign:

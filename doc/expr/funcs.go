@@ -29,17 +29,14 @@ func tableOf() map[string]function {
 // functionList is the names for messages, in the order of doc.go.
 const functionList = trace.FunctionNames
 
-// IsFunction reports whether name is a built-in function.
-func IsFunction(name string) bool { _, ok := functions[name]; return ok }
+// isFunction reports whether name is a built-in function.
+func isFunction(name string) bool { _, ok := functions[name]; return ok }
 
-// Reserved reports whether name cannot be a symbol: a function name, the
+// reserved reports whether name cannot be a symbol: a function name, the
 // constants pi and g, or the keyword check.
-func Reserved(name string) bool {
-	return IsFunction(name) || name == "pi" || name == "g" || name == "check"
+func reserved(name string) bool {
+	return isFunction(name) || name == "pi" || name == "g" || name == "check"
 }
-
-// Functions returns the built-in function names.
-func Functions() []string { return strings.Fields(functionList) }
 
 func arity(f function) string {
 	switch {

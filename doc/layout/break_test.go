@@ -26,7 +26,7 @@ func TestBreakLongWord(t *testing.T) {
 	e := &engine{}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			lines := e.setText(plain(c.text), c.width, bodyStyle, source.Position{Path: "a.md", Line: 1, Col: 1})
+			lines := e.setText(plain(c.text), c.width, bodyStyle, source.Span{File: source.NewFile("a.md", nil)})
 			var got strings.Builder
 			hyphens := 0
 			for i, ln := range lines {

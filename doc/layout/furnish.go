@@ -21,7 +21,7 @@ func (e *engine) variantBanner(variant []string) *Box {
 	const pad = 5.0
 	st := textStyle{size: 9, lead: 1.3, color: badInk}
 	runs := []Run{{Text: "VARIANT", Style: Bold}, {Text: "  inputs overridden: " + strings.Join(variant, "; ")}}
-	lines := e.setText(runs, w-2*pad-4, st, source.Position{})
+	lines := e.setText(runs, w-2*pad-4, st, source.Span{})
 	b := &Box{Kind: "variant", X: x, Y: y, W: w}
 	h := pad
 	var text []draw.Item
@@ -137,7 +137,7 @@ func fieldChar(c byte) bool {
 	return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c >= '0' && c <= '9' || c == '_'
 }
 
-func (e *engine) titleBlock(value func(string) (string, bool), pos source.Position) *Box {
+func (e *engine) titleBlock(value func(string) (string, bool), pos source.Span) *Box {
 	tb := &e.tpl.TitleBlock
 	w := e.tpl.BodyWidth()
 	b := &Box{Kind: "title-block", Pos: pos, X: float64(e.tpl.Margin.Left), Y: float64(e.tpl.Margin.Top), W: w, H: float64(tb.Height)}
@@ -199,7 +199,7 @@ func (e *engine) titleBlock(value func(string) (string, bool), pos source.Positi
 	return b
 }
 
-func (e *engine) footer(value func(string) (string, bool), pos source.Position) *Box {
+func (e *engine) footer(value func(string) (string, bool), pos source.Span) *Box {
 	ft := e.tpl.Footer
 	w := e.tpl.BodyWidth()
 	size := float64(ft.Size)

@@ -45,7 +45,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 			continue
 		}
 		pos := t.Pos
-		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
+		if ri > 0 && t.Rows[ri-1].Pos.File != nil {
 			pos = t.Rows[ri-1].Pos
 		}
 		st := cellStyle
@@ -55,7 +55,11 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		row := make([]cellWords, ncol)
 		for c := 0; c < ncol; c++ {
 			if c < len(cells) {
-				row[c] = cellWords{e.words(cells[c], st, pos), st}
+				at := pos
+				if ri > 0 && c < len(t.Rows[ri-1].CellPos) && t.Rows[ri-1].CellPos[c].File != nil {
+					at = t.Rows[ri-1].CellPos[c]
+				}
+				row[c] = cellWords{e.words(cells[c], st, at), st}
 			} else {
 				row[c] = cellWords{style: st}
 			}
@@ -110,8 +114,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	var out []*piece
 	var header, pristine *piece
 	if capRuns := t.Caption; len(capRuns) > 0 {
-		st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
-		lines := e.setText(capRuns, total, st, t.Pos)
+		lines := e.setText(capRuns, total, captionStyle, t.Pos)
 		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
 		for _, p := range ps {
 			p.keep = true
@@ -126,7 +129,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		kind := "table-header"
 		if ri > 0 {
 			kind = "row"
-			if t.Rows[ri-1].Pos.Line > 0 {
+			if t.Rows[ri-1].Pos.File != nil {
 				pos = t.Rows[ri-1].Pos
 			}
 		}

@@ -90,7 +90,7 @@ func (st textStyle) faceOf(s Style) fonts.Face {
 }
 
 // words cuts runs into words, checking every character against its font.
-func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
+func (e *engine) words(runs []Run, st textStyle, pos source.Span) []word {
 	// at most one word and one frag a run and a separator (the room
 	// asked of the chunks; more only if spelling adds spaces)
 	n := 0
@@ -158,6 +158,9 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 		}
 		f := fonts.Get(face)
 		text := r.Text
+		if r.Page.Anchor != "" {
+			text = e.pageText(r.Page, pos)
+		}
 		if r.Own {
 			text = e.ownGlyphs(text, face, pos)
 		} else {
@@ -196,7 +199,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 }
 
 // checkGlyphs reports each character the face lacks and drops it.
-func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) string {
+func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Span) string {
 	f := fonts.Get(face)
 	r, bad := f.Missing(strings.Map(func(r rune) rune {
 		if r == '\n' || r == '\t' || r == '\r' {
@@ -207,7 +210,7 @@ func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) str
 	if !bad {
 		return s
 	}
-	e.probs.add(pos, "character %q (U+%04X) in %q is not in font %s", r, r, excerpt(s, r), face)
+	e.diags.Add(pos, "character %q (U+%04X) in %q is not in font %s", r, r, excerpt(s, r), face)
 	return strings.Map(func(c rune) rune {
 		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
 			return c
@@ -219,7 +222,7 @@ func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) str
 // ownGlyphs spells plinth's own text for the face (fonts.Spell) and
 // reports any character still missing as an internal error of plinth,
 // naming the block only as the place it was printed for.
-func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) string {
+func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Span) string {
 	s = fonts.Spell(s, face)
 	f := fonts.Get(face)
 	r, bad := f.Missing(strings.Map(func(r rune) rune {
@@ -235,7 +238,7 @@ func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) strin
 	if p := pos.String(); p != "" {
 		where = " (in the printout of " + p + ")"
 	}
-	e.probs.add(source.Position{}, "internal error in plinth: plinth's own text %q has character %q (U+%04X), which font %s lacks%s; this is a defect of plinth, not of the input", excerpt(s, r), r, r, face, where)
+	e.diags.Add(source.Span{}, "internal error in plinth: plinth's own text %q has character %q (U+%04X), which font %s lacks%s; this is a defect of plinth, not of the input", excerpt(s, r), r, r, face, where)
 	return strings.Map(func(c rune) rune {
 		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
 			return c
@@ -246,16 +249,16 @@ func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) strin
 
 // mathProblem reports a formula that cannot be set: at pos, or, for
 // plinth's own formula, as an internal error of plinth.
-func (e *engine) mathProblem(pos source.Position, own bool, err error) {
+func (e *engine) mathProblem(pos source.Span, own bool, err error) {
 	if !own {
-		e.probs.add(pos, "%v", err)
+		e.diags.Add(pos, "%v", err)
 		return
 	}
 	where := ""
 	if p := pos.String(); p != "" {
 		where = " (in the printout of " + p + ")"
 	}
-	e.probs.add(source.Position{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
+	e.diags.Add(source.Span{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
 }
 
 // excerpt is up to 40 characters of s around the first r.
@@ -563,7 +566,7 @@ func (ln *line) appendItems(dst []draw.Item, dx, dy float64) []draw.Item {
 }
 
 // setText breaks runs into lines of at most width.
-func (e *engine) setText(runs []Run, width float64, st textStyle, pos source.Position) []line {
+func (e *engine) setText(runs []Run, width float64, st textStyle, pos source.Span) []line {
 	return breakLines(e.words(runs, st, pos), width, st)
 }
 

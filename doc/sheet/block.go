@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"github.com/plinth-calc/plinth/calc/kind"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -16,10 +17,17 @@ const (
 	KindSettlement
 	KindCapacity
 	KindDifferential
+	KindSize
 )
 
-// Kinds are the block words in Kind order.
-var Kinds = []string{"calc", "ground", "footing", "bearing", "settlement", "capacity", "differential"}
+// Kinds are the block words in Kind order (from Specs).
+var Kinds = func() []string {
+	out := make([]string, len(Specs))
+	for i, s := range Specs {
+		out[i] = s.Word
+	}
+	return out
+}()
 
 func (k Kind) String() string { return Kinds[k] }
 
@@ -77,7 +85,7 @@ func (a *Analysis) ResultPrefix() Str {
 	if a.Prefix.IsSet() {
 		return a.Prefix
 	}
-	if a.Kind == KindDifferential {
+	if a.Kind.Spec().Header == kind.To {
 		return Str{Value: a.Footing.Value + "_" + a.To.Value, Span: a.Footing.Span}
 	}
 	return a.Footing

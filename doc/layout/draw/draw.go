@@ -153,13 +153,6 @@ func span(ps []Point) Rect {
 	return Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
 }
 
-// Union is the smallest rectangle holding a and b, without paint.
-func Union(a, b Rect) Rect {
-	x0, y0 := math.Min(a.X, b.X), math.Min(a.Y, b.Y)
-	x1, y1 := math.Max(a.X+a.W, b.X+b.W), math.Max(a.Y+a.H, b.Y+b.H)
-	return Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
-}
-
 // Offset returns it moved by (dx, dy). Points of a Poly are copied.
 func Offset(it Item, dx, dy float64) Item {
 	switch v := it.(type) {

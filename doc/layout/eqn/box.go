@@ -7,6 +7,7 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/notation"
 )
 
 // Box is a measured formula: its width and how far its ink reaches above
@@ -390,7 +391,7 @@ func isOpNode(n Node) bool {
 // sym sets a sheet-notation symbol with an optional superscript stacked
 // after its primes and above its subscript.
 func (c *ctx) sym(s Sym, sup Node) *Box {
-	p := Split(s.Name)
+	p := notation.Split(s.Name)
 	b := &Box{}
 	x := 0.0
 	if p.Prefix != "" {
