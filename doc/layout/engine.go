@@ -19,7 +19,7 @@ type engine struct {
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
-	refCalls                   int // page references set so far (reuse.go)
+	refCalls                   int   // page references set so far (reuse.go)
 	sp                         space // word and frag chunks (space.go)
 }
 
