@@ -4,10 +4,11 @@ package kind
 type Header int
 
 const (
-	Bare  Header = iota // calc
-	Named               // ground NAME, footing NAME
-	On                  // bearing FOOTING on GROUND [as PREFIX]
-	To                  // differential FOOTING to FOOTING [as PREFIX]
+	Bare    Header = iota // calc
+	Named                 // ground NAME, footing NAME
+	On                    // bearing FOOTING on GROUND [as PREFIX]
+	To                    // differential FOOTING to FOOTING [as PREFIX]
+	NamedOn               // schedule NAME on GROUND [as PREFIX]
 )
 
 // Value is the kind of value an option or statement takes.
@@ -74,6 +75,9 @@ type Spec struct {
 	Options    []Option // in documentation order
 	Statements []Option // the statements an input block reads (ground, footing)
 	Results    []Result // in the engine's order
+	// RowResults are defined for each row of the block's table, under
+	// PREFIX.ROW (a schedule's footings); nil for other kinds.
+	RowResults []Result
 }
 
 // Option returns the option named name.

@@ -8,6 +8,7 @@ import (
 
 	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // Row is one footing of a schedule: its name, its plan position and its
@@ -52,11 +53,18 @@ type Pair struct {
 type Schedule struct {
 	Rows    []*Result
 	Pairs   []Pair
-	UtilMax float64 // the highest governing utilisation of any row
-	BetaMax float64 // the largest angular distortion between neighbours (0 without settlement)
-	RowMax  int     // the row of UtilMax
-	PairMax int     // the pair of BetaMax (−1 when none)
+	UtilMax float64     // the highest governing utilisation of any row
+	BetaMax float64     // the largest angular distortion between neighbours (0 without settlement)
+	RowMax  int         // the row of UtilMax
+	PairMax int         // the pair of BetaMax (−1 when none)
+	Trace   trace.Trace // the schedule's own cautions and sources
 }
+
+var (
+	// SrcGabriel is the neighbour rule's source.
+	SrcGabriel = trace.Source{Key: "GabrielSokal1969", Citation: "Gabriel, K. R. & Sokal, R. R. (1969). A new statistical approach to geographic variation analysis. Systematic Zoology 18(3), 259–278 (the Gabriel graph of neighbouring points)."}
+	refGabriel = trace.Ref{Source: SrcGabriel, Clause: "neighbours"}
+)
 
 // MaxRows bounds a schedule.
 const MaxRows = 500
@@ -134,6 +142,8 @@ func SizeSchedule(in ScheduleInput) (*Schedule, error) {
 	if in.Base.Settle == nil {
 		return out, nil
 	}
+	out.Trace.WarnAll(trace.Caution{Code: "schedule-alone", Severity: trace.SevCaution, Ref: refGabriel,
+		Message: "each footing's settlement is computed for that footing alone: the stress from its neighbours is not added, so where footings are closer than about three widths apart, centre to centre, their stress bulbs overlap and the settlements and distortions are underestimated (common practice); neighbours are the pairs no third footing lies between (the Gabriel graph of the centres)."})
 	for _, p := range gabriel(in.Rows) {
 		a, b := in.Rows[p[0]], in.Rows[p[1]]
 		d := math.Hypot(a.X-b.X, a.Y-b.Y)

@@ -51,3 +51,41 @@ func join(lists ...[]kind.Option) []kind.Option {
 	}
 	return out
 }
+
+// ScheduleSpec declares the schedule block: a table of footings sized on
+// one ground model with one set of options (SizeSchedule). Its own options
+// say the footings' shape and depth; the rest are the size block's. Each
+// row's results are NAME.ROW.B, NAME.ROW.util, … (ROW the row's footing
+// name in the sheet's symbol form, lower case); the block's are below.
+var ScheduleSpec = kind.Spec{
+	Word:   "schedule",
+	Header: kind.NamedOn,
+	Doc:    "a table of footings, each sized as a size block sizes one, with the angular distortion between neighbours",
+	Options: join(
+		[]kind.Option{
+			{Name: "shape", Words: []string{"square", "circle", "rectangle"}, Default: "none: required",
+				Doc: "the plan shape of every footing (a rectangle with ratio)"},
+			{Name: "D", Value: kind.Quantity, Form: "a length: the depth of the underside below ground level", Default: "none: required (a row's D column overrides it)",
+				Doc: "the depth of every footing"},
+			{Name: "beta_limit", Value: kind.Number, Form: "a number in (0, 0.1]: the limiting angular distortion", Default: "1/500 (Bjerrum 1963; EN 1997-1 Annex H)",
+				Doc: "the angular distortion allowed between neighbouring footings"},
+		},
+		Spec.Pick(nil, "step", "max", "sizes", "ratio", "eccentricity", "settlement"),
+		Spec.Options[6:],
+	),
+	Results: []kind.Result{
+		{Symbol: "util_max", Meaning: "the highest governing utilisation of any footing at its chosen size"},
+		{Symbol: "beta_max", Meaning: "the largest angular distortion between neighbouring footings", When: "settlement = yes"},
+		{Symbol: "beta_lim", Meaning: "the limiting angular distortion", When: "settlement = yes"},
+	},
+	RowResults: RowResults,
+}
+
+// RowResults are the results each row of a schedule gives, under
+// NAME.ROW.
+var RowResults = []kind.Result{
+	{Symbol: "B", Unit: "m", Meaning: "width chosen"},
+	{Symbol: "L", Unit: "m", Meaning: "length at the chosen width", When: "a rectangle"},
+	{Symbol: "util", Meaning: "governing utilisation at the chosen width"},
+	{Symbol: "s_total", Unit: "mm", Meaning: "total settlement at the chosen width", When: "settlement = yes"},
+}

@@ -251,6 +251,27 @@ func blockJSON(b *eval.Block) jsonBlock {
 			}
 		}
 	}
+	if sr := b.Schedule; sr != nil {
+		// one case per footing at its chosen size, then one per pair of
+		// neighbours; the governing case is the highest utilisation
+		for i, row := range sr.Rows {
+			gov := row.At.Checks[row.At.Governing]
+			f := map[string]float64{"B": row.B, "L": row.L, "D": row.Footing.D, "x": sr.X[i], "y": sr.Y[i]}
+			if row.Settle != nil {
+				f["s_total"] = row.Settle.Total
+			}
+			jc := jsonCase{Name: sr.Names[i], Check: "size", Combination: gov.Name, Util: row.At.Util(), OK: row.At.OK, Factors: f}
+			jb.Cases = append(jb.Cases, jc)
+			if i == sr.RowMax {
+				g := jc
+				jb.Governing = &g
+			}
+		}
+		for _, p := range sr.Pairs {
+			jb.Cases = append(jb.Cases, jsonCase{Name: sr.Names[p.A] + " to " + sr.Names[p.B], Check: "differential", Util: p.Diff.Util, OK: p.Diff.OK,
+				Factors: map[string]float64{"L": p.Spacing, "delta_s": p.Diff.Delta, "beta": p.Diff.Beta, "beta_lim": p.Diff.Limit}})
+		}
+	}
 	for _, c := range b.Cautions {
 		jb.Cautions = append(jb.Cautions, jsonCaution{Code: c.Code, Severity: c.Severity.String(), Message: c.Message, Case: c.Case})
 	}

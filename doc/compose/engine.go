@@ -378,6 +378,8 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return c.differential(s, b)
 	case b.Size != nil:
 		return c.size(s, b)
+	case b.Schedule != nil:
+		return c.schedule(s, b)
 	}
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))

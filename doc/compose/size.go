@@ -17,6 +17,14 @@ import (
 // working at the chosen size as the bearing and settlement blocks print
 // it.
 func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
+	return c.sizeWorking(s, b, true)
+}
+
+// sizeWorking prints a size block; with full false only its answer, the
+// table of checks at both widths and the sizing steps (the bearing and
+// settlement working left out): a schedule's rows other than the governing
+// one under detail = governing.
+func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, full bool) []layout.Block {
 	r := b.Size
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
@@ -92,6 +100,9 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o.label("Sizing")
 	o.steps(&r.Trace, indices(len(r.Trace.Steps)), "sizing")
 	out := o.done()
+	if !full {
+		return out
+	}
 
 	// The working at the chosen size, as a bearing and a settlement block
 	// print it: the footing as sized, the same ground and options.

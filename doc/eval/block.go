@@ -32,7 +32,8 @@ type Block struct {
 	Capacity *CapacityResult
 	Diff     *DiffResult // differential blocks
 	Size     *SizeResult // size blocks
-	Options  []string    // the options in force, "method = ec7", for printing
+	Schedule *ScheduleResult
+	Options  []string // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order
@@ -137,6 +138,15 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 	s.blocks[b] = blk
 	if b.Kind == sheet.KindDifferential {
 		e.differential(s, b, blk)
+		return
+	}
+	if b.Kind == sheet.KindSchedule {
+		g, gok := e.findGround(s, b.Ground)
+		blk.On = g
+		opts := e.options(b)
+		if !gok || opts == nil || !e.schedule(s, b, blk, opts) {
+			e.failResults(s, blk)
+		}
 		return
 	}
 	f, fok := e.findFooting(s, b.Footing)

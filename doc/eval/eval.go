@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
@@ -177,6 +178,11 @@ func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
 			t = e.readTable(b.Table, footingCol, b.Name.Value+".", "action", "A")
 			e.tables[b.Table] = t
 		}
+	case *sheet.Analysis:
+		if b.Kind == sheet.KindSchedule && b.Table != nil {
+			t = e.readTable(b.Table, scheduleCol, b.ResultPrefix().Value+".", "footing", "F")
+			e.tables[b.Table] = t
+		}
 	}
 	if t == nil || !t.ok {
 		return nil
@@ -218,6 +224,13 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), ha
 				continue
 			}
 			add(p.Value+"."+n, def{span: headerSpan(b.Span)})
+		}
+		if t := e.tables[b.Table]; b.Kind == sheet.KindSchedule && t != nil && t.ok {
+			for i, key := range t.keys {
+				for _, r := range size.RowResults {
+					add(p.Value+"."+key+"."+r.Symbol, def{span: t.grid.Rows[i].Span})
+				}
+			}
 		}
 	}
 }

@@ -104,7 +104,7 @@ func (c *conv) fenced(n *ast.FencedCodeBlock) sheet.Block {
 		return &sheet.Footing{Span: sp, Name: h.name, Lines: b.lines, Table: b.table}
 	}
 	return &sheet.Analysis{Span: sp, Kind: kind, KindSpan: c.span(ws[0].start, ws[0].end),
-		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, To: h.to, Lines: b.lines}
+		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, To: h.to, Lines: b.lines, Table: b.table}
 }
 
 // container names what an unclosed fence runs to the end of.
@@ -200,7 +200,12 @@ func (c *conv) header(kind sheet.Kind, ws []word) header {
 			kw, second, dst = "to", "a footing name", &h.to
 		}
 		var ok bool
-		if h.footing, ok = take("a footing name", kind.String()); !ok {
+		first := "a footing name"
+		if kind.Spec().Header == spec.NamedOn {
+			form = "write " + kind.String() + " NAME on GROUND [as PREFIX]"
+			first = "a " + kind.String() + " name"
+		}
+		if h.footing, ok = take(first, kind.String()); !ok {
 			return h
 		}
 		if !keyword(kw, form) {

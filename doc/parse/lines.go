@@ -61,7 +61,7 @@ func (b *blockLines) line(text string, off int) {
 // tableLine takes a line starting with '|'.
 func (b *blockLines) tableLine(l rawLine, ts, te int) {
 	switch b.kind {
-	case sheet.KindGround, sheet.KindFooting:
+	case sheet.KindGround, sheet.KindFooting, sheet.KindSchedule:
 	default:
 		if len(b.run) == 0 {
 			what := "statements and checks"

@@ -18,6 +18,7 @@ const (
 	KindCapacity
 	KindDifferential
 	KindSize
+	KindSchedule
 )
 
 // Kinds are the block words in Kind order (from Specs).
@@ -77,6 +78,7 @@ type Analysis struct {
 	Prefix   Str    // the "as" name; zero when absent (results go under Footing)
 	To       Str    // differential blocks: the second footing (Ground is then zero)
 	Lines    []Line // *Option and *Comment
+	Table    *Grid  // schedule blocks: the table of footings (nil otherwise)
 }
 
 // ResultPrefix is the name the block's results are published under:

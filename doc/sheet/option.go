@@ -31,6 +31,7 @@ var Specs = []*kind.Spec{
 	KindCapacity:     &capacity.Spec,
 	KindDifferential: &settle.DiffSpec,
 	KindSize:         &size.Spec,
+	KindSchedule:     &size.ScheduleSpec,
 }
 
 // Spec is the declaration of kind k.

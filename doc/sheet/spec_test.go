@@ -54,7 +54,7 @@ func TestSpecs(t *testing.T) {
 				}
 			}
 		}
-		if (sp.Header == kind.On || sp.Header == kind.To) != (len(sp.Results) > 0) {
+		if (sp.Header == kind.On || sp.Header == kind.To || sp.Header == kind.NamedOn) != (len(sp.Results) > 0) {
 			t.Errorf("%s: an analysis defines results, an input block none", k)
 		}
 	}
@@ -157,17 +157,31 @@ func TestREADMEOptions(t *testing.T) {
 				t.Errorf("README result symbols: %s %s is missing", sp.Word, r.Symbol)
 			}
 		}
-		for _, n := range named {
-			if strings.Contains(n, " ") || strings.HasPrefix(n, "_") {
-				continue // an option as written (`tilt = yes`), a suffix (`_h`)
+		for _, r := range sp.RowResults {
+			if !contains(named, r.Symbol) {
+				t.Errorf("README result symbols: %s row result %s is missing", sp.Word, r.Symbol)
 			}
-			if _, ok := sp.Result(n); !ok {
+		}
+		for _, n := range named {
+			if strings.Contains(n, " ") || strings.HasPrefix(n, "_") || n == "NAME.ROW" {
+				continue // an option as written (`tilt = yes`), a suffix (`_h`), the row prefix
+			}
+			if _, ok := sp.Result(n); !ok && !rowResult(sp, n) {
 				if _, opt := sp.Option(n); !opt {
 					t.Errorf("README result symbols: %s has no result %s", sp.Word, n)
 				}
 			}
 		}
 	}
+}
+
+func rowResult(sp *kind.Spec, n string) bool {
+	for _, r := range sp.RowResults {
+		if r.Symbol == n {
+			return true
+		}
+	}
+	return false
 }
 
 func contains(list []string, s string) bool {
