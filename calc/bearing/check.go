@@ -106,6 +106,7 @@ func Check(in Input) (*Result, error) {
 	if c.local {
 		c.r.MethodLine += " with Terzaghi's (1943) local-shear reduction"
 	}
+	c.r.Trace.Compact() // the buffers above were sized generously
 	return c.r, nil
 }
 

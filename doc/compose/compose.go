@@ -8,6 +8,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -35,13 +36,15 @@ type composer struct {
 	refs      refList
 	inputs    map[*eval.Symbol]string // anchor of the line or table that prints an input
 	nAnchor   int
-	cautions  []raised                      // engine cautions, for the cautions summary
-	matter    []matterTitle                 // the matter sheets after the calculation sheets, in order
-	quote     int                           // depth of block quotes being converted (their text is italic)
-	level     int                           // level of the sheet's latest heading (engine sub-headings go below it)
-	refSeen   map[trace.Ref]bool            // citations printed in the current engine block
-	appendix  []layout.Block                // working left out of the main flow (detail = governing)
-	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
+	cautions  []raised                        // engine cautions, for the cautions summary
+	matter    []matterTitle                   // the matter sheets after the calculation sheets, in order
+	quote     int                             // depth of block quotes being converted (their text is italic)
+	level     int                             // level of the sheet's latest heading (engine sub-headings go below it)
+	refSeen   map[trace.Ref]bool              // citations printed in the current engine block
+	appendix  []layout.Block                  // working left out of the main flow (detail = governing)
+	selfShown map[*eval.Footing]*eval.Block   // the block that printed each footing's self-weight working
+	uses      map[*eval.Footing][]*eval.Block // each footing's analyses (sketch.go)
+	texts     *eqn.Texts                      // formula texts set by fits, reused
 }
 
 // raised is an engine caution with the place it was printed.
@@ -75,7 +78,7 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, texts: eqn.NewTexts()}
 	c.refs.linked = !opt.Bare
 	return c
 }

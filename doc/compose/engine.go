@@ -171,7 +171,7 @@ func (c *composer) fits(n eqn.Node) bool {
 	if n == nil {
 		return true
 	}
-	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: 9.5})
+	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: 9.5, Texts: c.texts})
 	if err != nil {
 		return true // the layout reports it
 	}

@@ -18,20 +18,15 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	m := f.Model
 	var on *eval.Ground
 	var gov *eval.Block
-	for _, t := range c.res.Sheets {
-		for _, x := range t.Blocks() {
-			if x.Of != f {
-				continue
-			}
-			if on == nil {
-				on = x.On
-			}
-			if f.NoB && x.Size != nil && m.B == 0 {
-				m = x.Size.Footing // drawn at the size its size block chose
-			}
-			if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
-				gov = x
-			}
+	for _, x := range c.footingUses()[f] {
+		if on == nil {
+			on = x.On
+		}
+		if f.NoB && x.Size != nil && m.B == 0 {
+			m = x.Size.Footing // drawn at the size its size block chose
+		}
+		if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
+			gov = x
 		}
 	}
 	if m.B == 0 {
@@ -101,4 +96,22 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
 	return []layout.Block{&layout.Drawing{Pos: b.Span, W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+}
+
+// footingUses lists the analyses of every footing in document order,
+// indexed once per document (a search of every sheet for each footing's
+// sketch grew with the square of the sheets).
+func (c *composer) footingUses() map[*eval.Footing][]*eval.Block {
+	if c.uses != nil {
+		return c.uses
+	}
+	c.uses = map[*eval.Footing][]*eval.Block{}
+	for _, t := range c.res.Sheets {
+		for _, x := range t.Blocks() {
+			if x.Of != nil {
+				c.uses[x.Of] = append(c.uses[x.Of], x)
+			}
+		}
+	}
+	return c.uses
 }

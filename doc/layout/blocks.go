@@ -22,7 +22,7 @@ var bodyStyle = textStyle{size: bodySize, lead: bodyLead, color: ink}
 func linePieces(kind string, pos source.Span, lines []line, width, before float64) []*piece {
 	ps := make([]*piece, len(lines))
 	for i, ln := range lines {
-		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.items}
+		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.appendItems(nil, 0, 0)}
 		ps[i] = &piece{box: b, base: ln.base}
 	}
 	if n := len(ps); n > 1 {
@@ -81,7 +81,7 @@ func (e *engine) heading(h *Heading, width float64) []*piece {
 			e.checkGlyphs(number, fonts.Bold, h.Pos)
 			b.Items = append(b.Items, draw.Text{X: 0, Y: ln.base, Face: fonts.Bold, Size: size, Color: accent, Text: number})
 		}
-		b.Items = appendOffset(b.Items, ln.items, numW, y)
+		b.Items = ln.appendItems(b.Items, numW, y)
 		y += ln.h
 	}
 	if lvl == 1 {
@@ -206,7 +206,7 @@ func (e *engine) captionUnder(b *Box, runs []Run, width, h float64) float64 {
 	var items []draw.Item
 	capH := 0.0
 	for _, ln := range e.setText(runs, width*0.9, captionStyle, b.Pos) {
-		items = appendOffset(items, ln.items, (width-ln.w)/2, capH)
+		items = ln.appendItems(items, (width-ln.w)/2, capH)
 		capH += ln.h
 	}
 	if capH == 0 {
@@ -275,12 +275,4 @@ func imageSize(data []byte) (w, h float64, ok bool) {
 		return 0, 0, false
 	}
 	return float64(cfg.Width), float64(cfg.Height), true
-}
-
-// appendOffset appends items moved by (dx, dy) to dst.
-func appendOffset(dst, items []draw.Item, dx, dy float64) []draw.Item {
-	for _, it := range items {
-		dst = append(dst, draw.Offset(it, dx, dy))
-	}
-	return dst
 }

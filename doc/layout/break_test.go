@@ -33,7 +33,7 @@ func TestBreakLongWord(t *testing.T) {
 				if ln.w > c.width+1e-6 && c.width > 8 {
 					t.Errorf("line %d is %.1f pt wide, over %.1f", i, ln.w, c.width)
 				}
-				for _, it := range ln.items {
+				for _, it := range ln.appendItems(nil, 0, 0) {
 					s := it.(draw.Text).Text
 					if i < len(lines)-1 && strings.HasSuffix(s, "-") {
 						s = strings.TrimSuffix(s, "-")

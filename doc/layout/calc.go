@@ -66,7 +66,7 @@ type formula struct {
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
 func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Span, own bool) (formula, bool) {
-	st := eqn.Style{Size: bodySize, Color: ink}
+	st := eqn.Style{Size: bodySize, Color: ink, Texts: e.texts()}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
 		e.mathProblem(pos, own, err)
@@ -101,16 +101,14 @@ func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, n
 		eqW = width - noteW - gap
 	}
 	const pad = 1.5
-	f, ok := e.stackFormula(row, eqW, 0, pad, pos, own)
+	// The note goes beside a formula that is one line no wider than eqW;
+	// such a formula is that same line at the full width, so one
+	// breaking at the full width serves both cases.
+	f, ok := e.stackFormula(row, width, 0, pad, pos, own)
 	if !ok {
 		return nil
 	}
 	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
-	if !beside {
-		if f, ok = e.stackFormula(row, width, 0, pad, pos, own); !ok {
-			return nil
-		}
-	}
 	if f.w > width+float64(e.tpl.Margin.Right)-4 {
 		e.diags.Add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
 	}
@@ -127,7 +125,7 @@ func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, n
 			y = pad + f.base - lines[0].base
 		}
 		for _, ln := range lines {
-			b.Items = appendOffset(b.Items, ln.items, x, y)
+			b.Items = ln.appendItems(b.Items, x, y)
 			y += ln.h
 		}
 		h = math.Max(h, y)
@@ -174,7 +172,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	if len(c.Note) > 0 {
 		y := h + 1
 		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
-			noteItems = appendOffset(noteItems, ln.items, pad, y)
+			noteItems = ln.appendItems(noteItems, pad, y)
 			y += ln.h
 		}
 		h = y

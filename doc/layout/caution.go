@@ -43,7 +43,7 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	head.Items = append(head.Items, draw.Text{X: mark, Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
 	y := 0.0
 	for _, ln := range lines {
-		head.Items = appendOffset(head.Items, ln.items, wordW, y)
+		head.Items = ln.appendItems(head.Items, wordW, y)
 		y += ln.h
 	}
 	head.H = y

@@ -19,6 +19,8 @@ type engine struct {
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
+	refCalls                   int   // page references set so far (reuse.go)
+	sp                         space // word and frag chunks (space.go)
 }
 
 // piece is an unbreakable strip of a sheet's body, stacked by the
@@ -104,9 +106,10 @@ func internal(doc Doc, msg string) source.List {
 // numbered within the sheet), the problems found, and the text each page
 // reference in it was set with.
 type laidSheet struct {
-	pages []*Page
-	diags source.List
-	refs  map[PageRef]refUse
+	pages  []*Page
+	diags  source.List
+	refs   map[PageRef]refUse
+	blocks []laidBlock // its blocks' pieces, when it may be laid out again (reuse.go)
 }
 
 // sheets lays out and paginates the sheets numbered in which, in
@@ -134,9 +137,9 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 					se := *e
 					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
 					se.fills, se.used = fills, map[PageRef]refUse{}
-					pieces := se.blocks(doc.Sheets[si].Blocks, se.bodyW)
+					pieces, kept := se.sheetBlocks(doc.Sheets[si].Blocks, out[si].blocks)
 					pages := se.paginate(si, pieces)
-					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used}
+					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept}
 				}()
 				if doc.Progress != nil {
 					mu.Lock()

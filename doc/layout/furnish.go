@@ -26,7 +26,7 @@ func (e *engine) variantBanner(variant []string) *Box {
 	h := pad
 	var text []draw.Item
 	for _, ln := range lines {
-		text = appendOffset(text, ln.items, pad+4, h)
+		text = ln.appendItems(text, pad+4, h)
 		h += ln.h
 	}
 	h += pad
@@ -103,14 +103,38 @@ func (e *engine) furnish(doc Doc, out *Pages, banner *Box) {
 
 // expand fills {field} placeholders; ok is false when a field printed a
 // warning value (NOT CHECKED).
+// It matches as the placeholder pattern does, scanned by hand: every page
+// expands its title block and footer.
 func expand(s string, value func(string) (string, bool)) (string, bool) {
+	if strings.IndexByte(s, '{') < 0 {
+		return strings.TrimSpace(s), true
+	}
 	ok := true
-	out := placeholder.ReplaceAllStringFunc(s, func(m string) string {
-		v, good := value(m[1 : len(m)-1])
-		ok = ok && good
-		return v
-	})
-	return strings.TrimSpace(out), ok
+	var out strings.Builder
+	out.Grow(len(s) + 16)
+	for i := 0; i < len(s); {
+		if s[i] == '{' {
+			j := i + 1
+			for j < len(s) && fieldChar(s[j]) {
+				j++
+			}
+			if j < len(s) && s[j] == '}' {
+				v, good := value(s[i+1 : j])
+				ok = ok && good
+				out.WriteString(v)
+				i = j + 1
+				continue
+			}
+		}
+		out.WriteByte(s[i])
+		i++
+	}
+	return strings.TrimSpace(out.String()), ok
+}
+
+// fieldChar reports whether c may be in a field name ([A-Za-z0-9_]).
+func fieldChar(c byte) bool {
+	return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c >= '0' && c <= '9' || c == '_'
 }
 
 func (e *engine) titleBlock(value func(string) (string, bool), pos source.Span) *Box {

@@ -30,6 +30,7 @@ type refUse struct {
 // pageText is the text a page-reference run prints in this pass: the
 // pages found by the previous pass, else the prefix and a dash.
 func (e *engine) pageText(r PageRef, pos source.Span) string {
+	e.refCalls++
 	t, ok := e.fills[r]
 	if !ok {
 		t = r.Prefix + "—"

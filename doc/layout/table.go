@@ -139,7 +139,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		x := 0.0
 		for c, cw := range row {
 			inner := math.Max(widths[c]-2*cellPadX, 1)
-			lines := breakLines(append([]word(nil), cw.ws...), inner, cw.style)
+			lines := breakLines(cw.ws, inner, cw.style)
 			y := cellPadY
 			for _, ln := range lines {
 				dx := cellPadX
@@ -156,7 +156,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 				case AlignCenter:
 					dx += (inner - ln.w) / 2
 				}
-				cells = appendOffset(cells, ln.items, x+dx, y)
+				cells = ln.appendItems(cells, x+dx, y)
 				y += ln.h
 			}
 			h = math.Max(h, y+cellPadY)
