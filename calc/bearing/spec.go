@@ -56,3 +56,10 @@ var Spec = kind.Spec{
 		{Symbol: "util_h", Meaning: "sliding utilisation, governing sliding case", When: "sliding"},
 	},
 }
+
+// The block takes the sensitivity option too (calc/kind.Vary): its
+// results follow the block's own.
+func init() {
+	Spec.Options = append(Spec.Options, kind.Vary)
+	Spec.Results = append(Spec.Results, kind.VaryResults...)
+}

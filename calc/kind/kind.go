@@ -181,3 +181,17 @@ func (s *Spec) RowMeaning(sym string) string {
 	r, _ := s.RowResult(sym)
 	return r.Meaning
 }
+
+// Vary is the sensitivity option of the analyses that have a verdict
+// (bearing, settlement, platform): the block evaluated again over a range
+// of one input of the sheet, through the same engine and --set machinery.
+var Vary = Option{Name: "vary", Value: Special,
+	Form:    "SYMBOL: FROM .. TO, a range of one input (site.clay.c_u: 40 kPa .. 80 kPa, or site.clay.c_u: -20 % .. +20 % of its value)",
+	Default: "none",
+	Doc:     "the governing utilisation against one input over a range, and where the verdict flips"}
+
+// VaryResults are the results the vary option brings.
+var VaryResults = []Result{
+	{Symbol: "util_at_min", Meaning: "governing utilisation at the low end of the vary range", When: "vary"},
+	{Symbol: "util_at_max", Meaning: "governing utilisation at the high end of the vary range", When: "vary"},
+}

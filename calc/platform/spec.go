@@ -50,3 +50,10 @@ var Spec = kind.Spec{
 		{Symbol: "util_EC7_2", Meaning: "EN 1997-1 two-layer utilisation of the track, case 2", When: "q2 and comparison = yes"},
 	},
 }
+
+// The block takes the sensitivity option too (calc/kind.Vary): its
+// results follow the block's own.
+func init() {
+	Spec.Options = append(Spec.Options, kind.Vary)
+	Spec.Results = append(Spec.Results, kind.VaryResults...)
+}

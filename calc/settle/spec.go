@@ -112,3 +112,10 @@ var DiffSpec = kind.Spec{
 		{Symbol: "util", Meaning: "angular distortion utilisation β/β_lim"},
 	},
 }
+
+// The block takes the sensitivity option too (calc/kind.Vary): its
+// results follow the block's own.
+func init() {
+	Spec.Options = append(Spec.Options, kind.Vary)
+	Spec.Results = append(Spec.Results, kind.VaryResults...)
+}

@@ -367,6 +367,15 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return nil
 	}
 	c.sources(b)
+	out := c.analysisBody(s, a, b)
+	if b.Vary != nil {
+		out = append(out, c.varyBlocks(b)...)
+	}
+	return out
+}
+
+// analysisBody prints the block itself.
+func (c *composer) analysisBody(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []layout.Block {
 	switch {
 	case b.Bearing != nil:
 		return c.bearing(s, b)

@@ -34,6 +34,7 @@ type Block struct {
 	Size     *SizeResult // size blocks
 	Schedule *ScheduleResult
 	Platform *PlatformResult
+	Vary     *VaryResult // the vary option's table, when given
 	Options  []string // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check

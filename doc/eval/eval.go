@@ -25,6 +25,9 @@ type Options struct {
 	// uses are not reported again), and no evaluation diagnostic is added
 	// on a line that already has one.
 	Prior source.List
+	// noVary is set on the runs the vary option makes, which vary
+	// nothing themselves.
+	noVary bool
 }
 
 // Package evaluates every sheet of p. It returns the result even when
@@ -65,6 +68,7 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 	for _, s := range e.order() {
 		e.sheet(s)
 	}
+	e.varyAll(opt)
 	e.splitContext()
 	e.register()
 	e.bounds()
