@@ -218,7 +218,14 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), ha
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
+		varied := false
+		for _, o := range b.Options() {
+			varied = varied || o.Name.Value == "vary"
+		}
 		for _, n := range b.Kind.Spec().ResultNames() {
+			if r, _ := b.Kind.Spec().Result(n); r.When == "vary" && !varied {
+				continue // only a block with the vary option defines them
+			}
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue
 			}
