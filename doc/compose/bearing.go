@@ -267,7 +267,7 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 			vals[k][i] = st.Value
 		}
 	}
-	t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
+	t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
 		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft},
 		Caption: caption}
 	for _, i := range idx {
@@ -310,8 +310,14 @@ const maxFoldCols = 12
 // columns (read down the first band, then the next), so a table of one
 // or two cases does not run down several pages.
 func fold(t *layout.Table, w int) {
-	bands := min(maxFoldCols/w, 3)
-	if bands < 2 || len(t.Rows) < 12 {
+	if len(t.Rows) >= 12 {
+		foldBands(t, w, min(maxFoldCols/w, 3))
+	}
+}
+
+// foldBands sets a table of w columns in the given number of bands.
+func foldBands(t *layout.Table, w, bands int) {
+	if bands < 2 || len(t.Rows) < 2*bands {
 		return
 	}
 	n := (len(t.Rows) + bands - 1) / bands

@@ -166,8 +166,18 @@ func (c *composer) cover() layout.Sheet {
 		}})
 	}
 	for _, mt := range c.matter {
+		title := cell(layout.Run{Text: mt.title, Link: mt.anchor})
+		if mt.anchor == "registers" {
+			title = nil
+			for i, sec := range matterSections {
+				if i > 0 {
+					title = append(title, txt(" · "))
+				}
+				title = append(title, layout.Run{Text: sec.title, Link: sec.anchor, Own: true})
+			}
+		}
 		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(txt("—")), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
+			cell(txt("—")), nil, title, nil, nil,
 		}})
 	}
 	add(c.contents)
@@ -220,8 +230,12 @@ func (c *composer) signOff(p source.Position) *layout.Drawing {
 // matterTitle names a matter sheet and its anchor.
 type matterTitle struct{ title, anchor string }
 
-// matterTitles are the end-matter sheets in order.
-var matterTitles = []matterTitle{
+// matterTitles are the end-matter sheets in order: one sheet, its
+// sections listed in its contents row.
+var matterTitles = []matterTitle{{registersTitle, "registers"}}
+
+// matterSections are the sections of the end-matter sheet.
+var matterSections = []matterTitle{
 	{"Check register", "check-register"},
 	{"Input register", "input-register"},
 	{"References", "references"},

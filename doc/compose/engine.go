@@ -77,6 +77,18 @@ func (c *composer) governingOnly() bool {
 
 func (o *engineOut) add(bs ...layout.Block) { o.blocks = append(o.blocks, bs...) }
 
+// line adds a calculation line to the run of lines it follows (one
+// layout.Steps, which sets short lines several to a row).
+func (o *engineOut) line(b layout.Block) {
+	if n := len(o.blocks); n > 0 {
+		if s, ok := o.blocks[n-1].(*layout.Steps); ok {
+			s.Lines = append(s.Lines, b)
+			return
+		}
+	}
+	o.add(&layout.Steps{Pos: o.p, Lines: []layout.Block{b}})
+}
+
 // para adds a paragraph.
 func (o *engineOut) para(runs ...layout.Run) { o.add(&layout.Para{Pos: o.p, Runs: runs}) }
 
@@ -201,7 +213,7 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 			o.printed = map[string]bool{}
 		}
 		o.printed[k] = true
-		o.add(o.c.stepLine(o.p, st))
+		o.line(o.c.stepLine(o.p, st))
 		for j, ca := range tr.Cautions {
 			if ca.Step == i {
 				o.cautionOf(tr, j, where)

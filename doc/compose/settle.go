@@ -141,17 +141,87 @@ func f(v float64, u units.Unit) string {
 }
 
 // stressTable lists every sublayer: depth, stresses, how it settles.
+// The sublayers of one layer are consecutive; the caption names each
+// layer's range of sublayers, with its thickness h and form when they
+// are the same for all its sublayers (their columns are left out when
+// that holds for every layer). Long tables fold into side-by-side bands.
 func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
-	t := &layout.Table{Pos: o.p,
-		Header: []layout.Cell{{txt("No.")}, {txt("Layer")}, unitHeader("z", "m"), unitHeader("h", "m"), unitHeader("sigma'_v0", "kPa"),
-			deltaHeader("kPa"), unitHeader("sigma'_f", "kPa"), {txt("Form")}, unitHeader("s_i", "mm"), unitHeader("s_c", "mm")},
-		Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight},
-		Caption: []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles.", r.Point))}}
+	type run struct{ from, to int }
+	var runs []run
 	for i, sl := range r.Sub {
-		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(fmt.Sprint(i + 1))}, {user(sl.Name)}, {txt(f(sl.Z, mU))}, {txt(f(sl.H, mU))}, {txt(f(sl.SigmaV0Eff, kPa))},
-			{txt(f(sl.DSigma, kPa))}, {txt(f(sl.SigmaF, kPa))}, richText(orDefault(sl.Case, "—"), layout.Regular), {txt(f(sl.Si, mm))}, {txt(f(sl.Sc, mm))},
-		}})
+		if n := len(runs); n > 0 && r.Sub[runs[n-1].from].Layer == sl.Layer {
+			runs[n-1].to = i
+		} else {
+			runs = append(runs, run{i, i})
+		}
+	}
+	sameH, sameForm := true, true
+	for _, rn := range runs {
+		for i := rn.from; i <= rn.to; i++ {
+			sameH = sameH && f(r.Sub[i].H, mU) == f(r.Sub[rn.from].H, mU) // as printed
+			sameForm = sameForm && r.Sub[i].Case == r.Sub[rn.from].Case
+		}
+	}
+	capt := []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles. ", r.Point))}
+	for k, rn := range runs {
+		sl := r.Sub[rn.from]
+		if k > 0 {
+			capt = append(capt, txt("; "))
+		}
+		span := fmt.Sprintf("%d", rn.from+1)
+		if rn.to > rn.from {
+			span += fmt.Sprintf("–%d", rn.to+1)
+		}
+		capt = append(capt, txt(span+" "), user(sl.Name))
+		var extra []layout.Run
+		if sameH {
+			extra = append(extra, layout.Run{Math: eqn.Row{eqn.Sym{Name: "h"}, eqn.Op{Text: "="}, siNode(sl.H, "m")}, Own: true})
+		}
+		if sameForm {
+			if len(extra) > 0 {
+				extra = append(extra, txt(", "))
+			}
+			extra = append(extra, txt("form "))
+			extra = append(extra, richText(orDefault(sl.Case, "—"), layout.Regular)...)
+		}
+		if len(extra) > 0 {
+			capt = append(capt, txt(" ("))
+			capt = append(capt, extra...)
+			capt = append(capt, txt(")"))
+		}
+	}
+	capt = append(capt, txt("."))
+	t := &layout.Table{Pos: o.p, Compact: true, Caption: capt,
+		Header: []layout.Cell{{txt("No.")}, unitHeader("z", "m")}, Align: []layout.Align{layout.AlignRight, layout.AlignRight}}
+	col := func(h layout.Cell, a layout.Align) {
+		t.Header = append(t.Header, h)
+		t.Align = append(t.Align, a)
+	}
+	if !sameH {
+		col(unitHeader("h", "m"), layout.AlignRight)
+	}
+	col(unitHeader("sigma'_v0", "kPa"), layout.AlignRight)
+	col(deltaHeader("kPa"), layout.AlignRight)
+	col(unitHeader("sigma'_f", "kPa"), layout.AlignRight)
+	if !sameForm {
+		col(layout.Cell{txt("Form")}, layout.AlignLeft)
+	}
+	col(unitHeader("s_i", "mm"), layout.AlignRight)
+	col(unitHeader("s_c", "mm"), layout.AlignRight)
+	for i, sl := range r.Sub {
+		cells := []layout.Cell{{txt(fmt.Sprint(i + 1))}, {txt(f(sl.Z, mU))}}
+		if !sameH {
+			cells = append(cells, layout.Cell{txt(f(sl.H, mU))})
+		}
+		cells = append(cells, layout.Cell{txt(f(sl.SigmaV0Eff, kPa))}, layout.Cell{txt(f(sl.DSigma, kPa))}, layout.Cell{txt(f(sl.SigmaF, kPa))})
+		if !sameForm {
+			cells = append(cells, richText(orDefault(sl.Case, "—"), layout.Regular))
+		}
+		cells = append(cells, layout.Cell{txt(f(sl.Si, mm))}, layout.Cell{txt(f(sl.Sc, mm))})
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: cells})
+	}
+	if len(t.Rows) >= 12 && len(t.Header) <= 9 {
+		foldBands(t, len(t.Header), 2) // nine columns a band still set their numbers whole
 	}
 	return t
 }

@@ -91,23 +91,30 @@ func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Po
 	return f, true
 }
 
-// calcLine lays out a formula with its note beside it (right column), or
-// below it when the formula needs the whole width.
+// noteStops are where a note beside a formula may start, as shares of
+// the width: the first that clears the formula, so a short formula leaves
+// its note a wide column (one line where the fixed column wrapped it to
+// three) and the notes of a run of lines still start at one of a few
+// places.
+var noteStops = [...]float64{0.3, 0.48, 0.64}
+
+// calcLine lays out a formula with its note beside it (at the first note
+// stop clear of the formula), or below it when the formula needs the
+// whole width.
 func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
-	noteW := math.Min(0.34*width, 185)
-	const gap = 14.0
+	const gap = 12.0
+	last := noteStops[len(noteStops)-1] * width
 	eqW := width
 	if len(note) > 0 {
-		eqW = width - noteW - gap
+		eqW = last - gap
 	}
-	const pad = 1.5
-	f, ok := e.stackFormula(row, eqW, 0, pad, pos, own)
+	f, ok := e.stackFormula(row, eqW, 0, calcPad, pos, own)
 	if !ok {
 		return nil
 	}
 	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
 	if !beside {
-		if f, ok = e.stackFormula(row, width, 0, pad, pos, own); !ok {
+		if f, ok = e.stackFormula(row, width, 0, calcPad, pos, own); !ok {
 			return nil
 		}
 	}
@@ -115,16 +122,22 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 		e.probs.add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
 	}
 	b := &Box{Kind: kind, Pos: pos, W: width, Items: f.items}
-	h := pad + f.h
+	h := calcPad + f.h
 	if len(note) > 0 {
-		nw, x := noteW, width-noteW
-		if !beside {
-			nw, x = width-18, 18.0
-		}
-		lines := e.setText(note, nw, noteStyle, pos)
-		y := h + 1
+		x := 18.0
 		if beside {
-			y = pad + f.base - lines[0].base
+			x = last
+			for _, s := range noteStops {
+				if f.w+gap <= s*width {
+					x = s * width
+					break
+				}
+			}
+		}
+		lines := e.setText(note, width-x, noteStyle, pos)
+		y := h + 0.5
+		if beside {
+			y = calcPad + f.base - lines[0].base
 		}
 		for _, ln := range lines {
 			b.Items = appendOffset(b.Items, ln.items, x, y)
@@ -132,11 +145,11 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 		}
 		h = math.Max(h, y)
 	}
-	b.H = h + pad
+	b.H = h + calcPad
 	if anchor != "" {
 		b.Items = append(b.Items, draw.Anchor{Name: anchor})
 	}
-	return []*piece{{box: b, before: calcGap, base: pad + f.base}}
+	return []*piece{{box: b, before: calcGap, base: calcPad + f.base}}
 }
 
 var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥": "≥", "<": "<", ">": ">", "=": "=", "==": "=", "!=": "≠", "≠": "≠"}

@@ -152,6 +152,9 @@ type Table struct {
 	Rows    []Row
 	Align   []Align
 	Caption []Run // printed above the table; optional
+	// Compact sets the table in a smaller size with tighter cells (long
+	// tables of working and registers).
+	Compact bool
 }
 
 // Image is a PNG or JPEG picture, scaled to fit the text width (and at

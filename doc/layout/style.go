@@ -10,10 +10,12 @@ const (
 	bodyLead    = 1.34 // line height / size
 	noteSize    = 8.2
 	tableSize   = 8.5
+	compactSize = 7.6 // compact tables (Table.Compact)
 	codeSize    = 8.2
 	captionSize = 8.2
 	paraGap     = 5.0 // space between paragraphs
-	calcGap     = 4.0 // space between calc lines
+	calcGap     = 2.5 // space between calc lines
+	calcPad     = 1.0 // space above and below a calc line's formula
 )
 
 var headingSize = [4]float64{0, 12.5, 10.8, 9.8}

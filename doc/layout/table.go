@@ -9,14 +9,23 @@ import (
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
-const (
-	cellPadX = 4.5
-	cellPadY = 2.8
-)
+// tableLook is the size and cell padding of a table.
+type tableLook struct {
+	cell, head textStyle
+	padX, padY float64
+}
 
 var (
-	cellStyle = textStyle{size: tableSize, lead: 1.26, color: ink}
-	headStyle = textStyle{size: tableSize, lead: 1.26, color: ink, bold: true}
+	plainLook = tableLook{
+		cell: textStyle{size: tableSize, lead: 1.26, color: ink},
+		head: textStyle{size: tableSize, lead: 1.26, color: ink, bold: true},
+		padX: 4.5, padY: 2.8,
+	}
+	compactLook = tableLook{
+		cell: textStyle{size: compactSize, lead: 1.22, color: ink},
+		head: textStyle{size: compactSize, lead: 1.22, color: ink, bold: true},
+		padX: 3.5, padY: 1.7,
+	}
 )
 
 // table lays out a table as one piece per row; the header row repeats at
@@ -29,6 +38,11 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	if ncol == 0 {
 		return nil
 	}
+	look := plainLook
+	if t.Compact {
+		look = compactLook
+	}
+	cellPadX, cellPadY := look.padX, look.padY
 	// words of every cell, header first
 	type cellWords struct {
 		ws    []word
@@ -48,9 +62,9 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
 			pos = t.Rows[ri-1].Pos
 		}
-		st := cellStyle
+		st := look.cell
 		if ri == 0 {
-			st = headStyle
+			st = look.head
 		}
 		row := make([]cellWords, ncol)
 		for c := 0; c < ncol; c++ {
