@@ -41,10 +41,10 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 
 	// Summary of the cases and the governing check.
 	if len(r.Cases) > 0 {
-		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+		t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
 			unitHeader("V_d", fu.Name), unitHeader("H_d", fu.Name), unitHeader("R_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
 			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
-			Caption: []layout.Run{txt("Bearing: every design combination and drainage condition; the governing case (highest utilisation) is marked.")}}
+			Caption: []layout.Run{txt("Bearing: every design combination and drainage condition; the governing case (highest utilisation) is in bold.")}}
 		for i, cs := range r.Cases {
 			t.Rows = append(t.Rows, caseRow(i, r.Governing, cs.Combination, cs.Drainage.String(), cs.V, cs.H, cs.R, cs.Util, cs.OK, fu.Name))
 		}
@@ -80,10 +80,10 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	// Sliding.
 	if len(r.Sliding) > 0 {
 		o.head(fmt.Sprintf("Sliding resistance of %s", b.Of.Name))
-		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+		t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
 			unitHeader("H_d", fu.Name), unitHeader("V_d", fu.Name), unitHeader("R_h_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
 			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
-			Caption: richText("Sliding (EN 1997-1 6.5.3): every design combination; V_d is V′_d in drained cases; the governing case is marked.", layout.Regular)}
+			Caption: richText("Sliding (EN 1997-1 6.5.3): every design combination; V_d is V′_d in drained cases; the governing case is in bold.", layout.Regular)}
 		for i, sc := range r.Sliding {
 			row := caseRow(i, r.GoverningSliding, sc.Combination, sc.Drainage.String(), sc.H, sc.V, sc.R, sc.Util, sc.OK, fu.Name)
 			row.Cells[0] = layout.Cell{txt(fmt.Sprintf("S%d", i+1))}
@@ -160,7 +160,10 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(as)}, {txt(num(b, unit))}, {txt(rs)},
 		{mark(units.Utilisation(util))}, {verdict}}
 	if i == gov {
-		cells[2] = layout.Cell{txt(drainage), bold("  governing")}
+		cells[1] = layout.Cell{bold(comb)}
+		if ok {
+			cells[7] = layout.Cell{bold("OK")}
+		}
 	}
 	return layout.Row{Cells: cells}
 }
@@ -294,7 +297,7 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 		}
 		t.Rows = append(t.Rows, row)
 	}
-	fold(t, 2+len(idx))
+	o.c.foldToWidth(t, 2+len(idx))
 	if len(same) > 0 {
 		t.Caption = append(t.Caption, txt(" The same in every case of this table: "))
 		t.Caption = append(t.Caption, same...)
@@ -303,16 +306,19 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 	return t
 }
 
-// maxFoldCols is the most columns a folded compact table has.
-const maxFoldCols = 12
-
-// fold sets a narrow table of many rows in side-by-side bands of w
-// columns (read down the first band, then the next), so a table of one
-// or two cases does not run down several pages.
-func fold(t *layout.Table, w int) {
-	if len(t.Rows) >= 12 {
-		foldBands(t, w, min(maxFoldCols/w, 3))
+// foldToWidth sets a narrow table of w columns and many rows in as
+// many side-by-side bands as the text column holds at the table's
+// natural width (at most three; read down the first band, then the
+// next), so a table of a few cases does not run down several pages.
+func (c *composer) foldToWidth(t *layout.Table, w int) {
+	if len(t.Rows) < 8 {
+		return
 	}
+	nat := layout.NaturalWidth(t) * 1.03 // a little room: the bands' columns are measured again
+	if nat <= 0 {
+		return
+	}
+	foldBands(t, w, min(3, int(c.width/nat), len(t.Rows)/4))
 }
 
 // foldBands sets a table of w columns in the given number of bands.

@@ -47,6 +47,8 @@ type composer struct {
 	appendix  []layout.Block                // working left out of the main flow (detail = governing)
 	pageRefs  []pageRef                     // runs that print the page of an anchor
 	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
+	printed   map[string]bool               // engine steps printed on the current sheet (stepKey)
+	shapes    map[string]string             // formulas printed in full on the current sheet (shapeKey) → the symbol
 }
 
 // pageRef is a run that prints the page an anchor is on, filled in once
@@ -152,6 +154,7 @@ func (c *composer) sheet(s *eval.Sheet) layout.Sheet {
 		Fields: c.fields(s.Meta),
 	}
 	c.level = 0
+	c.printed, c.shapes = map[string]bool{}, map[string]string{}
 	out.Blocks = append(out.Blocks, &layout.Anchor{Pos: out.Pos, Name: sheetAnchor(s.Index)})
 	out.Blocks = append(out.Blocks, c.blocks(s, s.Src.Body)...)
 	return out

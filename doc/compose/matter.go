@@ -222,8 +222,8 @@ func (c *composer) assumedValues() []layout.Block {
 	}
 	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Values plinth added or assumed because the sheets do not give them, each printed with its working where it is used; confirm each. A value assumed alike in several blocks is listed once, with every block that uses it.")}})
 	t := &layout.Table{Pos: p, Compact: true,
-		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why")), cell(txt("Used at"))},
-		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft}}
+		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why; where used"))},
+		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
 	for _, e := range list {
 		sym, val := cell(txt("—")), cell(txt("—"))
 		if e.sym != "" {
@@ -231,7 +231,7 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 		note := cell(richText(e.note, layout.Regular)...)
 		for from := 0; from < len(e.uses); from += maxUses {
-			var at layout.Cell
+			at := append(append(layout.Cell(nil), note...), txt("\nUsed at "))
 			for i := from; i < min(from+maxUses, len(e.uses)); i++ {
 				u := e.uses[i]
 				if i > from {
@@ -249,7 +249,7 @@ func (c *composer) assumedValues() []layout.Block {
 			if from > 0 {
 				note = cell(txt("as the row above, in more blocks"))
 			}
-			t.Rows = append(t.Rows, layout.Row{Pos: pos(e.uses[from].b.Span), Cells: []layout.Cell{sym, val, note, at}})
+			t.Rows = append(t.Rows, layout.Row{Pos: pos(e.uses[from].b.Span), Cells: []layout.Cell{sym, val, at}})
 		}
 	}
 	return append(out, t)
@@ -328,7 +328,7 @@ func (c *composer) references() []layout.Block {
 		} else {
 			runs = append(runs, layout.Run{Text: "  [" + r.key + "]", Style: layout.Italic})
 		}
-		out = append(out, &layout.Anchor{Pos: p, Name: r.anchor()}, &layout.Para{Pos: p, Runs: runs})
+		out = append(out, &layout.Anchor{Pos: p, Name: r.anchor()}, &layout.Para{Pos: p, Runs: runs, Small: true})
 	}
 	return out
 }
@@ -355,24 +355,24 @@ func (c *composer) cautionSheet() []layout.Block {
 	if len(c.cautions) == 0 {
 		out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {
-		t := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution")), cell(txt("Raised at"))},
+		t := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution; where raised"))},
 			Align: []layout.Align{layout.AlignRight}}
 		list := append([]raised(nil), c.cautions...)
 		sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
-		rowOf := map[string]int{} // the row a caution's places go in
-		var uses []int            // places in each row
+		rowOf := map[string]int{}                                                        // the row a caution's places go in
+		var uses []int                                                                   // places in each row
 		for _, r := range list {
 			at := layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}
 			k := r.sev.String() + "\x00" + r.text
 			if i, ok := rowOf[k]; ok && uses[i] < maxUses {
-				t.Rows[i].Cells[3] = append(t.Rows[i].Cells[3], txt("; "), at)
+				t.Rows[i].Cells[2] = append(t.Rows[i].Cells[2], txt("; "), at)
 				uses[i]++
 				continue
 			}
 			uses = append(uses, 1)
 			rowOf[k] = len(t.Rows)
 			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
-				cell(txt(fmt.Sprint(len(t.Rows) + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...), cell(at),
+				cell(txt(fmt.Sprint(len(t.Rows) + 1))), cell(bold(r.sev.String())), append(richText(r.text, layout.Regular), txt("\nRaised at "), at),
 			}})
 		}
 		out = append(out, t)

@@ -11,6 +11,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/chart"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
@@ -220,9 +221,7 @@ func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
 		cells = append(cells, layout.Cell{txt(f(sl.Si, mm))}, layout.Cell{txt(f(sl.Sc, mm))})
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: cells})
 	}
-	if len(t.Rows) >= 12 && len(t.Header) <= 9 {
-		foldBands(t, len(t.Header), 2) // nine columns a band still set their numbers whole
-	}
+	c.foldToWidth(t, len(t.Header))
 	return t
 }
 
@@ -281,8 +280,11 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 // settleCharts draws the stress–depth chart and, when there is a time
 // curve, the settlement–time chart.
 func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
-	var out []layout.Block
+	var out []*layout.Drawing
 	w := math.Min(c.width, 400)
+	if len(r.Sub) > 1 && len(r.Curve) > 1 {
+		w = (c.width - chartGap) / 2 // the two side by side
+	}
 	if len(r.Sub) > 1 {
 		var z, s0, ds, sf []float64
 		for _, sl := range r.Sub {
@@ -291,7 +293,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			ds = append(ds, sl.DSigma/1e3)
 			sf = append(sf, sl.SigmaF/1e3)
 		}
-		ch := chart.Chart{W: w, H: 240,
+		ch := chart.Chart{W: w, H: 220,
 			X: chart.Axis{Title: "vertical stress (kPa)"}, Y: chart.Axis{Title: "depth below ground level (m)", Reverse: true},
 			Series: []chart.Series{{Name: "effective stress before loading", X: s0, Y: z}, {Name: "stress increase from the footing", X: ds, Y: z, Dash: []float64{4, 2}}, {Name: "effective stress after loading", X: sf, Y: z}},
 			Guides: []chart.Guide{{Value: r.ZInf, OnY: true, Label: "zone of influence " + f(r.ZInf, mU) + " m"}}}
@@ -314,7 +316,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 		for _, v := range s {
 			top = math.Max(top, v)
 		}
-		ch := chart.Chart{W: w, H: 200,
+		ch := chart.Chart{W: w, H: 220,
 			X: chart.Axis{Title: "time after loading (yr)", Log: true}, Y: chart.Axis{Title: "settlement (mm)", Reverse: true, Min: chart.At(0), Max: chart.At(niceCeil(1.15 * top))},
 			Series: []chart.Series{{Name: "total settlement", X: t, Y: s}},
 			Guides: []chart.Guide{{Value: r.Limit * 1e3, OnY: true, Label: "limit " + f(r.Limit, mm) + " mm"}}}
@@ -327,7 +329,30 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			c.diags.Add(o.b.Span, "settlement–time chart: %v", err)
 		}
 	}
-	return out
+	if len(out) == 2 {
+		return []layout.Block{beside(out[0], out[1], "Left: ", " Right: ")}
+	}
+	var bs []layout.Block
+	for _, d := range out {
+		bs = append(bs, d)
+	}
+	return bs
+}
+
+// chartGap is the space between two charts set side by side.
+const chartGap = 16.0
+
+// beside sets two drawings side by side, a's caption then b's, each
+// after its word (Left: …, Right: …).
+func beside(a, b *layout.Drawing, left, right string) *layout.Drawing {
+	d := &layout.Drawing{Pos: a.Pos, W: a.W + chartGap + b.W, H: math.Max(a.H, b.H)}
+	d.Items = append(d.Items, a.Items...)
+	for _, it := range b.Items {
+		d.Items = append(d.Items, draw.Offset(it, a.W+chartGap, 0))
+	}
+	d.Caption = append(append(d.Caption, txt(left)), a.Caption...)
+	d.Caption = append(append(d.Caption, txt(right)), b.Caption...)
+	return d
 }
 
 // groupKind is the kind of a settlement working group named

@@ -66,7 +66,7 @@ type formula struct {
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
 func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position, own bool) (formula, bool) {
-	st := eqn.Style{Size: bodySize, Color: ink}
+	st := eqn.Style{Size: mathSize, Color: ink}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
 		e.mathProblem(pos, own, err)
@@ -75,8 +75,8 @@ func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Po
 	f := formula{lines: len(lines)}
 	y := 0.0
 	for i, b := range lines {
-		asc := math.Max(b.Ascent, 0.78*bodySize) + 1
-		desc := math.Max(b.Descent, 0.3*bodySize) + 1
+		asc := math.Max(b.Ascent, 0.78*mathSize) + 1
+		desc := math.Max(b.Descent, 0.3*mathSize) + 1
 		if i == 0 {
 			f.base = y + asc
 		}

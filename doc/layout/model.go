@@ -119,10 +119,12 @@ type Heading struct {
 	Runs     []Run
 }
 
-// Para is a paragraph of text.
+// Para is a paragraph of text. A Small one is set in the note size, with
+// a smaller gap above it (lists of entries: references).
 type Para struct {
-	Pos  source.Position
-	Runs []Run
+	Pos   source.Position
+	Runs  []Run
+	Small bool
 }
 
 // List is a bullet list, or a numbered one from Start (0 means 1). Each

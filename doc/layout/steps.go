@@ -90,7 +90,7 @@ func (e *engine) shortLine(b Block, width float64) (cellLine, bool) {
 		return c, false
 	}
 	half := (width - stepColGap) / 2
-	lines, err := eqn.Break(row, half, eqn.Style{Size: bodySize, Color: ink})
+	lines, err := eqn.Break(row, half, eqn.Style{Size: mathSize, Color: ink})
 	if err != nil || len(lines) != 1 || lines[0].W > 0.6*half {
 		return c, false // the line alone reports any problem
 	}
@@ -190,7 +190,7 @@ func aligned(cs []cellLine, n int, colW float64) bool {
 func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *piece {
 	base := 0.0
 	for _, c := range cs {
-		base = math.Max(base, math.Max(c.line.Ascent, 0.78*bodySize)+1)
+		base = math.Max(base, math.Max(c.line.Ascent, 0.78*mathSize)+1)
 	}
 	base += calcPad
 	b := &Box{Kind: "steps", Pos: cs[0].pos, W: width}
@@ -198,7 +198,7 @@ func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *p
 	for j, c := range cs {
 		x := float64(j) * (colW + stepColGap)
 		b.Items = c.line.AppendItems(b.Items, x, base)
-		h = math.Max(h, base+math.Max(c.line.Descent, 0.3*bodySize)+1)
+		h = math.Max(h, base+math.Max(c.line.Descent, 0.3*mathSize)+1)
 		if len(c.note) > 0 {
 			lines := breakLines(append([]word(nil), c.note...), colW-noteX[j], noteStyle)
 			y := base - lines[0].base

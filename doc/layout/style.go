@@ -7,6 +7,7 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 // words NOT OK and OK.
 const (
 	bodySize    = 9.5
+	mathSize    = MathSize
 	bodyLead    = 1.34 // line height / size
 	noteSize    = 8.2
 	tableSize   = 8.5
@@ -17,6 +18,10 @@ const (
 	calcGap     = 2.5 // space between calc lines
 	calcPad     = 1.0 // space above and below a calc line's formula
 )
+
+// MathSize is the size calculation lines set their formulas in (compose
+// measures formulas at it to decide how to print them).
+const MathSize = 9.5
 
 var headingSize = [4]float64{0, 12.5, 10.8, 9.8}
 var headingGap = [4]float64{0, 14, 10, 8}

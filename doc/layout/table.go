@@ -28,87 +28,47 @@ var (
 	}
 )
 
+// cellWords is a table cell cut into words, in its style.
+type cellWords struct {
+	ws    []word
+	style textStyle
+}
+
+// measured is a table cut into words and measured: the narrowest and
+// the natural width of each column, and each number's shift onto its
+// column's decimal point.
+type measured struct {
+	ncol       int
+	look       tableLook
+	rows       [][]cellWords // header first (nil when there is none)
+	shift      func(ri, c int) float64
+	minW, maxW []float64
+}
+
+// NaturalWidth is the width t takes with no cell broken: its columns at
+// their natural widths (for a caller choosing how to fold a table).
+func NaturalWidth(t *Table) float64 {
+	e := &engine{}
+	m := e.measureTable(t)
+	if m == nil {
+		return 0
+	}
+	w := 0.0
+	for _, x := range m.maxW {
+		w += x
+	}
+	return w
+}
+
 // table lays out a table as one piece per row; the header row repeats at
 // the top of every page the table continues onto.
 func (e *engine) table(t *Table, width float64) []*piece {
-	ncol := len(t.Header)
-	for _, r := range t.Rows {
-		ncol = max(ncol, len(r.Cells))
-	}
-	if ncol == 0 {
+	m := e.measureTable(t)
+	if m == nil {
 		return nil
 	}
-	look := plainLook
-	if t.Compact {
-		look = compactLook
-	}
+	look, rows, shift, minW, maxW := m.look, m.rows, m.shift, m.minW, m.maxW
 	cellPadX, cellPadY := look.padX, look.padY
-	// words of every cell, header first
-	type cellWords struct {
-		ws    []word
-		style textStyle
-	}
-	rows := make([][]cellWords, 0, len(t.Rows)+1)
-	all := [][]Cell{t.Header}
-	for _, r := range t.Rows {
-		all = append(all, r.Cells)
-	}
-	for ri, cells := range all {
-		if ri == 0 && len(cells) == 0 {
-			rows = append(rows, nil)
-			continue
-		}
-		pos := t.Pos
-		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
-			pos = t.Rows[ri-1].Pos
-		}
-		st := look.cell
-		if ri == 0 {
-			st = look.head
-		}
-		row := make([]cellWords, ncol)
-		for c := 0; c < ncol; c++ {
-			if c < len(cells) {
-				row[c] = cellWords{e.words(cells[c], st, pos), st}
-			} else {
-				row[c] = cellWords{style: st}
-			}
-		}
-		rows = append(rows, row)
-	}
-	// numbers in right-aligned columns line up on the decimal point:
-	// each is moved left by its column's longest fraction less its own
-	tails := make([][]float64, len(rows))
-	most := make([]float64, ncol)
-	for ri, row := range rows {
-		tails[ri] = make([]float64, len(row))
-		for c, cw := range row {
-			tails[ri][c] = -1
-			if ri == 0 || c >= len(t.Align) || t.Align[c] != AlignRight {
-				continue
-			}
-			if w, ok := fraction(cw.ws); ok {
-				tails[ri][c] = w
-				most[c] = math.Max(most[c], w)
-			}
-		}
-	}
-	shift := func(ri, c int) float64 {
-		if tails[ri][c] < 0 {
-			return 0
-		}
-		return most[c] - tails[ri][c]
-	}
-	// column widths from the content
-	minW := make([]float64, ncol)
-	maxW := make([]float64, ncol)
-	for ri, row := range rows {
-		for c, cw := range row {
-			lo, hi := measureWords(cw.ws)
-			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
-			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
-		}
-	}
 	// a word wider than half the table breaks rather than squeezing
 	// the other columns to nothing
 	share := math.Max(width/2, 4*cellPadX)
@@ -300,4 +260,82 @@ func columnWidths(minW, maxW []float64, width float64) []float64 {
 		}
 	}
 	return out
+}
+
+func (e *engine) measureTable(t *Table) *measured {
+	ncol := len(t.Header)
+	for _, r := range t.Rows {
+		ncol = max(ncol, len(r.Cells))
+	}
+	if ncol == 0 {
+		return nil
+	}
+	look := plainLook
+	if t.Compact {
+		look = compactLook
+	}
+	cellPadX := look.padX
+	// words of every cell, header first
+	rows := make([][]cellWords, 0, len(t.Rows)+1)
+	all := [][]Cell{t.Header}
+	for _, r := range t.Rows {
+		all = append(all, r.Cells)
+	}
+	for ri, cells := range all {
+		if ri == 0 && len(cells) == 0 {
+			rows = append(rows, nil)
+			continue
+		}
+		pos := t.Pos
+		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
+			pos = t.Rows[ri-1].Pos
+		}
+		st := look.cell
+		if ri == 0 {
+			st = look.head
+		}
+		row := make([]cellWords, ncol)
+		for c := 0; c < ncol; c++ {
+			if c < len(cells) {
+				row[c] = cellWords{e.words(cells[c], st, pos), st}
+			} else {
+				row[c] = cellWords{style: st}
+			}
+		}
+		rows = append(rows, row)
+	}
+	// numbers in right-aligned columns line up on the decimal point:
+	// each is moved left by its column's longest fraction less its own
+	tails := make([][]float64, len(rows))
+	most := make([]float64, ncol)
+	for ri, row := range rows {
+		tails[ri] = make([]float64, len(row))
+		for c, cw := range row {
+			tails[ri][c] = -1
+			if ri == 0 || c >= len(t.Align) || t.Align[c] != AlignRight {
+				continue
+			}
+			if w, ok := fraction(cw.ws); ok {
+				tails[ri][c] = w
+				most[c] = math.Max(most[c], w)
+			}
+		}
+	}
+	shift := func(ri, c int) float64 {
+		if tails[ri][c] < 0 {
+			return 0
+		}
+		return most[c] - tails[ri][c]
+	}
+	// column widths from the content
+	minW := make([]float64, ncol)
+	maxW := make([]float64, ncol)
+	for ri, row := range rows {
+		for c, cw := range row {
+			lo, hi := measureWords(cw.ws)
+			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
+			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
+		}
+	}
+	return &measured{ncol: ncol, look: look, rows: rows, shift: shift, minW: minW, maxW: maxW}
 }

@@ -1,0 +1,195 @@
+package compose
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
+	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/source"
+)
+
+// steps prints the steps of tr with the given indices, each caution boxed
+// after the step that raised it. where names the place for the cautions
+// summary ("case 7").
+//
+// With detail = governing no working is written out twice on a sheet:
+//
+//   - a step already printed on the sheet (the same symbol, formula and
+//     value: a load combination the sliding case shares with the bearing
+//     case, a footing dimension) is listed by value on one line where
+//     the first of them would be ("As given or computed above: …");
+//   - a step whose formula is already written out in full on the sheet
+//     with other values (the sliding case's eccentricity, Steinbrenner's
+//     factor at the top of a layer after the one at its bottom), when its
+//     working would be tall or wide, prints as its value with the values
+//     that went into it, naming the step whose formula it uses.
+//
+// A step that raised a caution is always printed in full.
+func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
+	var again []layout.Run
+	var at *layout.Para
+	gov := o.c.governingOnly()
+	for _, i := range idx {
+		st := tr.Steps[i]
+		k := stepKey(st)
+		if gov && o.c.printed[k] && !o.raises(tr, i) {
+			if at == nil {
+				at = &layout.Para{Pos: o.p}
+				o.add(at)
+			}
+			if len(again) > 0 {
+				again = append(again, txt(", "))
+			}
+			again = append(again, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
+			continue
+		}
+		at, again = o.closeAgain(at, again), nil
+		o.c.printed[k] = true
+		line := o.c.stepLine(o.p, st)
+		if st.Formula != nil {
+			sk := shapeKey(st.Formula)
+			if first, ok := o.c.shapes[sk]; ok && gov && !o.raises(tr, i) && (first == st.Symbol || weight(st.Formula) >= 8) && o.c.tall(line) {
+				line = o.c.byFormula(o.p, st, first)
+			} else if !ok {
+				o.c.shapes[sk] = st.Symbol
+			}
+		}
+		o.line(line)
+		for j, ca := range tr.Cautions {
+			if ca.Step == i {
+				o.cautionOf(tr, j, where)
+			}
+		}
+	}
+	o.closeAgain(at, again)
+}
+
+// closeAgain fills the line listing steps printed above; it returns nil.
+func (o *engineOut) closeAgain(at *layout.Para, again []layout.Run) *layout.Para {
+	if at != nil {
+		at.Runs = append([]layout.Run{{Text: "As given or computed above: ", Style: layout.Italic, Own: true}}, again...)
+		at.Runs = append(at.Runs, txt("."))
+	}
+	return nil
+}
+
+// byFormula prints a step by the formula of a step printed in full above
+// (first, its symbol): the value, its note, and the values that went in.
+func (c *composer) byFormula(p source.Position, st trace.Step, first string) layout.Block {
+	var note []layout.Run
+	if st.Note != "" {
+		note = append(richText(st.Note, layout.Regular), txt("; "))
+	}
+	if first == st.Symbol {
+		note = append(note, txt("by the formula above"))
+	} else {
+		note = append(note, txt("by the formula of "), layout.Run{Math: eqn.Sym{Name: first}, Own: true}, txt(" above"))
+	}
+	for i, in := range st.Inputs {
+		if i == 0 {
+			note = append(note, txt(", with "))
+		} else {
+			note = append(note, txt(", "))
+		}
+		note = append(note, layout.Run{Math: eqn.Row{eqn.Sym{Name: in.Symbol}, eqn.Op{Text: "="}, siNode(in.V, in.Unit)}, Own: true})
+	}
+	if ref := c.stepRefOnce(st.Ref); ref != nil {
+		note = append(append(note, txt(" ")), ref...)
+	}
+	res := siNode(st.Value, st.Unit)
+	if isUtil(st.Symbol, st.Unit) {
+		res = numberNode(units.Utilisation(st.Value))
+	}
+	return &layout.Input{Pos: p, Symbol: eqn.Sym{Name: st.Symbol}, Value: res, Note: note, Own: true}
+}
+
+// tall reports whether a calculation line's working is taller than a line
+// of text (a fraction, a root) or wider than the column beside its note.
+func (c *composer) tall(b layout.Block) bool {
+	s, ok := b.(*layout.Statement)
+	if !ok || s.Expr == nil {
+		return false
+	}
+	row := eqn.Row{s.Symbol, eqn.Op{Text: "="}, s.Expr}
+	if s.Subst != nil {
+		row = append(row, eqn.Op{Text: "="}, s.Subst)
+	}
+	box, err := eqn.Layout(row, eqn.Style{Size: layout.MathSize})
+	if err != nil {
+		return false // the line prints in full and the layout reports it
+	}
+	return box.Ascent+box.Descent > 1.6*layout.MathSize || box.W > 0.6*c.width
+}
+
+// stepKey identifies a step by its symbol, formula, inputs and value.
+func stepKey(st trace.Step) string {
+	return fmt.Sprintf("%s|%v|%v|%v|%s", st.Symbol, st.Formula, st.Inputs, st.Value, st.Unit)
+}
+
+// shapeKey identifies a formula up to the names of its symbols: F₁ at the
+// bottom of a layer (in N_b) and at its top (in N_t) have one shape.
+func shapeKey(e trace.Expr) string {
+	idx := map[string]int{}
+	var b strings.Builder
+	var walk func(trace.Expr)
+	walk = func(e trace.Expr) {
+		switch e := e.(type) {
+		case trace.Sym:
+			if e.Name == "pi" {
+				b.WriteString("pi")
+				return
+			}
+			i, ok := idx[e.Name]
+			if !ok {
+				i = len(idx)
+				idx[e.Name] = i
+			}
+			fmt.Fprintf(&b, "#%d", i)
+		case trace.Num:
+			fmt.Fprintf(&b, "%v%s", e.V, e.Unit)
+		case trace.Op:
+			b.WriteByte('(')
+			walk(e.L)
+			b.WriteByte(e.Op)
+			walk(e.R)
+			b.WriteByte(')')
+		case trace.Neg:
+			b.WriteString("-(")
+			walk(e.X)
+			b.WriteByte(')')
+		case trace.Call:
+			b.WriteString(e.Fn + "(")
+			for i, a := range e.Args {
+				if i > 0 {
+					b.WriteByte(',')
+				}
+				walk(a)
+			}
+			b.WriteByte(')')
+		default:
+			fmt.Fprintf(&b, "%T", e)
+		}
+	}
+	walk(e)
+	return b.String()
+}
+
+// weight counts the operations and calls of a formula.
+func weight(e trace.Expr) int {
+	switch e := e.(type) {
+	case trace.Op:
+		return 1 + weight(e.L) + weight(e.R)
+	case trace.Neg:
+		return 1 + weight(e.X)
+	case trace.Call:
+		n := 1
+		for _, a := range e.Args {
+			n += weight(a)
+		}
+		return n
+	}
+	return 0
+}
