@@ -191,24 +191,27 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 	}
 	o.head(title)
 	if len(near) > 0 {
-		what := "Each column is one case (numbered as in the summary above); each row a value of its working, in the order computed, by the formulas shown for the governing case; values the same in every case of a table are given once, in its caption."
+		what := "A column per case (numbered as in the summary above), a row per value of its working in the order computed, by the formulas of the governing case; values the same in every case of a table are in its caption."
 		if o.c.governingOnly() {
-			what = "The cases within 10 % of the governing utilisation. " + what
+			what = "The cases within 10 % of the governing utilisation: " + strings.ToLower(what[:1]) + what[1:]
 		}
-		o.para(txt(what))
-		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage)
+		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, what)
 	}
 	if len(far) > 0 {
-		o.toAppendix(fmt.Sprintf("%s %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", plural(len(far), "other case"), caseList(prefix, far)))
+		what := fmt.Sprintf("The other cases %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", caseList(prefix, far))
+		if len(far) == 1 {
+			what = fmt.Sprintf("The other case %s (utilisation below 90 %% of the governing case) is tabulated the same way in the", caseList(prefix, far))
+		}
+		o.toAppendix(what)
 		o.apx = append(o.apx, &layout.Para{Pos: o.p, Runs: []layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}})
-		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage)
+		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, "")
 	}
 }
 
 // caseTables adds the compact tables of the cases idx to out, one per
 // drainage condition (split at maxCaseCols), each followed by the
 // cautions raised in its cases.
-func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string) []layout.Block {
+func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string, lead string) []layout.Block {
 	var order []string
 	byDrain := map[string][]int{}
 	for _, i := range idx {
@@ -224,6 +227,10 @@ func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []stri
 		for start := 0; start < len(idx); start += maxCaseCols {
 			chunk := idx[start:min(start+maxCaseCols, len(idx))]
 			cap := []layout.Run{txt(fmt.Sprintf("%s cases (%s).", capital(d), caseList(prefix, chunk)))}
+			if lead != "" {
+				cap = []layout.Run{txt(lead + " " + cap[0].Text)}
+				lead = ""
+			}
 			out = append(out, o.caseTable(tr, cases, chunk, steps, prefix, cap))
 		}
 		o.blocks = nil

@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/trace"
 	"strings"
 
 	"github.com/plinth-calc/plinth/calc/site"
@@ -174,6 +175,14 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 		o.add(t)
 	}
 	o.add(c.sketch(s, b)...)
+	// the plan and depth are stated here: the analyses below list them
+	// by value rather than print them again (detail = governing)
+	for _, d := range []struct {
+		sym string
+		v   float64
+	}{{"B", f.Model.B}, {"L", f.Model.L}, {"D", f.Model.D}} {
+		c.printed[stepKey(trace.Step{Symbol: d.sym, Value: d.v, Unit: "m"})] = true
+	}
 	return o.blocks
 }
 

@@ -19,8 +19,9 @@ import (
 //
 //   - a step already printed on the sheet (the same symbol, formula and
 //     value: a load combination the sliding case shares with the bearing
-//     case, a footing dimension) is listed by value on one line where
-//     the first of them would be ("As given or computed above: …");
+//     case, a footing dimension) is listed by value, all of a group's on
+//     one line where the first of them would be ("As given or computed
+//     above: …");
 //   - a step whose formula is already written out in full on the sheet
 //     with other values (the sliding case's eccentricity, Steinbrenner's
 //     factor at the top of a layer after the one at its bottom), when its
@@ -46,7 +47,6 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 			again = append(again, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
 			continue
 		}
-		at, again = o.closeAgain(at, again), nil
 		o.c.printed[k] = true
 		line := o.c.stepLine(o.p, st)
 		if st.Formula != nil {

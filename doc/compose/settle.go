@@ -385,9 +385,7 @@ func (o *engineOut) layerCases(tr *trace.Trace, groups []string, steps map[strin
 	cap := append([]layout.Run{txt(fmt.Sprintf("%s of every layer, by the formulas above, a column per layer (", capital(kind)))}, layerList(groups)...)
 	cap = append(cap, txt(")."))
 	t := o.caseTable(tr, groups, idx, steps, "L", nil)
-	cap = append(cap, t.Caption...) // the values the same in every layer
-	t.Caption = nil
-	o.para(cap...)
+	t.Caption = append(cap, t.Caption...) // then the values the same in every layer
 	o.add(t)
 	for _, g := range groups {
 		for j, ca := range tr.Cautions {

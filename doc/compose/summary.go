@@ -99,7 +99,7 @@ func (c *composer) summary() layout.Sheet {
 
 	var open [][]layout.Run
 	add(heading(p, 2, "Design basis"))
-	basis := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
+	basis := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
 	for _, it := range c.designBasis() {
 		v := cell(user(it.field.Value))
 		switch {
@@ -129,19 +129,36 @@ func (c *composer) summary() layout.Sheet {
 	if strings.TrimSpace(c.packageMeta().Checked.Value) == "" {
 		open = append(open, []layout.Run{bold("NOT CHECKED"), txt(": the package has no checker's name; the sign-off on the cover is open.")})
 	}
+	type assumption struct {
+		st     trace.Step
+		blocks []*eval.Block
+	}
+	var assumed []*assumption // an assumed value made alike in several blocks is one item
+	byKey := map[string]*assumption{}
 	for _, fr := range rows {
 		for _, b := range fr.analyses {
 			for _, st := range b.SelfWeight.Steps {
-				if strings.Contains(st.Note, "assumed") {
-					open = append(open, c.openAt(b, fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), st.Symbol, st.Value, st.Unit))
+				if !strings.Contains(st.Note, "assumed") {
+					continue
 				}
+				k := fmt.Sprintf("%s\x00%s\x00%v\x00%s", st.Note, st.Symbol, st.Value, st.Unit)
+				if a := byKey[k]; a != nil {
+					a.blocks = append(a.blocks, b)
+					continue
+				}
+				byKey[k] = &assumption{st: st, blocks: []*eval.Block{b}}
+				assumed = append(assumed, byKey[k])
 			}
 			if len(b.SelfWeight.Steps) > 0 {
 				break // the footing's assumptions once
 			}
 		}
 	}
+	for _, a := range assumed {
+		open = append(open, c.openAt(a.blocks, a.st))
+	}
 	seen := map[string]bool{}
+	item := map[string]int{} // a caution's item, by severity and words: its places are listed together
 	list := append([]raised(nil), c.cautions...)
 	sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
 	for _, r := range list {
@@ -149,9 +166,20 @@ func (c *composer) summary() layout.Sheet {
 			continue
 		}
 		seen[r.where+r.text] = true
-		runs := []layout.Run{bold(r.sev.String()), txt(" " + sheetLabel(r.sheet) + ", " + r.where + ": ")}
+		place := []layout.Run{txt(sheetLabel(r.sheet) + ", " + r.where + ", "), {Text: "page —", Link: r.anchor, Own: true}}
+		k := r.sev.String() + "\x00" + r.text
+		if i, ok := item[k]; ok {
+			last := open[i][len(open[i])-1]
+			open[i] = append(append(open[i][:len(open[i])-1], txt("; ")), place...)
+			open[i] = append(open[i], last)
+			continue
+		}
+		item[k] = len(open)
+		runs := []layout.Run{bold(r.sev.String()), txt(" ")}
 		runs = append(runs, richText(r.text, layout.Regular)...)
-		runs = append(runs, txt(" ("), layout.Run{Text: "page —", Link: r.anchor, Own: true}, txt(")"))
+		runs = append(runs, txt(" ("))
+		runs = append(runs, place...)
+		runs = append(runs, txt(")"))
 		open = append(open, runs)
 	}
 	add(heading(p, 2, "Open items"))
@@ -163,7 +191,7 @@ func (c *composer) summary() layout.Sheet {
 		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
-		para := &layout.Para{Pos: p, Runs: runs}
+		para := &layout.Para{Pos: p, Runs: runs, Small: true}
 		for i := range para.Runs {
 			if para.Runs[i].Text == "page —" && para.Runs[i].Link != "" {
 				c.pageRefs = append(c.pageRefs, pageRef{run: &para.Runs[i], anchor: para.Runs[i].Link, format: "page %d"})
@@ -175,12 +203,23 @@ func (c *composer) summary() layout.Sheet {
 	return out
 }
 
-// openAt is an open item about an assumed value, linked to its block.
-func (c *composer) openAt(b *eval.Block, text, sym string, v float64, unit string) []layout.Run {
-	runs := richText(text, layout.Regular)
-	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(sym, v, unit), Own: true}, txt("; "),
-		layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}, txt(")."))
-	return runs
+// openAt is an open item about a value assumed alike in the given
+// blocks, linked to each.
+func (c *composer) openAt(bs []*eval.Block, st trace.Step) []layout.Run {
+	var names []string
+	for _, b := range bs {
+		names = append(names, b.Kind.String()+" "+b.Name)
+	}
+	runs := richText(strings.Join(names, ", ")+": "+st.Note, layout.Regular)
+	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(st.Symbol, st.Value, st.Unit), Own: true})
+	for i, b := range bs {
+		sep := "; "
+		if i > 0 {
+			sep = ", "
+		}
+		runs = append(runs, txt(sep), layout.Run{Text: "page —", Link: blockAnchor(b), Own: true})
+	}
+	return append(runs, txt(")."))
 }
 
 // openCaution reports whether an engine caution is an open item: one
@@ -201,7 +240,7 @@ func openCaution(r raised) bool {
 // resultsTable is the table of results: a row per footing.
 func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	p := c.matterPos()
-	t := &layout.Table{Pos: p,
+	t := &layout.Table{Pos: p, Compact: true,
 		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
 			cell(txt("Settlement (SLS); allowable pressure")), cell(txt("Warnings"))},
 		Caption: []layout.Run{txt("Governing utilisation and verdict of each check with its governing case; short and long term where both apply; warnings counts the WARNINGs and CAUTIONs the engine raised. Each foundation links to its page.")}}

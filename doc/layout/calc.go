@@ -124,6 +124,7 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 	b := &Box{Kind: kind, Pos: pos, W: width, Items: f.items}
 	h := calcPad + f.h
 	if len(note) > 0 {
+		ws := e.words(note, noteStyle, pos)
 		x := 18.0
 		if beside {
 			x = last
@@ -133,8 +134,14 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 					break
 				}
 			}
+		} else if f.lines == 1 {
+			// a long formula on one line: its note beside it still when
+			// it fits there on one line
+			if at := math.Max(last, f.w+gap); width-at >= 40 && noteLines(ws, width-at) == 1 {
+				x, beside = at, true
+			}
 		}
-		lines := e.setText(note, width-x, noteStyle, pos)
+		lines := breakLines(ws, width-x, noteStyle)
 		y := h + 0.5
 		if beside {
 			y = calcPad + f.base - lines[0].base

@@ -31,6 +31,11 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	if para, ok := soleParagraph(c); ok {
 		// no title and one paragraph: the word heads the paragraph's
 		// first line, the paragraph hanging beside it
+		if sev == SevNote { // information: in the note size
+			small := *para
+			small.Small = true
+			para = &small
+		}
 		ps = e.para(para, inner-wordW)
 		for _, p := range ps {
 			p.box.W = inner

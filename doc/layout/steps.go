@@ -34,6 +34,7 @@ type cellLine struct {
 	anchor string
 	line   *eqn.Box // the formula on one line
 	note   []word
+	below  bool // its note goes below the formula
 }
 
 func (e *engine) steps(s *Steps, width float64) []*piece {
@@ -58,7 +59,7 @@ func (e *engine) steps(s *Steps, width float64) []*piece {
 }
 
 // shortLine measures a statement or input whose formula is one line no
-// wider than 0.6 of half the width; other blocks are not short.
+// wider than half the width; other blocks are not short.
 func (e *engine) shortLine(b Block, width float64) (cellLine, bool) {
 	var row eqn.Row
 	var note []Run
@@ -91,7 +92,7 @@ func (e *engine) shortLine(b Block, width float64) (cellLine, bool) {
 	}
 	half := (width - stepColGap) / 2
 	lines, err := eqn.Break(row, half, eqn.Style{Size: mathSize, Color: ink})
-	if err != nil || len(lines) != 1 || lines[0].W > 0.6*half {
+	if err != nil || len(lines) != 1 || lines[0].W > half {
 		return c, false // the line alone reports any problem
 	}
 	c.line = lines[0]
@@ -107,15 +108,16 @@ func noteLines(ws []word, width float64) int {
 	return len(breakLines(append([]word(nil), ws...), width, noteStyle))
 }
 
-// packLines sets a run of short lines in rows of three or two where each
-// note then takes at most two lines, else alone.
+// packLines sets a run of short lines in rows of three (each note beside
+// its formula) or two (each note beside its formula or, when it does not
+// fit there, below it), every note in at most two lines; a line that
+// fits neither is set alone.
 func (e *engine) packLines(run []cellLine, blocks []Block, width float64) []*piece {
 	colW := func(n int) float64 { return (width - float64(n-1)*stepColGap) / float64(n) }
 	fits := func(cs []cellLine, n int) bool {
 		w := colW(n)
 		for _, c := range cs {
-			room := w - c.line.W - stepNoteGap
-			if c.line.W > 0.6*w || room < 40 || noteLines(c.note, room) > 2 {
+			if !besideFits(c, w) && (n != 2 || !belowFits(c, w)) {
 				return false
 			}
 		}
@@ -140,7 +142,7 @@ func (e *engine) packLines(run []cellLine, blocks []Block, width float64) []*pie
 			i++
 			continue
 		}
-		if g := len(groups) - 1; g >= 0 && groups[g].n == n && aligned(append(groups[g].cells[:len(groups[g].cells):len(groups[g].cells)], run[i:i+n]...), n, colW(n)) {
+		if g := len(groups) - 1; g >= 0 && groups[g].n == n && (n == 2 || aligned(append(groups[g].cells[:len(groups[g].cells):len(groups[g].cells)], run[i:i+n]...), n, colW(n))) {
 			groups[g].cells = append(groups[g].cells, run[i:i+n]...)
 		} else {
 			groups = append(groups, group{n, run[i : i+n : i+n]})
@@ -149,7 +151,6 @@ func (e *engine) packLines(run []cellLine, blocks []Block, width float64) []*pie
 	}
 	at := 0
 	for _, g := range groups {
-		noteX := columnNotes(g.cells, g.n)
 		if g.n == 1 {
 			out = append(out, e.block(blocks[at], width)...)
 			at++
@@ -157,6 +158,14 @@ func (e *engine) packLines(run []cellLine, blocks []Block, width float64) []*pie
 		}
 		at += len(g.cells)
 		w := colW(g.n)
+		noteX := columnNotes(g.cells, g.n, w)
+		for i, c := range g.cells { // in two columns a note that does not fit beside goes below
+			g.cells[i].below = g.n == 2 && (!besideFits(c, w) || noteLines(c.note, w-noteX[i%g.n]) > 2)
+		}
+		for r := 0; g.n == 2 && r < len(g.cells); r += 2 { // and then both notes of its row
+			below := g.cells[r].below || g.cells[r+1].below
+			g.cells[r].below, g.cells[r+1].below = below, below
+		}
 		for r := 0; r < len(g.cells); r += g.n {
 			out = append(out, e.cellRow(g.cells[r:r+g.n], noteX, w, width))
 		}
@@ -164,12 +173,31 @@ func (e *engine) packLines(run []cellLine, blocks []Block, width float64) []*pie
 	return out
 }
 
+// stepIndent is the indent of a note set below its formula in a row.
+const stepIndent = 10.0
+
+// besideFits reports whether a short line's note fits beside its formula
+// in a column of width w, in at most two lines.
+func besideFits(c cellLine, w float64) bool {
+	room := w - c.line.W - stepNoteGap
+	return c.line.W <= 0.6*w && room >= 40 && noteLines(c.note, room) <= 2
+}
+
+// belowFits reports whether a short line's formula fits a column of width
+// w with its note below it, in at most two lines.
+func belowFits(c cellLine, w float64) bool {
+	return c.line.W <= w && noteLines(c.note, w-stepIndent) <= 2
+}
+
 // columnNotes is where the notes of each column of a group of rows of n
-// short lines start: clear of the column's widest formula.
-func columnNotes(cs []cellLine, n int) []float64 {
+// short lines start: clear of the widest formula in the column whose
+// note goes beside it.
+func columnNotes(cs []cellLine, n int, w float64) []float64 {
 	x := make([]float64, n)
 	for i, c := range cs {
-		x[i%n] = math.Max(x[i%n], c.line.W+stepNoteGap)
+		if besideFits(c, w) {
+			x[i%n] = math.Max(x[i%n], c.line.W+stepNoteGap)
+		}
 	}
 	return x
 }
@@ -177,7 +205,7 @@ func columnNotes(cs []cellLine, n int) []float64 {
 // aligned reports whether rows of n short lines can share their note
 // columns, every note then taking at most two lines.
 func aligned(cs []cellLine, n int, colW float64) bool {
-	x := columnNotes(cs, n)
+	x := columnNotes(cs, n, colW)
 	for i, c := range cs {
 		if noteLines(c.note, colW-x[i%n]) > 2 {
 			return false
@@ -198,12 +226,20 @@ func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *p
 	for j, c := range cs {
 		x := float64(j) * (colW + stepColGap)
 		b.Items = c.line.AppendItems(b.Items, x, base)
-		h = math.Max(h, base+math.Max(c.line.Descent, 0.3*mathSize)+1)
+		bottom := base + math.Max(c.line.Descent, 0.3*mathSize) + 1
+		h = math.Max(h, bottom)
 		if len(c.note) > 0 {
-			lines := breakLines(append([]word(nil), c.note...), colW-noteX[j], noteStyle)
+			nx, nw := x+noteX[j], colW-noteX[j]
+			if c.below {
+				nx, nw = x+stepIndent, colW-stepIndent
+			}
+			lines := breakLines(append([]word(nil), c.note...), nw, noteStyle)
 			y := base - lines[0].base
+			if c.below {
+				y = bottom + 0.5
+			}
 			for _, ln := range lines {
-				b.Items = appendOffset(b.Items, ln.items, x+noteX[j], y)
+				b.Items = appendOffset(b.Items, ln.items, nx, y)
 				y += ln.h
 			}
 			h = math.Max(h, y)

@@ -6,10 +6,10 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 // (a dark slate blue) marks structure; red and green only ever support the
 // words NOT OK and OK.
 const (
-	bodySize    = 9.5
+	bodySize    = 8.8
 	mathSize    = MathSize
 	bodyLead    = 1.34 // line height / size
-	noteSize    = 8.2
+	noteSize    = 7.5
 	tableSize   = 8.5
 	compactSize = 7.6 // compact tables (Table.Compact)
 	codeSize    = 8.2
@@ -21,7 +21,7 @@ const (
 
 // MathSize is the size calculation lines set their formulas in (compose
 // measures formulas at it to decide how to print them).
-const MathSize = 9.5
+const MathSize = 8.6
 
 var headingSize = [4]float64{0, 12.5, 10.8, 9.8}
 var headingGap = [4]float64{0, 14, 10, 8}
