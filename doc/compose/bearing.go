@@ -13,8 +13,8 @@ import (
 )
 
 // maxCaseCols is the most case columns a compact table holds before it
-// is split.
-const maxCaseCols = 6
+// is split: four, so that a table of many rows folds into two bands.
+const maxCaseCols = 4
 
 // bearing prints a bearing block: a summary of every case with the
 // governing one marked and the governing check, the working common to
@@ -315,17 +315,17 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 
 // foldToWidth sets a narrow table of w columns and many rows in as
 // many side-by-side bands as the text column holds at the table's
-// natural width (at most three; read down the first band, then the
+// natural width (at most four; read down the first band, then the
 // next), so a table of a few cases does not run down several pages.
 func (c *composer) foldToWidth(t *layout.Table, w int) {
 	if len(t.Rows) < 8 {
 		return
 	}
-	nat := layout.NaturalWidth(t) * 1.03 // a little room: the bands' columns are measured again
+	nat := layout.NaturalWidth(t)
 	if nat <= 0 {
 		return
 	}
-	foldBands(t, w, min(3, int(c.width/nat), len(t.Rows)/4))
+	foldBands(t, w, min(4, int((c.width+2)/nat), len(t.Rows)/4))
 }
 
 // foldBands sets a table of w columns in the given number of bands.

@@ -49,6 +49,13 @@ type composer struct {
 	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
 	printed   map[string]bool               // engine steps printed on the current sheet (stepKey)
 	shapes    map[string]string             // formulas printed in full on the current sheet (shapeKey) → the symbol
+	written   map[string]writtenOut         // long settlement formulas written out in the package (shapeKey)
+}
+
+// writtenOut is a long formula written out in full: its symbol, its sheet
+// and the anchor on its line.
+type writtenOut struct {
+	symbol, sheet, anchor string
 }
 
 // pageRef is a run that prints the page an anchor is on, filled in once
@@ -90,7 +97,7 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, written: map[string]writtenOut{}}
 	c.refs.linked = !opt.Bare
 	return c
 }

@@ -26,7 +26,10 @@ import (
 //     with other values (the sliding case's eccentricity, Steinbrenner's
 //     factor at the top of a layer after the one at its bottom), when its
 //     working would be tall or wide, prints as its value with the values
-//     that went into it, naming the step whose formula it uses.
+//     that went into it, naming the step whose formula it uses;
+//   - a long settlement formula (longFormula) is written out once in the
+//     package: later sheets print its value and inputs and give the page
+//     where it is written out.
 //
 // A step that raised a caution is always printed in full.
 func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
@@ -51,9 +54,24 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 		line := o.c.stepLine(o.p, st)
 		if st.Formula != nil {
 			sk := shapeKey(st.Formula)
-			if first, ok := o.c.shapes[sk]; ok && gov && !o.raises(tr, i) && (first == st.Symbol || weight(st.Formula) >= 8) && o.c.tall(line) {
+			long := o.b.Settle != nil && weight(st.Formula) >= longFormula
+			first, ok := o.c.shapes[sk]
+			w, before := o.c.written[sk]
+			switch {
+			case !gov || o.raises(tr, i) || !o.c.tall(line):
+			case ok && (first == st.Symbol || weight(st.Formula) >= 8):
 				line = o.c.byFormula(o.p, st, first)
-			} else if !ok {
+			case long && before:
+				line = o.c.byFormula(o.p, st, w.symbol)
+				o.c.writtenAt(line.(*layout.Input), w)
+			case long:
+				w = writtenOut{symbol: st.Symbol, sheet: sheetLabel(o.s), anchor: o.c.anchor("formula")}
+				o.c.written[sk] = w
+				if s, isStmt := line.(*layout.Statement); isStmt {
+					s.Anchor = w.anchor
+				}
+			}
+			if !ok {
 				o.c.shapes[sk] = st.Symbol
 			}
 		}
@@ -76,6 +94,25 @@ func (o *engineOut) closeAgain(at *layout.Para, again []layout.Run) *layout.Para
 	return nil
 }
 
+// longFormula is the weight from which a settlement formula (Steinbrenner's
+// F₁ and F₂, Newmark's influence factor) is written out once in the
+// package; later sheets give its value and inputs and point to it.
+const longFormula = 10
+
+// writtenAt makes a step printed by a formula written out on an earlier
+// sheet say where: "… above" becomes "… in 2318-G-03, page 13".
+func (c *composer) writtenAt(in *layout.Input, w writtenOut) {
+	for i, r := range in.Note {
+		if r.Text != " above" {
+			continue
+		}
+		tail := append([]layout.Run{txt(" in " + w.sheet + ", "), {Text: "page —", Link: w.anchor, Own: true}}, in.Note[i+1:]...)
+		in.Note = append(in.Note[:i:i], tail...)
+		c.pageRefs = append(c.pageRefs, pageRef{run: &in.Note[i+1], anchor: w.anchor, format: "page %d"})
+		return
+	}
+}
+
 // byFormula prints a step by the formula of a step printed in full above
 // (first, its symbol): the value, its note, and the values that went in.
 func (c *composer) byFormula(p source.Position, st trace.Step, first string) layout.Block {
@@ -84,7 +121,7 @@ func (c *composer) byFormula(p source.Position, st trace.Step, first string) lay
 		note = append(richText(st.Note, layout.Regular), txt("; "))
 	}
 	if first == st.Symbol {
-		note = append(note, txt("by the formula above"))
+		note = append(note, txt("by the formula"), txt(" above"))
 	} else {
 		note = append(note, txt("by the formula of "), layout.Run{Math: eqn.Sym{Name: first}, Own: true}, txt(" above"))
 	}

@@ -161,6 +161,8 @@ func (e *engine) block(b Block, width float64) []*piece {
 		return e.input(b, width)
 	case *Steps:
 		return e.steps(b, width)
+	case *Beside:
+		return e.beside(b, width)
 	case *Check:
 		return e.check(b, width)
 	case *Caution:
