@@ -42,7 +42,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 // in that unit, a cell computed from other symbols as its expression and
 // value, text cells (names, types, sources) with their citations.
 func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []units.Unit, cells [][]*eval.Symbol, anchor string) *layout.Table {
-	t := &layout.Table{Pos: pos(g.Span)}
+	t := &layout.Table{Pos: pos(g.Span), Compact: true}
 	numeric := make([]bool, len(cols))
 	for j, name := range cols {
 		for _, row := range cells {

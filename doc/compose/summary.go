@@ -98,7 +98,6 @@ func (c *composer) summary() layout.Sheet {
 	add(heading(p, 1, "Summary of results"))
 
 	var open [][]layout.Run
-	add(heading(p, 2, "Design basis"))
 	basis := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
 	for _, it := range c.designBasis() {
 		v := cell(user(it.field.Value))
@@ -114,10 +113,8 @@ func (c *composer) summary() layout.Sheet {
 	}
 	add(basis)
 
-	add(heading(p, 2, "Checks"))
+	add(heading(p, 2, "Checks and results by foundation"))
 	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
-
-	add(heading(p, 2, "Results by foundation"))
 	rows := c.summaryRows()
 	if len(rows) == 0 {
 		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("The package has no footing blocks.")}})
@@ -187,8 +184,8 @@ func (c *composer) summary() layout.Sheet {
 		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("None.")}})
 		return out
 	}
-	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and the engine's cautions that a value was assumed or extrapolated or something not computed or verified (every caution is listed, by severity, in the "),
-		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
+	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and cautions that a value was assumed or extrapolated or something not computed or verified (all cautions: "),
+		{Text: "cautions", Link: "cautions", Own: true}, txt(", by severity).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
 		para := &layout.Para{Pos: p, Runs: runs, Small: true}
@@ -242,13 +239,13 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	p := c.matterPos()
 	t := &layout.Table{Pos: p, Compact: true,
 		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
-			cell(txt("Settlement (SLS); allowable pressure")), cell(txt("Warnings"))},
-		Caption: []layout.Run{txt("Governing utilisation and verdict of each check with its governing case; short and long term where both apply; warnings counts the WARNINGs and CAUTIONs the engine raised. Each foundation links to its page.")}}
+			cell(txt("Settlement (SLS); allowable pressure"))},
+		Caption: []layout.Run{txt("Governing utilisation, verdict and case of each check, short and long term where both apply; under each foundation (linked to its page) the WARNINGs and CAUTIONs raised.")}}
 	for _, fr := range rows {
 		b := fr.footing
 		f := b.Footing
 		page := layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}
-		name := layout.Cell{userBold(f.Name), txt("\n" + sheetLabel(b.Sheet) + ", "), page}
+		name := layout.Cell{userBold(f.Name), txt("  " + sheetLabel(b.Sheet) + ", "), page}
 		size := layout.Cell{txt(shortShape(f.Model))}
 		strata := map[string]bool{}
 		var bear, slide, settl, allow layout.Cell
@@ -303,6 +300,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		}
 		name = append(name, txt("\n"))
 		name = append(name, size...)
+		name = append(name, txt(fmt.Sprintf("\nWARNINGs and CAUTIONs: %d", warn)))
 		if len(allow) > 0 {
 			if len(settl) > 0 {
 				settl = append(settl, txt("\n"))
@@ -311,7 +309,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		}
 		// the page run is registered once the cell is complete (appends move it)
 		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
+		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl)}})
 	}
 	return t
 }

@@ -8,13 +8,13 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 const (
 	bodySize    = 8.8
 	mathSize    = MathSize
-	bodyLead    = 1.34 // line height / size
+	bodyLead    = 1.3  // line height / size
 	noteSize    = 7.5
 	tableSize   = 8.5
 	compactSize = 7.6 // compact tables (Table.Compact)
 	codeSize    = 8.2
 	captionSize = 8.2
-	paraGap     = 5.0 // space between paragraphs
+	paraGap     = 4.0 // space between paragraphs
 	calcGap     = 2.5 // space between calc lines
 	calcPad     = 1.0 // space above and below a calc line's formula
 )
@@ -23,8 +23,8 @@ const (
 // measures formulas at it to decide how to print them).
 const MathSize = 8.6
 
-var headingSize = [4]float64{0, 12.5, 10.8, 9.8}
-var headingGap = [4]float64{0, 14, 10, 8}
+var headingSize = [4]float64{0, 12, 10.2, 9.4}
+var headingGap = [4]float64{0, 11, 8, 6}
 
 var (
 	ink      = draw.Color{R: 26, G: 26, B: 30}
