@@ -203,8 +203,7 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 			what = fmt.Sprintf("The other case %s (utilisation below 90 %% of the governing case) is tabulated the same way in the", caseList(prefix, far))
 		}
 		o.toAppendix(what)
-		o.apx = append(o.apx, &layout.Para{Pos: o.p, Runs: []layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}})
-		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, "")
+		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, title+": "+caseList(prefix, far)+", numbered as in the summary on the sheet; formulas as for the governing case there.")
 	}
 }
 

@@ -29,7 +29,7 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if idx := steps[""]; len(idx) > 0 {
 		o.steps(tr, idx, "capacity")
 	}
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header:  []layout.Cell{unitHeader("B", "m"), unitHeader("L", "m"), unitHeader("q_a_b", "kPa"), unitHeader("q_a_s", "kPa"), unitHeader("q_allow", "kPa"), {txt("Governs")}, {txt("Bearing case")}},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
 		Caption: []layout.Run{txt(fmt.Sprintf("Allowable pressure against width for %s, %s; the footing's own width is marked.", b.Of.Name, capacity.Assumes))}}
@@ -58,7 +58,7 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 		sett := chart.Series{Name: "settlement", X: xs, Y: qs, Dash: chart.Dotted}
 		// the chart beside the table of its values
 		share := math.Min(0.55, (layout.NaturalWidth(t)+4)/(c.width-chartGap))
-		ch := chart.Chart{W: (c.width - chartGap) * (1 - share), H: 200,
+		ch := chart.Chart{W: (c.width - chartGap) * (1 - share), H: 180,
 			X:      chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
 			Y:      chart.Axis{Title: "allowable pressure (kPa)"},
 			Series: []chart.Series{bear, sett}}

@@ -149,7 +149,7 @@ func (c *composer) appendixSheet() layout.Sheet {
 	out := c.matterSheet("Appendix: further working", "appendix")
 	p := out.Pos
 	out.Blocks = append(out.Blocks, heading(p, 1, "Appendix: further working"),
-		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working that the sheets leave out of their main flow (the package prints the governing working in full; detail = full in package.yaml prints everything in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block. Each heading links back to its block.")}})
+		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working the sheets leave out of their main flow (detail = full in package.yaml prints it in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block, each heading linked to its block.")}})
 	out.Blocks = append(out.Blocks, c.appendix...)
 	return out
 }

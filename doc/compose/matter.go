@@ -111,6 +111,9 @@ func (c *composer) inputRegister() []layout.Block {
 	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{
 		txt("Every value the engineer gave (a number with its unit, not computed from other symbols), sheet by sheet, with its description and source, and the place it is defined (linked). The cells of ground and footing tables are not repeated: a row points to each table. Values plinth assumed are listed at the end."),
 	}})
+	reg := &layout.Table{Pos: p, Compact: true,
+		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("Description and source")), cell(txt("Defined at"))},
+		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft}}
 	for _, s := range c.res.Sheets {
 		var rows []layout.Row
 		tables := map[string]int{} // anchor of a ground or footing table → its inputs
@@ -158,12 +161,12 @@ func (c *composer) inputRegister() []layout.Block {
 		if title == "" {
 			title = s.Name()
 		}
-		out = append(out, &layout.Heading{Pos: p, Level: 2, NoNumber: true,
-			Runs: []layout.Run{{Text: title, Link: sheetAnchor(s.Index)}}})
-		out = append(out, &layout.Table{Pos: p, Compact: true,
-			Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("Description and source")), cell(txt("Defined at"))},
-			Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
-			Rows:   rows})
+		// the sheet's rows under a row naming it, in one table for the package
+		reg.Rows = append(reg.Rows, layout.Row{Pos: p, Cells: []layout.Cell{nil, nil, cell(layout.Run{Text: title, Style: layout.Bold, Link: sheetAnchor(s.Index)}), nil}})
+		reg.Rows = append(reg.Rows, rows...)
+	}
+	if len(reg.Rows) > 0 {
+		out = append(out, reg)
 	}
 	return append(out, c.assumedValues()...)
 }

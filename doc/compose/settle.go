@@ -227,7 +227,7 @@ func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
 
 // layerTable gives the settlement of each layer and the total.
 func (c *composer) layerTable(o *engineOut, r *settle.Result) *layout.Table {
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header: []layout.Cell{{txt("Layer")}, {txt("Within the zone"), txt("\n(m)")}, {txt("Sublayers")}, unitHeader("s_i", "mm"),
 			unitHeader("s_oed", "mm"), unitHeader("mu", ""), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("t_50", "yr"), unitHeader("t_90", "yr")},
 		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
@@ -265,7 +265,7 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 	if len(r.Curve) == 0 {
 		return nil
 	}
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header:  []layout.Cell{unitHeader("t", "yr"), unitHeader("U", ""), unitHeader("s_i", "mm"), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("s", "mm")},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
 		Caption: richText(fmt.Sprintf("Settlement with time after loading: U is the average degree of consolidation; total s = s_i + s_c + s_sec (final %s).", valueText(units.Quantity{V: r.Total, Dim: units.Length}, mm, -1)), layout.Regular)}
@@ -293,7 +293,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			ds = append(ds, sl.DSigma/1e3)
 			sf = append(sf, sl.SigmaF/1e3)
 		}
-		ch := chart.Chart{W: w, H: 220,
+		ch := chart.Chart{W: w, H: 190,
 			X: chart.Axis{Title: "vertical stress (kPa)"}, Y: chart.Axis{Title: "depth below ground level (m)", Reverse: true},
 			Series: []chart.Series{{Name: "effective stress before loading", X: s0, Y: z}, {Name: "stress increase from the footing", X: ds, Y: z, Dash: []float64{4, 2}}, {Name: "effective stress after loading", X: sf, Y: z}},
 			Guides: []chart.Guide{{Value: r.ZInf, OnY: true, Label: "zone of influence " + f(r.ZInf, mU) + " m"}}}
@@ -316,7 +316,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 		for _, v := range s {
 			top = math.Max(top, v)
 		}
-		ch := chart.Chart{W: w, H: 220,
+		ch := chart.Chart{W: w, H: 190,
 			X: chart.Axis{Title: "time after loading (yr)", Log: true}, Y: chart.Axis{Title: "settlement (mm)", Reverse: true, Min: chart.At(0), Max: chart.At(niceCeil(1.15 * top))},
 			Series: []chart.Series{{Name: "total settlement", X: t, Y: s}},
 			Guides: []chart.Guide{{Value: r.Limit * 1e3, OnY: true, Label: "limit " + f(r.Limit, mm) + " mm"}}}
