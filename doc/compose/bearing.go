@@ -103,7 +103,16 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 		if g := r.GoverningSliding; g >= 0 {
 			o.head(fmt.Sprintf("Governing sliding case S%d: %s", g+1, r.Sliding[g].Name))
+			if r.Governing >= 0 { // the load and geometry by the governing bearing case's formulas
+				o.asCase = map[string]bool{}
+				for _, i := range steps[r.Cases[r.Governing].Name] {
+					if st := tr.Steps[i]; st.Formula != nil {
+						o.asCase[st.Symbol] = true
+					}
+				}
+			}
 			o.steps(tr, steps[slide[g]], fmt.Sprintf("sliding case S%d (governing)", g+1))
+			o.asCase = nil
 		}
 		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() },
 			func(i int) float64 { return r.Sliding[i].Util })

@@ -23,6 +23,7 @@ type engineOut struct {
 	blocks []layout.Block
 	apx    []layout.Block    // working moved to the appendix (detail = governing)
 	shown  map[shownKey]bool // cautions already boxed
+	asCase map[string]bool   // symbols listed by value, by the governing case's formulas (steps)
 }
 
 type shownKey struct {

@@ -123,7 +123,7 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 	}
 	g := b.Ground
 	o := c.engineOut(s, b)
-	o.label("Ground model " + g.Name)
+	o.label("Ground model " + g.Name + ": characteristic values; depths below ground level")
 	lines, _ := c.blockLines(s, src.Lines)
 	o.add(lines...)
 	if g.Water == nil {
@@ -136,9 +136,7 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 		for i, l := range g.Layers {
 			cells[i] = l.Cells
 		}
-		t := c.gridTable(s, src.Table, g.Columns, g.Units, cells, a)
-		t.Caption = []layout.Run{txt(fmt.Sprintf("Ground model %s: characteristic values; depths below ground level.", g.Name))}
-		o.add(t)
+		o.add(c.gridTable(s, src.Table, g.Columns, g.Units, cells, a))
 	}
 	return o.blocks
 }

@@ -31,14 +31,29 @@ import (
 //     package: later sheets print its value and inputs and give the page
 //     where it is written out.
 //
+// While asCase is set (the governing sliding case, after the governing
+// bearing case), a step computed by a formula whose symbol the governing
+// case's working printed is listed by value, all on one line.
+//
 // A step that raised a caution is always printed in full.
 func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
-	var again []layout.Run
-	var at *layout.Para
+	var again, byCase []layout.Run
+	var at, byAt *layout.Para
 	gov := o.c.governingOnly()
 	for _, i := range idx {
 		st := tr.Steps[i]
 		k := stepKey(st)
+		if gov && st.Formula != nil && o.asCase[st.Symbol] && !o.c.printed[k] && !o.raises(tr, i) {
+			if byAt == nil {
+				byAt = &layout.Para{Pos: o.p}
+				o.add(byAt)
+			}
+			if len(byCase) > 0 {
+				byCase = append(byCase, txt(", "))
+			}
+			byCase = append(byCase, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
+			continue
+		}
 		if gov && o.c.printed[k] && !o.raises(tr, i) {
 			if at == nil {
 				at = &layout.Para{Pos: o.p}
@@ -83,6 +98,10 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 		}
 	}
 	o.closeAgain(at, again)
+	if byAt != nil {
+		byAt.Runs = append([]layout.Run{{Text: "By the formulas of the governing case above, with this case's factors: ", Style: layout.Italic, Own: true}}, byCase...)
+		byAt.Runs = append(byAt.Runs, txt("."))
+	}
 }
 
 // closeAgain fills the line listing steps printed above; it returns nil.

@@ -85,6 +85,9 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	var header, pristine *piece
 	if capRuns := t.Caption; len(capRuns) > 0 {
 		st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
+		if t.Compact {
+			st.size = noteSize
+		}
 		lines := e.setText(capRuns, total, st, t.Pos)
 		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
 		for _, p := range ps {
