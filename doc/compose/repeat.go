@@ -37,7 +37,8 @@ import (
 //
 // A step that raised a caution is always printed in full.
 func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
-	var again, byCase []layout.Run
+	var again []trace.Step
+	var byCase []layout.Run
 	var at, byAt *layout.Para
 	gov := o.c.governingOnly()
 	for _, i := range idx {
@@ -45,24 +46,21 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 		k := stepKey(st)
 		if gov && st.Formula != nil && o.asCase[st.Symbol] && !o.c.printed[k] && !o.raises(tr, i) {
 			if byAt == nil {
-				byAt = &layout.Para{Pos: o.p}
-				o.add(byAt)
+				byAt = &layout.Para{Pos: o.p, Small: true}
+				o.line(byAt)
 			}
 			if len(byCase) > 0 {
 				byCase = append(byCase, txt(", "))
 			}
-			byCase = append(byCase, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
+			byCase = append(byCase, valueRun(st))
 			continue
 		}
 		if gov && o.c.printed[k] && !o.raises(tr, i) {
 			if at == nil {
-				at = &layout.Para{Pos: o.p}
-				o.add(at)
+				at = &layout.Para{Pos: o.p, Small: true}
+				o.line(at)
 			}
-			if len(again) > 0 {
-				again = append(again, txt(", "))
-			}
-			again = append(again, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
+			again = append(again, st)
 			continue
 		}
 		o.c.printed[k] = true
@@ -104,13 +102,25 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 	}
 }
 
-// closeAgain fills the line listing steps printed above; it returns nil.
-func (o *engineOut) closeAgain(at *layout.Para, again []layout.Run) *layout.Para {
-	if at != nil {
-		at.Runs = append([]layout.Run{{Text: "As given or computed above: ", Style: layout.Italic, Own: true}}, again...)
-		at.Runs = append(at.Runs, txt("."))
+// valueRun is a step's symbol and value, for a list of values.
+func valueRun(st trace.Step) layout.Run {
+	return layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true}
+}
+
+// closeAgain fills the line held for the steps printed above (at, in
+// the run of calculation lines), in the note size.
+func (o *engineOut) closeAgain(at *layout.Para, again []trace.Step) {
+	if at == nil {
+		return
 	}
-	return nil
+	at.Runs = []layout.Run{{Text: "As given or computed above: ", Style: layout.Italic, Own: true}}
+	for i, st := range again {
+		if i > 0 {
+			at.Runs = append(at.Runs, txt(", "))
+		}
+		at.Runs = append(at.Runs, valueRun(st))
+	}
+	at.Runs = append(at.Runs, txt("."))
 }
 
 // longFormula is the weight from which a settlement formula (Steinbrenner's

@@ -269,6 +269,28 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 		Header:  []layout.Cell{unitHeader("t", "yr"), unitHeader("U", ""), unitHeader("s_i", "mm"), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("s", "mm")},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
 		Caption: richText(fmt.Sprintf("Settlement with time after loading: U is the average degree of consolidation; total s = s_i + s_c + s_sec (final %s).", valueText(units.Quantity{V: r.Total, Dim: units.Length}, mm, -1)), layout.Regular)}
+	if len(r.Curve) <= maxTimeCols {
+		// a row per quantity, a column per time: a few lines across the page
+		t.Header = []layout.Cell{{{Math: eqn.Sym{Name: "t"}}}, {txt("yr")}}
+		t.Align = []layout.Align{layout.AlignLeft, layout.AlignLeft}
+		rows := []layout.Row{
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "U"}}}, nil}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_i"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_c"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_sec"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s"}}}, {txt("mm")}}},
+		}
+		for _, p := range r.Curve {
+			t.Header = append(t.Header, layout.Cell{txt(f(p.T, yr))})
+			t.Align = append(t.Align, layout.AlignRight)
+			for i, v := range []string{fmt.Sprintf("%.3f", p.U), f(p.Si, mm), f(p.Sc, mm), f(p.Ssec, mm)} {
+				rows[i].Cells = append(rows[i].Cells, layout.Cell{txt(v)})
+			}
+			rows[4].Cells = append(rows[4].Cells, layout.Cell{bold(f(p.S, mm))})
+		}
+		t.Rows = rows
+		return t
+	}
 	for _, p := range r.Curve {
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
 			{txt(f(p.T, yr))}, {txt(fmt.Sprintf("%.3f", p.U))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
@@ -276,6 +298,10 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 	}
 	return t
 }
+
+// maxTimeCols is the most times the time table sets across the page (a
+// column each); more are set down it.
+const maxTimeCols = 12
 
 // settleCharts draws the stress–depth chart and, when there is a time
 // curve, the settlement–time chart.
