@@ -34,7 +34,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 			}
 		}
 	}
-	return out, opts
+	return runsOfLines(out), opts
 }
 
 // gridTable prints the pipe table of a ground or footing block as the

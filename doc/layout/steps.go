@@ -221,17 +221,19 @@ func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *p
 		base = math.Max(base, math.Max(c.line.Ascent, 0.78*mathSize)+1)
 	}
 	base += calcPad
+	// each line is a box of its own inside the row, at its source position
 	b := &Box{Kind: "steps", Pos: cs[0].pos, W: width}
 	h := 0.0
 	for j, c := range cs {
 		x := float64(j) * (colW + stepColGap)
-		b.Items = c.line.AppendItems(b.Items, x, base)
+		k := &Box{Kind: c.kind, Pos: c.pos, X: x, W: colW}
+		k.Items = c.line.AppendItems(k.Items, 0, base)
 		bottom := base + math.Max(c.line.Descent, 0.3*mathSize) + 1
-		h = math.Max(h, bottom)
+		kh := bottom
 		if len(c.note) > 0 {
-			nx, nw := x+noteX[j], colW-noteX[j]
+			nx, nw := noteX[j], colW-noteX[j]
 			if c.below {
-				nx, nw = x+stepIndent, colW-stepIndent
+				nx, nw = stepIndent, colW-stepIndent
 			}
 			lines := breakLines(append([]word(nil), c.note...), nw, noteStyle)
 			y := base - lines[0].base
@@ -239,14 +241,17 @@ func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *p
 				y = bottom + 0.5
 			}
 			for _, ln := range lines {
-				b.Items = appendOffset(b.Items, ln.items, nx, y)
+				k.Items = appendOffset(k.Items, ln.items, nx, y)
 				y += ln.h
 			}
-			h = math.Max(h, y)
+			kh = math.Max(kh, y)
 		}
 		if c.anchor != "" {
-			b.Items = append(b.Items, draw.Anchor{Name: c.anchor, X: x})
+			k.Items = append(k.Items, draw.Anchor{Name: c.anchor})
 		}
+		k.H = kh + calcPad
+		h = math.Max(h, kh)
+		b.Kids = append(b.Kids, k)
 	}
 	b.H = h + calcPad
 	return &piece{box: b, before: calcGap, base: base}
