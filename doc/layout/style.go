@@ -6,10 +6,10 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 // (a dark slate blue) marks structure; red and green only ever support the
 // words NOT OK and OK.
 const (
-	bodySize    = 8.8
+	bodySize    = 8.6
 	mathSize    = MathSize
 	bodyLead    = 1.3  // line height / size
-	noteSize    = 7.5
+	noteSize    = 7.3
 	tableSize   = 8.5
 	compactSize = 7.6 // compact tables (Table.Compact)
 	codeSize    = 8.2
@@ -21,7 +21,7 @@ const (
 
 // MathSize is the size calculation lines set their formulas in (compose
 // measures formulas at it to decide how to print them).
-const MathSize = 8.6
+const MathSize = 8.4
 
 var headingSize = [4]float64{0, 12, 10.2, 9.4}
 var headingGap = [4]float64{0, 11, 8, 6}

@@ -67,7 +67,7 @@ func TestTemplateErrors(t *testing.T) {
 		{"no sheet field", `text: "{sheet} of {sheets}"`, `text: "x"`, "no {sheet} field"},
 		{"no checked field", `text: "{checked}   {checked_date}"`, `text: "{checked_date}"`, "no {checked} field"},
 		{"footer without fingerprint", `left: "inputs {fingerprint}"`, `left: "inputs"`, "footer has no {fingerprint}"},
-		{"cell outside", "w: 40mm,  h: 7mm, label: Sheet", "w: 90mm,  h: 7mm, label: Sheet", "lies outside the title block"},
+		{"cell outside", "w: 44mm,  h: 7mm, label: Sheet", "w: 90mm,  h: 7mm, label: Sheet", "lies outside the title block"},
 		{"bad length", "height: 21mm", "height: tall", `bad length "tall"`},
 		{"unknown placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {sheet_count}"`, "unknown field {sheet_count}; fields are:"},
 		{"misspelt placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {shets}"`, "unknown field {shets}; did you mean {sheets}?"},
