@@ -53,11 +53,11 @@ func (c *composer) checkRegister() []layout.Block {
 	if len(c.res.Checks) == 0 {
 		return out
 	}
-	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check (its condition, then its description) links to the line that states it, on the page given; the sheet and file:line locate it in the source. Demand is the left side and capacity the right (the other way round for ≥); utilisation is the demand over the capacity.")}})
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check (its condition, its description, and the sheet and file:line that locate it in the source) links to the line that states it, on the page given. Demand is the left side and capacity the right (the other way round for ≥); utilisation is the demand over the capacity.")}})
 	t := &layout.Table{Pos: p, Compact: true,
-		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check")), cell(txt("Demand")), cell(txt("Capacity")),
-			cell(txt("Utilisation")), cell(txt("Verdict")), cell(txt("Page")), cell(txt("Sheet, line"))},
-		Align: []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
+		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check; description; sheet, line")), cell(txt("Demand")), cell(txt("Capacity")),
+			cell(txt("Utilisation")), cell(txt("Verdict")), cell(txt("Page"))},
+		Align: []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight}}
 	for i, ch := range c.res.Checks {
 		util := "—"
 		if ch.HasUtil() {
@@ -73,15 +73,15 @@ func (c *composer) checkRegister() []layout.Block {
 		}
 		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
 		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
-		what := append(c.checkMath(ch), txt("\n"))
+		what := append(c.checkMath(ch), txt("; "))
 		what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		what = append(what, txt("; "), layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor})
 		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(what...),
 			cell(layout.Run{Math: valueNode(demand, ch.Unit, -1), Own: true}),
 			cell(layout.Run{Math: valueNode(capacity, ch.Unit, -1), Own: true}),
 			cell(txt(util)), cell(verdict), page,
-			cell(layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor}),
 		}})
 	}
 	return append(out, t)
