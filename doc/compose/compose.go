@@ -50,6 +50,7 @@ type composer struct {
 	printed   map[string]bool               // engine steps printed on the current sheet (stepKey)
 	shapes    map[string]string             // formulas printed in full on the current sheet (shapeKey) → the symbol
 	written   map[string]writtenOut         // long settlement formulas written out in the package (shapeKey)
+	firstAt   map[string]*firstLine         // the line that first printed each computed engine step (stepKey)
 }
 
 // writtenOut is a long formula written out in full: its symbol, its sheet
@@ -97,7 +98,7 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, written: map[string]writtenOut{}}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, written: map[string]writtenOut{}, firstAt: map[string]*firstLine{}}
 	c.refs.linked = !opt.Bare
 	return c
 }

@@ -35,11 +35,16 @@ import (
 // bearing case), a step computed by a formula whose symbol the governing
 // case's working printed is listed by value, all on one line.
 //
+// A computed step worked out alike on an earlier sheet, on the same
+// ground model (the same depth and load), is listed by value with the page where it is worked
+// out.
+//
 // A step that raised a caution is always printed in full.
 func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 	var again []trace.Step
-	var byCase []layout.Run
-	var at, byAt *layout.Para
+	var byCase, there []layout.Run
+	var at, byAt, elsewhere *layout.Para
+	var from *firstLine
 	gov := o.c.governingOnly()
 	for _, i := range idx {
 		st := tr.Steps[i]
@@ -63,8 +68,31 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 			again = append(again, st)
 			continue
 		}
+		// across sheets a step counts as the same only on the same ground
+		gk := k
+		if o.b.On != nil {
+			gk = o.b.On.Name + "|" + k
+		}
+		if f, ok := o.c.firstAt[gk]; ok && gov && st.Formula != nil && !o.raises(tr, i) {
+			// computed alike on an earlier sheet (the same ground, depth
+			// and load): its value, with where it is worked out
+			if elsewhere == nil {
+				elsewhere = &layout.Para{Pos: o.p, Small: true}
+				o.line(elsewhere)
+				from = f
+			}
+			if len(there) > 0 {
+				there = append(there, txt(", "))
+			}
+			there = append(there, valueRun(st))
+			o.c.printed[k] = true
+			continue
+		}
 		o.c.printed[k] = true
 		line := o.c.stepLine(o.p, st)
+		if _, ok := o.c.firstAt[gk]; !ok && st.Formula != nil {
+			o.c.firstAt[gk] = &firstLine{sheet: sheetLabel(o.s), line: line}
+		}
 		if st.Formula != nil {
 			sk := shapeKey(st.Formula)
 			long := o.b.Settle != nil && weight(st.Formula) >= longFormula
@@ -96,10 +124,41 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 		}
 	}
 	o.closeAgain(at, again)
+	if elsewhere != nil {
+		a := o.c.lineAnchor(from.line)
+		elsewhere.Runs = append([]layout.Run{{Text: "As computed in " + from.sheet + ", ", Style: layout.Italic, Own: true},
+			{Text: "page —", Style: layout.Italic, Link: a, Own: true}, {Text: ": ", Style: layout.Italic, Own: true}}, there...)
+		elsewhere.Runs = append(elsewhere.Runs, txt("."))
+		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &elsewhere.Runs[1], anchor: a, format: "page %d"})
+	}
 	if byAt != nil {
 		byAt.Runs = append([]layout.Run{{Text: "By the formulas of the governing case above, with this case's factors: ", Style: layout.Italic, Own: true}}, byCase...)
 		byAt.Runs = append(byAt.Runs, txt("."))
 	}
+}
+
+// firstLine is the line that printed a computed step first in the
+// package, and its sheet.
+type firstLine struct {
+	sheet string
+	line  layout.Block
+}
+
+// lineAnchor is the anchor of a calculation line, given it if it has none.
+func (c *composer) lineAnchor(b layout.Block) string {
+	switch l := b.(type) {
+	case *layout.Statement:
+		if l.Anchor == "" {
+			l.Anchor = c.anchor("line")
+		}
+		return l.Anchor
+	case *layout.Input:
+		if l.Anchor == "" {
+			l.Anchor = c.anchor("line")
+		}
+		return l.Anchor
+	}
+	return ""
 }
 
 // valueRun is a step's symbol and value, for a list of values.
