@@ -75,7 +75,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 	}
 	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() },
-		func(i int) float64 { return r.Cases[i].Util })
+		func(i int) float64 { return r.Cases[i].Util }, "V_d", "H_d", "R_d", "util")
 
 	// Sliding.
 	if len(r.Sliding) > 0 {
@@ -115,7 +115,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 			o.asCase = nil
 		}
 		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() },
-			func(i int) float64 { return r.Sliding[i].Util })
+			func(i int) float64 { return r.Sliding[i].Util }, "H_d", "R_h_d", "util_h")
 	}
 
 	// Any case the engine traced that is neither (none expected).
@@ -184,7 +184,29 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 // the table. With detail = governing only the cases within 10 % of the
 // governing utilisation stay in the main flow; the others go to the
 // appendix.
-func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64) {
+//
+// The values the case summary on the sheet gives (summarised: the
+// demand, the resistance, the utilisation) are not tabulated again.
+func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64, summarised ...string) {
+	o.inSummary = map[string]bool{}
+	for _, sym := range summarised {
+		o.inSummary[sym] = true
+	}
+	defer func() { o.inSummary = nil }()
+	var inSummary []layout.Run
+	for i, sym := range summarised {
+		sep := ", "
+		switch i {
+		case 0:
+			sep = " "
+		case len(summarised) - 1:
+			sep = " and "
+		}
+		inSummary = append(inSummary, txt(sep), layout.Run{Math: eqn.Sym{Name: sym}, Own: true})
+	}
+	if len(inSummary) > 0 {
+		inSummary = append(inSummary, txt(" of each case are in the case summary."))
+	}
 	var near, far []int
 	for i := range cases {
 		switch {
@@ -204,7 +226,7 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 		if o.c.governingOnly() {
 			what = "The cases within 10 % of the governing utilisation: " + strings.ToLower(what[:1]) + what[1:]
 		}
-		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, what)
+		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, append([]layout.Run{txt(what)}, inSummary...))
 	}
 	if len(far) > 0 {
 		what := fmt.Sprintf("The other cases %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", caseList(prefix, far))
@@ -212,14 +234,14 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 			what = fmt.Sprintf("The other case %s (utilisation below 90 %% of the governing case) is tabulated the same way in the", caseList(prefix, far))
 		}
 		o.toAppendix(what)
-		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, title+": "+caseList(prefix, far)+", numbered as in the summary on the sheet; formulas as for the governing case there.")
+		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, append([]layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}, inSummary...))
 	}
 }
 
 // caseTables adds the compact tables of the cases idx to out, one per
 // drainage condition (split at maxCaseCols), each followed by the
 // cautions raised in its cases.
-func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string, lead string) []layout.Block {
+func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string, lead []layout.Run) []layout.Block {
 	var order []string
 	byDrain := map[string][]int{}
 	for _, i := range idx {
@@ -235,9 +257,9 @@ func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []stri
 		for start := 0; start < len(idx); start += maxCaseCols {
 			chunk := idx[start:min(start+maxCaseCols, len(idx))]
 			cap := []layout.Run{txt(fmt.Sprintf("%s cases (%s).", capital(d), caseList(prefix, chunk)))}
-			if lead != "" {
-				cap = []layout.Run{txt(lead + " " + cap[0].Text)}
-				lead = ""
+			if len(lead) > 0 {
+				cap = append(append(lead, txt(" ")), cap...)
+				lead = nil
 			}
 			out = append(out, o.caseTable(tr, cases, chunk, steps, prefix, cap))
 		}
@@ -294,6 +316,9 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 	}
 	var same []layout.Run
 	for _, k := range keys {
+		if k.n == 0 && o.inSummary[k.sym] {
+			continue // in the case summary on the sheet
+		}
 		if v, ok := constantRow(vals[k], idx); ok {
 			if len(same) > 0 {
 				same = append(same, txt(", "))

@@ -16,14 +16,15 @@ import (
 
 // engineOut collects the blocks of one engine block's printout.
 type engineOut struct {
-	c      *composer
-	s      *eval.Sheet
-	b      *eval.Block
-	p      source.Position
-	blocks []layout.Block
-	apx    []layout.Block    // working moved to the appendix (detail = governing)
-	shown  map[shownKey]bool // cautions already boxed
-	asCase map[string]bool   // symbols listed by value, by the governing case's formulas (steps)
+	c         *composer
+	s         *eval.Sheet
+	b         *eval.Block
+	p         source.Position
+	blocks    []layout.Block
+	apx       []layout.Block    // working moved to the appendix (detail = governing)
+	shown     map[shownKey]bool // cautions already boxed
+	asCase    map[string]bool   // symbols listed by value, by the governing case's formulas (steps)
+	inSummary map[string]bool   // symbols the case summary gives, left out of the case tables
 }
 
 type shownKey struct {
