@@ -119,9 +119,6 @@ func (c *composer) document() layout.Doc {
 	// working was moved there), the end matter; sheetRows maps each
 	// contents row to its layout sheet.
 	c.matter = matterTitles
-	if len(c.appendix) > 0 {
-		c.matter = append([]matterTitle{{"Appendix: further working", "appendix"}}, c.matter...)
-	}
 	doc.Sheets = append(doc.Sheets, c.cover(), c.summary())
 	if c.opt.Changes != nil {
 		c.sheetRows = append(c.sheetRows, len(doc.Sheets))
@@ -131,10 +128,6 @@ func (c *composer) document() layout.Doc {
 		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+i)
 	}
 	doc.Sheets = append(doc.Sheets, sheets...)
-	if len(c.appendix) > 0 {
-		c.sheetRows = append(c.sheetRows, len(doc.Sheets))
-		doc.Sheets = append(doc.Sheets, c.appendixSheet())
-	}
 	for i, m := range c.endMatter() {
 		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+0*i)
 		doc.Sheets = append(doc.Sheets, m)
@@ -143,17 +136,19 @@ func (c *composer) document() layout.Doc {
 	return doc
 }
 
-// appendixSheet holds the working left out of the main flow (detail =
+// appendixBlocks are the working left out of the main flow (detail =
 // governing): per block, the other cases' tables and the sublayer
-// tables, each headed by a link back to its block.
-func (c *composer) appendixSheet() layout.Sheet {
-	out := c.matterSheet("Appendix: further working", "appendix")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "Appendix: further working"),
-		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working the sheets leave out of their main flow (detail = full in package.yaml prints it in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block, each heading linked to its block.")}})
-	out.Blocks = append(out.Blocks, c.appendix...)
-	return out
+// tables, each headed by a link back to its block. They open the end
+// matter's sheet.
+func (c *composer) appendixBlocks() []layout.Block {
+	p := c.matterPos()
+	out := []layout.Block{&layout.Anchor{Pos: p, Name: "appendix"}, heading(p, 1, appendixTitle),
+		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working the sheets leave out of their main flow (detail = full in package.yaml prints it in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block, each heading linked to its block.")}}}
+	return append(out, c.appendix...)
 }
+
+// appendixTitle heads the appendix.
+const appendixTitle = "Appendix: further working"
 
 // sheet converts one evaluated sheet.
 func (c *composer) sheet(s *eval.Sheet) layout.Sheet {

@@ -169,7 +169,11 @@ func (c *composer) cover() layout.Sheet {
 		title := cell(layout.Run{Text: mt.title, Link: mt.anchor})
 		if mt.anchor == "registers" {
 			title = nil
-			for i, sec := range matterSections {
+			secs := matterSections
+			if len(c.appendix) > 0 {
+				secs = append([]matterTitle{{appendixTitle, "appendix"}}, secs...)
+			}
+			for i, sec := range secs {
 				if i > 0 {
 					title = append(title, txt(" · "))
 				}

@@ -12,14 +12,26 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-// registersTitle is the title of the end-matter sheet.
-const registersTitle = "Registers, references and cautions"
+// registersTitle is the title of the end-matter sheet; with an appendix,
+// appendixRegistersTitle.
+const (
+	registersTitle         = "Registers, references and cautions"
+	appendixRegistersTitle = "Appendix, registers, references and cautions"
+)
 
-// endMatter is one sheet: the check register, the input register, the
-// references list and the cautions, each a section under its own anchor,
-// run on without a page break between them.
+// endMatter is one sheet: the appendix (when any working was moved
+// there), the check register, the input register, the references list
+// and the cautions, each a section under its own anchor, run on without
+// a page break between them.
 func (c *composer) endMatter() []layout.Sheet {
-	out := c.matterSheet(registersTitle, "registers")
+	title := registersTitle
+	if len(c.appendix) > 0 {
+		title = appendixRegistersTitle
+	}
+	out := c.matterSheet(title, "registers")
+	if len(c.appendix) > 0 {
+		out.Blocks = append(out.Blocks, c.appendixBlocks()...)
+	}
 	for _, part := range [][]layout.Block{c.checkRegister(), c.inputRegister(), c.references(), c.cautionSheet()} {
 		out.Blocks = append(out.Blocks, part...)
 	}

@@ -179,7 +179,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	if c.RightValue != nil {
 		row = append(row, eqn.Op{Text: "="}, c.RightValue)
 	}
-	const verdictW, pad = 128.0, 4.0
+	const verdictW, pad = 128.0, 3.0
 	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos, false)
 	if !ok {
 		return nil

@@ -16,7 +16,7 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 		e.probs.add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", sev)
 		sev = SevWarning
 	}
-	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 4.0
+	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 3.5
 	inner := width - bar - padL - padR
 	// heading line: the word, then the title
 	word := sev.String()

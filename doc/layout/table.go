@@ -88,8 +88,11 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		if t.Compact {
 			st.size = noteSize
 		}
-		lines := e.setText(capRuns, total, st, t.Pos)
-		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
+		// a caption may run wider than a narrow table, to the width of
+		// the column (two thirds of it at least)
+		cw := math.Max(total, math.Min(width, 2*width/3))
+		lines := e.setText(capRuns, cw, st, t.Pos)
+		ps := linePieces("caption", t.Pos, lines, cw, paraGap+2)
 		for _, p := range ps {
 			p.keep = true
 		}
