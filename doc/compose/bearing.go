@@ -75,7 +75,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 	}
 	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() },
-		func(i int) float64 { return r.Cases[i].Util }, "V_d", "H_d", "R_d", "util")
+		func(i int) float64 { return r.Cases[i].Util }, "V_d", "H_d", "R_d")
 
 	// Sliding.
 	if len(r.Sliding) > 0 {
@@ -115,7 +115,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 			o.asCase = nil
 		}
 		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() },
-			func(i int) float64 { return r.Sliding[i].Util }, "H_d", "R_h_d", "util_h")
+			func(i int) float64 { return r.Sliding[i].Util }, "H_d", "R_h_d")
 	}
 
 	// Any case the engine traced that is neither (none expected).
@@ -185,9 +185,13 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 // governing utilisation stay in the main flow; the others go to the
 // appendix.
 //
-// The values the case summary on the sheet gives (summarised: the
-// demand, the resistance, the utilisation) are not tabulated again.
+// With detail = governing the values the case summary on the sheet
+// gives (summarised: the demand and the resistance) are not tabulated
+// again.
 func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64, summarised ...string) {
+	if !o.c.governingOnly() {
+		summarised = nil // detail = full prints every value in place
+	}
 	o.inSummary = map[string]bool{}
 	for _, sym := range summarised {
 		o.inSummary[sym] = true

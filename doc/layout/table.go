@@ -24,7 +24,7 @@ var (
 	compactLook = tableLook{
 		cell: textStyle{size: compactSize, lead: 1.22, color: ink},
 		head: textStyle{size: compactSize, lead: 1.22, color: ink, bold: true},
-		padX: 3.5, padY: 1.7,
+		padX: 3.5, padY: 1.3,
 	}
 )
 
