@@ -8,7 +8,7 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 const (
 	bodySize    = 8.6
 	mathSize    = MathSize
-	bodyLead    = 1.3  // line height / size
+	bodyLead    = 1.3 // line height / size
 	noteSize    = 7.3
 	tableSize   = 8.5
 	compactSize = 7.6 // compact tables (Table.Compact)
