@@ -16,7 +16,7 @@ const (
 	captionSize = 8.2
 	paraGap     = 4.0 // space between paragraphs
 	calcGap     = 2.0 // space between calc lines
-	calcPad     = 1.0 // space above and below a calc line's formula
+	calcPad     = 0.7 // space above and below a calc line's formula
 )
 
 // MathSize is the size calculation lines set their formulas in (compose
