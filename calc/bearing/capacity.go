@@ -1,6 +1,7 @@
 package bearing
 
 import (
+	"fmt"
 	"math"
 
 	"github.com/plinth-calc/plinth/calc/site"
@@ -45,25 +46,34 @@ func CapacityAt(in Input, B float64) (*Capacity, error) {
 	} else if f.Shape != site.Strip {
 		cp.L = B
 	}
-	for _, cs := range r.Cases {
+	gov := -1
+	for i, cs := range r.Cases {
 		// One convention with the settlement and the footing's own check:
 		// the table gives gross total pressures, so a drained (effective)
 		// resistance pressure gains the pore pressure at the base back:
 		// q_a = (q_ult − q′)/FS + q′ + u_0 = q_net/FS + σ_v0.
-		q := cs.QRd + cs.U0
+		q := cp.Trace.Compute(qaStep(cs))
 		if q < cp.QRd {
-			cp.QRd, cp.QUlt, cp.Drainage, cp.Case = q, cs.QUlt, cs.Drainage, cs.Name
+			cp.QRd, cp.QUlt, cp.Drainage, cp.Case, gov = q, cs.QUlt, cs.Drainage, cs.Name, i
 		}
 	}
 	if math.IsInf(cp.QRd, 1) {
 		cp.QRd = 0
 	}
-	for _, cs := range r.Cases {
-		if cs.Name == cp.Case && cs.U0 > 0 {
-			cp.Trace.Add(trace.Step{Symbol: "q_a", Formula: add(sym("q_Rd"), sym("u_0")), Value: cp.QRd, Unit: "kPa", Case: cs.Name,
-				Inputs: []trace.Value{val("q_Rd", cs.QRd, "kPa"), val("u_0", cs.U0, "kPa")}, Ref: ref6521,
-				Note: "gross allowable pressure: the effective resistance pressure with the pore pressure at the base added back (q_net/FS + σ_v0)"})
-		}
+	if gov >= 0 && r.Cases[gov].U0 > 0 {
+		cp.QRd = cp.Trace.Eval(qaStep(r.Cases[gov]))
+	}
+	if err := cp.Trace.Err(); err != nil {
+		return nil, fmt.Errorf("bearing capacity of %s at B = %g m: %w", footingName(f), B, err)
 	}
 	return cp, nil
+}
+
+var fQa = trace.Add(trace.S("q_Rd"), trace.S("u_0"))
+
+// qaStep is the gross allowable pressure of case cs.
+func qaStep(cs Case) trace.Step {
+	return trace.Step{Symbol: "q_a", Formula: fQa, Unit: "kPa", Case: cs.Name,
+		Inputs: []trace.Value{val("q_Rd", cs.QRd, "kPa"), val("u_0", cs.U0, "kPa")}, Ref: ref6521,
+		Note: "gross allowable pressure: the effective resistance pressure with the pore pressure at the base added back (q_net/FS + σ_v0)"}
 }

@@ -17,7 +17,10 @@ type geo struct {
 	Bf, D, alpha float64
 	V, H         float64
 	eB, eL       float64
-	noDepth      bool // no depth factors (lower layer, load spread)
+	noDepth      bool    // no depth factors (lower layer, load spread)
+	swap         bool    // B′ lies along L (the shorter effective side)
+	beta         float64 // inclination of the load, atan(H/V), when H > 0
+	k            float64 // Hansen's depth ratio, when recorded
 }
 
 // soil is the design strength of one layer in one case.
@@ -40,60 +43,100 @@ var (
 
 // Formulas that do not depend on the input, built once.
 var (
-	fRkUlt  = mul(sym("q_ult"), sym("A'"))
-	fRkLim  = mul(sym("q_lim"), sym("A'"))
-	fRd     = div(sym("R_k"), sym("gamma_Rv"))
-	fQEd    = div(sym("V_d"), sym("A'"))
-	fQRd    = div(sym("R_d"), sym("A'"))
-	fUtil   = div(sym("V_d"), sym("R_d"))
-	fHd     = fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2))))
-	feB     = div(fn("abs", sym("M_B_d")), sym("V_d"))
-	feL     = div(fn("abs", sym("M_L_d")), sym("V_d"))
-	fBpB    = sub(sym("B"), mul(num(2), sym("e_B")))
-	fBpL    = sub(sym("L"), mul(num(2), sym("e_L")))
-	fApStr  = sym("B'")
-	fApRect = mul(sym("B'"), sym("L'"))
-	fBeta   = fn("atan", div(sym("H_d"), sym("V_d")))
-	fk1     = div(sym("D"), sym("B"))
-	fk2     = fn("atan", div(sym("D"), sym("B")))
-	fThB    = fn("atan2", fn("abs", sym("H_B_d")), fn("abs", sym("H_L_d")))
-	fThL    = fn("atan2", fn("abs", sym("H_L_d")), fn("abs", sym("H_B_d")))
-	fIdent  = map[string]expr{"sigma_v0": sym("sigma_v0"), "sigma'_v0": sym("sigma'_v0"), "gamma'_k": sym("gamma'_k")}
-	fSoil   = map[soilKey]expr{}
+	fRkUlt  = trace.Mul(trace.S("q_ult"), trace.S("A'"))
+	fRkLim  = trace.Mul(trace.S("q_lim"), trace.S("A'"))
+	fRd     = trace.Div(trace.S("R_k"), trace.S("gamma_Rv"))
+	fQEd    = trace.Div(trace.S("V_d"), trace.S("A'"))
+	fQRd    = trace.Div(trace.S("R_d"), trace.S("A'"))
+	fUtil   = trace.Div(trace.S("V_d"), trace.S("R_d"))
+	fUtilHc = trace.Fn("max", fUtil, trace.Div(trace.S("H_d"), trace.Mul(trace.S("A'"), trace.S("c_u_d"))))
+	fRdFS   = map[string]rdForms{"q_ult": mkRdForms("q_ult"), "q_lim": mkRdForms("q_lim")}
+	fU      = trace.Mul(trace.S("u_0"), trace.S("A_b"))
+	fVdEff  = trace.Sub(trace.S("V_d_tot"), trace.S("U"))
+	fE      = trace.Fn("sqrt", trace.Add(trace.Pow(trace.S("e_B"), trace.N(2)), trace.Pow(trace.S("e_L"), trace.N(2))))
+	fHd     = trace.Fn("sqrt", trace.Add(trace.Pow(trace.S("H_B_d"), trace.N(2)), trace.Pow(trace.S("H_L_d"), trace.N(2))))
+	feB     = trace.Div(trace.Fn("abs", trace.S("M_B_d")), trace.S("V_d"))
+	feL     = trace.Div(trace.Fn("abs", trace.S("M_L_d")), trace.S("V_d"))
+	fBpB    = trace.Sub(trace.S("B"), trace.Mul(trace.N(2), trace.S("e_B")))
+	fBpL    = trace.Sub(trace.S("L"), trace.Mul(trace.N(2), trace.S("e_L")))
+	fApStr  = trace.S("B'")
+	fApRect = trace.Mul(trace.S("B'"), trace.S("L'"))
+	fBeta   = trace.Fn("atan", trace.Div(trace.S("H_d"), trace.S("V_d")))
+	fk1     = trace.Div(trace.S("D"), trace.S("B"))
+	fk2     = trace.Fn("atan", trace.Div(trace.S("D"), trace.S("B")))
+	fThB    = trace.Fn("atan2", trace.Fn("abs", trace.S("H_B_d")), trace.Fn("abs", trace.S("H_L_d")))
+	fThL    = trace.Fn("atan2", trace.Fn("abs", trace.S("H_L_d")), trace.Fn("abs", trace.S("H_B_d")))
+	fIdent  = map[string]expr{"sigma_v0": trace.S("sigma_v0"), "sigma'_v0": trace.S("sigma'_v0"), "gamma'_k": trace.S("gamma'_k")}
+	fOver   = mkOverForms()
+	fSoil   = mkSoilForms()
 )
+
+// rdForms are the allowable bearing resistances of an allowable-stress
+// approach for the ultimate pressure q (q_ult, or q_lim of a two-layer
+// check): FS on the gross pressure with and without water at the base, FS
+// on the net pressure with the effective (q′) or total (q) overburden.
+type rdForms struct{ grossU, gross, net, netU trace.Expr }
+
+func mkRdForms(q string) rdForms {
+	A, Q, FS, u0 := trace.S("A'"), trace.S(q), trace.S("FS"), trace.S("u_0")
+	net := func(q0 string) trace.Expr {
+		return trace.Mul(A, trace.Add(trace.Div(trace.Sub(Q, trace.S(q0)), FS), trace.S(q0)))
+	}
+	return rdForms{
+		grossU: trace.Mul(A, trace.Sub(trace.Div(trace.Add(Q, u0), FS), u0)),
+		gross:  trace.Mul(A, trace.Div(Q, FS)),
+		net:    net("q'"),
+		netU:   net("q"),
+	}
+}
 
 // soilForm returns the design-value formula of characteristic symbol k
 // with partial factor g, for an angle (tan) or a strength, with or without
-// the local-shear ⅔. The table is built at start-up and only read after.
-func soilForm(k, g string, angle, local bool) expr {
-	return fSoil[soilKey{k, g, angle, local}]
+// the local-shear ⅔; clamp (an angle) bounds it below by phiMin. The table
+// is built at start-up and only read after.
+func soilForm(k, g string, angle, local, clamp bool) expr {
+	return fSoil[soilKey{k, g, angle, local, clamp}]
 }
 
 type soilKey struct {
-	k, g         string
-	angle, local bool
+	k, g                string
+	angle, local, clamp bool
 }
 
-func init() {
+func mkOverForms() map[string]expr {
+	m := map[string]expr{}
+	for _, from := range []string{"sigma_v0", "sigma'_v0", "gamma'_k"} {
+		m[from] = trace.Div(trace.S(from), trace.S("gamma_gamma"))
+	}
+	return m
+}
+
+func mkSoilForms() map[soilKey]expr {
+	fSoil := map[soilKey]expr{}
 	for _, k := range []struct {
 		k, g  string
 		angle bool
-	}{{"phi'_k", gPhi, true}, {"phi'_2k", gPhi, true}, {"c'_k", gC, false}, {"c'_2k", gC, false}, {"c_u_k", gCu, false}, {"c_u_2k", gCu, false}} {
+	}{{"phi'_k", gPhi, true}, {"phi'_2k", gPhi, true}, {"phi'_cv_k", gPhi, true}, {"delta_k", gPhi, true},
+		{"c'_k", gC, false}, {"c'_2k", gC, false}, {"c_u_k", gCu, false}, {"c_u_2k", gCu, false}} {
 		for _, local := range []bool{false, true} {
 			var f expr
 			switch {
 			case k.angle && local:
-				f = fn("atan", div(mul(num(2.0/3), fn("tan", sym(k.k))), sym(k.g)))
+				f = trace.Fn("atan", trace.Div(trace.Mul(trace.N(2.0/3), trace.Fn("tan", trace.S(k.k))), trace.S(k.g)))
 			case k.angle:
-				f = fn("atan", div(fn("tan", sym(k.k)), sym(k.g)))
+				f = trace.Fn("atan", trace.Div(trace.Fn("tan", trace.S(k.k)), trace.S(k.g)))
 			case local:
-				f = div(mul(num(2.0/3), sym(k.k)), sym(k.g))
+				f = trace.Div(trace.Mul(trace.N(2.0/3), trace.S(k.k)), trace.S(k.g))
 			default:
-				f = div(sym(k.k), sym(k.g))
+				f = trace.Div(trace.S(k.k), trace.S(k.g))
 			}
-			fSoil[soilKey{k.k, k.g, k.angle, local}] = f
+			fSoil[soilKey{k.k, k.g, k.angle, local, false}] = f
+			if k.angle {
+				fSoil[soilKey{k.k, k.g, k.angle, local, true}] = trace.Fn("max", f, trace.N(phiMin))
+			}
 		}
 	}
+	return fSoil
 }
 
 // phiMin is the least φ′ used in a drained formula: the factors are then
@@ -160,44 +203,45 @@ func (c *calc) bearingCase(ld design.Load, d Drainage) {
 	if qsym == "q_lim" {
 		fRk = fRkLim
 	}
-	rk := c.step("R_k", fRk, qlim*g.Ap, c.uF, ref652, "characteristic bearing resistance", vq, vA)
+	rk := c.eval("R_k", fRk, c.uF, ref652, "characteristic bearing resistance", vq, vA)
 	var rd float64
 	if c.ap.Allowable() {
 		q0, q0s := s.q, "q'"
 		if und {
 			q0s = "q"
 		}
+		fs := fRdFS[qsym]
 		switch {
 		case c.opt.FSOnGross && cs.U0 > 0:
 			// gross total q_ult = q′_ult + u_0 over FS, less u_0 back to effective
-			rd = g.Ap * ((qlim+cs.U0)/c.ap.FS - cs.U0)
-			c.step("R_d", mul(sym("A'"), sub(div(add(sym(qsym), sym("u_0")), sym("FS")), sym("u_0"))), rd, c.uF, trace.Ref{},
+			rd = c.eval("R_d", fs.grossU, c.uF, trace.Ref{},
 				"allowable bearing resistance, FS on the gross pressure (fs_on = gross): gross total ultimate pressure q′ + u_0 over FS, less u_0 (common practice)", vA, vq, val("u_0", cs.U0, "kPa"), val("FS", c.ap.FS, ""))
 		case c.opt.FSOnGross:
-			rd = g.Ap * qlim / c.ap.FS
-			c.step("R_d", mul(sym("A'"), div(sym(qsym), sym("FS"))), rd, c.uF, trace.Ref{},
+			rd = c.eval("R_d", fs.gross, c.uF, trace.Ref{},
 				"allowable bearing resistance, FS on the gross ultimate pressure (fs_on = gross; common practice)", vA, vq, val("FS", c.ap.FS, ""))
 		default:
-			rd = g.Ap * ((qlim-q0)/c.ap.FS + q0)
-			c.step("R_d", mul(sym("A'"), add(div(sub(sym(qsym), sym(q0s)), sym("FS")), sym(q0s))), rd, c.uF, trace.Ref{},
+			f := fs.net
+			if und {
+				f = fs.netU
+			}
+			rd = c.eval("R_d", f, c.uF, trace.Ref{},
 				"allowable bearing resistance: net ultimate pressure over FS plus overburden (fs_on = net; common practice)", vA, vq, val(q0s, q0, "kPa"), val("FS", c.ap.FS, ""))
 		}
 	} else {
 		grv := c.take("gamma_Rv", ld.Set.Resistance.GammaRv, "", refA5, "partial factor on bearing resistance ("+ld.Set.Resistance.Name+")")
-		rd = c.step("R_d", fRd, rk/grv, c.uF, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design bearing resistance", val("R_k", rk, c.uF), val("gamma_Rv", grv, ""))
+		rd = c.eval("R_d", fRd, c.uF, trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design bearing resistance", val("R_k", rk, c.uF), val("gamma_Rv", grv, ""))
 	}
 	cs.R = rd
-	cs.QEd = c.step("q_Ed", fQEd, ld.V/g.Ap, "kPa", ref652, "design bearing pressure on the effective area", vV, vA)
-	cs.QRd = c.step("q_Rd", fQRd, rd/g.Ap, "kPa", ref652, "design bearing resistance as a pressure", val("R_d", rd, c.uF), vA)
+	cs.QEd = c.eval("q_Ed", fQEd, "kPa", ref652, "design bearing pressure on the effective area", vV, vA)
+	cs.QRd = c.eval("q_Rd", fQRd, "kPa", ref652, "design bearing resistance as a pressure", val("R_d", rd, c.uF), vA)
 	switch {
 	case rd <= 0:
 		cs.Util = c.take("util", UtilCap, "", trace.Ref{}, "no bearing resistance: the check fails")
 	case c.hcLim:
-		u := math.Max(ld.V/rd, g.H/(g.Ap*s.cu))
-		cs.Util = c.step("util", fn("max", div(sym("V_d"), sym("R_d")), div(sym("H_d"), mul(sym("A'"), sym("c_u_d")))), u, "", refD3,
+		cs.Util = c.eval("util", fUtilHc, "", refD3,
 			"utilisation: H_d exceeds A′c_u,d, the limit of D.3", vV, val("R_d", rd, c.uF), val("H_d", g.H, c.uF), vA, val("c_u_d", s.cu, "kPa"))
 	default:
-		cs.Util = c.step("util", fUtil, ld.V/rd, "", ref652, "utilisation V_d/R_d", vV, val("R_d", rd, c.uF))
+		cs.Util = c.eval("util", fUtil, "", ref652, "utilisation V_d/R_d", vV, val("R_d", rd, c.uF))
 	}
 	cs.Util = math.Min(cs.Util, UtilCap)
 	cs.OK = cs.Util <= 1+1e-12
@@ -212,13 +256,13 @@ func (c *calc) overStep(s, from string, v, gg float64, note string) float64 {
 		unit = "kN/m3"
 	}
 	if gg == 1 {
-		return c.step(s, fIdent[from], v, unit, trace.Ref{}, note, val(from, v, unit))
+		return c.eval(s, fIdent[from], unit, trace.Ref{}, note, val(from, v, unit))
 	}
 	if !c.pf[3] {
 		c.pf[3] = true
 		c.take("gamma_gamma", gg, "", refA4, "partial factor on unit weight")
 	}
-	return c.step(s, div(sym(from), sym("gamma_gamma")), v/gg, unit, refMat, note, val(from, v, unit), val("gamma_gamma", gg, ""))
+	return c.eval(s, fOver[from], unit, refMat, note, val(from, v, unit), val("gamma_gamma", gg, ""))
 }
 
 // factors collects every factor recorded since step start.
@@ -264,12 +308,30 @@ func (c *calc) buoyant(start int, v float64) (float64, float64) {
 			break
 		}
 	}
-	A := c.f.Area()
-	c.take("A_b", A, c.uA, trace.Ref{}, "plan area of the base")
-	U := c.step("U", mul(sym("u_0"), sym("A_b")), c.u0*A, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
-	vp := c.step("V_d", sub(sym("V_d_tot"), sym("U")), v-U, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
+	A := c.planArea()
+	U := c.eval("U", fU, c.uF, ref6521, "water pressure on the base (design groundwater level, unfactored)", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
+	vp := c.eval("V_d", fVdEff, c.uF, ref6521, "effective design vertical action: the water pressure on the base deducted (drained, effective stress)", val("V_d_tot", v, c.uF), val("U", U, c.uF))
 	return vp, U
 }
+
+// planArea records the plan area of the base A_b (per metre run for a
+// strip).
+func (c *calc) planArea() float64 {
+	f := c.f
+	vB := val("B", f.B, "m")
+	switch f.Shape {
+	case site.Strip:
+		return c.eval("A_b", fAbStrip, c.uA, trace.Ref{}, "plan area of the base", vB)
+	case site.Circle:
+		return c.eval("A_b", fCircA, c.uA, trace.Ref{}, "plan area of the base", vB)
+	}
+	return c.eval("A_b", fApRectBL, c.uA, trace.Ref{}, "plan area of the base", vB, val("L", f.L, "m"))
+}
+
+var (
+	fAbStrip  = trace.S("B")
+	fApRectBL = trace.Mul(trace.S("B"), trace.S("L"))
+)
 
 // geometry records H_d, the eccentricities and the effective dimensions
 // of one case. ok is false when the resultant lies outside the base.
@@ -280,21 +342,21 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 	g := geo{strip: f.Shape == site.Strip, Bf: f.B, D: f.D, alpha: f.Alpha, V: ld.V}
 	vV, vB := val("V_d", ld.V, c.uF), val("B", f.B, "m")
 	if ld.HB != 0 || ld.HL != 0 {
-		g.H = math.Hypot(ld.HB, ld.HL)
-		c.step("H_d", fHd, g.H, c.uF, trace.Ref{}, "resultant horizontal action",
+		g.H = c.eval("H_d", fHd, c.uF, trace.Ref{}, "resultant horizontal action",
 			val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
 	} else {
-		c.take("H_d", 0, c.uF, trace.Ref{}, "no horizontal action")
+		g.H = c.take("H_d", 0, c.uF, trace.Ref{}, "no horizontal action")
 	}
-	g.eB = c.step("e_B", feB, math.Abs(ld.MB)/ld.V, "m", refD1, "eccentricity along B", val("M_B_d", ld.MB, c.uM), vV)
+	g.eB = c.eval("e_B", feB, "m", refD1, "eccentricity along B", val("M_B_d", ld.MB, c.uM), vV)
 	if !g.strip {
-		g.eL = c.step("e_L", feL, math.Abs(ld.ML)/ld.V, "m", refD1, "eccentricity along L", val("M_L_d", ld.ML, c.uM), vV)
+		g.eL = c.eval("e_L", feL, "m", refD1, "eccentricity along L", val("M_L_d", ld.ML, c.uM), vV)
 	}
+	veB, veL := val("e_B", g.eB, "m"), val("e_L", g.eL, "m")
 	var e, lim6, lim3, edge float64
 	var what string
 	switch f.Shape {
 	case site.Circle:
-		e = math.Hypot(g.eB, g.eL)
+		e = c.compute("e", fE, veB, veL)
 		lim6, lim3, edge, what = f.B/8, 0.3*f.B, f.B/2, "r/4 (kern of a circle)"
 	default:
 		e = math.Max(g.eB/f.B, g.eL/f.L) * f.B
@@ -322,25 +384,24 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 	}
 	switch {
 	case g.strip:
-		g.Bp = c.step("B'", fBpB, f.B-2*g.eB, "m", refMey53, "effective width", vB, val("e_B", g.eB, "m"))
-		g.Ap = c.step("A'", fApStr, g.Bp, c.uA, refD1, "effective area per metre run", val("B'", g.Bp, "m"))
+		g.Bp = c.eval("B'", fBpB, "m", refMey53, "effective width", vB, veB)
+		g.Ap = c.eval("A'", fApStr, c.uA, refD1, "effective area per metre run", val("B'", g.Bp, "m"))
 	case f.Shape == site.Circle:
-		c.circle(&g, e)
+		c.circle(&g, veB, veL)
 	default:
-		b1, l1 := f.B-2*g.eB, f.L-2*g.eL
-		vL, veB, veL := val("L", f.L, "m"), val("e_B", g.eB, "m"), val("e_L", g.eL, "m")
-		fb, fl := fBpB, fBpL
-		if b1 <= l1 {
-			g.Bp = c.step("B'", fb, b1, "m", refMey53, "effective width", vB, veB)
-			g.Lp = c.step("L'", fl, l1, "m", refMey53, "effective length", vL, veL)
+		vL := val("L", f.L, "m")
+		g.swap = c.compute("B'", fBpB, vB, veB) > c.compute("L'", fBpL, vL, veL)
+		if !g.swap {
+			g.Bp = c.eval("B'", fBpB, "m", refMey53, "effective width", vB, veB)
+			g.Lp = c.eval("L'", fBpL, "m", refMey53, "effective length", vL, veL)
 		} else {
-			g.Bp = c.step("B'", fl, l1, "m", refMey53, "effective width (the shorter effective side, along L)", vL, veL)
-			g.Lp = c.step("L'", fb, b1, "m", refMey53, "effective length (along B)", vB, veB)
+			g.Bp = c.eval("B'", fBpL, "m", refMey53, "effective width (the shorter effective side, along L)", vL, veL)
+			g.Lp = c.eval("L'", fBpB, "m", refMey53, "effective length (along B)", vB, veB)
 		}
-		g.Ap = c.step("A'", fApRect, g.Bp*g.Lp, c.uA, refD1, "effective area", val("B'", g.Bp, "m"), val("L'", g.Lp, "m"))
+		g.Ap = c.eval("A'", fApRect, c.uA, refD1, "effective area", val("B'", g.Bp, "m"), val("L'", g.Lp, "m"))
 	}
 	if g.H > 0 {
-		c.step("beta", fBeta, math.Atan(g.H/ld.V), "deg", trace.Ref{}, "inclination of the load from the vertical", val("H_d", g.H, c.uF), vV)
+		g.beta = c.eval("beta", fBeta, "deg", trace.Ref{}, "inclination of the load from the vertical", val("H_d", g.H, c.uF), vV)
 		if !quiet && g.H/ld.V > 0.3 {
 			c.warn("hv-large", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: H_d/V_d = %.2f: the load is steeply inclined (more than about 17°); the inclination factors reduce the resistance strongly and sliding may govern (common practice).", c.cas, g.H/ld.V), val("H_d/V_d", g.H/ld.V, ""))
 		}
@@ -351,9 +412,9 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 	if (c.opt.Method == Hansen || c.opt.Method == Vesic) && !g.noDepth {
 		vD := val("D", f.D, "m")
 		if f.D <= f.B {
-			c.step("k", fk1, f.D/f.B, "", refHan70, "depth ratio (D/B ≤ 1)", vD, vB)
+			g.k = c.eval("k", fk1, "", refHan70, "depth ratio (D/B ≤ 1)", vD, vB)
 		} else {
-			c.step("k", fk2, math.Atan(f.D/f.B), "", refHan70, "depth ratio, arctan(D/B) in radians (D/B > 1)", vD, vB)
+			g.k = c.eval("k", fk2, "", refHan70, "depth ratio, arctan(D/B) in radians (D/B > 1)", vD, vB)
 		}
 	}
 	return g, true
@@ -363,46 +424,56 @@ func (c *calc) geometry(ld design.Load, quiet bool) (geo, bool) {
 // inside the chord at distance e from the centre) and its equivalent
 // rectangle (API RP 2GEO, after API RP 2A); with a central load and the
 // Terzaghi method the diameter itself is used.
-func (c *calc) circle(g *geo, e float64) {
+func (c *calc) circle(g *geo, veB, veL trace.Value) {
 	f := c.f
 	vB := val("B", f.B, "m")
-	if c.opt.Method == Terzaghi && e == 0 {
+	if c.opt.Method == Terzaghi && veB.V == 0 && veL.V == 0 {
 		g.circC = true
-		g.Bp = c.step("B'", sym("B"), f.B, "m", refTerz, "diameter (Terzaghi's circular footing)", vB)
-		g.Lp = c.step("L'", sym("B"), f.B, "m", refTerz, "diameter", vB)
-		g.Ap = c.step("A'", div(mul(sym("pi"), pow(sym("B"), num(2))), num(4)), math.Pi*f.B*f.B/4, c.uA, refTerz, "area of the circle", vB)
+		g.Bp = c.eval("B'", fCircD, "m", refTerz, "diameter (Terzaghi's circular footing)", vB)
+		g.Lp = c.eval("L'", fCircD, "m", refTerz, "diameter", vB)
+		g.Ap = c.eval("A'", fCircA, c.uA, refTerz, "area of the circle", vB)
 		return
 	}
-	R := c.step("R", div(sym("B"), num(2)), f.B/2, "m", trace.Ref{}, "radius", vB)
+	R := c.eval("R", fCircR, "m", trace.Ref{}, "radius", vB)
 	vR := val("R", R, "m")
-	e = c.step("e", fn("sqrt", add(pow(sym("e_B"), num(2)), pow(sym("e_L"), num(2)))), e, "m", refCircle, "resultant eccentricity", val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+	e := c.eval("e", fE, "m", refCircle, "resultant eccentricity", veB, veL)
 	ve := val("e", e, "m")
-	A := 2 * (R*R*math.Acos(e/R) - e*math.Sqrt(R*R-e*e))
-	g.Ap = c.step("A'", mul(num(2), sub(mul(pow(sym("R"), num(2)), fn("acos", div(sym("e"), sym("R")))), mul(sym("e"), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))))),
-		A, c.uA, refCircle, "effective area (circular segment)", vR, ve)
-	be := c.step("b_e", mul(num(2), sub(sym("R"), sym("e"))), 2*(R-e), "m", refCircle, "width of the effective segment", vR, ve)
-	le := c.step("l_e", mul(num(2), fn("sqrt", sub(pow(sym("R"), num(2)), pow(sym("e"), num(2))))), 2*math.Sqrt(R*R-e*e), "m", refCircle, "chord length of the effective segment", vR, ve)
+	A := c.eval("A'", fSegA, c.uA, refCircle, "effective area (circular segment)", vR, ve)
+	g.Ap = A
+	be := c.eval("b_e", fSegB, "m", refCircle, "width of the effective segment", vR, ve)
+	le := c.eval("l_e", fSegL, "m", refCircle, "chord length of the effective segment", vR, ve)
 	vA, vbe, vle := val("A'", A, c.uA), val("b_e", be, "m"), val("l_e", le, "m")
-	g.Lp = c.step("L'", fn("sqrt", div(mul(sym("A'"), sym("l_e")), sym("b_e"))), math.Sqrt(A*le/be), "m", refCircle, "equivalent effective length", vA, vle, vbe)
-	g.Bp = c.step("B'", div(mul(sym("L'"), sym("b_e")), sym("l_e")), g.Lp*be/le, "m", refCircle, "equivalent effective width", val("L'", g.Lp, "m"), vbe, vle)
+	g.Lp = c.eval("L'", fSegLp, "m", refCircle, "equivalent effective length", vA, vle, vbe)
+	g.Bp = c.eval("B'", fSegBp, "m", refCircle, "equivalent effective width", val("L'", g.Lp, "m"), vbe, vle)
 }
+
+// Formulas of the circular base, built once.
+var (
+	fCircD = trace.S("B")
+	fCircA = trace.Div(trace.Mul(trace.S("pi"), trace.Pow(trace.S("B"), trace.N(2))), trace.N(4))
+	fCircR = trace.Div(trace.S("B"), trace.N(2))
+	fChord = trace.Fn("sqrt", trace.Sub(trace.Pow(trace.S("R"), trace.N(2)), trace.Pow(trace.S("e"), trace.N(2))))
+	fSegA  = trace.Mul(trace.N(2), trace.Sub(trace.Mul(trace.Pow(trace.S("R"), trace.N(2)), trace.Fn("acos", trace.Div(trace.S("e"), trace.S("R")))), trace.Mul(trace.S("e"), fChord)))
+	fSegB  = trace.Mul(trace.N(2), trace.Sub(trace.S("R"), trace.S("e")))
+	fSegL  = trace.Mul(trace.N(2), fChord)
+	fSegLp = trace.Fn("sqrt", trace.Div(trace.Mul(trace.S("A'"), trace.S("l_e")), trace.S("b_e")))
+	fSegBp = trace.Div(trace.Mul(trace.S("L'"), trace.S("b_e")), trace.S("l_e"))
+	fThE   = trace.Fn("atan2", trace.Fn("abs", trace.Add(trace.Mul(trace.S("H_B_d"), trace.S("e_B")), trace.Mul(trace.S("H_L_d"), trace.S("e_L")))),
+		trace.Fn("abs", trace.Sub(trace.Mul(trace.S("H_L_d"), trace.S("e_B")), trace.Mul(trace.S("H_B_d"), trace.S("e_L")))))
+)
 
 // theta records the angle of H to the direction of L′ (EN 1997-1 D.4).
 func (c *calc) theta(g *geo, ld design.Load) {
 	vHB, vHL := val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF)
-	HB, HL := math.Abs(ld.HB), math.Abs(ld.HL)
 	note := "angle of H_d to the direction of L′"
 	switch {
 	case c.f.Shape == site.Circle && (g.eB != 0 || g.eL != 0):
 		// B′ lies along the resultant eccentricity
-		hb := math.Abs(ld.HB*g.eB + ld.HL*g.eL)
-		hl := math.Abs(ld.HL*g.eB - ld.HB*g.eL)
-		c.step("theta", fn("atan2", fn("abs", add(mul(sym("H_B_d"), sym("e_B")), mul(sym("H_L_d"), sym("e_L")))), fn("abs", sub(mul(sym("H_L_d"), sym("e_B")), mul(sym("H_B_d"), sym("e_L"))))),
-			math.Atan2(hb, hl), "deg", refD4, note+" (B′ along the eccentricity)", vHB, vHL, val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
-	case c.f.Shape != site.Circle && c.f.B-2*g.eB > c.f.L-2*g.eL:
-		c.step("theta", fThL, math.Atan2(HL, HB), "deg", refD4, note+" (B′ lies along L)", vHB, vHL)
+		c.eval("theta", fThE, "deg", refD4, note+" (B′ along the eccentricity)", vHB, vHL, val("e_B", g.eB, "m"), val("e_L", g.eL, "m"))
+	case g.swap:
+		c.eval("theta", fThL, "deg", refD4, note+" (B′ lies along L)", vHB, vHL)
 	default:
-		c.step("theta", fThB, math.Atan2(HB, HL), "deg", refD4, note, vHB, vHL)
+		c.eval("theta", fThB, "deg", refD4, note, vHB, vHL)
 	}
 }
 
@@ -418,41 +489,40 @@ func (c *calc) designSoil(i int, und bool, mat design.MaterialSet, lower bool) s
 		s.kPhi, s.kC, s.kCu, s.nPhi, s.nC, s.nCu = "phi'_2k", "c'_2k", "c_u_2k", "phi'_2", "c'_2", "c_u_2"
 	}
 	ln := c.lname[i]
-	red := 1.0
 	ref := refMat
 	note := "design value"
 	if s.local {
-		red, ref, note = 2.0/3, refLocal, "design value with Terzaghi's local-shear reduction"
+		ref, note = refLocal, "design value with Terzaghi's local-shear reduction"
 	}
 	if und {
 		c.take(s.kCu, l.Cu.V, "kPa", trace.Ref{}, "characteristic undrained strength of "+ln)
 		g := c.pfStep(2, gCu, mat.GammaCu, mat.Name)
-		f := soilForm(s.kCu, gCu, false, s.local)
-		s.cu = c.step(s.nCu, f, red*l.Cu.V/g, "kPa", ref, note, val(s.kCu, l.Cu.V, "kPa"), val(gCu, g, ""))
+		f := soilForm(s.kCu, gCu, false, s.local, false)
+		s.cu = c.eval(s.nCu, f, "kPa", ref, note, val(s.kCu, l.Cu.V, "kPa"), val(gCu, g, ""))
 		return s
 	}
 	phik := l.Phi.V
 	c.take(s.kPhi, phik, "deg", trace.Ref{}, "characteristic angle of shearing resistance of "+ln)
 	g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
-	phi := math.Atan(red * math.Tan(phik) / g)
-	f := soilForm(s.kPhi, gPhi, true, s.local)
-	if phi < phiMin {
-		phi, s.phiClamp = phiMin, true
-		f = fn("max", f, num(phiMin))
+	vk, vg := val(s.kPhi, phik, "deg"), val(gPhi, g, "")
+	f := soilForm(s.kPhi, gPhi, true, s.local, false)
+	if c.compute(s.nPhi, f, vk, vg) < phiMin {
+		s.phiClamp = true
+		f = soilForm(s.kPhi, gPhi, true, s.local, true)
 		note += "; φ′ ≈ 0 is replaced by 0.0001 rad so the factors take their φ′ → 0 limits"
 	}
-	s.phi = c.step(s.nPhi, f, phi, "deg", ref, note, val(s.kPhi, phik, "deg"), val(gPhi, g, ""))
+	s.phi = c.eval(s.nPhi, f, "deg", ref, note, vk, vg)
 	ck := l.C.Or(0)
 	c.take(s.kC, ck, "kPa", trace.Ref{}, "characteristic effective cohesion of "+ln)
 	gc := c.pfStep(1, gC, mat.GammaC, mat.Name)
-	fc := soilForm(s.kC, gC, false, s.local)
-	s.c = c.step(s.nC, fc, red*ck/gc, "kPa", ref, note, val(s.kC, ck, "kPa"), val(gC, gc, ""))
+	fc := soilForm(s.kC, gC, false, s.local, false)
+	s.c = c.eval(s.nC, fc, "kPa", ref, note, val(s.kC, ck, "kPa"), val(gC, gc, ""))
 	return s
 }
 
 // pfStep records a material partial factor once per case.
 func (c *calc) pfStep(k int, s string, v float64, set string) float64 {
-	if !c.pf[k] {
+	if !c.pf[k] && !c.dry {
 		c.pf[k] = true
 		what := [...]string{"on tan φ′", "on c′", "on c_u"}[k]
 		c.take(s, v, "", refA4, "partial factor "+what+" ("+set+")")

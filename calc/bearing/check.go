@@ -46,13 +46,20 @@ type calc struct {
 	// governing case's value, the one its working shows).
 	ksOut []caseValue
 	lname []string // layer names as printed
+	// dry: steps are computed, not recorded (the two-layer check's
+	// numbers, worked before it is known whether the check applies)
+	dry   bool
+	errAt string // where the trace's first error arose
 }
 
 // Check runs the bearing (and sliding) calculation of in: every design
 // load of the approach under each drainage condition that applies, with
 // the full working in Result.Trace. Input outside its valid range returns
-// a site.Errors list of *site.RangeError and *site.InputError; the
-// calculation itself never returns NaN or Inf.
+// a site.Errors list of *site.RangeError and *site.InputError; a step
+// whose formula cannot be evaluated with the values reached (NaN or Inf:
+// an action so large that a pressure overflows) returns the trace's error
+// (a *trace.DomainError) wrapped with the case it arose in, never a NaN
+// result.
 func Check(in Input) (*Result, error) {
 	opt, err := validate(in)
 	if err != nil {
@@ -63,6 +70,7 @@ func Check(in Input) (*Result, error) {
 	c.t.Steps = make([]trace.Step, 0, 32)
 	c.arena = make([]trace.Value, 0, 96)
 	c.common()
+	c.mark()
 	drains := c.drainages()
 	sl := c.slidingDrainages(drains)
 	// size the trace once: about 50 steps a bearing case (140 with a
@@ -79,20 +87,26 @@ func Check(in Input) (*Result, error) {
 	for _, ld := range loads {
 		for _, d := range drains {
 			c.bearingCase(ld, d)
+			c.mark()
 		}
 	}
 	if len(sl) > 0 {
 		for _, ld := range loads {
 			for _, d := range sl {
 				c.slideCase(ld, d)
+				c.mark()
 			}
 		}
+	}
+	if err := c.t.Err(); err != nil {
+		return nil, fmt.Errorf("bearing check of %s, %s: %w", footingName(in.Footing), c.errAt, err)
 	}
 	c.summarise()
 	c.r.MethodLine = opt.Method.Title()
 	if c.local {
 		c.r.MethodLine += " with Terzaghi's (1943) local-shear reduction"
 	}
+	c.r.Trace.Compact() // the buffers above were sized generously
 	return c.r, nil
 }
 
@@ -120,22 +134,74 @@ func newCalc(in Input, opt Options) *calc {
 	return c
 }
 
+func footingName(f site.Footing) string {
+	if f.Name == "" {
+		return "the footing"
+	}
+	return fmt.Sprintf("footing %q", f.Name)
+}
+
 func val(sym string, v float64, unit string) trace.Value {
 	return trace.Value{Symbol: sym, V: v, Unit: unit}
 }
 
-// step appends a step in the current case. The inputs are copied into an
-// arena so a step costs no allocation of its own.
-func (c *calc) step(sym string, f trace.Expr, v float64, unit string, ref trace.Ref, note string, in ...trace.Value) float64 {
+// eval records a formula step of the current case and returns its value:
+// f evaluated with the inputs by the trace's recorder (trace.Trace.Eval),
+// so the printed formula is the value's only definition. The inputs are
+// copied into an arena so a step costs no allocation of its own. In a dry
+// run (c.dry) the value is computed the same way and nothing is recorded.
+func (c *calc) eval(sym string, f trace.Expr, unit string, ref trace.Ref, note string, in ...trace.Value) float64 {
 	n := len(c.arena)
 	c.arena = append(c.arena, in...)
-	c.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: c.arena[n:len(c.arena):len(c.arena)], Value: v, Unit: unit, Ref: ref, Note: note, Case: c.cas})
+	s := trace.Step{Symbol: sym, Formula: f, Inputs: c.arena[n:len(c.arena):len(c.arena)], Unit: unit, Ref: ref, Note: note, Case: c.cas}
+	if c.dry {
+		v := c.t.Compute(s)
+		if v == v { // a failed step's inputs stay with its error
+			c.arena = c.arena[:n]
+		}
+		return v
+	}
+	return c.t.Eval(s)
+}
+
+// compute evaluates f with the inputs as eval would record it, without
+// recording: for a value the engine decides on before its step is printed
+// (which side is B′, whether φ′_d is clamped).
+func (c *calc) compute(sym string, f trace.Expr, in ...trace.Value) float64 {
+	dry := c.dry
+	c.dry = true
+	v := c.eval(sym, f, "", trace.Ref{}, "", in...)
+	c.dry = dry
 	return v
 }
 
-// take appends a value taken as given (no formula).
+// took records a step of kind k (trace.Given, Tabulated, Interpolated,
+// Solved, Summed) whose value v no formula gives, with the inputs it was
+// read or solved at.
+func (c *calc) took(k trace.Kind, sym string, v float64, unit string, ref trace.Ref, note string, in ...trace.Value) float64 {
+	if c.dry {
+		return v
+	}
+	n := len(c.arena)
+	c.arena = append(c.arena, in...)
+	return c.t.Take(trace.Step{Symbol: sym, Kind: k, Inputs: c.arena[n:len(c.arena):len(c.arena)], Value: v, Unit: unit, Ref: ref, Note: note, Case: c.cas})
+}
+
+// take records a given value (an input, a default, a value the method
+// states).
 func (c *calc) take(sym string, v float64, unit string, ref trace.Ref, note string) float64 {
-	return c.step(sym, nil, v, unit, ref, note)
+	return c.took(trace.Given, sym, v, unit, ref, note)
+}
+
+// mark notes where the trace's first error arose (the case being worked,
+// or the common steps), for the error Check returns.
+func (c *calc) mark() {
+	if c.errAt == "" && c.t.Err() != nil {
+		c.errAt = c.cas
+		if c.errAt == "" {
+			c.errAt = "the common steps"
+		}
+	}
 }
 
 // warnOnce raises a caution once per calculation (the first case that
@@ -151,6 +217,9 @@ func (c *calc) warnOnce(code string, sev trace.Severity, ref trace.Ref, msg stri
 }
 
 func (c *calc) warn(code string, sev trace.Severity, ref trace.Ref, msg string, vals ...trace.Value) {
+	if c.dry {
+		return
+	}
 	c.t.Warn(trace.Caution{Code: code, Severity: sev, Message: msg, Values: vals, Ref: ref, Case: c.cas})
 }
 
@@ -232,17 +301,17 @@ func (c *calc) overburden() {
 		c.warnOnce("water-above-ground", trace.SevCaution, trace.Ref{},
 			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; the actions must account for the water on the footing and the uplift on its base.",
 			val("h_w0", h0, "m"))
-		f = mul(sym("gamma_w"), sym("h_w0"))
+		f = fFlood
 		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
 		parts = append(parts, "0: free water above ground level")
 	}
 	for k, st := range g.Strata(D) {
 		gs, hs := fmt.Sprintf("gamma_s%d", k+1), fmt.Sprintf("h_s%d", k+1)
-		term := mul(sym(gs), sym(hs))
+		term := trace.Mul(trace.S(gs), trace.S(hs))
 		if f == nil {
 			f = term
 		} else {
-			f = add(f, term)
+			f = trace.Add(f, term)
 		}
 		in = append(in, val(gs, st.Gamma, "kN/m3"), val(hs, st.H(), "m"))
 		w := ""
@@ -256,8 +325,11 @@ func (c *calc) overburden() {
 	if len(parts) > 0 {
 		note += "; strata " + strings.Join(parts, "; ")
 	}
-	c.sv0 = g.SigmaV(D)
-	c.step("sigma_v0", f, c.sv0, "kPa", ref, note, in...)
+	if f == nil {
+		c.sv0 = c.take("sigma_v0", 0, "kPa", ref, note)
+	} else {
+		c.sv0 = c.eval("sigma_v0", f, "kPa", ref, note, in...)
+	}
 	if c.g.Water.Set {
 		c.take("z_w", c.zw, "m", trace.Ref{}, "depth of the groundwater table")
 		gwNote := "unit weight of water, given"
@@ -266,15 +338,13 @@ func (c *calc) overburden() {
 		}
 		c.take("gamma_w", g.Gw(), "kN/m3", trace.Ref{}, gwNote)
 	}
-	c.u0 = g.PoreP(D)
 	if c.zw < D {
-		c.step("u_0", mul(sym("gamma_w"), sub(sym("D"), sym("z_w"))), c.u0, "kPa", trace.Ref{}, "pore pressure at the base",
+		c.u0 = c.eval("u_0", fU0, "kPa", trace.Ref{}, "pore pressure at the base",
 			val("gamma_w", g.Gw(), "kN/m3"), val("D", D, "m"), val("z_w", c.zw, "m"))
 	} else {
-		c.take("u_0", 0, "kPa", trace.Ref{}, "pore pressure at the base (water table at or below it)")
+		c.u0 = c.take("u_0", 0, "kPa", trace.Ref{}, "pore pressure at the base (water table at or below it)")
 	}
-	c.sv0e = c.sv0 - c.u0
-	c.step("sigma'_v0", sub(sym("sigma_v0"), sym("u_0")), c.sv0e, "kPa", trace.Ref{}, "effective vertical stress at the base",
+	c.sv0e = c.eval("sigma'_v0", fSv0e, "kPa", trace.Ref{}, "effective vertical stress at the base",
 		val("sigma_v0", c.sv0, "kPa"), val("u_0", c.u0, "kPa"))
 }
 
@@ -283,27 +353,53 @@ func (c *calc) overburden() {
 // water-table cases (Das 2011): water at or above the base, γ′ = γ_sat −
 // γ_w; within b below it, γ′ + (d/b)(γ − γ′); deeper, γ.
 func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, zs string, b float64, bs string) float64 {
-	gw := c.g.Gw()
-	gam, gsat := l.Gamma, l.GammaSatOr()
-	vg, vgs, vw := val(gs, gam, "kN/m3"), val(gss, gsat, "kN/m3"), val("gamma_w", gw, "kN/m3")
+	fw := waterForms(gs, gss, zs, bs)
+	vg, vgs, vw := val(gs, l.Gamma, "kN/m3"), val(gss, l.GammaSatOr(), "kN/m3"), val("gamma_w", c.g.Gw(), "kN/m3")
 	switch {
 	case c.zw <= z:
 		if c.cas == "" {
 			c.warn("water-above-base", trace.SevNote, refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
 		}
-		return c.step(name, sub(sym(gss), sym("gamma_w")), gsat-gw, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
+		return c.eval(name, fw.sub, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
 	case c.zw < z+b:
-		d := c.zw - z
 		if c.cas == "" {
 			c.warn("water-within-B", trace.SevNote, refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
 		}
-		sub1 := sub(sym(gss), sym("gamma_w"))
-		f := add(sub1, mul(div(sub(sym("z_w"), sym(zs)), sym(bs)), sub(sym(gs), sub1)))
-		v := gsat - gw + d/b*(gam-(gsat-gw))
-		return c.step(name, f, v, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
+		return c.eval(name, fw.within, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
 	}
-	return c.step(name, sym(gs), gam, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
+	return c.eval(name, fw.bulk, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
 }
+
+// Formulas of the overburden, built once.
+var (
+	fFlood = trace.Mul(trace.S("gamma_w"), trace.S("h_w0"))
+	fU0    = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("D"), trace.S("z_w")))
+	fSv0e  = trace.Sub(trace.S("sigma_v0"), trace.S("u_0"))
+)
+
+// wForms are the three unit-weight formulas of unitWeight for one set of
+// symbols (bulk γ, saturated γ, depth of the base, width).
+type wForms struct{ sub, within, bulk trace.Expr }
+
+// The two symbol sets unitWeight is called with: the founding layer at
+// the base and the lower layer of a two-layer check at its top.
+var wFormsBy = mkWaterForms()
+
+func mkWaterForms() map[[4]string]*wForms {
+	m := map[[4]string]*wForms{}
+	for _, k := range [][4]string{{"gamma", "gamma_sat", "D", "B"}, {"gamma_l", "gamma_sat_l", "z_2", "B'"}} {
+		gs, gss, zs, bs := k[0], k[1], k[2], k[3]
+		sub := trace.Sub(trace.S(gss), trace.S("gamma_w"))
+		m[k] = &wForms{
+			sub:    sub,
+			within: trace.Add(sub, trace.Mul(trace.Div(trace.Sub(trace.S("z_w"), trace.S(zs)), trace.S(bs)), trace.Sub(trace.S(gs), sub))),
+			bulk:   trace.S(gs),
+		}
+	}
+	return m
+}
+
+func waterForms(gs, gss, zs, bs string) *wForms { return wFormsBy[[4]string{gs, gss, zs, bs}] }
 
 // caseValue is a value recorded for one case.
 type caseValue struct {

@@ -16,7 +16,23 @@
 // no), Interface (base friction δ, and whether water or air can reach the
 // interface), SpreadTan, and optional overrides Ks and CaRatio. All values
 // are SI. Out-of-range input returns site.Errors of *site.RangeError and
-// *site.InputError; the engine does no I/O and never returns NaN or Inf.
+// *site.InputError; the engine does no I/O and never returns NaN or Inf: a
+// step whose formula cannot be evaluated with the values reached (an
+// action so large that a pressure overflows) is the trace's
+// *trace.DomainError, returned wrapped with the case it arose in.
+//
+// # Working
+//
+// Each step's value is its printed formula evaluated by the trace's
+// recorder (trace.Trace.Eval): the formula trees of forms.go and the
+// package-level trees beside each check are the only definition of the
+// numbers, and Factors, CaRatio and the strip capacities that pick the
+// weaker layer evaluate the same trees. A step no formula gives says its
+// kind (trace.Trace.Take): given (an input, a default, a factor the method
+// takes as 1), interpolated (Kumbhojkar's N_γ table, BR 470's K_p·tanδ).
+// The two-layer check works its numbers dry (computed, not recorded)
+// through the same steps to decide whether the lower layer is weaker,
+// then records them.
 //
 // # Cases
 //
@@ -161,26 +177,13 @@
 // characteristic δ_k, δ_d = atan(tan δ_k/γ_φ′); undrained R_d = A′c_u,d/γ_Rh, not more than 0.4 V_d unless
 // Interface.Sealed (6.5.3(12)P). Passive resistance is ignored.
 //
-// # Summary values (Result.Values, in this order)
+// # Summary values
 //
-//	R_d      design bearing resistance of the governing case (kN; kN/m strip)
-//	util     its utilisation V_d/R_d
-//	q_Ed     V_d/A′ (kPa)
-//	q_Rd     R_d/A′ (kPa)
-//	q_ult    ultimate bearing pressure used (two-layer: the lesser value) (kPa)
-//	V_d      design vertical action of the governing bearing case (kN)
-//	H_d      design horizontal action, resultant, of the governing bearing case (kN)
-//	e_B      eccentricity along B (m)
-//	e_L      eccentricity along L (m) — not for a strip
-//	B'       effective width (m)
-//	L'       effective length (m) — not for a strip
-//	A'       effective area (m2; m2/m strip)
-//	util_u   highest undrained utilisation — when an undrained case was checked
-//	util_dr  highest drained utilisation — when a drained case was checked
-//	H_d_h    design horizontal action of the governing sliding case — when sliding was checked
-//	V_d_h    its vertical action: V′_d drained (uplift deducted), V_d undrained
-//	R_h_d    design sliding resistance of the governing sliding case — when sliding was checked
-//	util_h   its utilisation H_d/R_h,d — when sliding was checked
+// Result.Values holds the symbols of Spec.Results, in that order, with
+// their units and meanings there: R_d and util of the governing case,
+// its pressures, actions and effective geometry (no e_L, L' for a
+// strip), util_u and util_dr when such cases were checked, and the _h
+// values of the governing sliding case when sliding was checked.
 //
 // # Cautions (trace.Caution.Code)
 //

@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/bearing"
 	"github.com/plinth-calc/plinth/calc/design"
 	"github.com/plinth-calc/plinth/calc/site"
+	"github.com/plinth-calc/plinth/calc/trace"
 )
 
 // params lists the parameter named by each error in err.
@@ -128,5 +129,33 @@ func TestUplift(t *testing.T) {
 	r := check(t, "uplift", in)
 	if !hasCaution(r, "uplift") {
 		t.Error("no uplift caution")
+	}
+}
+
+// An action so large that a formula overflows (q_Ed = V_d/A′ = 1.35e308
+// N/m over 0.5 m: +Inf) is the trace's domain error, returned with the
+// case it arose in: never a result holding NaN or Inf.
+func TestFormulaOutOfDomain(t *testing.T) {
+	in := bearing.Input{
+		Ground:  oneLayer(site.Layer{Top: 0, Gamma: 18e3, Phi: site.Some(30 * deg)}),
+		Footing: site.Footing{Name: "S1", Shape: site.Strip, B: 0.5, D: 0.5},
+		Actions: []site.Action{{Name: "G", V: 1e308}},
+		Options: bearing.Options{Drainage: bearing.Drained, Sliding: bearing.No},
+	}
+	res, err := bearing.Check(in)
+	if err == nil {
+		t.Fatalf("no error; result %+v", res.Cases)
+	}
+	var de *trace.DomainError
+	if !errors.As(err, &de) || de.Symbol != "q_Ed" || !math.IsInf(de.Value, 1) {
+		t.Fatalf("error %v (%T), want a DomainError of q_Ed = +Inf", err, err)
+	}
+	for _, want := range []string{`footing "S1"`, "DA1-C1", "drained", "q_Ed"} {
+		if !strings.Contains(err.Error(), want) {
+			t.Errorf("error %q lacks %q", err, want)
+		}
+	}
+	if res != nil {
+		t.Errorf("a result beside the error: %+v", res)
 	}
 }

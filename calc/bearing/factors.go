@@ -1,6 +1,10 @@
 package bearing
 
-import "math"
+import (
+	"math"
+
+	"github.com/plinth-calc/plinth/calc/trace"
+)
 
 // BearingFactors are the bearing capacity factors of one method at one φ′.
 type BearingFactors struct {
@@ -19,33 +23,46 @@ type BearingFactors struct {
 //   - Terzaghi: Terzaghi (1943): N_q = a²/(2cos²(45° + φ′/2)),
 //     a = e^((3π/4 − φ′/2) tanφ′); N_γ of Kumbhojkar (1993) as tabulated
 //     by Das (2011) Table 3.1, interpolated linearly.
+//
+// The values come from the formula trees the working prints (forms.go),
+// evaluated by trace.Eval, so the factors have one definition; outside
+// the range, or on an argument that is not a number, a factor is NaN.
 func Factors(m Method, phi float64) BearingFactors {
-	t := math.Tan(phi)
-	var nq float64
-	if m == Terzaghi {
-		nq = math.Exp(2*(0.75*math.Pi-phi/2)*t) / (2 * math.Pow(math.Cos(math.Pi/4+phi/2), 2))
-	} else {
-		nq = math.Exp(math.Pi*t) * math.Pow(math.Tan(math.Pi/4+phi/2), 2)
-	}
-	var nc float64
-	if phi < 1e-9 {
-		nc = math.Pi + 2
-		if m == Terzaghi {
-			nc = 1.5*math.Pi + 1
+	f := fMain
+	n := &f.n
+	ev := func(e trace.Expr, in ...trace.Value) float64 {
+		v, err := trace.Eval(e, in)
+		if err != nil {
+			return math.NaN()
 		}
-	} else {
-		nc = (nq - 1) / t
+		return v
+	}
+	vphi := trace.Value{Symbol: n.phi, V: phi}
+	fNq := f.NqE
+	if m == Terzaghi {
+		fNq = f.NqT
+	}
+	nq := ev(fNq, vphi)
+	vNq := trace.Value{Symbol: n.Nq, V: nq}
+	var nc float64
+	switch {
+	case phi < 1e-9 && m == Terzaghi:
+		nc = ev(f.NcT0)
+	case phi < 1e-9:
+		nc = ev(f.NcU)
+	default:
+		nc = ev(f.NcE, vNq, vphi)
 	}
 	var ng float64
 	switch m {
 	case EC7:
-		ng = 2 * (nq - 1) * t
+		ng = ev(f.NgE, vNq, vphi)
 	case Vesic:
-		ng = 2 * (nq + 1) * t
+		ng = ev(f.NgV, vNq, vphi)
 	case Meyerhof:
-		ng = (nq - 1) * math.Tan(1.4*phi)
+		ng = ev(f.NgM, vNq, vphi)
 	case Hansen:
-		ng = 1.5 * (nq - 1) * t
+		ng = ev(f.NgH, vNq, vphi)
 	case Terzaghi:
 		ng = TerzaghiNgamma(phi)
 	}

@@ -6,19 +6,6 @@ import "github.com/plinth-calc/plinth/calc/trace"
 // the lower layer of a two-layer check (lower, suffix _2) and the
 // load-spread check of the lower layer (spread, suffix _s).
 
-var (
-	sym = trace.S
-	num = trace.N
-	add = trace.Add
-	sub = trace.Sub
-	mul = trace.Mul
-	div = trace.Div
-	pow = trace.Pow
-	fn  = trace.Fn
-	deg = trace.Deg
-	neg = trace.Negate
-)
-
 type names struct {
 	phi, c, cu, gam, q, qe string // φ, c′, c_u, γ (of the N_γ term), q (total), q′ (effective)
 	B, L, A                string // effective width, length, area
@@ -67,92 +54,92 @@ type forms struct {
 type expr = trace.Expr
 
 func mkForms(n names) *forms {
-	phi, c, cu, gam, q, qe := sym(n.phi), sym(n.c), sym(n.cu), sym(n.gam), sym(n.q), sym(n.qe)
-	B, L, A := sym(n.B), sym(n.L), sym(n.A)
-	Nq, Nc, Ng := sym(n.Nq), sym(n.Nc), sym(n.Ng)
-	alpha, H, V := sym("alpha"), sym("H_d"), sym("V_d")
-	tan, sin := func(x expr) expr { return fn("tan", x) }, func(x expr) expr { return fn("sin", x) }
-	one, two := num(1), num(2)
-	BL := div(B, L)
-	mx0 := func(x expr) expr { return fn("max", num(0), x) }
+	phi, c, cu, gam, q, qe := trace.S(n.phi), trace.S(n.c), trace.S(n.cu), trace.S(n.gam), trace.S(n.q), trace.S(n.qe)
+	B, L, A := trace.S(n.B), trace.S(n.L), trace.S(n.A)
+	Nq, Nc, Ng := trace.S(n.Nq), trace.S(n.Nc), trace.S(n.Ng)
+	alpha, H, V := trace.S("alpha"), trace.S("H_d"), trace.S("V_d")
+	tan, sin := func(x expr) expr { return trace.Fn("tan", x) }, func(x expr) expr { return trace.Fn("sin", x) }
+	one, two := trace.N(1), trace.N(2)
+	BL := trace.Div(B, L)
+	mx0 := func(x expr) expr { return trace.Fn("max", trace.N(0), x) }
 	f := &forms{n: n}
 	// Annex D, D.4
-	f.NqE = mul(fn("exp", mul(sym("pi"), tan(phi))), pow(tan(add(deg(45), div(phi, two))), two))
-	f.NcE = mul(sub(Nq, one), fn("cot", phi))
-	f.NgE = mul(two, sub(Nq, one), tan(phi))
-	f.bqE = pow(sub(one, mul(alpha, tan(phi))), two)
-	f.bcE = sub(sym(n.bq), div(sub(one, sym(n.bq)), mul(Nc, tan(phi))))
-	f.sqE = add(one, mul(BL, sin(phi)))
-	f.sgE = sub(one, mul(num(0.3), BL))
-	f.scE = div(sub(mul(sym(n.sq), Nq), one), sub(Nq, one))
-	f.mB = div(add(two, BL), add(one, BL))
-	f.mL = div(add(two, div(L, B)), add(one, div(L, B)))
-	f.m = add(mul(sym(n.mL), pow(fn("cos", sym("theta")), two)), mul(sym(n.mB), pow(sin(sym("theta")), two)))
-	base := sub(one, div(H, add(V, mul(A, c, fn("cot", phi)))))
-	f.iqE = pow(mx0(base), sym(n.m))
-	f.igE = pow(mx0(base), add(sym(n.m), one))
-	f.icE = mx0(sub(sym(n.iq), div(sub(one, sym(n.iq)), mul(Nc, tan(phi)))))
-	f.qultE = add(mul(c, Nc, sym(n.bc), sym(n.sc), sym(n.ic)), mul(qe, Nq, sym(n.bq), sym(n.sq), sym(n.iq)),
-		mul(num(0.5), gam, B, Ng, sym(n.bg), sym(n.sg), sym(n.ig)))
+	f.NqE = trace.Mul(trace.Fn("exp", trace.Mul(trace.S("pi"), tan(phi))), trace.Pow(tan(trace.Add(trace.Deg(45), trace.Div(phi, two))), two))
+	f.NcE = trace.Mul(trace.Sub(Nq, one), trace.Fn("cot", phi))
+	f.NgE = trace.Mul(two, trace.Sub(Nq, one), tan(phi))
+	f.bqE = trace.Pow(trace.Sub(one, trace.Mul(alpha, tan(phi))), two)
+	f.bcE = trace.Sub(trace.S(n.bq), trace.Div(trace.Sub(one, trace.S(n.bq)), trace.Mul(Nc, tan(phi))))
+	f.sqE = trace.Add(one, trace.Mul(BL, sin(phi)))
+	f.sgE = trace.Sub(one, trace.Mul(trace.N(0.3), BL))
+	f.scE = trace.Div(trace.Sub(trace.Mul(trace.S(n.sq), Nq), one), trace.Sub(Nq, one))
+	f.mB = trace.Div(trace.Add(two, BL), trace.Add(one, BL))
+	f.mL = trace.Div(trace.Add(two, trace.Div(L, B)), trace.Add(one, trace.Div(L, B)))
+	f.m = trace.Add(trace.Mul(trace.S(n.mL), trace.Pow(trace.Fn("cos", trace.S("theta")), two)), trace.Mul(trace.S(n.mB), trace.Pow(sin(trace.S("theta")), two)))
+	base := trace.Sub(one, trace.Div(H, trace.Add(V, trace.Mul(A, c, trace.Fn("cot", phi)))))
+	f.iqE = trace.Pow(mx0(base), trace.S(n.m))
+	f.igE = trace.Pow(mx0(base), trace.Add(trace.S(n.m), one))
+	f.icE = mx0(trace.Sub(trace.S(n.iq), trace.Div(trace.Sub(one, trace.S(n.iq)), trace.Mul(Nc, tan(phi)))))
+	f.qultE = trace.Add(trace.Mul(c, Nc, trace.S(n.bc), trace.S(n.sc), trace.S(n.ic)), trace.Mul(qe, Nq, trace.S(n.bq), trace.S(n.sq), trace.S(n.iq)),
+		trace.Mul(trace.N(0.5), gam, B, Ng, trace.S(n.bg), trace.S(n.sg), trace.S(n.ig)))
 	// Annex D, D.3
-	pi2 := add(sym("pi"), two)
+	pi2 := trace.Add(trace.S("pi"), two)
 	f.NcU = pi2
-	f.bcU = sub(one, div(mul(two, alpha), pi2))
-	f.scU = add(one, mul(num(0.2), BL))
-	f.icU = mul(num(0.5), add(one, fn("sqrt", mx0(sub(one, div(H, mul(A, cu)))))))
-	f.qultU = add(mul(pi2, cu, sym(n.bc), sym(n.sc), sym(n.ic)), q)
+	f.bcU = trace.Sub(one, trace.Div(trace.Mul(two, alpha), pi2))
+	f.scU = trace.Add(one, trace.Mul(trace.N(0.2), BL))
+	f.icU = trace.Mul(trace.N(0.5), trace.Add(one, trace.Fn("sqrt", mx0(trace.Sub(one, trace.Div(H, trace.Mul(A, cu)))))))
+	f.qultU = trace.Add(trace.Mul(pi2, cu, trace.S(n.bc), trace.S(n.sc), trace.S(n.ic)), q)
 	// Meyerhof (1963), Bowles (1996) Tables 4-1, 4-5a
-	Kp := sym(n.Kp)
-	Df, Bf := sym("D"), sym("B")
-	beta := sym("beta")
-	f.Kp = pow(tan(add(deg(45), div(phi, two))), two)
-	f.NgM = mul(sub(Nq, one), tan(mul(num(1.4), phi)))
-	f.scM = add(one, mul(num(0.2), Kp, BL))
-	f.sqM = add(one, mul(num(0.1), Kp, BL))
-	f.dcM = add(one, mul(num(0.2), fn("sqrt", Kp), div(Df, Bf)))
-	f.dqM = add(one, mul(num(0.1), fn("sqrt", Kp), div(Df, Bf)))
-	f.icM = pow(sub(one, div(beta, deg(90))), two)
-	f.igM = pow(mx0(sub(one, div(beta, phi))), two)
-	f.qultM = add(mul(c, Nc, sym(n.sc), sym(n.dc), sym(n.ic)), mul(qe, Nq, sym(n.sq), sym(n.dq), sym(n.iq)),
-		mul(num(0.5), gam, B, Ng, sym(n.sg), sym(n.dg), sym(n.ig)))
+	Kp := trace.S(n.Kp)
+	Df, Bf := trace.S("D"), trace.S("B")
+	beta := trace.S("beta")
+	f.Kp = trace.Pow(tan(trace.Add(trace.Deg(45), trace.Div(phi, two))), two)
+	f.NgM = trace.Mul(trace.Sub(Nq, one), tan(trace.Mul(trace.N(1.4), phi)))
+	f.scM = trace.Add(one, trace.Mul(trace.N(0.2), Kp, BL))
+	f.sqM = trace.Add(one, trace.Mul(trace.N(0.1), Kp, BL))
+	f.dcM = trace.Add(one, trace.Mul(trace.N(0.2), trace.Fn("sqrt", Kp), trace.Div(Df, Bf)))
+	f.dqM = trace.Add(one, trace.Mul(trace.N(0.1), trace.Fn("sqrt", Kp), trace.Div(Df, Bf)))
+	f.icM = trace.Pow(trace.Sub(one, trace.Div(beta, trace.Deg(90))), two)
+	f.igM = trace.Pow(mx0(trace.Sub(one, trace.Div(beta, phi))), two)
+	f.qultM = trace.Add(trace.Mul(c, Nc, trace.S(n.sc), trace.S(n.dc), trace.S(n.ic)), trace.Mul(qe, Nq, trace.S(n.sq), trace.S(n.dq), trace.S(n.iq)),
+		trace.Mul(trace.N(0.5), gam, B, Ng, trace.S(n.sg), trace.S(n.dg), trace.S(n.ig)))
 	f.scMU = f.scU
-	f.dcMU = add(one, mul(num(0.2), div(Df, Bf)))
-	f.qultMU = add(mul(cu, Nc, sym(n.sc), sym(n.dc), sym(n.ic)), q)
+	f.dcMU = trace.Add(one, trace.Mul(trace.N(0.2), trace.Div(Df, Bf)))
+	f.qultMU = trace.Add(trace.Mul(cu, Nc, trace.S(n.sc), trace.S(n.dc), trace.S(n.ic)), q)
 	// Hansen (1970), Bowles (1996) Tables 4-1, 4-5a, 4-5b
-	k := sym("k")
-	f.NgH = mul(num(1.5), sub(Nq, one), tan(phi))
-	f.scH = add(one, mul(div(Nq, Nc), BL))
-	f.sqH = add(one, mul(BL, sin(phi)))
-	f.sgH = fn("max", num(0.6), sub(one, mul(num(0.4), BL)))
-	f.dcH = add(one, mul(num(0.4), k))
-	f.dqH = add(one, mul(two, tan(phi), pow(sub(one, sin(phi)), two), k))
-	f.iqH = pow(mx0(sub(one, div(mul(num(0.5), H), add(V, mul(A, c, fn("cot", phi)))))), num(5))
-	f.igH = pow(mx0(sub(one, div(mul(sub(num(0.7), div(alpha, deg(450))), H), add(V, mul(A, c, fn("cot", phi)))))), num(5))
-	f.icH = mx0(sub(sym(n.iq), div(sub(one, sym(n.iq)), sub(Nq, one))))
-	f.bcH = sub(one, div(alpha, deg(147)))
-	f.bqH = fn("exp", neg(mul(two, alpha, tan(phi))))
-	f.bgH = fn("exp", neg(mul(num(2.7), alpha, tan(phi))))
-	f.qultH = add(mul(c, Nc, sym(n.sc), sym(n.dc), sym(n.ic), sym(n.bc)), mul(qe, Nq, sym(n.sq), sym(n.dq), sym(n.iq), sym(n.bq)),
-		mul(num(0.5), gam, B, Ng, sym(n.sg), sym(n.dg), sym(n.ig), sym(n.bg)))
-	f.s1cH = mul(num(0.2), BL)
-	f.d1cH = mul(num(0.4), k)
-	f.i1cH = sub(num(0.5), mul(num(0.5), fn("sqrt", mx0(sub(one, div(H, mul(A, cu)))))))
-	f.b1cH = div(alpha, deg(147))
-	f.qultHU = add(mul(pi2, cu, sub(sub(add(one, sym(n.s1c), sym(n.d1c)), sym(n.i1c)), sym(n.b1c))), q)
-	f.NgV = mul(two, add(Nq, one), tan(phi))
-	f.sqV = add(one, mul(BL, tan(phi)))
+	k := trace.S("k")
+	f.NgH = trace.Mul(trace.N(1.5), trace.Sub(Nq, one), tan(phi))
+	f.scH = trace.Add(one, trace.Mul(trace.Div(Nq, Nc), BL))
+	f.sqH = trace.Add(one, trace.Mul(BL, sin(phi)))
+	f.sgH = trace.Fn("max", trace.N(0.6), trace.Sub(one, trace.Mul(trace.N(0.4), BL)))
+	f.dcH = trace.Add(one, trace.Mul(trace.N(0.4), k))
+	f.dqH = trace.Add(one, trace.Mul(two, tan(phi), trace.Pow(trace.Sub(one, sin(phi)), two), k))
+	f.iqH = trace.Pow(mx0(trace.Sub(one, trace.Div(trace.Mul(trace.N(0.5), H), trace.Add(V, trace.Mul(A, c, trace.Fn("cot", phi)))))), trace.N(5))
+	f.igH = trace.Pow(mx0(trace.Sub(one, trace.Div(trace.Mul(trace.Sub(trace.N(0.7), trace.Div(alpha, trace.Deg(450))), H), trace.Add(V, trace.Mul(A, c, trace.Fn("cot", phi)))))), trace.N(5))
+	f.icH = mx0(trace.Sub(trace.S(n.iq), trace.Div(trace.Sub(one, trace.S(n.iq)), trace.Sub(Nq, one))))
+	f.bcH = trace.Sub(one, trace.Div(alpha, trace.Deg(147)))
+	f.bqH = trace.Fn("exp", trace.Negate(trace.Mul(two, alpha, tan(phi))))
+	f.bgH = trace.Fn("exp", trace.Negate(trace.Mul(trace.N(2.7), alpha, tan(phi))))
+	f.qultH = trace.Add(trace.Mul(c, Nc, trace.S(n.sc), trace.S(n.dc), trace.S(n.ic), trace.S(n.bc)), trace.Mul(qe, Nq, trace.S(n.sq), trace.S(n.dq), trace.S(n.iq), trace.S(n.bq)),
+		trace.Mul(trace.N(0.5), gam, B, Ng, trace.S(n.sg), trace.S(n.dg), trace.S(n.ig), trace.S(n.bg)))
+	f.s1cH = trace.Mul(trace.N(0.2), BL)
+	f.d1cH = trace.Mul(trace.N(0.4), k)
+	f.i1cH = trace.Sub(trace.N(0.5), trace.Mul(trace.N(0.5), trace.Fn("sqrt", mx0(trace.Sub(one, trace.Div(H, trace.Mul(A, cu)))))))
+	f.b1cH = trace.Div(alpha, trace.Deg(147))
+	f.qultHU = trace.Add(trace.Mul(pi2, cu, trace.Sub(trace.Sub(trace.Add(one, trace.S(n.s1c), trace.S(n.d1c)), trace.S(n.i1c)), trace.S(n.b1c))), q)
+	f.NgV = trace.Mul(two, trace.Add(Nq, one), tan(phi))
+	f.sqV = trace.Add(one, trace.Mul(BL, tan(phi)))
 	f.icV = f.icH
-	f.scVU = add(one, div(BL, pi2))
-	f.icVU = mx0(sub(one, div(mul(sym(n.m), H), mul(A, cu, Nc))))
-	f.qultVU = add(mul(cu, Nc, sym(n.sc), sym(n.dc), sym(n.ic), sym(n.bc)), q)
+	f.scVU = trace.Add(one, trace.Div(BL, pi2))
+	f.icVU = mx0(trace.Sub(one, trace.Div(trace.Mul(trace.S(n.m), H), trace.Mul(A, cu, Nc))))
+	f.qultVU = trace.Add(trace.Mul(cu, Nc, trace.S(n.sc), trace.S(n.dc), trace.S(n.ic), trace.S(n.bc)), q)
 	// Terzaghi (1943)
-	f.NqT = div(fn("exp", mul(two, sub(mul(num(0.75), sym("pi")), div(phi, two)), tan(phi))),
-		mul(two, pow(fn("cos", add(deg(45), div(phi, two))), two)))
-	f.NcT0 = add(mul(num(1.5), sym("pi")), one)
-	f.scT = add(one, mul(num(0.3), BL))
-	f.sgT = sub(one, mul(num(0.2), BL))
-	f.qultT = add(mul(c, Nc, sym(n.sc), sym(n.ic)), mul(qe, Nq, sym(n.iq)), mul(num(0.5), gam, B, Ng, sym(n.sg), sym(n.ig)))
-	f.qultTU = add(mul(cu, Nc, sym(n.sc), sym(n.ic)), q)
+	f.NqT = trace.Div(trace.Fn("exp", trace.Mul(two, trace.Sub(trace.Mul(trace.N(0.75), trace.S("pi")), trace.Div(phi, two)), tan(phi))),
+		trace.Mul(two, trace.Pow(trace.Fn("cos", trace.Add(trace.Deg(45), trace.Div(phi, two))), two)))
+	f.NcT0 = trace.Add(trace.Mul(trace.N(1.5), trace.S("pi")), one)
+	f.scT = trace.Add(one, trace.Mul(trace.N(0.3), BL))
+	f.sgT = trace.Sub(one, trace.Mul(trace.N(0.2), BL))
+	f.qultT = trace.Add(trace.Mul(c, Nc, trace.S(n.sc), trace.S(n.ic)), trace.Mul(qe, Nq, trace.S(n.iq)), trace.Mul(trace.N(0.5), gam, B, Ng, trace.S(n.sg), trace.S(n.ig)))
+	f.qultTU = trace.Add(trace.Mul(cu, Nc, trace.S(n.sc), trace.S(n.ic)), q)
 	return f
 }
 

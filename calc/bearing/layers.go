@@ -17,26 +17,24 @@ func undrainedIn(l site.Layer, d Drainage) bool {
 
 // stripQ returns a layer's surface strip capacity with characteristic
 // parameters, the measure Meyerhof & Hanna (1978) compare layers by:
-// q = c N_c + ½ γ B N_γ (undrained: N_c c_u). ok is false when the layer
-// lacks the parameter the case needs.
+// q = c N_c + ½ γ B N_γ (undrained: N_c c_u), by the formulas of the
+// two-layer check's q_1. ok is false when the layer lacks the parameter
+// the case needs.
 func (c *calc) stripQ(i int, d Drainage) (float64, bool) {
 	l := c.g.Layers[i]
+	m := c.opt.Method
 	if undrainedIn(l, d) {
-		nc := math.Pi + 2
-		if c.opt.Method == Terzaghi {
-			nc = 1.5*math.Pi + 1
-		}
-		return nc * l.Cu.V, true
+		return c.compute("q", fQ1U[b2i(m == Terzaghi)], val("c_u_d", l.Cu.V, "kPa")), true
 	}
 	if !l.Phi.Set {
 		return 0, false
 	}
-	fa := Factors(c.opt.Method, l.Phi.V)
+	fa := Factors(m, l.Phi.V)
 	gam := l.Gamma
 	if c.zw <= l.Top {
-		gam = l.GammaSatOr() - c.g.Gw()
+		gam = c.compute("gamma'", wFormsBy[[4]string{"gamma", "gamma_sat", "D", "B"}].sub, val("gamma_sat", l.GammaSatOr(), "kN/m3"), val("gamma_w", c.g.Gw(), "kN/m3"))
 	}
-	return l.C.Or(0)*fa.Nc + 0.5*gam*c.f.B*fa.Ngamma, true
+	return c.compute("q", fQ1, val("c'_d", l.C.Or(0), "kPa"), val("N_c", fa.Nc, ""), val("gamma_1", gam, "kN/m3"), val("B'", c.f.B, "m"), val("N_gamma", fa.Ngamma, "")), true
 }
 
 // layers applies plinth's governing-layer rule to the zone from the base
@@ -74,7 +72,7 @@ func (c *calc) layers() {
 			if !ok {
 				continue
 			}
-			if r := q2 / q1; r < 1 && r < bestR {
+			if r := c.compute("r_q", fRq, val("q_2", q2, "kPa"), val("q_1", q1, "kPa")); r < 1 && r < bestR {
 				best, bestR = i, r
 			}
 		}

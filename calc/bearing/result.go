@@ -94,11 +94,4 @@ type Result struct {
 }
 
 // Value returns the summary value named sym.
-func (r *Result) Value(sym string) (trace.Value, bool) {
-	for _, v := range r.Values {
-		if v.Symbol == sym {
-			return v, true
-		}
-	}
-	return trace.Value{}, false
-}
+func (r *Result) Value(sym string) (trace.Value, bool) { return trace.Find(r.Values, sym) }

@@ -50,8 +50,6 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 		c.warn("uplift", trace.SevWarning, ref652, fmt.Sprintf("%s: V_d = %.1f %s: no downward load to resist sliding by friction.", name, ld.V/kN, c.uF), val("V_d", ld.V, c.uF))
 		return
 	}
-	H := math.Hypot(ld.HB, ld.HL)
-	sc.H = H
 	vV := val("V_d", ld.V, c.uF)
 	fl := c.g.Layers[c.fi]
 	mat := ld.Set.Material
@@ -59,13 +57,13 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 	fs := c.ap.Allowable()
 	var R float64
 	if d == Drained {
-		c.step("H_d", fn("sqrt", add(pow(sym("H_B_d"), num(2)), pow(sym("H_L_d"), num(2)))), H, c.uF, trace.Ref{}, "resultant horizontal action", val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
+		sc.H = c.eval("H_d", fHd, c.uF, trace.Ref{}, "resultant horizontal action", val("H_B_d", ld.HB, c.uF), val("H_L_d", ld.HL, c.uF))
 		var dd float64
 		ln := layerName(c.g, c.fi)
 		if c.opt.Interface.Delta.Set {
 			dk := c.take("delta_k", c.opt.Interface.Delta.V, "deg", refDelta, "characteristic base friction angle (given)")
 			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
-			dd = c.step("delta_d", fn("atan", div(fn("tan", sym("delta_k")), sym(gPhi))), math.Atan(math.Tan(dk)/g), "deg", refMat, "design base friction angle",
+			dd = c.eval("delta_d", fDeltaD, "deg", refMat, "design base friction angle",
 				val("delta_k", dk, "deg"), val(gPhi, g, ""))
 		} else {
 			// EN 1997-1 6.5.3(10): δ_d = k_δ φ′_cv,d, with φ′_cv,d from
@@ -80,19 +78,18 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 					val("phi'_k", ak, "deg"))
 			}
 			g := c.pfStep(0, gPhi, mat.GammaPhi, mat.Name)
-			ad := c.step(ds, fn("atan", div(fn("tan", sym(ks)), sym(gPhi))), math.Atan(math.Tan(ak)/g), "deg", refMat, "design value", val(ks, ak, "deg"), val(gPhi, g, ""))
-			c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, kDeltaNote(c.opt.kDeltaSet))
-			dd = c.step("delta_d", mul(sym("k_delta"), sym(ds)), c.opt.Interface.KDelta*ad, "deg", refDelta, "design base friction angle",
-				val("k_delta", c.opt.Interface.KDelta, ""), val(ds, ad, "deg"))
+			ad := c.eval(ds, soilForm(ks, gPhi, true, false, false), "deg", refMat, "design value", val(ks, ak, "deg"), val(gPhi, g, ""))
+			kd := c.take("k_delta", c.opt.Interface.KDelta, "", refDelta, kDeltaNote(c.opt.kDeltaSet))
+			dd = c.eval("delta_d", fDeltaK[ds], "deg", refDelta, "design base friction angle",
+				val("k_delta", kd, ""), val(ds, ad, "deg"))
 		}
 		vp := ld.V
 		if c.u0 > 0 {
-			A := c.f.Area()
-			c.step("A_b", nil, A, c.uA, trace.Ref{}, "plan area of the base")
-			U := c.step("U", mul(sym("u_0"), sym("A_b")), c.u0*A, c.uF, trace.Ref{}, "water pressure on the base", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
-			vp = c.step("V'_d", sub(sym("V_d"), sym("U")), ld.V-U, c.uF, refSlide, "effective vertical action", vV, val("U", U, c.uF))
+			A := c.planArea()
+			U := c.eval("U", fU, c.uF, trace.Ref{}, "water pressure on the base", val("u_0", c.u0, "kPa"), val("A_b", A, c.uA))
+			vp = c.eval("V'_d", fVpU, c.uF, refSlide, "effective vertical action", vV, val("U", U, c.uF))
 		} else {
-			vp = c.step("V'_d", sym("V_d"), ld.V, c.uF, refSlide, "effective vertical action (no water pressure on the base)", vV)
+			vp = c.eval("V'_d", fVp, c.uF, refSlide, "effective vertical action (no water pressure on the base)", vV)
 		}
 		sc.V = vp
 		fsym, fv := "gamma_Rh", gRh
@@ -103,18 +100,18 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 			c.take("gamma_Rh", gRh, "", refA5, "partial factor on sliding resistance ("+ld.Set.Resistance.Name+")")
 		}
 		vf := val(fsym, fv, "")
-		R = math.Max(0, vp) * math.Tan(dd) / fv
-		c.step("R_h_d", div(mul(fn("max", num(0), sym("V'_d")), fn("tan", sym("delta_d"))), sym(fsym)), R, c.uF, refSlide, "design sliding resistance",
+		R = c.eval("R_h_d", fRh[fsym].drained, c.uF, refSlide, "design sliding resistance",
 			val("V'_d", vp, c.uF), val("delta_d", dd, "deg"), vf)
 	} else {
 		g, ok := c.geometry(ld, true)
+		sc.H = g.H
 		if !ok {
 			c.finishSlide(&sc, 0)
 			return
 		}
 		c.take("c_u_k", fl.Cu.V, "kPa", trace.Ref{}, "characteristic undrained strength of "+layerName(c.g, c.fi))
 		gc := c.pfStep(2, gCu, mat.GammaCu, mat.Name)
-		cu := c.step("c_u_d", div(sym("c_u_k"), sym(gCu)), fl.Cu.V/gc, "kPa", refMat, "design value", val("c_u_k", fl.Cu.V, "kPa"), val(gCu, gc, ""))
+		cu := c.eval("c_u_d", soilForm("c_u_k", gCu, false, false, false), "kPa", refMat, "design value", val("c_u_k", fl.Cu.V, "kPa"), val(gCu, gc, ""))
 		fsym, fv := "gamma_Rh", gRh
 		if fs {
 			fsym, fv = "FS_s", c.ap.SlidingFS()
@@ -123,16 +120,14 @@ func (c *calc) slideCase(ld design.Load, d Drainage) {
 			c.take("gamma_Rh", gRh, "", refA5, "partial factor on sliding resistance ("+ld.Set.Resistance.Name+")")
 		}
 		sc.V = ld.V
-		r1 := g.Ap * cu / fv
-		vA := val("A'", g.Ap, c.uA)
+		vA, vcu, vf := val("A'", g.Ap, c.uA), val("c_u_d", cu, "kPa"), val(fsym, fv, "")
 		if c.opt.Interface.Sealed {
-			R = c.step("R_h_d", div(mul(sym("A'"), sym("c_u_d")), sym(fsym)), r1, c.uF, refSlideU, "design sliding resistance (water and air cannot reach the interface)",
-				vA, val("c_u_d", cu, "kPa"), val(fsym, fv, ""))
+			R = c.eval("R_h_d", fRh[fsym].undrained, c.uF, refSlideU, "design sliding resistance (water and air cannot reach the interface)",
+				vA, vcu, vf)
 		} else {
-			R = math.Min(r1, 0.4*ld.V)
-			sc.Limit04 = 0.4*ld.V < r1
-			R = c.step("R_h_d", fn("min", div(mul(sym("A'"), sym("c_u_d")), sym(fsym)), mul(num(0.4), sym("V_d"))), R, c.uF, ref04V,
-				"design sliding resistance, not more than 0.4 V_d (water or air can reach the interface)", vA, val("c_u_d", cu, "kPa"), val(fsym, fv, ""), vV)
+			R = c.eval("R_h_d", fRh[fsym].limited, c.uF, ref04V,
+				"design sliding resistance, not more than 0.4 V_d (water or air can reach the interface)", vA, vcu, vf, vV)
+			sc.Limit04 = R < c.compute("R_h_d", fRh[fsym].undrained, vA, vcu, vf)
 			if sc.Limit04 {
 				c.warn("slide-04V", trace.SevNote, ref04V, name+": the limit 0.4 V_d governs the undrained sliding resistance.", val("V_d", ld.V, c.uF))
 			}
@@ -149,11 +144,37 @@ func (c *calc) finishSlide(sc *SlideCase, R float64) {
 	case R <= 0:
 		sc.Util = c.take("util_h", UtilCap, "", trace.Ref{}, "no sliding resistance: the check fails")
 	default:
-		sc.Util = math.Min(UtilCap, c.step("util_h", div(sym("H_d"), sym("R_h_d")), sc.H/R, "", refSlide, "sliding utilisation H_d/R_h,d",
+		sc.Util = math.Min(UtilCap, c.eval("util_h", fUtilH, "", refSlide, "sliding utilisation H_d/R_h,d",
 			val("H_d", sc.H, c.uF), val("R_h_d", R, c.uF)))
 	}
 	sc.OK = sc.Util <= 1+1e-12
 	c.r.Sliding = append(c.r.Sliding, *sc)
+}
+
+// Formulas of the sliding check, built once.
+var (
+	fDeltaD = soilForm("delta_k", gPhi, true, false, false)
+	fDeltaK = map[string]trace.Expr{
+		"phi'_cv_d": trace.Mul(trace.S("k_delta"), trace.S("phi'_cv_d")),
+		"phi'_d":    trace.Mul(trace.S("k_delta"), trace.S("phi'_d")),
+	}
+	fVp    = trace.S("V_d")
+	fVpU   = trace.Sub(trace.S("V_d"), trace.S("U"))
+	fUtilH = trace.Div(trace.S("H_d"), trace.S("R_h_d"))
+	fRh    = map[string]rhForms{"gamma_Rh": mkRhForms("gamma_Rh"), "FS_s": mkRhForms("FS_s")}
+)
+
+// rhForms are the sliding resistances with the factor symbol f: drained
+// (6.3), undrained (6.4) and undrained not more than 0.4 V_d (6.5).
+type rhForms struct{ drained, undrained, limited trace.Expr }
+
+func mkRhForms(f string) rhForms {
+	u := trace.Div(trace.Mul(trace.S("A'"), trace.S("c_u_d")), trace.S(f))
+	return rhForms{
+		drained:   trace.Div(trace.Mul(trace.Fn("max", trace.N(0), trace.S("V'_d")), trace.Fn("tan", trace.S("delta_d"))), trace.S(f)),
+		undrained: u,
+		limited:   trace.Fn("min", u, trace.Mul(trace.N(0.4), trace.S("V_d"))),
+	}
 }
 
 // summarise marks the governing cases and builds the summary values.

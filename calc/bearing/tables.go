@@ -1,6 +1,10 @@
 package bearing
 
-import "math"
+import (
+	"math"
+
+	"github.com/plinth-calc/plinth/calc/trace"
+)
 
 // terzaghiNg holds Terzaghi's Nγ for φ = 0°, 1°, …, 50° as evaluated
 // numerically by Kumbhojkar (1993) and tabulated in Das, Principles of
@@ -25,6 +29,9 @@ var terzaghiNg = [...]float64{
 // 0 ≤ φ ≤ 50°.
 func TerzaghiNgamma(phi float64) float64 {
 	d := phi * 180 / math.Pi
+	if d != d {
+		return math.NaN()
+	}
 	if d <= 0 {
 		return 0
 	}
@@ -74,7 +81,12 @@ func KpTanDelta(phi float64) float64 {
 // over medium clay, q2/q1 = 0.23, q_u = 623 kPa) implies ca/c1 of about
 // 0.83 where this line gives 0.69 (back-calculated from Das's rectangular
 // form; the chart reading itself is not printed in the reproduction).
+//
+// It is the formula the two-layer working prints for r_a, evaluated.
 func CaRatio(q2q1 float64) float64 {
-	r := math.Max(0, math.Min(1, q2q1))
-	return 0.6 + 0.4*r
+	v, err := trace.Eval(fRa, []trace.Value{{Symbol: "r_q", V: q2q1}})
+	if err != nil {
+		return math.NaN()
+	}
+	return v
 }

@@ -31,110 +31,62 @@ func (c *calc) twoLayer(ld design.Load, d Drainage, g *geo, top soil, qt float64
 		return nil, qt
 	}
 	m, mat := c.opt.Method, ld.Set.Material
-	gw := c.g.Gw()
 	z2 := l2.Top
-	H := z2 - c.f.D
 	// numbers first: is the lower layer weaker under this case's values?
-	gam1 := top.gam
-	if top.und {
-		gam1 = c.g.Layers[c.fi].Gamma
-		if c.zw <= c.f.D {
-			gam1 = c.g.Layers[c.fi].GammaSatOr()
-		}
-	}
-	nc0 := math.Pi + 2
-	if m == Terzaghi {
-		nc0 = 1.5*math.Pi + 1
-	}
-	var q1 float64
-	if top.und {
-		q1 = nc0 * top.cu
-	} else {
-		fa := Factors(m, top.phi)
-		q1 = top.c*fa.Nc + 0.5*gam1*g.Bp*fa.Ngamma
-	}
-	var q2, phi2, c2, cu2, gam2 float64
-	if und2 {
-		cu2 = l2.Cu.V / mat.GammaCu
-		q2 = nc0 * cu2
-	} else {
-		phi2 = math.Max(phiMin, math.Atan(math.Tan(l2.Phi.V)/mat.GammaPhi))
-		c2 = l2.C.Or(0) / mat.GammaC
-		gam2 = l2.Gamma
-		switch {
-		case c.zw <= z2:
-			gam2 = l2.GammaSatOr() - gw
-		case c.zw < z2+g.Bp:
-			gam2 = l2.GammaSatOr() - gw + (c.zw-z2)/g.Bp*(l2.Gamma-(l2.GammaSatOr()-gw))
-		}
-		fa := Factors(m, phi2)
-		q2 = c2*fa.Nc + 0.5*gam2*g.Bp*fa.Ngamma
-	}
+	// The steps that answer are worked dry (computed, not recorded) and
+	// recorded below, in the order of the working, when it is.
+	c.dry = true
+	gam1 := c.gamma1(top)
+	q1 := c.q1(m, top, gam1, g)
+	s2 := c.lowerSoil(i, und2, mat, g)
+	q2 := c.q2(m, s2, g)
+	c.dry = false
 	if q1 <= 0 || q2 >= q1 {
 		return nil, qt
 	}
-	tl := &TwoLayer{Layer: i, H: H, QT: qt}
 	ln := layerName(c.g, i)
-	vD, vH := val("D", c.f.D, "m"), val("H_1", H, "m")
+	vD := val("D", c.f.D, "m")
 	vB, vL := val("B'", g.Bp, "m"), val("L'", g.Lp, "m")
-	c.step("H_1", sub(sym("z_2"), sym("D")), H, "m", refMH, "thickness of the upper layer below the base, over "+ln, val("z_2", z2, "m"), vD)
-	// unit weight of the upper layer in the punching terms
-	if top.und {
-		gs := "gamma"
-		if c.zw <= c.f.D {
-			gs = "gamma_sat"
-		}
-		c.step("gamma_1", sym(gs), gam1, "kN/m3", refMH, "total unit weight of the upper layer", val(gs, gam1, "kN/m3"))
-	} else {
-		c.step("gamma_1", sym("gamma'"), gam1, "kN/m3", refMH, "unit weight of the upper layer (effective where submerged)", val("gamma'", gam1, "kN/m3"))
-	}
+	H := c.eval("H_1", fH1, "m", refMH, "thickness of the upper layer below the base, over "+ln, val("z_2", z2, "m"), vD)
+	tl := &TwoLayer{Layer: i, H: H, QT: qt}
+	vH := val("H_1", H, "m")
+	gam1 = c.gamma1(top)
 	vg1 := val("gamma_1", gam1, "kN/m3")
 	// lower layer strength and overburden at its top
-	s2 := c.designSoil(i, und2, mat, true)
+	s2 = c.lowerSoil(i, und2, mat, g)
 	if und2 {
-		s2.q = c.step("q_H", add(sym("q"), mul(sym("gamma_1"), sym("H_1"))), top.q+gam1*H, "kPa", refMH, "overburden at the top of the lower layer",
+		s2.q = c.eval("q_H", fQH, "kPa", refMH, "overburden at the top of the lower layer",
 			val("q", top.q, "kPa"), vg1, vH)
 	} else {
-		s2.gam = c.unitWeight("gamma'_2", l2, "gamma_l", "gamma_sat_l", z2, "z_2", g.Bp, "B'")
 		q0, q0s := top.q, "q'"
 		if top.und {
 			// the upper layer acts undrained: its overburden is total; the
 			// lower drained layer sees the effective stress at its top
 			q0, q0s = c.sv0e, "sigma'_v0"
 		}
-		s2.q = c.step("q'_H", add(sym(q0s), mul(sym("gamma_1"), sym("H_1"))), q0+gam1*H, "kPa", refMH, "effective overburden at the top of the lower layer",
+		s2.q = c.eval("q'_H", fQeH[q0s], "kPa", refMH, "effective overburden at the top of the lower layer",
 			val(q0s, q0, "kPa"), vg1, vH)
 	}
 	// strip capacities q_1, q_2 and their ratio
-	if top.und {
-		tl.Q1 = c.step("q_1", mul(num(nc0), sym("c_u_d")), q1, "kPa", refMH, "strip capacity of the upper layer (surface, undrained)", val("c_u_d", top.cu, "kPa"))
-	} else {
-		fa := Factors(m, top.phi)
-		tl.Q1 = c.step("q_1", add(mul(sym("c'_d"), sym("N_c")), mul(num(0.5), sym("gamma_1"), sym("B'"), sym("N_gamma"))), q1, "kPa", refMH,
-			"strip capacity of the upper layer (surface)", val("c'_d", top.c, "kPa"), val("N_c", fa.Nc, ""), vg1, vB, val("N_gamma", fa.Ngamma, ""))
-	}
+	q1 = c.q1(m, top, gam1, g)
+	tl.Q1 = q1
 	g2 := *g
 	g2.noDepth = true
 	qb := c.resist(m, fLower, s2, &g2)
-	if und2 {
-		tl.Q2 = c.step("q_2", mul(num(nc0), sym("c_u_2")), q2, "kPa", refMH, "strip capacity of the lower layer (surface, undrained)", val("c_u_2", s2.cu, "kPa"))
-	} else {
-		fa := Factors(m, s2.phi)
-		tl.Q2 = c.step("q_2", add(mul(sym("c'_2"), sym("N_c_2")), mul(num(0.5), sym("gamma'_2"), sym("B'"), sym("N_gamma_2"))), q2, "kPa", refMH,
-			"strip capacity of the lower layer (surface)", val("c'_2", s2.c, "kPa"), val("N_c_2", fa.Nc, ""), val("gamma'_2", s2.gam, "kN/m3"), vB, val("N_gamma_2", fa.Ngamma, ""))
-	}
-	rq := c.step("r_q", div(sym("q_2"), sym("q_1")), q2/q1, "", refMH, "bearing capacity ratio q_2/q_1", val("q_2", q2, "kPa"), val("q_1", q1, "kPa"))
+	q2 = c.q2(m, s2, g)
+	tl.Q2 = q2
+	rq := c.eval("r_q", fRq, "", refMH, "bearing capacity ratio q_2/q_1", val("q_2", q2, "kPa"), val("q_1", q1, "kPa"))
 	tl.QB = qb
 	// punching coefficients
 	var ks float64
 	fric := !top.und && top.phi > phiMin
+	vphi := val("phi'_d", top.phi, "deg")
 	if fric {
-		vphi := val("phi'_d", top.phi, "deg")
 		if c.opt.Ks.Set {
 			ks = c.take("K_s", c.opt.Ks.V, "", refMH, "punching shear coefficient (given)")
 		} else {
-			kt := c.step("K_p_tan_delta", nil, KpTanDelta(top.phi), "", refKs, "K_p·tanδ of the upper layer (BR 470 Table A2, log-linear in φ′)", vphi)
-			ks = c.step("K_s", div(sym("K_p_tan_delta"), fn("tan", sym("phi'_d"))), kt/math.Tan(top.phi), "", refKs, "punching shear coefficient", val("K_p_tan_delta", kt, ""), vphi)
+			kt := c.took(trace.Interpolated, "K_p_tan_delta", KpTanDelta(top.phi), "", refKs, "K_p·tanδ of the upper layer (BR 470 Table A2, log-linear in φ′)", vphi)
+			ks = c.eval("K_s", fKs, "", refKs, "punching shear coefficient", val("K_p_tan_delta", kt, ""), vphi)
 			if top.phi < 35*degr-1e-9 || top.phi > 45*degr+1e-9 {
 				c.ksOut = append(c.ksOut, caseValue{c.cas, top.phi})
 			} else {
@@ -153,55 +105,172 @@ func (c *calc) twoLayer(ld design.Load, d Drainage, g *geo, top soil, qt float64
 		if c.opt.CaRatio.Set {
 			ra = c.take("r_a", c.opt.CaRatio.V, "", refCa, "adhesion ratio c_a/c_1 (given)")
 		} else {
-			ra = c.step("r_a", add(num(0.6), mul(num(0.4), fn("min", num(1), sym("r_q")))), CaRatio(rq), "", refCa, "adhesion ratio c_a/c_1, straight-line reading of the chart (plinth, from memory)", val("r_q", rq, ""))
+			ra = c.eval("r_a", fRa, "", refCa, "adhesion ratio c_a/c_1, straight-line reading of the chart (plinth, from memory)", val("r_q", rq, ""))
 		}
-		ca = c.step("c_a", mul(sym("r_a"), sym(c1s)), ra*c1, "kPa", refCa, "adhesion on the punching faces", val("r_a", ra, ""), val(c1s, c1, "kPa"))
+		ca = c.eval("c_a", fCa[c1s], "kPa", refCa, "adhesion on the punching faces", val("r_a", ra, ""), val(c1s, c1, "kPa"))
 	}
 	tl.CaC1 = ra
 	sp := 1.0
 	if g.strip {
 		c.one("s_p", 1, refMH, "strip: no shape term on punching")
 	} else {
-		sp = c.step("s_p", add(num(1), div(sym("B'"), sym("L'"))), 1+g.Bp/g.Lp, "", refMH, "shape term on punching (1 + B′/L′)", vB, vL)
+		sp = c.eval("s_p", fSp, "", refMH, "shape term on punching (1 + B′/L′)", vB, vL)
 	}
 	ip := 1.0
 	if g.H > 0 {
-		beta := math.Atan(g.H / g.V)
-		ip = c.step("i_p", pow(sub(num(1), div(sym("beta"), deg(90))), num(2)), math.Pow(1-beta/(90*degr), 2), "", trace.Ref{},
-			"reduction of the punching terms for the inclined load (plinth: Meyerhof's i_q)", val("beta", beta, "deg"))
+		ip = c.eval("i_p", fIp, "", trace.Ref{},
+			"reduction of the punching terms for the inclined load (plinth: Meyerhof's i_q)", val("beta", g.beta, "deg"))
 		c.warnOnce("two-layer-inclined", trace.SevNote, refMH, "Inclined load on a two-layer system: the punching terms are multiplied by i_p = (1 − β/90°)² in place of Meyerhof & Hanna's inclined-load charts.")
 	} else {
 		c.one("i_p", 1, trace.Ref{}, "vertical load")
 	}
 	// q_u
-	var terms []trace.Expr
-	in := []trace.Value{val("q_b", qb, "kPa"), val("s_p", sp, ""), val("i_p", ip, ""), vg1, vH, vB}
-	pun := 0.0
+	var buf [10]trace.Value
+	in := append(buf[:0], val("q_b", qb, "kPa"), val("s_p", sp, ""), val("i_p", ip, ""), vg1, vH, vB)
 	if coh {
-		terms = append(terms, div(mul(num(2), sym("c_a"), sym("H_1")), sym("B'")))
 		in = append(in, val("c_a", ca, "kPa"))
-		pun += 2 * ca * H / g.Bp
 	}
 	if fric {
-		terms = append(terms, div(mul(sym("gamma_1"), pow(sym("H_1"), num(2)), add(num(1), div(mul(num(2), sym("D")), sym("H_1"))), sym("K_s"), fn("tan", sym("phi'_d"))), sym("B'")))
-		in = append(in, vD, val("K_s", ks, ""), val("phi'_d", top.phi, "deg"))
-		pun += gam1 * H * H * (1 + 2*c.f.D/H) * ks * math.Tan(top.phi) / g.Bp
+		in = append(in, vD, val("K_s", ks, ""), vphi)
 	}
-	qu := qb + sp*pun*ip - gam1*H
-	var fq trace.Expr = sym("q_b")
-	if len(terms) > 0 {
-		p := terms[0]
-		if len(terms) > 1 {
-			p = add(terms[0], terms[1])
-		}
-		fq = add(fq, mul(sym("s_p"), p, sym("i_p")))
-	}
-	fq = sub(fq, mul(sym("gamma_1"), sym("H_1")))
-	tl.QU = c.step("q_u", fq, qu, "kPa", refMH, "punching-shear resistance of the two-layer system", in...)
-	ql := c.step("q_lim", fn("min", sym("q_ult"), sym("q_u")), math.Min(qt, qu), "kPa", refMH, "ultimate pressure: punching, capped by the upper layer's own resistance", val("q_ult", qt, "kPa"), val("q_u", qu, "kPa"))
+	qu := c.eval("q_u", fQu[b2i(coh)][b2i(fric)], "kPa", refMH, "punching-shear resistance of the two-layer system", in...)
+	tl.QU = qu
+	ql := c.eval("q_lim", fQlim, "kPa", refMH, "ultimate pressure: punching, capped by the upper layer's own resistance", val("q_ult", qt, "kPa"), val("q_u", qu, "kPa"))
 	tl.Governs = qu < qt
 	c.spread(ld, g, s2, tl, gam1, H)
 	return tl, ql
+}
+
+// gamma1 records the unit weight of the upper layer in the punching
+// terms: total for an undrained upper layer, else its γ′ of the N_γ term.
+func (c *calc) gamma1(top soil) float64 {
+	if !top.und {
+		return c.eval("gamma_1", trace.S("gamma'"), "kN/m3", refMH, "unit weight of the upper layer (effective where submerged)", val("gamma'", top.gam, "kN/m3"))
+	}
+	l := c.g.Layers[c.fi]
+	gs, v := "gamma", l.Gamma
+	if c.zw <= c.f.D {
+		gs, v = "gamma_sat", l.GammaSatOr()
+	}
+	return c.eval("gamma_1", trace.S(gs), "kN/m3", refMH, "total unit weight of the upper layer", val(gs, v, "kN/m3"))
+}
+
+// q1 records the surface strip capacity of the upper layer, the measure
+// Meyerhof & Hanna (1978) compare the layers by.
+func (c *calc) q1(m Method, top soil, gam1 float64, g *geo) float64 {
+	if top.und {
+		return c.eval("q_1", fQ1U[b2i(m == Terzaghi)], "kPa", refMH, "strip capacity of the upper layer (surface, undrained)", val("c_u_d", top.cu, "kPa"))
+	}
+	fa := Factors(m, top.phi)
+	return c.eval("q_1", fQ1, "kPa", refMH, "strip capacity of the upper layer (surface)",
+		val("c'_d", top.c, "kPa"), val("N_c", fa.Nc, ""), val("gamma_1", gam1, "kN/m3"), val("B'", g.Bp, "m"), val("N_gamma", fa.Ngamma, ""))
+}
+
+// lowerSoil records the design strength of the lower layer i and, drained,
+// the unit weight of its N_γ term.
+func (c *calc) lowerSoil(i int, und bool, mat design.MaterialSet, g *geo) soil {
+	s := c.designSoil(i, und, mat, true)
+	if !und {
+		s.gam = c.unitWeight("gamma'_2", c.g.Layers[i], "gamma_l", "gamma_sat_l", c.g.Layers[i].Top, "z_2", g.Bp, "B'")
+	}
+	return s
+}
+
+// q2 records the surface strip capacity of the lower layer.
+func (c *calc) q2(m Method, s2 soil, g *geo) float64 {
+	if s2.und {
+		return c.eval("q_2", fQ2U[b2i(m == Terzaghi)], "kPa", refMH, "strip capacity of the lower layer (surface, undrained)", val("c_u_2", s2.cu, "kPa"))
+	}
+	fa := Factors(m, s2.phi)
+	return c.eval("q_2", fQ2, "kPa", refMH, "strip capacity of the lower layer (surface)",
+		val("c'_2", s2.c, "kPa"), val("N_c_2", fa.Nc, ""), val("gamma'_2", s2.gam, "kN/m3"), val("B'", g.Bp, "m"), val("N_gamma_2", fa.Ngamma, ""))
+}
+
+func b2i(b bool) int {
+	if b {
+		return 1
+	}
+	return 0
+}
+
+// ncZero returns N_c at φ = 0 of method m: π + 2 (Prandtl), 1.5π + 1 for
+// Terzaghi, from the formula trees.
+func ncZero(m Method) float64 {
+	f := fMain.NcU
+	if m == Terzaghi {
+		f = fMain.NcT0
+	}
+	v, err := trace.Eval(f, nil)
+	if err != nil {
+		return math.NaN()
+	}
+	return v
+}
+
+// Formulas of the two-layer check, built once.
+var (
+	fH1  = trace.Sub(trace.S("z_2"), trace.S("D"))
+	fQH  = trace.Add(trace.S("q"), trace.Mul(trace.S("gamma_1"), trace.S("H_1")))
+	fQeH = map[string]trace.Expr{
+		"q'":        trace.Add(trace.S("q'"), trace.Mul(trace.S("gamma_1"), trace.S("H_1"))),
+		"sigma'_v0": trace.Add(trace.S("sigma'_v0"), trace.Mul(trace.S("gamma_1"), trace.S("H_1"))),
+	}
+	// the strip capacity c N_c + ½ γ B N_γ (undrained N_c c_u, N_c printed
+	// as its number)
+	fQ1  = trace.Add(trace.Mul(trace.S("c'_d"), trace.S("N_c")), trace.Mul(trace.N(0.5), trace.S("gamma_1"), trace.S("B'"), trace.S("N_gamma")))
+	fQ2  = trace.Add(trace.Mul(trace.S("c'_2"), trace.S("N_c_2")), trace.Mul(trace.N(0.5), trace.S("gamma'_2"), trace.S("B'"), trace.S("N_gamma_2")))
+	fQ1U = [2]trace.Expr{trace.Mul(trace.N(ncZero(EC7)), trace.S("c_u_d")), trace.Mul(trace.N(ncZero(Terzaghi)), trace.S("c_u_d"))}
+	fQ2U = [2]trace.Expr{trace.Mul(trace.N(ncZero(EC7)), trace.S("c_u_2")), trace.Mul(trace.N(ncZero(Terzaghi)), trace.S("c_u_2"))}
+	fRq  = trace.Div(trace.S("q_2"), trace.S("q_1"))
+	fKs  = trace.Div(trace.S("K_p_tan_delta"), trace.Fn("tan", trace.S("phi'_d")))
+	// CaRatio's straight line, 0.6 at q_2/q_1 = 0 to 1.0 at 1
+	fRa = trace.Add(trace.N(0.6), trace.Mul(trace.N(0.4), trace.Fn("min", trace.N(1), trace.Fn("max", trace.N(0), trace.S("r_q")))))
+	fCa = map[string]trace.Expr{
+		"c'_d":  trace.Mul(trace.S("r_a"), trace.S("c'_d")),
+		"c_u_d": trace.Mul(trace.S("r_a"), trace.S("c_u_d")),
+	}
+	fSp   = trace.Add(trace.N(1), trace.Div(trace.S("B'"), trace.S("L'")))
+	fIp   = trace.Pow(trace.Sub(trace.N(1), trace.Div(trace.S("beta"), trace.Deg(90))), trace.N(2))
+	fQu   = mkQu()
+	fQlim = trace.Fn("min", trace.S("q_ult"), trace.S("q_u"))
+	// the load-spread check
+	fBs    = trace.Add(trace.S("B'"), trace.Mul(trace.N(2), trace.S("n_s"), trace.S("H_1")))
+	fLs    = trace.Add(trace.S("L'"), trace.Mul(trace.N(2), trace.S("n_s"), trace.S("H_1")))
+	fAsStr = trace.S("B_s")
+	fAs    = trace.Mul(trace.S("B_s"), trace.S("L_s"))
+	fQEds  = trace.Add(trace.Div(trace.S("V_d"), trace.S("A_s")), trace.Mul(trace.S("gamma_1"), trace.S("H_1")))
+	fQRdsF = map[string]trace.Expr{
+		"q'_H": trace.Add(trace.Div(trace.Sub(trace.S("q_ult_s"), trace.S("q'_H")), trace.S("FS")), trace.S("q'_H")),
+		"q_H":  trace.Add(trace.Div(trace.Sub(trace.S("q_ult_s"), trace.S("q_H")), trace.S("FS")), trace.S("q_H")),
+	}
+	fQRds  = trace.Div(trace.S("q_ult_s"), trace.S("gamma_Rv"))
+	fUtilS = trace.Div(trace.S("q_Ed_s"), trace.S("q_Rd_s"))
+)
+
+// mkQu builds q_u = q_b + s_p·(adhesion + friction)·i_p − γ_1 H_1 with
+// the terms that apply: [cohesive][frictional].
+func mkQu() (f [2][2]trace.Expr) {
+	ad := trace.Div(trace.Mul(trace.N(2), trace.S("c_a"), trace.S("H_1")), trace.S("B'"))
+	fr := trace.Div(trace.Mul(trace.S("gamma_1"), trace.Pow(trace.S("H_1"), trace.N(2)), trace.Add(trace.N(1), trace.Div(trace.Mul(trace.N(2), trace.S("D")), trace.S("H_1"))), trace.S("K_s"), trace.Fn("tan", trace.S("phi'_d"))), trace.S("B'"))
+	for coh := 0; coh < 2; coh++ {
+		for fric := 0; fric < 2; fric++ {
+			var q trace.Expr = trace.S("q_b")
+			var p trace.Expr
+			switch {
+			case coh == 1 && fric == 1:
+				p = trace.Add(ad, fr)
+			case coh == 1:
+				p = ad
+			case fric == 1:
+				p = fr
+			}
+			if p != nil {
+				q = trace.Add(q, trace.Mul(trace.S("s_p"), p, trace.S("i_p")))
+			}
+			f[coh][fric] = trace.Sub(q, trace.Mul(trace.S("gamma_1"), trace.S("H_1")))
+		}
+	}
+	return f
 }
 
 // spread checks the lower layer under the load spread through the upper
@@ -216,15 +285,15 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 		note = "load-spread gradient through the upper layer, horizontal per vertical: assumed, default 1H:2V (common practice); give spread to change it"
 	}
 	c.take("n_s", n, "", trace.Ref{}, note)
-	g3 := geo{strip: g.strip, Bf: g.Bf, D: g.D, alpha: g.alpha, V: g.V, H: g.H, noDepth: true}
-	g3.Bp = c.step("B_s", add(sym("B'"), mul(num(2), sym("n_s"), sym("H_1"))), g.Bp+2*n*H, "m", trace.Ref{}, "spread width at the top of the lower layer", val("B'", g.Bp, "m"), vn, vH)
+	g3 := geo{strip: g.strip, Bf: g.Bf, D: g.D, alpha: g.alpha, V: g.V, H: g.H, beta: g.beta, noDepth: true}
+	g3.Bp = c.eval("B_s", fBs, "m", trace.Ref{}, "spread width at the top of the lower layer", val("B'", g.Bp, "m"), vn, vH)
 	if g.strip {
-		g3.Ap = c.step("A_s", sym("B_s"), g3.Bp, c.uA, trace.Ref{}, "spread area per metre run", val("B_s", g3.Bp, "m"))
+		g3.Ap = c.eval("A_s", fAsStr, c.uA, trace.Ref{}, "spread area per metre run", val("B_s", g3.Bp, "m"))
 	} else {
-		g3.Lp = c.step("L_s", add(sym("L'"), mul(num(2), sym("n_s"), sym("H_1"))), g.Lp+2*n*H, "m", trace.Ref{}, "spread length at the top of the lower layer", val("L'", g.Lp, "m"), vn, vH)
-		g3.Ap = c.step("A_s", mul(sym("B_s"), sym("L_s")), g3.Bp*g3.Lp, c.uA, trace.Ref{}, "spread area", val("B_s", g3.Bp, "m"), val("L_s", g3.Lp, "m"))
+		g3.Lp = c.eval("L_s", fLs, "m", trace.Ref{}, "spread length at the top of the lower layer", val("L'", g.Lp, "m"), vn, vH)
+		g3.Ap = c.eval("A_s", fAs, c.uA, trace.Ref{}, "spread area", val("B_s", g3.Bp, "m"), val("L_s", g3.Lp, "m"))
 	}
-	qEd := c.step("q_Ed_s", add(div(sym("V_d"), sym("A_s")), mul(sym("gamma_1"), sym("H_1"))), g.V/g3.Ap+gam1*H, "kPa", trace.Ref{}, "pressure on the lower layer under the spread load",
+	qEd := c.eval("q_Ed_s", fQEds, "kPa", trace.Ref{}, "pressure on the lower layer under the spread load",
 		val("V_d", g.V, c.uF), val("A_s", g3.Ap, c.uA), vg1, vH)
 	qs := c.resist(c.opt.Method, fSpread, s2, &g3)
 	var qRd float64
@@ -233,16 +302,16 @@ func (c *calc) spread(ld design.Load, g *geo, s2 soil, tl *TwoLayer, gam1, H flo
 		if s2.und {
 			q0s = "q_H"
 		}
-		qRd = c.step("q_Rd_s", add(div(sub(sym("q_ult_s"), sym(q0s)), sym("FS")), sym(q0s)), (qs-s2.q)/c.ap.FS+s2.q, "kPa", trace.Ref{}, "allowable pressure on the lower layer",
+		qRd = c.eval("q_Rd_s", fQRdsF[q0s], "kPa", trace.Ref{}, "allowable pressure on the lower layer",
 			val("q_ult_s", qs, "kPa"), val(q0s, s2.q, "kPa"), val("FS", c.ap.FS, ""))
 	} else {
 		grv := ld.Set.Resistance.GammaRv
-		qRd = c.step("q_Rd_s", div(sym("q_ult_s"), sym("gamma_Rv")), qs/grv, "kPa", trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design resistance of the lower layer",
+		qRd = c.eval("q_Rd_s", fQRds, "kPa", trace.Ref{Source: trace.EN1997, Clause: "2.4.7.3.3, eq. (2.7b)"}, "design resistance of the lower layer",
 			val("q_ult_s", qs, "kPa"), val("gamma_Rv", grv, ""))
 	}
 	u := UtilCap
 	if qRd > 0 {
-		u = math.Min(UtilCap, c.step("util_s", div(sym("q_Ed_s"), sym("q_Rd_s")), qEd/qRd, "", trace.Ref{}, "utilisation of the lower layer under the spread load", val("q_Ed_s", qEd, "kPa"), val("q_Rd_s", qRd, "kPa")))
+		u = math.Min(UtilCap, c.eval("util_s", fUtilS, "", trace.Ref{}, "utilisation of the lower layer under the spread load", val("q_Ed_s", qEd, "kPa"), val("q_Rd_s", qRd, "kPa")))
 	}
 	tl.SpreadQEd, tl.SpreadQRd, tl.SpreadUtil, tl.SpreadOK = qEd, qRd, u, u <= 1+1e-12
 	if !tl.SpreadOK {

@@ -43,6 +43,14 @@ func TestTable(t *testing.T) {
 	if err := trace.Verify(r.Trace, 1e-9); err != nil {
 		t.Error(err)
 	}
+	// each step says how its value was reached: the settlement-limited
+	// pressure is a Brent root, q_allow its formula evaluated
+	for _, s := range r.Trace.Steps {
+		want := map[string]trace.Kind{"s_lim": trace.Given, "q_a_b": trace.Given, "q_a_s": trace.Solved, "q_allow": trace.ByFormula}[s.Symbol]
+		if s.Kind != want {
+			t.Errorf("%s %s: kind %v, want %v", s.Case, s.Symbol, s.Kind, want)
+		}
+	}
 	if len(r.Rows) != 4 || !r.Rows[r.Own].Own || r.Rows[r.Own].B != 2 {
 		t.Fatalf("rows %+v own %d", r.Rows, r.Own)
 	}
@@ -156,5 +164,69 @@ func TestSettleNotVerified(t *testing.T) {
 	}
 	if n != len(r.Rows) {
 		t.Errorf("%d not-verified cautions for %d widths", n, len(r.Rows))
+	}
+}
+
+// TestCrossings: where the governing limit changes between two widths
+// the engine gives the width at which q_a_b = q_a_s, checked against an
+// independent bisection of the same two limits (60 halvings, so exact
+// to far below the 0.1 mm tolerance) and against the rows on either
+// side.
+func TestCrossings(t *testing.T) {
+	in := input()
+	in.Widths = []float64{4, 1, 3} // out of order: rows are taken by width
+	r, err := capacity.Table(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	changes := 0
+	byB := map[float64]capacity.Row{}
+	for _, row := range r.Rows {
+		byB[row.B] = row
+	}
+	ws := []float64{1, 2, 3, 4}
+	for i := 1; i < len(ws); i++ {
+		if byB[ws[i-1]].Governs != byB[ws[i]].Governs {
+			changes++
+		}
+	}
+	if changes == 0 || len(r.Crossings) != changes {
+		t.Fatalf("%d changes of the governing limit, %d crossings: %+v", changes, len(r.Crossings), r.Rows)
+	}
+	diff := func(b float64) float64 {
+		cp, err := bearing.CapacityAt(in.Bearing, b)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sin := in.Settle
+		sin.Ground, sin.Footing = in.Bearing.Ground, in.Bearing.Footing
+		sin.Footing.B = b
+		al, err := settle.Allowable(sin, in.Limit)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return cp.QRd - al.Q
+	}
+	for _, c := range r.Crossings {
+		lo, hi := r.Rows[c.Between[0]], r.Rows[c.Between[1]]
+		if !(lo.B < c.B && c.B < hi.B) || c.Below != lo.Governs || c.Above != hi.Governs {
+			t.Errorf("crossing %+v between %+v and %+v", c, lo, hi)
+		}
+		a, b := lo.B, hi.B
+		fa := diff(a)
+		for range 60 {
+			m := (a + b) / 2
+			if fm := diff(m); (fm < 0) == (fa < 0) {
+				a, fa = m, fm
+			} else {
+				b = m
+			}
+		}
+		if math.Abs(c.B-(a+b)/2) > 2*capacity.CrossTol {
+			t.Errorf("crossing at %.6f m, bisection %.6f m", c.B, (a+b)/2)
+		}
+		if math.Abs(c.QB-c.QS) > 1e-3*c.Q || c.Q != math.Min(c.QB, c.QS) {
+			t.Errorf("at the crossing q_a_b = %v, q_a_s = %v, Q = %v", c.QB, c.QS, c.Q)
+		}
 	}
 }

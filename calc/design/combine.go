@@ -316,11 +316,14 @@ var (
 var gammaSym = [...]string{Out: "", GSup: "gamma_G_sup", GInf: "gamma_G_inf", Q: "gamma_Q"}
 
 // Record appends the working of l to t under case name cas: the partial
-// factors used, what was left out as favourable (γ_Q = 0) and what of a
-// split action stayed, the ψ0 of non-leading variable actions, and the
-// design values V_d, H_B_d, H_L_d, M_B_d, M_L_d. unitF and unitM are the
+// factors used (from EN 1997-1 Table A.3 as the approach gives them), what
+// was left out as favourable (γ_Q = 0) and what of a split action stayed,
+// the ψ0 of non-leading variable actions, and the design values V_d,
+// H_B_d, H_L_d, M_B_d, M_L_d, each evaluated from its printed sum (it
+// agrees with l's, from Loads, to rounding). unitF and unitM are the
 // display units of forces and moments ("kN", "kNm"; "kN/m", "kNm/m" for
-// a strip).
+// a strip). A sum out of its domain (an overflow) is t's error, for the
+// caller to return (t.Err).
 func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM string) {
 	tags := Tags(acts)
 	var used [4]bool
@@ -331,13 +334,13 @@ func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM strin
 	}
 	as := l.Set.Actions
 	if used[GSup] {
-		t.Add(trace.Step{Symbol: "gamma_G_sup", Value: as.GammaGSup, Ref: refA3, Note: "partial factor, permanent unfavourable (" + as.Name + ")", Case: cas})
+		t.Take(trace.Step{Symbol: "gamma_G_sup", Kind: trace.Tabulated, Value: as.GammaGSup, Ref: refA3, Note: "partial factor, permanent unfavourable (" + as.Name + ")", Case: cas})
 	}
 	if used[GInf] {
-		t.Add(trace.Step{Symbol: "gamma_G_inf", Value: as.GammaGInf, Ref: refA3, Note: "partial factor, permanent favourable (" + as.Name + ")", Case: cas})
+		t.Take(trace.Step{Symbol: "gamma_G_inf", Kind: trace.Tabulated, Value: as.GammaGInf, Ref: refA3, Note: "partial factor, permanent favourable (" + as.Name + ")", Case: cas})
 	}
 	if used[Q] {
-		t.Add(trace.Step{Symbol: "gamma_Q", Value: as.GammaQ, Ref: refA3, Note: "partial factor, variable unfavourable (" + as.Name + ")", Case: cas})
+		t.Take(trace.Step{Symbol: "gamma_Q", Kind: trace.Tabulated, Value: as.GammaQ, Ref: refA3, Note: "partial factor, variable unfavourable (" + as.Name + ")", Case: cas})
 	}
 	if len(l.LeftOut) > 0 {
 		var parts []string
@@ -365,20 +368,20 @@ func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM strin
 			}
 			parts = append(parts, p)
 		}
-		t.Add(trace.Step{Symbol: "gamma_Q_inf", Value: 0, Ref: refFav, Note: "variable effects favourable here, left out: " + strings.Join(parts, "; "), Case: cas})
+		t.Take(trace.Step{Symbol: "gamma_Q_inf", Kind: trace.Given, Value: 0, Ref: refFav, Note: "variable effects favourable here, left out: " + strings.Join(parts, "; "), Case: cas})
 	}
 	for i, a := range acts {
 		if a.Kind == site.Variable && l.uses(i, Q) && i != l.Leading {
-			note := "combination factor of " + a.Name
+			note, kind := "combination factor of "+a.Name, trace.Given
 			if !a.Psi0.Set {
 				note += ": assumed, default (EN 1990 Table A1.1, imposed loads); give psi_0 to change it"
+				kind = trace.Tabulated
 			}
-			t.Add(trace.Step{Symbol: "psi_0_" + tags[i], Value: l.Psi[i], Ref: refPsi, Note: note, Case: cas})
+			t.Take(trace.Step{Symbol: "psi_0_" + tags[i], Kind: kind, Value: l.Psi[i], Ref: refPsi, Note: note, Case: cas})
 		}
 	}
 	syms := [NComp]string{"V_d", "H_B_d", "H_L_d", "M_B_d", "M_L_d"}
 	kSyms := [NComp]string{"V_k_", "H_B_k_", "H_L_k_", "M_B_k_", "M_L_k_"}
-	vals := [NComp]float64{l.V, l.HB, l.HL, l.MB, l.ML}
 	for k := range NComp {
 		unit := unitF
 		if k >= CMB {
@@ -407,10 +410,14 @@ func (l Load) Record(t *trace.Trace, acts []site.Action, cas, unitF, unitM strin
 				f = trace.Add(f, term)
 			}
 		}
-		if f == nil && k != CV {
+		switch {
+		case f == nil && k != CV:
 			continue // a component no action has is left out of the working
+		case f == nil:
+			t.Take(trace.Step{Symbol: syms[k], Kind: trace.Given, Value: 0, Unit: unit, Ref: refComb, Note: "design action effect", Case: cas})
+		default:
+			t.Eval(trace.Step{Symbol: syms[k], Formula: f, Inputs: in, Unit: unit, Ref: refComb, Note: "design action effect", Case: cas})
 		}
-		t.Add(trace.Step{Symbol: syms[k], Formula: f, Inputs: in, Value: vals[k], Unit: unit, Ref: refComb, Note: "design action effect", Case: cas})
 	}
 }
 

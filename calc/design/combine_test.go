@@ -37,6 +37,13 @@ func checkLoads(t *testing.T, what string, acts []site.Action, ap design.Approac
 		if err := trace.Verify(tr, 1e-12); err != nil {
 			t.Errorf("%s: %s: %v", what, l.Name, err)
 		}
+		// The working's sums (the recorder's) are the load's (Loads').
+		for _, st := range tr.Steps {
+			want, ok := map[string]float64{"V_d": l.V, "H_B_d": l.HB, "H_L_d": l.HL, "M_B_d": l.MB, "M_L_d": l.ML}[st.Symbol]
+			if ok && math.Abs(st.Value-want) > 1e-9*math.Max(1, math.Abs(want)) {
+				t.Errorf("%s: %s: %s = %v in the working, %v in the load", what, l.Name, st.Symbol, st.Value, want)
+			}
+		}
 	}
 }
 

@@ -57,7 +57,9 @@
 // action, or the components of a split one) — and Load.Record writes its
 // working (the factors used, gamma_Q_inf = 0 with what was left out and
 // what of a split action stayed, and V_d, H_B_d, H_L_d, M_B_d, M_L_d as
-// sums of factored characteristic values) to a trace. ServiceLoad leaves
+// sums of factored characteristic values, each evaluated from its printed
+// sum by the recorder; factors are tabulated or given, trace.Kind) to a
+// trace, whose error (t.Err) the caller returns. ServiceLoad leaves
 // upward and favourable variable actions out of serviceability loads.
 // Characteristic values appear in formulas as V_k_TAG, H_B_k_TAG, ...
 // where TAG is the action's name reduced to letters and digits (Tags).

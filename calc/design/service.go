@@ -152,7 +152,11 @@ func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF str
 				t.Warn(trace.Caution{Code: "psi-default", Severity: trace.SevCaution, Ref: pref,
 					Message: fmt.Sprintf("%s gives no %s; %g is used", a.Name, map[bool]string{true: "ψ2", false: "ψ0"}[kind == QuasiPermanent], best.Factor[i])})
 			}
-			t.Add(trace.Step{Symbol: psi, Value: best.Factor[i], Ref: pref, Note: note})
+			how := trace.Given // given, or ψ2 assumed (DefaultPsi2, common practice)
+			if !given && kind != QuasiPermanent {
+				how = trace.Tabulated // ψ0 of EN 1990 Table A1.1, imposed loads
+			}
+			t.Take(trace.Step{Symbol: psi, Kind: how, Value: best.Factor[i], Ref: pref, Note: note})
 			in = append(in, trace.Value{Symbol: psi, V: best.Factor[i]})
 			term = trace.Mul(trace.S(psi), term)
 		}
@@ -165,8 +169,11 @@ func ServiceLoad(acts []site.Action, kind ServiceKind, t *trace.Trace, unitF str
 	if f == nil {
 		f = trace.N(0)
 	}
-	t.Add(trace.Step{Symbol: "V_SLS", Formula: f, Inputs: in, Value: best.V, Unit: unitF, Ref: ref,
+	best.V = t.Eval(trace.Step{Symbol: "V_SLS", Formula: f, Inputs: in, Unit: unitF, Ref: ref,
 		Note: "serviceability vertical load, " + best.Name})
+	if err := t.Err(); err != nil {
+		return best, fmt.Errorf("serviceability load: %w", err)
+	}
 	if best.V <= 0 {
 		return best, &site.InputError{Param: "V", Msg: fmt.Sprintf("the %s vertical load is %g kN, not downward: no settlement to compute", kind, best.V/1e3)}
 	}

@@ -1,6 +1,7 @@
 package design_test
 
 import (
+	"errors"
 	"math"
 	"testing"
 
@@ -79,5 +80,18 @@ func TestServiceLoadFavourable(t *testing.T) {
 		if err := trace.Verify(tr, 1e-9); err != nil {
 			t.Error(err)
 		}
+	}
+}
+
+// A sum that overflows is an error, not an infinite load: two permanent
+// actions of 1e308 N (nothing in ServiceLoad bounds an action) add to more
+// than the largest float64, so V_SLS = V_k_1 + V_k_2 is infinite and the
+// recorder refuses it.
+func TestServiceLoadOverflow(t *testing.T) {
+	var tr trace.Trace
+	_, err := design.ServiceLoad([]site.Action{{Name: "A", V: 1e308}, {Name: "B", V: 1e308}}, design.Characteristic, &tr, "kN")
+	var de *trace.DomainError
+	if !errors.As(err, &de) || de.Symbol != "V_SLS" {
+		t.Errorf("error %v, want the domain error of V_SLS", err)
 	}
 }

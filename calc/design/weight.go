@@ -1,6 +1,7 @@
 package design
 
 import (
+	"fmt"
 	"math"
 
 	"github.com/plinth-calc/plinth/calc/site"
@@ -22,6 +23,8 @@ type SelfWeight struct {
 	GammaC  site.Opt // N/m³, (0, 100] kN/m³; default DefaultGammaC
 	H       site.Opt // m, (0, D]; default D (no backfill over the footing)
 }
+
+var fxWeight = trace.Add(trace.Mul(trace.S("gamma_c"), trace.S("A"), trace.S("h")), trace.Mul(trace.S("A"), trace.S("sigma_v,fill")))
 
 // Weight returns the weight of the footing and of the backfill over it
 // (N, or N/m for a strip), W = γ_c·A·h + A·σ_v(D − h), the backfill
@@ -74,23 +77,25 @@ func Weight(in SelfWeight, tr *trace.Trace) (float64, error) {
 	if m.Shape == site.Strip {
 		note += " per metre run"
 	}
-	a := tr.Add(trace.Step{Symbol: "A", Formula: area, Inputs: ins, Value: m.Area(), Unit: areaUnit, Note: note})
+	a := tr.Eval(trace.Step{Symbol: "A", Formula: area, Inputs: ins, Unit: areaUnit, Note: note})
 	gcNote := "unit weight of the footing, given"
 	if !in.GammaC.Set {
 		gcNote = "unit weight of the footing: assumed, default (reinforced concrete, common practice); give gamma_c to change it"
 	}
-	tr.Add(trace.Step{Symbol: "gamma_c", Value: gc, Unit: "kN/m3", Note: gcNote})
+	tr.Take(trace.Step{Symbol: "gamma_c", Kind: trace.Given, Value: gc, Unit: "kN/m3", Note: gcNote})
 	hNote := "thickness of the footing, given"
 	if !in.H.Set {
 		hNote = "thickness of the footing: assumed, default h = D (no backfill over it); give h to change it"
 	}
-	tr.Add(trace.Step{Symbol: "h", Value: h, Unit: "m", Note: hNote})
-	tr.Add(trace.Step{Symbol: "D", Value: m.D, Unit: "m", Note: "depth of the underside below ground level"})
-	sv := in.Ground.SigmaV(m.D - h)
-	tr.Add(trace.Step{Symbol: "sigma_v,fill", Value: sv, Unit: "kPa", Note: "total vertical stress of the ground model at depth D − h (the backfill over the footing)"})
-	w := gc*a*h + a*sv
-	tr.Add(trace.Step{Symbol: "W", Formula: trace.Add(trace.Mul(trace.S("gamma_c"), trace.S("A"), trace.S("h")), trace.Mul(trace.S("A"), trace.S("sigma_v,fill"))),
+	tr.Take(trace.Step{Symbol: "h", Kind: trace.Given, Value: h, Unit: "m", Note: hNote})
+	tr.Take(trace.Step{Symbol: "D", Kind: trace.Given, Value: m.D, Unit: "m", Note: "depth of the underside below ground level"})
+	// Σ γ·thickness over the strata above D − h (site.Ground.SigmaV).
+	sv := tr.Take(trace.Step{Symbol: "sigma_v,fill", Kind: trace.Summed, Value: in.Ground.SigmaV(m.D - h), Unit: "kPa", Note: "total vertical stress of the ground model at depth D − h (the backfill over the footing)"})
+	w := tr.Eval(trace.Step{Symbol: "W", Formula: fxWeight,
 		Inputs: []trace.Value{v("gamma_c", gc, "kN/m3"), v("A", a, areaUnit), v("h", h, "m"), v("sigma_v,fill", sv, "kPa")},
-		Value:  w, Unit: forceUnit, Note: "self-weight and backfill, added by plinth as a permanent action (common practice)"})
+		Unit:   forceUnit, Note: "self-weight and backfill, added by plinth as a permanent action (common practice)"})
+	if err := tr.Err(); err != nil {
+		return 0, fmt.Errorf("self-weight of %s: %w", m.Name, err)
+	}
 	return w, nil
 }

@@ -106,20 +106,21 @@ func Allowable(in Input, sLim float64) (*Allow, error) {
 	}
 	a.Result = res
 	a.S = res.Total
-	a.QNet = res.QNet
 
 	t := &a.Trace
 	cs := "allowable pressure"
 	ref := trace.Ref{Source: Brent1973, Clause: "ch. 4, zero"}
-	add := func(sym string, fx trace.Expr, in []trace.Value, v float64, unit string, r trace.Ref, note string) {
-		t.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: in, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
+	take := func(sym string, kind trace.Kind, v float64, unit string, r trace.Ref, note string) {
+		t.Take(trace.Step{Symbol: sym, Kind: kind, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
 	}
-	add("s_lim", nil, nil, sLim, "mm", trace.Ref{}, "settlement limit")
-	add("q_lo", nil, nil, a.Lo, "kPa", trace.Ref{}, "bracket: settlement below the limit")
-	add("q_hi", nil, nil, a.Hi, "kPa", trace.Ref{}, "bracket: settlement above the limit (net pressure doubled from 100 kPa)")
-	add("q_allow", nil, nil, a.Q, "kPa", ref, fmt.Sprintf("s_total(q) = s_lim solved by Brent's method: %d iterations, %d settlement calculations, tolerance %.3g kPa", a.Iter, len(a.Tries), a.Tol/1e3))
-	add("q_net_allow", fSub(fS("q_allow"), fS("sigma_v0")), []trace.Value{val("q_allow", a.Q, "kPa"), val("sigma_v0", res.SigmaV0, "kPa")}, a.QNet, "kPa", trace.Ref{}, "allowable net bearing pressure")
-	add("s_allow", nil, nil, a.S, "mm", trace.Ref{}, "total settlement at q_allow (working below)")
+	// The bracket, the root and the settlement there are the solver's.
+	take("s_lim", trace.Given, sLim, "mm", trace.Ref{}, "settlement limit")
+	take("q_lo", trace.Solved, a.Lo, "kPa", trace.Ref{}, "bracket: settlement below the limit")
+	take("q_hi", trace.Solved, a.Hi, "kPa", trace.Ref{}, "bracket: settlement above the limit (net pressure doubled from 100 kPa)")
+	take("q_allow", trace.Solved, a.Q, "kPa", ref, fmt.Sprintf("s_total(q) = s_lim solved by Brent's method: %d iterations, %d settlement calculations, tolerance %.3g kPa", a.Iter, len(a.Tries), a.Tol/1e3))
+	a.QNet = t.Eval(trace.Step{Symbol: "q_net_allow", Formula: fxQNetAllow, Inputs: []trace.Value{val("q_allow", a.Q, "kPa"), val("sigma_v0", res.SigmaV0, "kPa")},
+		Unit: "kPa", Note: "allowable net bearing pressure", Case: cs})
+	take("s_allow", trace.Solved, a.S, "mm", trace.Ref{}, "total settlement at q_allow (working below)")
 	u := res.Trace
 	for i := range u.Steps {
 		u.Steps[i].Case = prefix(u.Steps[i].Case)
@@ -128,9 +129,14 @@ func Allowable(in Input, sLim float64) (*Allow, error) {
 		u.Cautions[i].Case = prefix(u.Cautions[i].Case)
 	}
 	t.Append(u, "")
+	if err := t.Err(); err != nil {
+		return nil, fmt.Errorf("allowable pressure of %s: %w", in.Footing.Name, err)
+	}
 	a.Symbols = []trace.Value{val("q_allow", a.Q, "kPa"), val("q_net_allow", a.QNet, "kPa"), val("s_allow", a.S, "mm"), val("s_lim", sLim, "mm")}
 	return a, nil
 }
+
+var fxQNetAllow = trace.Sub(trace.S("q_allow"), trace.S("sigma_v0"))
 
 func prefix(c string) string {
 	if c == "" {

@@ -15,12 +15,32 @@ import (
 // curve, and the check against the limit, with the full working in
 // Result.Trace. Input errors are returned as *site.RangeError,
 // *site.InputError or site.Errors.
+//
+// Every number with a step comes from the step's formula; an input that
+// drives a formula outside its domain (a NaN or infinite value) is an
+// error, never a NaN in the result.
 func Compute(in Input) (*Result, error) { return compute(in, true) }
 
+// Quiet is Compute without the working: the same numbers by the same
+// formulas (Result.Trace holds no steps), for callers that try many
+// footings and print one (calc/size's trials).
+func Quiet(in Input) (*Result, error) { return compute(in, false) }
+
 func compute(in Input, full bool) (*Result, error) {
-	c, err := in.validate()
+	r, k, err := run(in, full)
+	if k != nil && k.err() != nil {
+		return nil, k.err() // the first formula out of its domain, the cause of any later error
+	}
 	if err != nil {
 		return nil, err
+	}
+	return r, nil
+}
+
+func run(in Input, full bool) (*Result, *calc, error) {
+	c, err := in.validate()
+	if err != nil {
+		return nil, nil, err
 	}
 	r := &Result{Stress: c.Stress, Point: c.point, Q: c.q, Limit: c.limit, Depth: c.Depth.Rule}
 	k := &calc{c: c, g: c.Ground, f: c.Footing, r: r, full: full, t: &r.Trace, imm: map[int]string{}, con: map[int]string{}}
@@ -30,14 +50,14 @@ func compute(in Input, full bool) (*Result, error) {
 	}
 	k.so = stress.Options{Method: c.Stress, Point: c.point, Angle: c.angle}
 	if k.infl, err = stress.Func(k.f, k.so); err != nil {
-		return nil, err
+		return nil, k, err
 	}
 	k.load()
 	if c.rigidSet {
 		k.warn("load", "rigid", trace.SevNote, trace.Ref{Source: stress.Grasshoff1955, Clause: "characteristic point"},
 			"rigid footing: stresses and settlement are taken at the characteristic point, where a flexible footing settles as much as a rigid one")
 	}
-	r.QNet, r.SigmaV0, r.U0 = k.qn, k.sv, k.u
+	r.Q, r.QNet, r.SigmaV0, r.U0 = c.q, k.qn, k.sv, k.u
 	D := k.f.D
 	method := c.Method
 	if k.qn <= 0 && method == Auto {
@@ -52,13 +72,13 @@ func compute(in Input, full bool) (*Result, error) {
 		r.ZInf = D
 		k.warn("load", "net-nonpositive", trace.SevNote, trace.Ref{}, "the net bearing pressure is not positive: the "+method.String()+" method works from the net pressure and has no recompression branch, so the load adds no settlement by it (heave is not modelled)", val("q_net", k.qn, "kPa"))
 		k.finish()
-		return r, nil
+		return r, k, nil
 	}
 	var zinf float64
 	switch method {
 	case Auto, Elastic, Consolidation, Combined:
 		if zinf, err = k.depth(); err != nil {
-			return nil, err
+			return nil, k, err
 		}
 	}
 	if method == Auto {
@@ -68,27 +88,27 @@ func compute(in Input, full bool) (*Result, error) {
 	switch method {
 	case Elastic, Consolidation, Combined:
 		if err := k.sublayers(D, zinf); err != nil {
-			return nil, err
+			return nil, k, err
 		}
 		if method != Consolidation {
 			k.elastic(method == Combined)
 		}
 		if method != Elastic {
 			if err := k.consolidation(method); err != nil {
-				return nil, err
+				return nil, k, err
 			}
 		}
 	case Schmertmann:
 		_, _, zmax, _, _ := k.schmGeom()
 		if err := k.sublayers(D, D+zmax); err != nil {
-			return nil, err
+			return nil, k, err
 		}
 		if err := k.schmertmann(); err != nil {
-			return nil, err
+			return nil, k, err
 		}
 	case BurlandBurbidge:
 		if err := k.burland(); err != nil {
-			return nil, err
+			return nil, k, err
 		}
 	}
 	k.layers()
@@ -98,7 +118,7 @@ func compute(in Input, full bool) (*Result, error) {
 	k.totals(method)
 	k.timing()
 	k.finish()
-	return r, nil
+	return r, k, nil
 }
 
 // resolve chooses a method from the layers' data (method = auto).
@@ -158,97 +178,76 @@ func (k *calc) layers() {
 	}
 }
 
+// sum is Σ of the symbols in in (a sum of steps), or nil for none.
+func sum(in []trace.Value) trace.Expr {
+	if len(in) == 0 {
+		return nil
+	}
+	fx := trace.S(in[0].Symbol)
+	for _, v := range in[1:] {
+		fx = trace.Add(fx, trace.S(v.Symbol))
+	}
+	return fx
+}
+
 // totals writes s_i and s_c.
 func (k *calc) totals(m Method) {
 	r := k.r
 	cs := "settlement"
 	if m != Schmertmann && m != BurlandBurbidge {
-		var fx trace.Expr
 		var in []trace.Value
-		var si float64
 		for _, L := range r.Layers {
-			si += L.Si
 			if L.Immediate != "" {
-				sym := ix("s_i,", L.Layer)
-				in = append(in, val(sym, L.Si, "mm"))
-				if fx == nil {
-					fx = fS(sym)
-				} else {
-					fx = fAdd(fx, fS(sym))
-				}
+				in = append(in, val(ix("s_i,", L.Layer), L.Si, "mm"))
 			}
 		}
-		r.Si = si
-		if fx == nil {
-			k.add(cs, "s_i", nil, nil, 0, "mm", trace.Ref{}, "no immediate settlement computed")
+		if len(in) == 0 {
+			r.Si = k.take(cs, "s_i", trace.Given, 0, "mm", trace.Ref{}, "no immediate settlement computed")
 			if m == Consolidation {
 				k.warn(cs, "no-immediate", trace.SevNote, trace.Ref{}, "the consolidation method gives no immediate settlement; without a method line (plinth then chooses elastic+consolidation from the layers' data) adds it from E_u and E′")
 			}
 		} else {
-			k.add(cs, "s_i", fx, in, si, "mm", trace.Ref{}, "immediate settlement")
+			r.Si = k.eval(cs, "s_i", sum(in), in, "mm", trace.Ref{}, "immediate settlement")
 		}
 	}
-	var fx trace.Expr
 	var in []trace.Value
-	var sc float64
 	for _, L := range r.Layers {
-		sc += L.Sc
 		if L.Consol != "" {
-			sym := ix("s_c,", L.Layer)
-			in = append(in, val(sym, L.Sc, "mm"))
-			if fx == nil {
-				fx = fS(sym)
-			} else {
-				fx = fAdd(fx, fS(sym))
-			}
+			in = append(in, val(ix("s_c,", L.Layer), L.Sc, "mm"))
 		}
 	}
-	r.Sc = sc
-	if fx == nil {
-		k.add(cs, "s_c", nil, nil, 0, "mm", trace.Ref{}, "no consolidation settlement")
+	if len(in) == 0 {
+		r.Sc = k.take(cs, "s_c", trace.Given, 0, "mm", trace.Ref{}, "no consolidation settlement")
 	} else {
-		k.add(cs, "s_c", fx, in, sc, "mm", trace.Ref{}, "consolidation settlement (final)")
+		r.Sc = k.eval(cs, "s_c", sum(in), in, "mm", trace.Ref{}, "consolidation settlement (final)")
 	}
 }
+
+var (
+	fxTotal = trace.Add(trace.S("s_i"), trace.S("s_c"), trace.S("s_sec"))
+	fxUtil  = trace.Div(trace.S("s_total"), trace.S("s_lim"))
+)
 
 // finish writes s_sec, s_total and the limit check, and the symbols.
 func (k *calc) finish() {
 	r := k.r
 	cs := "settlement"
-	var fx trace.Expr
 	var in []trace.Value
-	var ssec float64
 	for _, L := range r.Layers {
 		if L.Ssec > 0 {
-			ssec += L.Ssec
-			sym := ix("s_sec,", L.Layer)
-			in = append(in, val(sym, L.Ssec, "mm"))
-			if fx == nil {
-				fx = fS(sym)
-			} else {
-				fx = fAdd(fx, fS(sym))
-			}
+			in = append(in, val(ix("s_sec,", L.Layer), L.Ssec, "mm"))
 		}
 	}
 	if k.sandSec > 0 {
-		ssec += k.sandSec
 		in = append(in, val("s_creep", k.sandSec, "mm"))
-		if fx == nil {
-			fx = fS("s_creep")
-		} else {
-			fx = fAdd(fx, fS("s_creep"))
-		}
 	}
-	r.Ssec = ssec
-	if fx == nil {
-		k.add(cs, "s_sec", nil, nil, 0, "mm", trace.Ref{}, "no secondary compression or creep")
+	if len(in) == 0 {
+		r.Ssec = k.take(cs, "s_sec", trace.Given, 0, "mm", trace.Ref{}, "no secondary compression or creep")
 	} else {
-		k.add(cs, "s_sec", fx, in, ssec, "mm", trace.Ref{}, fmt.Sprintf("secondary compression and creep at the design life (%.4g yr)", k.c.life/Year))
+		r.Ssec = k.eval(cs, "s_sec", sum(in), in, "mm", trace.Ref{}, fmt.Sprintf("secondary compression and creep at the design life (%.4g yr)", k.c.life/Year))
 	}
-	r.Total = r.Si + r.Sc + r.Ssec
-	k.add(cs, "s_total", fAdd(fS("s_i"), fS("s_c"), fS("s_sec")), []trace.Value{val("s_i", r.Si, "mm"), val("s_c", r.Sc, "mm"), val("s_sec", r.Ssec, "mm")}, r.Total, "mm", trace.Ref{}, "total settlement")
-	r.Util = r.Total / r.Limit
-	k.add(cs, "util", fDiv(fS("s_total"), fS("s_lim")), []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, r.Util, "", trace.Ref{}, "settlement against the limit")
+	r.Total = k.eval(cs, "s_total", fxTotal, []trace.Value{val("s_i", r.Si, "mm"), val("s_c", r.Sc, "mm"), val("s_sec", r.Ssec, "mm")}, "mm", trace.Ref{}, "total settlement")
+	r.Util = k.eval(cs, "util", fxUtil, []trace.Value{val("s_total", r.Total, "mm"), val("s_lim", r.Limit, "mm")}, "", trace.Ref{}, "settlement against the limit")
 	if zone := r.ZInf - k.f.D; zone > 0 && r.Total > zone {
 		k.unverified(fmt.Sprintf("the computed settlement %.3g m exceeds the %.3g m thickness of the ground it comes from: the stiffness given is outside the range where the method has physical sense", r.Total, zone))
 	}

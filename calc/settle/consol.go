@@ -29,7 +29,7 @@ func (k *calc) consolidation(mode Method) error {
 				return &site.InputError{Where: fmt.Sprintf("layer %q", name), Param: "e_0", Msg: "C_c is given without the initial void ratio e_0 (and there is no m_v)"}
 			}
 			if l.Fine() || mode == Consolidation {
-				k.add(cs, ix("s_c,", i), nil, nil, 0, "mm", trace.Ref{}, "no consolidation settlement computed for this layer")
+				k.take(cs, ix("s_c,", i), trace.Given, 0, "mm", trace.Ref{}, "no consolidation settlement computed for this layer")
 			}
 			switch {
 			case l.Fine():
@@ -108,7 +108,7 @@ func (k *calc) consolidation(mode Method) error {
 		if k.c.SkemptonBjerrum.Set {
 			sym = ix("s_oed,", i)
 		}
-		k.add(cs, sym, nil, nil, sum, "mm", ref,
+		k.take(cs, sym, trace.Summed, sum, "mm", ref,
 			fmt.Sprintf("consolidation settlement of %s: sum of the Δs column over its %d sublayers, %d to %d (stress table)", name, lr.end-lr.first, lr.first+1, lr.end))
 		if oc := (l.OCR.Set && l.OCR.V > 1) || (l.SigmaP.Set && l.SigmaP.V > k.r.Sub[lr.first].SigmaV0Eff); oc && mode == Combined && !k.c.SkemptonBjerrum.Set && k.imm[i] != "" {
 			k.warn(cs, "oc-sum", trace.SevCaution, refSB, fmt.Sprintf("%s: over-consolidated clay: the immediate settlement and the oedometer settlement are simply added, which overstates the total (the oedometer value holds part of the immediate movement); set skempton_bjerrum = A (about 0.2 to 0.5 for over-consolidated clay) to apply the Skempton–Bjerrum correction", name))
@@ -148,12 +148,12 @@ func ccSettle(c string, h, e0, cc, cr, s0, sf, sp float64) float64 {
 }
 
 var (
-	fxMv   = fMul(fS("m_v"), fS("Delta_sigma"), fS("h"))
-	fxNC   = fMul(fDiv(fMul(fS("C_c"), fS("h")), fAdd(fN(1), fS("e_0"))), fFn("log10", fDiv(fS("sigma'_f"), fS("sigma'_v0"))))
-	fxOC   = fMul(fDiv(fMul(fS("C_r"), fS("h")), fAdd(fN(1), fS("e_0"))), fFn("log10", fDiv(fS("sigma'_f"), fS("sigma'_v0"))))
-	fxOCNC = fMul(fDiv(fS("h"), fAdd(fN(1), fS("e_0"))), fAdd(fMul(fS("C_r"), fFn("log10", fDiv(fS("sigma'_p"), fS("sigma'_v0")))), fMul(fS("C_c"), fFn("log10", fDiv(fS("sigma'_f"), fS("sigma'_p"))))))
-	fxOCRp = fMul(fS("OCR"), fS("sigma'_v0"))
-	fxSe   = fS("sigma'_v0")
+	fxMv   = trace.Mul(trace.S("m_v"), trace.S("Delta_sigma"), trace.S("h"))
+	fxNC   = trace.Mul(trace.Div(trace.Mul(trace.S("C_c"), trace.S("h")), trace.Add(trace.N(1), trace.S("e_0"))), trace.Fn("log10", trace.Div(trace.S("sigma'_f"), trace.S("sigma'_v0"))))
+	fxOC   = trace.Mul(trace.Div(trace.Mul(trace.S("C_r"), trace.S("h")), trace.Add(trace.N(1), trace.S("e_0"))), trace.Fn("log10", trace.Div(trace.S("sigma'_f"), trace.S("sigma'_v0"))))
+	fxOCNC = trace.Mul(trace.Div(trace.S("h"), trace.Add(trace.N(1), trace.S("e_0"))), trace.Add(trace.Mul(trace.S("C_r"), trace.Fn("log10", trace.Div(trace.S("sigma'_p"), trace.S("sigma'_v0")))), trace.Mul(trace.S("C_c"), trace.Fn("log10", trace.Div(trace.S("sigma'_f"), trace.S("sigma'_p"))))))
+	fxOCRp = trace.Mul(trace.S("OCR"), trace.S("sigma'_v0"))
+	fxSe   = trace.S("sigma'_v0")
 )
 
 func (k *calc) explainConsol(cs string, j int, l site.Layer, useCc bool) {
@@ -161,34 +161,31 @@ func (k *calc) explainConsol(cs string, j int, l site.Layer, useCc bool) {
 	s := k.r.Sub[j]
 	h := val("h", s.H, "m")
 	if !useCc {
-		v := l.Mv.V * ds * s.H
-		k.add(cs, "Delta_s", fxMv, []trace.Value{val("m_v", l.Mv.V, "m2/MN"), val("Delta_sigma", ds, "kPa"), h}, v, "mm", refMv, "settlement of the sublayer")
+		k.eval(cs, "Delta_s", fxMv, []trace.Value{val("m_v", l.Mv.V, "m2/MN"), val("Delta_sigma", ds, "kPa"), h}, "mm", refMv, "settlement of the sublayer")
 		return
 	}
 	var sp float64
 	switch {
 	case l.SigmaP.Set && l.SigmaP.V >= se:
-		sp = k.add(cs, "sigma'_p", nil, nil, l.SigmaP.V, "kPa", trace.Ref{}, "preconsolidation pressure, given")
+		sp = k.take(cs, "sigma'_p", trace.Given, l.SigmaP.V, "kPa", trace.Ref{}, "preconsolidation pressure, given")
 	case l.SigmaP.Set:
-		sp = k.add(cs, "sigma'_p", fxSe, []trace.Value{val("sigma'_v0", se, "kPa")}, se, "kPa", trace.Ref{}, "σ′_p given is below σ′_v0: σ′_p = σ′_v0 used")
+		sp = k.eval(cs, "sigma'_p", fxSe, []trace.Value{val("sigma'_v0", se, "kPa")}, "kPa", trace.Ref{}, "σ′_p given is below σ′_v0: σ′_p = σ′_v0 used")
 	case l.OCR.Set:
-		sp = k.add(cs, "sigma'_p", fxOCRp, []trace.Value{val("OCR", l.OCR.V, ""), val("sigma'_v0", se, "kPa")}, l.OCR.V*se, "kPa", trace.Ref{}, "preconsolidation pressure from OCR")
+		sp = k.eval(cs, "sigma'_p", fxOCRp, []trace.Value{val("OCR", l.OCR.V, ""), val("sigma'_v0", se, "kPa")}, "kPa", trace.Ref{}, "preconsolidation pressure from OCR")
 	default:
-		sp = k.add(cs, "sigma'_p", fxSe, []trace.Value{val("sigma'_v0", se, "kPa")}, se, "kPa", trace.Ref{}, "normally consolidated: σ′_p = σ′_v0")
+		sp = k.eval(cs, "sigma'_p", fxSe, []trace.Value{val("sigma'_v0", se, "kPa")}, "kPa", trace.Ref{}, "normally consolidated: σ′_p = σ′_v0")
 	}
-	c := ccCase(se, sf, sp)
 	e0 := val("e_0", l.E0.V, "")
-	v := ccSettle(c, s.H, l.E0.V, l.Cc.V, l.Cr.Or(0), se, sf, sp)
-	switch c {
+	switch ccCase(se, sf, sp) {
 	case "NC":
-		k.add(cs, "Delta_s", fxNC,
-			[]trace.Value{val("C_c", l.Cc.V, ""), h, e0, val("sigma'_f", sf, "kPa"), val("sigma'_v0", se, "kPa")}, v, "mm", refCc, "normally consolidated: σ′_v0 ≥ σ′_p")
+		k.eval(cs, "Delta_s", fxNC,
+			[]trace.Value{val("C_c", l.Cc.V, ""), h, e0, val("sigma'_f", sf, "kPa"), val("sigma'_v0", se, "kPa")}, "mm", refCc, "normally consolidated: σ′_v0 ≥ σ′_p")
 	case "OC":
-		k.add(cs, "Delta_s", fxOC,
-			[]trace.Value{val("C_r", l.Cr.V, ""), h, e0, val("sigma'_f", sf, "kPa"), val("sigma'_v0", se, "kPa")}, v, "mm", refCc, "over-consolidated, σ′_f ≤ σ′_p: recompression only")
+		k.eval(cs, "Delta_s", fxOC,
+			[]trace.Value{val("C_r", l.Cr.V, ""), h, e0, val("sigma'_f", sf, "kPa"), val("sigma'_v0", se, "kPa")}, "mm", refCc, "over-consolidated, σ′_f ≤ σ′_p: recompression only")
 	default:
-		k.add(cs, "Delta_s", fxOCNC,
-			[]trace.Value{h, e0, val("C_r", l.Cr.V, ""), val("C_c", l.Cc.V, ""), val("sigma'_p", sp, "kPa"), val("sigma'_v0", se, "kPa"), val("sigma'_f", sf, "kPa")}, v, "mm", refCc,
+		k.eval(cs, "Delta_s", fxOCNC,
+			[]trace.Value{h, e0, val("C_r", l.Cr.V, ""), val("C_c", l.Cc.V, ""), val("sigma'_p", sp, "kPa"), val("sigma'_v0", se, "kPa"), val("sigma'_f", sf, "kPa")}, "mm", refCc,
 			"over-consolidated, σ′_f crosses σ′_p: recompression to σ′_p then virgin compression; "+noteE0)
 	}
 }
@@ -227,40 +224,42 @@ func (k *calc) skemptonBjerrum(A float64) {
 			s3 += d3 * s.H
 		}
 		alpha := s3 / s1
-		a := A
-		if stripShape {
-			a = 0.866*A + 0.211 // plane strain (Scott 1963)
+		cs := ""
+		if k.full {
+			cs = lr.Name + ": Skempton–Bjerrum"
 		}
-		mu := a + alpha*(1-a)
+		geom := "a circle of equal area, R = √(A/π)"
+		if stripShape {
+			geom = "the strip"
+		}
+		k.take(cs, "alpha_SB", trace.Summed, alpha, "", refSB, "α = ∫Δσ_3 dz / ∫Δσ_1 dz over the layer, elastic stresses on the centre line of "+geom+", ν = 0.5")
+		if !noted && !stripShape && f.Shape != site.Circle {
+			k.warn(cs, "sb-circle", trace.SevNote, refSB, "the Skempton–Bjerrum factor α is taken for a circle of equal area")
+			noted = true
+		}
+		var mu float64
+		if stripShape {
+			a := k.eval(cs, "A_ps", fxAps, []trace.Value{val("A", A, "")}, "", trace.Ref{Source: Scott1963, Clause: "plane strain: Δu = Δσ_3 + (0.866A + 0.211)(Δσ_1 − Δσ_3)"}, "pore-pressure coefficient for plane strain")
+			mu = k.eval(cs, "mu", fxMuPs, []trace.Value{val("A_ps", a, ""), val("alpha_SB", alpha, "")}, "", refSB, "Skempton–Bjerrum settlement coefficient (strip)")
+		} else {
+			mu = k.eval(cs, "mu", fxMu, []trace.Value{val("A", A, ""), val("alpha_SB", alpha, "")}, "", refSB, "Skempton–Bjerrum settlement coefficient")
+		}
+		oed := ix("s_oed,", lr.Layer)
 		lr.Mu = mu
-		lr.Sc = mu * lr.SOed
+		lr.Sc = k.eval(cs, ix("s_c,", lr.Layer), trace.Mul(trace.S("mu"), trace.S(oed)), []trace.Value{val("mu", mu, ""), val(oed, lr.SOed, "mm")}, "mm", refSB, "consolidation settlement corrected for pore pressures under three-dimensional loading")
 		for j := range k.r.Sub {
 			if k.r.Sub[j].Layer == lr.Layer {
 				k.r.Sub[j].Sc *= mu
 			}
 		}
-		if !k.full {
-			continue
-		}
-		cs := lr.Name + ": Skempton–Bjerrum"
-		geom := "a circle of equal area, R = √(A/π)"
-		if stripShape {
-			geom = "the strip"
-		}
-		k.add(cs, "alpha_SB", nil, nil, alpha, "", refSB, "α = ∫Δσ_3 dz / ∫Δσ_1 dz over the layer, elastic stresses on the centre line of "+geom+", ν = 0.5")
-		if !noted && !stripShape && f.Shape != site.Circle {
-			k.warn(cs, "sb-circle", trace.SevNote, refSB, "the Skempton–Bjerrum factor α is taken for a circle of equal area")
-			noted = true
-		}
-		if stripShape {
-			k.add(cs, "A_ps", fAdd(fMul(fN(0.866), fS("A")), fN(0.211)), []trace.Value{val("A", A, "")}, a, "", trace.Ref{Source: Scott1963, Clause: "plane strain: Δu = Δσ_3 + (0.866A + 0.211)(Δσ_1 − Δσ_3)"}, "pore-pressure coefficient for plane strain")
-			k.add(cs, "mu", fAdd(fS("A_ps"), fMul(fS("alpha_SB"), fSub(fN(1), fS("A_ps")))), []trace.Value{val("A_ps", a, ""), val("alpha_SB", alpha, "")}, mu, "", refSB, "Skempton–Bjerrum settlement coefficient (strip)")
-		} else {
-			k.add(cs, "mu", fAdd(fS("A"), fMul(fS("alpha_SB"), fSub(fN(1), fS("A")))), []trace.Value{val("A", A, ""), val("alpha_SB", alpha, "")}, mu, "", refSB, "Skempton–Bjerrum settlement coefficient")
-		}
-		k.add(cs, ix("s_c,", lr.Layer), fMul(fS("mu"), fS(ix("s_oed,", lr.Layer))), []trace.Value{val("mu", mu, ""), val(ix("s_oed,", lr.Layer), lr.SOed, "mm")}, lr.Sc, "mm", refSB, "consolidation settlement corrected for pore pressures under three-dimensional loading")
 	}
 }
+
+var (
+	fxAps  = trace.Add(trace.Mul(trace.N(0.866), trace.S("A")), trace.N(0.211))
+	fxMuPs = trace.Add(trace.S("A_ps"), trace.Mul(trace.S("alpha_SB"), trace.Sub(trace.N(1), trace.S("A_ps"))))
+	fxMu   = trace.Add(trace.S("A"), trace.Mul(trace.S("alpha_SB"), trace.Sub(trace.N(1), trace.S("A"))))
+)
 
 func join(a, b string) string {
 	if a == "" {

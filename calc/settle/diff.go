@@ -2,7 +2,6 @@ package settle
 
 import (
 	"fmt"
-	"math"
 
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/trace"
@@ -56,21 +55,21 @@ func Differential(in DiffInput) (*Diff, error) {
 	t := &d.Trace
 	cs := fmt.Sprintf("%s–%s", in.A, in.B)
 	refH := trace.Ref{Source: trace.EN1997, Clause: "Annex H"}
-	add := func(sym string, fx trace.Expr, vin []trace.Value, v float64, unit string, r trace.Ref, note string) {
-		t.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
+	eval := func(sym string, fx trace.Expr, vin []trace.Value, unit string, r trace.Ref, note string) float64 {
+		return t.Eval(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Unit: unit, Ref: r, Note: note, Case: cs})
 	}
-	d.Delta = math.Abs(in.SA - in.SB)
-	add("delta_s", fFn("abs", fSub(fS("s_A"), fS("s_B"))), []trace.Value{val("s_A", in.SA, "mm"), val("s_B", in.SB, "mm")}, d.Delta, "mm", trace.Ref{}, "differential settlement")
-	d.Beta = d.Delta / in.Spacing
-	add("beta", fDiv(fS("delta_s"), fS("L")), []trace.Value{val("delta_s", d.Delta, "mm"), val("L", in.Spacing, "m")}, d.Beta, "", refH, "angular distortion (relative rotation)")
+	d.Delta = eval("delta_s", fxDelta, []trace.Value{val("s_A", in.SA, "mm"), val("s_B", in.SB, "mm")}, "mm", trace.Ref{}, "differential settlement")
+	d.Beta = eval("beta", fxBeta, []trace.Value{val("delta_s", d.Delta, "mm"), val("L", in.Spacing, "m")}, "", refH, "angular distortion (relative rotation)")
 	lref := refH
 	if !in.Limit.Set {
 		lref = trace.Ref{Source: Bjerrum1963, Clause: "1/500: safe limit where cracking is not permissible"}
 		t.Cite(trace.EN1997)
 	}
-	add("beta_lim", nil, nil, d.Limit, "", lref, "limiting angular distortion")
-	d.Util = d.Beta / d.Limit
-	add("util", fDiv(fS("beta"), fS("beta_lim")), []trace.Value{val("beta", d.Beta, ""), val("beta_lim", d.Limit, "")}, d.Util, "", trace.Ref{}, "")
+	t.Take(trace.Step{Symbol: "beta_lim", Kind: trace.Given, Value: d.Limit, Ref: lref, Note: "limiting angular distortion", Case: cs})
+	d.Util = eval("util", fxBetaUtil, []trace.Value{val("beta", d.Beta, ""), val("beta_lim", d.Limit, "")}, "", trace.Ref{}, "")
+	if err := t.Err(); err != nil {
+		return nil, fmt.Errorf("differential settlement %s: %w", cs, err)
+	}
 	d.OK = d.Util <= 1
 	vals := []trace.Value{val("beta", d.Beta, "")}
 	switch {
@@ -88,6 +87,12 @@ func Differential(in DiffInput) (*Diff, error) {
 	d.Symbols = []trace.Value{val("delta_s", d.Delta, "mm"), val("beta", d.Beta, ""), val("beta_lim", d.Limit, ""), val("util", d.Util, "")}
 	return d, nil
 }
+
+var (
+	fxDelta    = trace.Fn("abs", trace.Sub(trace.S("s_A"), trace.S("s_B")))
+	fxBeta     = trace.Div(trace.S("delta_s"), trace.S("L"))
+	fxBetaUtil = trace.Div(trace.S("beta"), trace.S("beta_lim"))
+)
 
 // inverse prints 1/beta as a whole number, with decimals where that would
 // print it onto or past 1/limit (units.Beside): 1/149.6, not 1/150.

@@ -106,33 +106,39 @@
 // Step.Case names the layer, sublayer or time a step belongs to; cautions
 // sit beside the step that raised them.
 //
-// Result.Symbols, in this order (SI values; display unit in Unit):
+// Every step's value is its formula evaluated by the recorder
+// (trace.Trace.Eval), and so is every number that has a step when a
+// calculation runs without its working (the quiet trials of Allowable,
+// the points of WithinFooting): the printed formula is the number's only
+// definition. T_v(U) and U(T_v) are engine functions (trace.Named) printed
+// by name and evaluated by Tv's and U's code. A value no formula gives
+// says how it was reached (Step.Kind): Given for an input or a default,
+// Tabulated for a value of a published diagram or rule (I_z0, I_zp in
+// 1970, k), Solved for a root found by Brent's method (z_inf where
+// Δσ = η σ′_v0, the composite t_50 and t_90, q_allow and its bracket),
+// Summed for a sum over the stress table (a layer's s_c, Σ I_z Δz/E_s,
+// α_SB, the secondary settlement at a time of the curve). The stress table
+// itself is computed row by row in Go by the same formulas (ccSettle,
+// izAt, stein); a representative sublayer's working agrees with its row.
 //
-//	q        gross bearing pressure           kPa
-//	q_net    net bearing pressure             kPa
-//	z_inf    bottom of the zone considered    m (below ground level)
-//	s_i      immediate settlement             mm
-//	s_c      consolidation settlement         mm
-//	s_sec    secondary compression and creep  mm
-//	s_total  s_i + s_c + s_sec                mm
-//	s_lim    settlement limit                 mm
-//	util     s_total/s_lim
-//	t_50     time to 50 % consolidation       yr   (only with consolidating layers having c_v)
-//	t_90     time to 90 % consolidation       yr   (ditto)
-//	C_1, C_2, I_zp                            (Schmertmann only)
-//	N_bar, I_c, z_I, f_s, f_l, f_t            (Burland & Burbidge only)
+// Result.Symbols holds, in this order, the symbols of Spec.Results that
+// Compute gives (their units and meanings are there): q_SLS, q_net,
+// z_inf, s_i, s_c, s_sec, s_total, s_lim, util_s; t_50, t_90 with
+// consolidating layers having c_v; C_1, C_2, I_zp (Schmertmann) or
+// N_bar, I_c, z_I, f_s, f_l, f_t (Burland & Burbidge).
 //
 // Allowable brackets q upward from σ_v0 at the base (no net load),
 // doubling the trial net pressure from 100 kPa, and solves s_total(q) =
 // s_lim by Brent's method (package solve) to 1 Pa, reporting the bracket,
 // every pressure tried, the iterations and the tolerance, with the full
 // calculation at q_allow appended to its trace (cases prefixed "at
-// q_allow"). The quiet trial calculations build no trace. Allow.Symbols:
+// q_allow"). The quiet trial calculations keep no steps (their values
+// still come from the formulas). Allow.Symbols:
 // q_allow, q_net_allow, s_allow, s_lim.
 //
 // Differential checks β = |s_A − s_B|/L against 1/500 by default, with
 // cautions at 1/500 (Bjerrum 1963; EN 1997-1 Annex H), 1/300 and 1/150
-// (Skempton & MacDonald 1956). Diff.Symbols: delta_s, beta, beta_lim, util.
+// (Skempton & MacDonald 1956). Diff.Symbols: the symbols of DiffSpec.
 //
 // WithinFooting runs Compute's calculation (without its working) at the
 // centre and at a corner of a flexible footing and gives Δs and
@@ -144,5 +150,7 @@
 // layer's modulus and a warning for a layered profile.
 //
 // Invalid input returns *site.RangeError, *site.InputError or
-// site.Errors; no result holds NaN.
+// site.Errors; an input that drives a formula outside its domain (a NaN or
+// infinite step) returns that step's *trace.DomainError, wrapped with the
+// footing's name. No result holds NaN.
 package settle

@@ -70,20 +70,20 @@ func stein(M, N float64) (f1, f2 float64) {
 }
 
 func f1Expr(m, n string) trace.Expr {
-	M, Nn := fS(m), fS(n)
-	m2, n2 := fPow(M, fN(2)), fPow(Nn, fN(2))
-	s1 := fFn("sqrt", fAdd(m2, fN(1)))
-	s2 := fFn("sqrt", fAdd(m2, n2))
-	s3 := fFn("sqrt", fAdd(m2, n2, fN(1)))
-	a0 := fMul(M, fFn("ln", fDiv(fMul(fAdd(fN(1), s1), s2), fMul(M, fAdd(fN(1), s3)))))
-	a1 := fFn("ln", fDiv(fMul(fAdd(M, s1), fFn("sqrt", fAdd(fN(1), n2))), fAdd(M, s3)))
-	return fMul(fDiv(fN(1), fS("pi")), fAdd(a0, a1))
+	M, Nn := trace.S(m), trace.S(n)
+	m2, n2 := trace.Pow(M, trace.N(2)), trace.Pow(Nn, trace.N(2))
+	s1 := trace.Fn("sqrt", trace.Add(m2, trace.N(1)))
+	s2 := trace.Fn("sqrt", trace.Add(m2, n2))
+	s3 := trace.Fn("sqrt", trace.Add(m2, n2, trace.N(1)))
+	a0 := trace.Mul(M, trace.Fn("ln", trace.Div(trace.Mul(trace.Add(trace.N(1), s1), s2), trace.Mul(M, trace.Add(trace.N(1), s3)))))
+	a1 := trace.Fn("ln", trace.Div(trace.Mul(trace.Add(M, s1), trace.Fn("sqrt", trace.Add(trace.N(1), n2))), trace.Add(M, s3)))
+	return trace.Mul(trace.Div(trace.N(1), trace.S("pi")), trace.Add(a0, a1))
 }
 
 func f2Expr(m, n string) trace.Expr {
-	M, Nn := fS(m), fS(n)
-	s3 := fFn("sqrt", fAdd(fPow(M, fN(2)), fPow(Nn, fN(2)), fN(1)))
-	return fMul(fDiv(Nn, fMul(fN(2), fS("pi"))), fFn("atan", fDiv(M, fMul(Nn, s3))))
+	M, Nn := trace.S(m), trace.S(n)
+	s3 := trace.Fn("sqrt", trace.Add(trace.Pow(M, trace.N(2)), trace.Pow(Nn, trace.N(2)), trace.N(1)))
+	return trace.Mul(trace.Div(Nn, trace.Mul(trace.N(2), trace.S("pi"))), trace.Fn("atan", trace.Div(M, trace.Mul(Nn, s3))))
 }
 
 // erect is a rectangle with a corner at the point considered: sides b ≤ l
@@ -176,7 +176,6 @@ func (k *calc) elastic(combined bool) {
 	f := k.f
 	D := f.D
 	bp, lp, rs := k.elasticRects()
-	strip := math.IsInf(lp, 1)
 	noted := false
 	for _, lr := range k.layerRanges() {
 		i := lr.layer
@@ -199,14 +198,14 @@ func (k *calc) elastic(combined bool) {
 				code, msg = "no-stiffness", fmt.Sprintf("%s: no stiffness (E_u or E′) given: the layer adds no immediate settlement", k.layerName(i))
 				k.unverified(fmt.Sprintf("%s has no stiffness (E_u or E′)", k.layerName(i)))
 			}
-			k.add(cs, ix("s_i,", i), nil, nil, 0, "mm", trace.Ref{}, "no immediate settlement computed for this layer")
+			k.take(cs, ix("s_i,", i), trace.Given, 0, "mm", trace.Ref{}, "no immediate settlement computed for this layer")
 			k.warn(cs, code, sev, trace.Ref{}, msg)
 			continue
 		}
 		var pending []func()
 		if kind == "E'" && !l.Nu.Set && !noted {
 			pending = append(pending, func() {
-				k.add(cs, "nu'", nil, nil, DefaultNu, "", trace.Ref{}, "Poisson's ratio: assumed, default (common practice); give nu in the layer table to change it")
+				k.take(cs, "nu'", trace.Given, DefaultNu, "", trace.Ref{}, "Poisson's ratio: assumed, default (common practice); give nu in the layer table to change it")
 				k.warn(cs, "nu-default", trace.SevNote, trace.Ref{}, fmt.Sprintf("Poisson's ratio ν′ = %g assumed where not given (common practice)", DefaultNu))
 			})
 			noted = true
@@ -244,124 +243,164 @@ func (k *calc) elastic(combined bool) {
 		if !k.full {
 			continue
 		}
-		// working for the layer
-		ht, hb := lr.top-D, lr.bot-D
-		ref := trace.Ref{Source: Steinbrenner1934, Clause: "F1, F2 (as Bowles 1996, eq. 5-16a, Table 5-2)"}
-		if f.Shape == site.Circle {
-			k.add(cs, "B'", fMul(fDiv(fFn("sqrt", fS("pi")), fN(2)), fS("B")), []trace.Value{val("B", f.B, "m")}, bp, "m", trace.Ref{}, "side of the square of equal area (common practice)")
-			k.warn(cs, "circle-square", trace.SevNote, trace.Ref{}, "the circle is taken as the square of equal area for Steinbrenner's factors")
+		k.explainElastic(cs, i, lr, rs, bp, lp, E, nu, kind)
+		for _, w := range pending {
+			w()
 		}
-		if ht > 0 {
-			k.add(cs, "H_t", fSub(fS("z_top"), fS("D")), []trace.Value{val("z_top", lr.top, "m"), val("D", D, "m")}, ht, "m", trace.Ref{}, "depth of the top of the layer below the base")
-		}
-		k.add(cs, "H_b", fSub(fS("z_bot"), fS("D")), []trace.Value{val("z_bot", lr.bot, "m"), val("D", D, "m")}, hb, "m", trace.Ref{}, "depth of the bottom of the layer (within the zone) below the base")
-		multi := len(rs) > 1
-		name := func(base, sub string, r int) string {
+	}
+}
+
+// Formulas of the Steinbrenner working, built once for the symbols of up
+// to four corner rectangles (index 0: a single rectangle, unnumbered).
+var (
+	fxBq     = trace.Mul(trace.Div(trace.Fn("sqrt", trace.S("pi")), trace.N(2)), trace.S("B"))
+	fxHt     = trace.Sub(trace.S("z_top"), trace.S("D"))
+	fxHb     = trace.Sub(trace.S("z_bot"), trace.S("D"))
+	steinFx  [5]steinSyms
+	steinRef = trace.Ref{Source: Steinbrenner1934, Clause: "F1, F2 (as Bowles 1996, eq. 5-16a, Table 5-2)"}
+)
+
+// steinSyms are the symbols and formulas of one corner rectangle's working.
+type steinSyms struct {
+	b, l, m, nb, nt, f1b, f2b, f1t, f2t, is string
+	nbx, ntx, mx                            trace.Expr // N_b = H_b/b, N_t = H_t/b, M = l/b
+	f1bx, f2bx, f1tx, f2tx                  trace.Expr // Steinbrenner's F1, F2 at the bottom and top
+	s1bx, s2bx, s1tx, s2tx                  trace.Expr // the strip limits
+	isx, isTopx                             trace.Expr // I_s without and with a top
+}
+
+func init() {
+	for r := range steinFx {
+		name := func(base, sub string) string {
 			switch {
-			case multi && sub != "":
-				return fmt.Sprintf("%s_%s,%d", base, sub, r+1)
-			case multi:
-				return fmt.Sprintf("%s_%d", base, r+1)
+			case r > 0 && sub != "":
+				return fmt.Sprintf("%s_%s,%d", base, sub, r)
+			case r > 0:
+				return fmt.Sprintf("%s_%d", base, r)
 			case sub != "":
 				return base + "_" + sub
 			}
 			return base
 		}
-		var sum trace.Expr
-		sumIn := []trace.Value{val("q_net", k.qn, "kPa"), val("E", E, "MPa")}
-		var total float64
-		for ri, r := range rs {
-			side := func(kk float64, sym string) (trace.Expr, []trace.Value) {
-				ref, v := "B", bp
-				switch {
-				case f.Shape == site.Circle:
-					ref = "B'"
-				case sym == "L" && f.Shape == site.Rectangle:
-					ref, v = "L", lp
-				}
-				in := []trace.Value{val(ref, v, "m")}
-				if kk == 1 {
-					return fS(ref), in
-				}
-				return fMul(fN(kk), fS(ref)), in
-			}
-			bs := name("b", "", ri)
-			bx, bin := side(r.kb, r.bsym)
-			k.add(cs, bs, bx, bin, r.b, "m", trace.Ref{}, fmt.Sprintf("short side of the corner rectangle (%d of them)", r.n))
-			var f1t, f2t float64
-			var f1b, f2b float64
-			if strip {
-				nb := name("N", "b", ri)
-				k.add(cs, nb, fDiv(fS("H_b"), fS(bs)), []trace.Value{val("H_b", hb, "m"), val(bs, r.b, "m")}, hb/r.b, "", trace.Ref{}, "")
-				f1b, f2b = stein(math.Inf(1), hb/r.b)
-				k.add(cs, name("F", "1b", ri), fDiv(fFn("ln", fAdd(fN(1), fPow(fS(nb), fN(2)))), fMul(fN(2), fS("pi"))), []trace.Value{val(nb, hb/r.b, "")}, f1b, "", ref, "strip limit (L → ∞)")
-				k.add(cs, name("F", "2b", ri), fMul(fDiv(fS(nb), fMul(fN(2), fS("pi"))), fFn("atan", fDiv(fN(1), fS(nb)))), []trace.Value{val(nb, hb/r.b, "")}, f2b, "", ref, "strip limit (L → ∞)")
-				if ht > 0 {
-					nt := name("N", "t", ri)
-					k.add(cs, nt, fDiv(fS("H_t"), fS(bs)), []trace.Value{val("H_t", ht, "m"), val(bs, r.b, "m")}, ht/r.b, "", trace.Ref{}, "")
-					f1t, f2t = stein(math.Inf(1), ht/r.b)
-					k.add(cs, name("F", "1t", ri), fDiv(fFn("ln", fAdd(fN(1), fPow(fS(nt), fN(2)))), fMul(fN(2), fS("pi"))), []trace.Value{val(nt, ht/r.b, "")}, f1t, "", ref, "strip limit (L → ∞)")
-					k.add(cs, name("F", "2t", ri), fMul(fDiv(fS(nt), fMul(fN(2), fS("pi"))), fFn("atan", fDiv(fN(1), fS(nt)))), []trace.Value{val(nt, ht/r.b, "")}, f2t, "", ref, "strip limit (L → ∞)")
-				}
-			} else {
-				ls := name("l", "", ri)
-				lx, lin := side(r.kl, r.lsym)
-				k.add(cs, ls, lx, lin, r.l, "m", trace.Ref{}, "long side of the corner rectangle")
-				ms := name("M", "", ri)
-				M := r.l / r.b
-				k.add(cs, ms, fDiv(fS(ls), fS(bs)), []trace.Value{val(ls, r.l, "m"), val(bs, r.b, "m")}, M, "", trace.Ref{}, "")
-				nb := name("N", "b", ri)
-				k.add(cs, nb, fDiv(fS("H_b"), fS(bs)), []trace.Value{val("H_b", hb, "m"), val(bs, r.b, "m")}, hb/r.b, "", trace.Ref{}, "")
-				f1b, f2b = stein(M, hb/r.b)
-				min := []trace.Value{val(ms, M, ""), val(nb, hb/r.b, "")}
-				k.add(cs, name("F", "1b", ri), f1Expr(ms, nb), min, f1b, "", ref, "Steinbrenner factor at the bottom")
-				k.add(cs, name("F", "2b", ri), f2Expr(ms, nb), min, f2b, "", ref, "Steinbrenner factor at the bottom")
-				if ht > 0 {
-					nt := name("N", "t", ri)
-					k.add(cs, nt, fDiv(fS("H_t"), fS(bs)), []trace.Value{val("H_t", ht, "m"), val(bs, r.b, "m")}, ht/r.b, "", trace.Ref{}, "")
-					f1t, f2t = stein(M, ht/r.b)
-					tin := []trace.Value{val(ms, M, ""), val(nt, ht/r.b, "")}
-					k.add(cs, name("F", "1t", ri), f1Expr(ms, nt), tin, f1t, "", ref, "Steinbrenner factor at the top")
-					k.add(cs, name("F", "2t", ri), f2Expr(ms, nt), tin, f2t, "", ref, "Steinbrenner factor at the top")
-				}
-			}
-			is := name("I", "s", ri)
-			var ie trace.Expr
-			iin := []trace.Value{val("nu", nu, ""), val(name("F", "1b", ri), f1b, ""), val(name("F", "2b", ri), f2b, "")}
-			d1 := fS(name("F", "1b", ri))
-			d2 := fS(name("F", "2b", ri))
-			if ht > 0 {
-				d1 = fSub(d1, fS(name("F", "1t", ri)))
-				d2 = fSub(d2, fS(name("F", "2t", ri)))
-				iin = append(iin, val(name("F", "1t", ri), f1t, ""), val(name("F", "2t", ri), f2t, ""))
-			}
-			nuS := fS("nu")
-			ie = fAdd(fMul(fSub(fN(1), fPow(nuS, fN(2))), d1), fMul(fSub(fSub(fN(1), nuS), fMul(fN(2), fPow(nuS, fN(2)))), d2))
-			iv := c1*(f1b-f1t) + c2*(f2b-f2t)
-			k.add(cs, is, ie, iin, iv, "", ref, "(1 − ν²)ΔF1 + (1 − ν − 2ν²)ΔF2")
-			term := fMul(fS(bs), fS(is))
-			if r.n != 1 {
-				term = fMul(fN(float64(r.n)), term)
-			}
-			if sum == nil {
-				sum = term
-			} else {
-				sum = fAdd(sum, term)
-			}
-			sumIn = append(sumIn, val(bs, r.b, "m"), val(is, iv, ""))
-			total += float64(r.n) * r.b * iv
+		s := steinSyms{b: name("b", ""), l: name("l", ""), m: name("M", ""), nb: name("N", "b"), nt: name("N", "t"),
+			f1b: name("F", "1b"), f2b: name("F", "2b"), f1t: name("F", "1t"), f2t: name("F", "2t"), is: name("I", "s")}
+		s.nbx = trace.Div(trace.S("H_b"), trace.S(s.b))
+		s.ntx = trace.Div(trace.S("H_t"), trace.S(s.b))
+		s.mx = trace.Div(trace.S(s.l), trace.S(s.b))
+		s.f1bx, s.f2bx = f1Expr(s.m, s.nb), f2Expr(s.m, s.nb)
+		s.f1tx, s.f2tx = f1Expr(s.m, s.nt), f2Expr(s.m, s.nt)
+		s.s1bx, s.s2bx = f1Strip(s.nb), f2Strip(s.nb)
+		s.s1tx, s.s2tx = f1Strip(s.nt), f2Strip(s.nt)
+		nu := trace.S("nu")
+		is := func(d1, d2 trace.Expr) trace.Expr {
+			return trace.Add(trace.Mul(trace.Sub(trace.N(1), trace.Pow(nu, trace.N(2))), d1),
+				trace.Mul(trace.Sub(trace.Sub(trace.N(1), nu), trace.Mul(trace.N(2), trace.Pow(nu, trace.N(2)))), d2))
 		}
-		si := k.qn / E * total
-		ksym := "E_u"
-		if kind == "E'" {
-			ksym = "E'"
-		}
-		sumIn[1].Symbol = ksym
-		k.add(cs, ix("s_i,", i), fMul(fDiv(fS("q_net"), fS(ksym)), sum), sumIn, si, "mm", ref, fmt.Sprintf("immediate settlement of %s (superposition of corner rectangles)", k.layerName(i)))
-		for _, w := range pending {
-			w()
-		}
+		s.isx = is(trace.S(s.f1b), trace.S(s.f2b))
+		s.isTopx = is(trace.Sub(trace.S(s.f1b), trace.S(s.f1t)), trace.Sub(trace.S(s.f2b), trace.S(s.f2t)))
+		steinFx[r] = s
 	}
+}
+
+// f1Strip and f2Strip are Steinbrenner's factors in the strip limit.
+func f1Strip(n string) trace.Expr {
+	return trace.Div(trace.Fn("ln", trace.Add(trace.N(1), trace.Pow(trace.S(n), trace.N(2)))), trace.Mul(trace.N(2), trace.S("pi")))
+}
+
+func f2Strip(n string) trace.Expr {
+	return trace.Mul(trace.Div(trace.S(n), trace.Mul(trace.N(2), trace.S("pi"))), trace.Fn("atan", trace.Div(trace.N(1), trace.S(n))))
+}
+
+// explainElastic writes the working of layer i's immediate settlement:
+// Steinbrenner's factors at the top and bottom of the layer for each
+// corner rectangle, superposed. Every value is its formula's; the layer's
+// settlement in the stress table is the sum over its sublayers of the same
+// factors (stein), which agrees to rounding.
+func (k *calc) explainElastic(cs string, i int, lr layerRange, rs []erect, bp, lp, E, nu float64, kind string) {
+	f := k.f
+	D := f.D
+	strip := math.IsInf(lp, 1)
+	if f.Shape == site.Circle {
+		bp = k.eval(cs, "B'", fxBq, []trace.Value{val("B", f.B, "m")}, "m", trace.Ref{}, "side of the square of equal area (common practice)")
+		k.warn(cs, "circle-square", trace.SevNote, trace.Ref{}, "the circle is taken as the square of equal area for Steinbrenner's factors")
+	}
+	top := lr.top > D
+	var ht float64
+	if top {
+		ht = k.eval(cs, "H_t", fxHt, []trace.Value{val("z_top", lr.top, "m"), val("D", D, "m")}, "m", trace.Ref{}, "depth of the top of the layer below the base")
+	}
+	hb := k.eval(cs, "H_b", fxHb, []trace.Value{val("z_bot", lr.bot, "m"), val("D", D, "m")}, "m", trace.Ref{}, "depth of the bottom of the layer (within the zone) below the base")
+	ksym := "E_u"
+	if kind == "E'" {
+		ksym = "E'"
+	}
+	var sum trace.Expr
+	sumIn := []trace.Value{val("q_net", k.qn, "kPa"), val(ksym, E, "MPa")}
+	for ri, r := range rs {
+		sy := steinFx[0]
+		if len(rs) > 1 {
+			sy = steinFx[ri+1]
+		}
+		side := func(kk float64, sym string) (trace.Expr, []trace.Value) {
+			ref, v := "B", bp
+			switch {
+			case f.Shape == site.Circle:
+				ref = "B'"
+			case sym == "L" && f.Shape == site.Rectangle:
+				ref, v = "L", lp
+			}
+			in := []trace.Value{val(ref, v, "m")}
+			if kk == 1 {
+				return trace.S(ref), in
+			}
+			return trace.Mul(trace.N(kk), trace.S(ref)), in
+		}
+		bx, bin := side(r.kb, r.bsym)
+		b := k.eval(cs, sy.b, bx, bin, "m", trace.Ref{}, fmt.Sprintf("short side of the corner rectangle (%d of them)", r.n))
+		var f1b, f2b, f1t, f2t float64
+		if strip {
+			nb := k.eval(cs, sy.nb, sy.nbx, []trace.Value{val("H_b", hb, "m"), val(sy.b, b, "m")}, "", trace.Ref{}, "")
+			f1b = k.eval(cs, sy.f1b, sy.s1bx, []trace.Value{val(sy.nb, nb, "")}, "", steinRef, "strip limit (L → ∞)")
+			f2b = k.eval(cs, sy.f2b, sy.s2bx, []trace.Value{val(sy.nb, nb, "")}, "", steinRef, "strip limit (L → ∞)")
+			if top {
+				nt := k.eval(cs, sy.nt, sy.ntx, []trace.Value{val("H_t", ht, "m"), val(sy.b, b, "m")}, "", trace.Ref{}, "")
+				f1t = k.eval(cs, sy.f1t, sy.s1tx, []trace.Value{val(sy.nt, nt, "")}, "", steinRef, "strip limit (L → ∞)")
+				f2t = k.eval(cs, sy.f2t, sy.s2tx, []trace.Value{val(sy.nt, nt, "")}, "", steinRef, "strip limit (L → ∞)")
+			}
+		} else {
+			lx, lin := side(r.kl, r.lsym)
+			l := k.eval(cs, sy.l, lx, lin, "m", trace.Ref{}, "long side of the corner rectangle")
+			M := k.eval(cs, sy.m, sy.mx, []trace.Value{val(sy.l, l, "m"), val(sy.b, b, "m")}, "", trace.Ref{}, "")
+			nb := k.eval(cs, sy.nb, sy.nbx, []trace.Value{val("H_b", hb, "m"), val(sy.b, b, "m")}, "", trace.Ref{}, "")
+			bin := []trace.Value{val(sy.m, M, ""), val(sy.nb, nb, "")}
+			f1b = k.eval(cs, sy.f1b, sy.f1bx, bin, "", steinRef, "Steinbrenner factor at the bottom")
+			f2b = k.eval(cs, sy.f2b, sy.f2bx, bin, "", steinRef, "Steinbrenner factor at the bottom")
+			if top {
+				nt := k.eval(cs, sy.nt, sy.ntx, []trace.Value{val("H_t", ht, "m"), val(sy.b, b, "m")}, "", trace.Ref{}, "")
+				tin := []trace.Value{val(sy.m, M, ""), val(sy.nt, nt, "")}
+				f1t = k.eval(cs, sy.f1t, sy.f1tx, tin, "", steinRef, "Steinbrenner factor at the top")
+				f2t = k.eval(cs, sy.f2t, sy.f2tx, tin, "", steinRef, "Steinbrenner factor at the top")
+			}
+		}
+		iin := []trace.Value{val("nu", nu, ""), val(sy.f1b, f1b, ""), val(sy.f2b, f2b, "")}
+		ie := sy.isx
+		if top {
+			ie = sy.isTopx
+			iin = append(iin, val(sy.f1t, f1t, ""), val(sy.f2t, f2t, ""))
+		}
+		iv := k.eval(cs, sy.is, ie, iin, "", steinRef, "(1 − ν²)ΔF1 + (1 − ν − 2ν²)ΔF2")
+		term := trace.Mul(trace.S(sy.b), trace.S(sy.is))
+		if r.n != 1 {
+			term = trace.Mul(trace.N(float64(r.n)), term)
+		}
+		if sum == nil {
+			sum = term
+		} else {
+			sum = trace.Add(sum, term)
+		}
+		sumIn = append(sumIn, val(sy.b, b, "m"), val(sy.is, iv, ""))
+	}
+	k.eval(cs, ix("s_i,", i), trace.Mul(trace.Div(trace.S("q_net"), trace.S(ksym)), sum), sumIn, "mm", steinRef, fmt.Sprintf("immediate settlement of %s (superposition of corner rectangles)", k.layerName(i)))
 }
 
 // layerRange is the part of layer `layer` in the table: sublayers

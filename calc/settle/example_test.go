@@ -51,7 +51,7 @@ func ExampleCompute() {
 	fmt.Println("verifies:", trace.Verify(r.Trace, 1e-9) == nil)
 	// Output:
 	// method: elastic+consolidation
-	// q         187.5 kPa
+	// q_SLS     187.5 kPa
 	// q_net     169.1 kPa
 	// z_inf      8.25 m
 	// s_i         9.2 mm
@@ -59,7 +59,7 @@ func ExampleCompute() {
 	// s_sec       0.0 mm
 	// s_total    53.6 mm
 	// s_lim      25.0 mm
-	// util       2.14
+	// util_s     2.14
 	// t_50       0.26 yr
 	// t_90       1.13 yr
 	// t = 0.25 yr: U = 0.49, s = 30.9 mm

@@ -3,6 +3,7 @@ package settle
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 
 	"github.com/plinth-calc/plinth/calc/site"
@@ -85,27 +86,46 @@ func (k *calc) creepAt(t float64) float64 {
 	return k.creep(t)
 }
 
-var (
-	fS   = trace.S
-	fN   = trace.N
-	fAdd = trace.Add
-	fSub = trace.Sub
-	fMul = trace.Mul
-	fDiv = trace.Div
-	fPow = trace.Pow
-	fFn  = trace.Fn
-)
-
 func val(sym string, v float64, unit string) trace.Value {
 	return trace.Value{Symbol: sym, V: v, Unit: unit}
 }
 
-// add appends a step when the working is being written and returns v.
-func (k *calc) add(cs, sym string, f trace.Expr, in []trace.Value, v float64, unit string, ref trace.Ref, note string) float64 {
+// eval is the recorder of a formula step: its value is f evaluated with
+// in (trace.Eval, the one evaluator), appended to the working when that is
+// written (k.full) and computed all the same when it is not, so every
+// number with a step comes from its printed formula. An input missing or
+// outside the formula's domain (a NaN or infinite value) is the trace's
+// error, which compute returns. in is copied only when the step is kept,
+// so a calculation run without its working allocates nothing here.
+func (k *calc) eval(cs, sym string, f trace.Expr, in []trace.Value, unit string, ref trace.Ref, note string) float64 {
 	if k.full {
-		k.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: in, Value: v, Unit: unit, Ref: ref, Note: note, Case: cs})
+		return k.t.Eval(trace.Step{Symbol: sym, Formula: f, Inputs: slices.Clone(in), Unit: unit, Ref: ref, Note: note, Case: cs})
+	}
+	v, err := trace.Eval(f, in)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		return k.t.Compute(trace.Step{Symbol: sym, Formula: f, Inputs: slices.Clone(in), Unit: unit, Ref: ref, Note: note, Case: cs})
 	}
 	return v
+}
+
+// take records a value that no formula gives, kind saying how it was
+// reached (given or assumed, read from a table, solved, summed), when the
+// working is written, and returns it. A NaN or infinite value is the
+// trace's error either way.
+func (k *calc) take(cs, sym string, kind trace.Kind, v float64, unit string, ref trace.Ref, note string) float64 {
+	if k.full || math.IsNaN(v) || math.IsInf(v, 0) {
+		k.t.Take(trace.Step{Symbol: sym, Kind: kind, Value: v, Unit: unit, Ref: ref, Note: note, Case: cs})
+	}
+	return v
+}
+
+// err returns the first step the calculation could not evaluate, with the
+// footing it belongs to, or nil.
+func (k *calc) err() error {
+	if err := k.t.Err(); err != nil {
+		return fmt.Errorf("settlement of %s: %w", k.f.Name, err)
+	}
+	return nil
 }
 
 // life returns the design working life for secondary compression and
@@ -122,7 +142,7 @@ func (k *calc) life(cs string) float64 {
 		note = "design working life for creep and secondary compression: assumed, default (category 4, building structures); give life to change it"
 		ref = trace.Ref{Source: trace.EN1990, Clause: "Table 2.1, category 4"}
 	}
-	return k.add(cs, "t_life", nil, nil, k.c.life, "yr", ref, note)
+	return k.take(cs, "t_life", trace.Given, k.c.life, "yr", ref, note)
 }
 
 // warn records a caution raised by the latest step.
@@ -153,11 +173,12 @@ func (k *calc) layerName(i int) string {
 
 // Formulas shared by every calculation (an Expr is immutable).
 var (
-	fxU0     = fMul(fS("gamma_w"), fSub(fS("z"), fS("z_w")))
-	fxSigEff = fSub(fS("sigma_v0"), fS("u_0"))
-	fxZmid   = fAdd(fS("z_t"), fDiv(fS("h"), fN(2)))
-	fxZb     = fSub(fS("z"), fS("D"))
-	fxSigF   = fAdd(fS("sigma'_v0"), fS("Delta_sigma"))
+	fxFlood  = trace.Mul(trace.S("gamma_w"), trace.S("h_w0"))
+	fxU0     = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("z"), trace.S("z_w")))
+	fxSigEff = trace.Sub(trace.S("sigma_v0"), trace.S("u_0"))
+	fxZmid   = trace.Add(trace.S("z_t"), trace.Div(trace.S("h"), trace.N(2)))
+	fxZb     = trace.Sub(trace.S("z"), trace.S("D"))
+	fxSigF   = trace.Add(trace.S("sigma'_v0"), trace.S("Delta_sigma"))
 	fxDry    [64]trace.Expr
 	fxWet    [64]trace.Expr
 	symGamma [64]string
@@ -171,8 +192,8 @@ func init() {
 		d := strconv.Itoa(i + 1)
 		symGamma[i], symH[i] = "gamma_"+d, "h_"+d
 		symGsat[i], symHw[i] = "gamma_sat,"+d, "h_w,"+d
-		fxDry[i] = fMul(fS(symGamma[i]), fS(symH[i]))
-		fxWet[i] = fMul(fS(symGsat[i]), fS(symHw[i]))
+		fxDry[i] = trace.Mul(trace.S(symGamma[i]), trace.S(symH[i]))
+		fxWet[i] = trace.Mul(trace.S(symGsat[i]), trace.S(symHw[i]))
 	}
 }
 
@@ -183,22 +204,21 @@ func layerSyms(i int) (dry, wet trace.Expr, g, h, gs, hw string) {
 	}
 	d := strconv.Itoa(i + 1)
 	g, h, gs, hw = "gamma_"+d, "h_"+d, "gamma_sat,"+d, "h_w,"+d
-	return fMul(fS(g), fS(h)), fMul(fS(gs), fS(hw)), g, h, gs, hw
+	return trace.Mul(trace.S(g), trace.S(h)), trace.Mul(trace.S(gs), trace.S(hw)), g, h, gs, hw
 }
 
 // ix returns prefix followed by the 1-based number of layer i.
 func ix(prefix string, i int) string { return prefix + strconv.Itoa(i+1) }
 
 // overburden appends σ_v0 = Σ γ h, u_0 and σ′_v0 at depth z (below ground)
-// and returns σ_v0, u_0 and σ′_v0 (Pa). The table uses the same values.
+// and returns σ_v0, u_0 and σ′_v0 (Pa), each from its formula.
 func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 	g := k.g
 	var terms []trace.Expr
 	var in []trace.Value
 	if h0 := g.Flood(); h0 > 0 {
-		terms = append(terms, fMul(fS("gamma_w"), fS("h_w0")))
+		terms = append(terms, fxFlood)
 		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
-		sv += g.Gw() * h0
 	}
 	for _, st := range g.Strata(z) {
 		fd, fw, gsym, hsym, gssym, hwsym := layerSyms(st.Layer)
@@ -209,37 +229,45 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 			terms = append(terms, fd)
 			in = append(in, val(gsym, st.Gamma, "kN/m3"), val(hsym, st.H(), "m"))
 		}
-		sv += st.Gamma * st.H()
 	}
-	if k.full {
-		if len(terms) == 0 {
-			k.add(cs, "sigma_v0", nil, nil, 0, "kPa", trace.Ref{}, "at ground level")
-		} else {
-			note := "total vertical stress from the ground model (h_w: thickness below the water table)"
-			if g.Flood() > 0 {
-				note = "total vertical stress from the ground model (h_w0: free water above ground level; h_w: thickness below the water table)"
-			}
-			k.add(cs, "sigma_v0", fAdd(terms[0], terms[1:]...), in, sv, "kPa", trace.Ref{}, note)
+	if len(terms) == 0 {
+		sv = k.take(cs, "sigma_v0", trace.Given, 0, "kPa", trace.Ref{}, "at ground level")
+	} else {
+		note := "total vertical stress from the ground model (h_w: thickness below the water table)"
+		if g.Flood() > 0 {
+			note = "total vertical stress from the ground model (h_w0: free water above ground level; h_w: thickness below the water table)"
 		}
+		sv = k.eval(cs, "sigma_v0", trace.Add(terms[0], terms[1:]...), in, "kPa", trace.Ref{}, note)
 	}
-	u = g.PoreP(z)
-	if u > 0 && !k.gwShown {
+	wet := g.Water.Set && z > g.Water.V
+	if wet && !k.gwShown {
 		k.gwShown = true
 		note := "unit weight of water, given"
 		if g.GammaW == 0 {
 			note = "unit weight of water: assumed, default (common practice); give gamma_w in the ground block to change it"
 		}
-		k.add(cs, "gamma_w", nil, nil, g.Gw(), "kN/m3", trace.Ref{}, note)
+		k.take(cs, "gamma_w", trace.Given, g.Gw(), "kN/m3", trace.Ref{}, note)
 	}
-	if u > 0 {
-		k.add(cs, "u_0", fxU0, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val("z", z, "m"), val("z_w", g.Water.V, "m")}, u, "kPa", trace.Ref{}, "hydrostatic pore pressure")
+	if wet {
+		u = k.eval(cs, "u_0", fxU0, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val("z", z, "m"), val("z_w", g.Water.V, "m")}, "kPa", trace.Ref{}, "hydrostatic pore pressure")
 	} else {
-		k.add(cs, "u_0", nil, nil, 0, "kPa", trace.Ref{}, "above the water table")
+		u = k.take(cs, "u_0", trace.Given, 0, "kPa", trace.Ref{}, "above the water table")
 	}
-	se = sv - u
-	k.add(cs, "sigma'_v0", fxSigEff, []trace.Value{val("sigma_v0", sv, "kPa"), val("u_0", u, "kPa")}, se, "kPa", trace.Ref{}, "vertical effective stress before loading")
+	se = k.eval(cs, "sigma'_v0", fxSigEff, []trace.Value{val("sigma_v0", sv, "kPa"), val("u_0", u, "kPa")}, "kPa", trace.Ref{}, "vertical effective stress before loading")
 	return sv, u, se
 }
+
+// Formulas of the load and the zone of influence.
+var (
+	fxAreaCircle = trace.Div(trace.Mul(trace.S("pi"), trace.Pow(trace.S("B"), trace.N(2))), trace.N(4))
+	fxAreaSquare = trace.Pow(trace.S("B"), trace.N(2))
+	fxAreaRect   = trace.Mul(trace.S("B"), trace.S("L"))
+	fxQ          = trace.Div(trace.S("V"), trace.S("A"))
+	fxQNet       = trace.Sub(trace.S("q"), trace.S("sigma_v0"))
+	fxZkB        = trace.Add(trace.S("D"), trace.Mul(trace.S("k"), trace.S("B")))
+	fxEta        = trace.Div(trace.S("Delta_sigma"), trace.S("sigma'_v0"))
+	fxZB         = trace.Add(trace.S("D"), trace.S("B"))
+)
 
 // load appends q, the base stresses and q_net.
 func (k *calc) load() {
@@ -247,29 +275,28 @@ func (k *calc) load() {
 	cs := "load"
 	if c.V.Set {
 		var fa trace.Expr
-		var in []trace.Value
+		in := []trace.Value{val("B", f.B, "m"), val("L", f.L, "m")}
 		switch f.Shape {
 		case site.Strip:
-			fa, in = fS("B"), []trace.Value{val("B", f.B, "m")}
+			fa, in = trace.S("B"), in[:1]
 		case site.Circle:
-			fa, in = fDiv(fMul(fS("pi"), fPow(fS("B"), fN(2))), fN(4)), []trace.Value{val("B", f.B, "m")}
+			fa, in = fxAreaCircle, in[:1]
 		case site.Square:
-			fa, in = fPow(fS("B"), fN(2)), []trace.Value{val("B", f.B, "m")}
+			fa, in = fxAreaSquare, in[:1]
 		default:
-			fa, in = fMul(fS("B"), fS("L")), []trace.Value{val("B", f.B, "m"), val("L", f.L, "m")}
+			fa = fxAreaRect
 		}
 		unit := "m2"
 		if f.Shape == site.Strip {
 			unit = "m2/m"
 		}
-		k.add(cs, "A", fa, in, c.area, unit, trace.Ref{}, "plan area of the footing")
-		k.add(cs, "q", fDiv(fS("V"), fS("A")), []trace.Value{val("V", c.V.V, "kN"), val("A", c.area, unit)}, c.q, "kPa", trace.Ref{}, "gross bearing pressure (SLS)")
+		a := k.eval(cs, "A", fa, in, unit, trace.Ref{}, "plan area of the footing")
+		c.q = k.eval(cs, "q", fxQ, []trace.Value{val("V", c.V.V, "kN"), val("A", a, unit)}, "kPa", trace.Ref{}, "gross bearing pressure (SLS)")
 	} else {
-		k.add(cs, "q", nil, nil, c.q, "kPa", trace.Ref{}, "gross bearing pressure (SLS), given")
+		k.take(cs, "q", trace.Given, c.q, "kPa", trace.Ref{}, "gross bearing pressure (SLS), given")
 	}
 	k.sv, k.u, k.se = k.overburden(cs, f.D)
-	k.qn = stress.Net(c.q, k.sv)
-	k.add(cs, "q_net", fSub(fS("q"), fS("sigma_v0")), []trace.Value{val("q", c.q, "kPa"), val("sigma_v0", k.sv, "kPa")}, k.qn, "kPa",
+	k.qn = k.eval(cs, "q_net", fxQNet, []trace.Value{val("q", c.q, "kPa"), val("sigma_v0", k.sv, "kPa")}, "kPa",
 		trace.Ref{Source: Craig2012, Clause: "net foundation pressure"}, "net bearing pressure: gross less the overburden removed")
 	if h0 := k.g.Flood(); h0 > 0 {
 		k.warn(cs, "water-above-ground", trace.SevCaution, trace.Ref{},
@@ -289,13 +316,14 @@ func (k *calc) depth() (float64, error) {
 	D := f.D
 	switch c.Depth.Rule {
 	case DepthFixed:
-		return k.add(cs, "z_inf", nil, nil, c.Depth.Z.V, "m", trace.Ref{}, "depth of influence, given"), nil
+		return k.take(cs, "z_inf", trace.Given, c.Depth.Z.V, "m", trace.Ref{}, "depth of influence, given"), nil
 	case DepthWidth:
-		kw := c.Depth.Widths.Or(widthsDefault(f))
-		z := D + kw*f.B
-		k.add(cs, "z_inf", fAdd(fS("D"), fMul(fS("k"), fS("B"))), []trace.Value{val("D", D, "m"), val("k", kw, ""), val("B", f.B, "m")}, z, "m",
-			trace.Ref{Source: Schmertmann1978, Clause: "depth of the strain influence diagram (2B to 4B)"}, "depth of influence: k·B below the base")
-		return z, nil
+		kw := c.Depth.Widths.V
+		if !c.Depth.Widths.Set {
+			kw = k.widths(cs)
+		}
+		return k.eval(cs, "z_inf", fxZkB, []trace.Value{val("D", D, "m"), val("k", kw, ""), val("B", f.B, "m")}, "m",
+			trace.Ref{Source: Schmertmann1978, Clause: "depth of the strain influence diagram (2B to 4B)"}, "depth of influence: k·B below the base"), nil
 	}
 	ratio := c.Depth.Ratio.Or(DefaultRatio)
 	gfun := func(zb float64) (float64, error) {
@@ -307,7 +335,13 @@ func (k *calc) depth() (float64, error) {
 	var root float64
 	found := false
 	prev := lo
-	for zb := step; zb <= capZ+step/2; zb += step {
+	if v, _ := gfun(lo); v <= 0 {
+		// the net pressure is already below the ratio at the base (a light
+		// load, or none net of the overburden): the zone ends there, and the
+		// minimum of B below the base applies
+		root, found = lo, true
+	}
+	for zb := step; !found && zb <= capZ+step/2; zb += step {
 		v, _ := gfun(zb)
 		if v <= 0 {
 			rt, err := solve.Brent(gfun, prev, zb, solve.Options{Tol: 1e-9 * f.B})
@@ -322,34 +356,42 @@ func (k *calc) depth() (float64, error) {
 	if !found {
 		root = capZ
 	}
-	z := D + root
-	minZ := D + f.B
+	z := D + root // the root is found below the base
 	if k.full {
-		ds := k.qn * k.infl(root)
-		se := k.g.SigmaVEff(z)
-		k.add(cs, "Delta_sigma", nil, nil, ds, "kPa", trace.Ref{}, "stress increase at the trial depth")
-		k.add(cs, "sigma'_v0", nil, nil, se, "kPa", trace.Ref{}, "effective overburden at the trial depth")
-		k.add(cs, "eta", fDiv(fS("Delta_sigma"), fS("sigma'_v0")), []trace.Value{val("Delta_sigma", ds, "kPa"), val("sigma'_v0", se, "kPa")}, ds/se, "",
+		// Δσ and σ′_v0 at the root, as the search evaluated them.
+		ds := k.take(cs, "Delta_sigma", trace.Solved, k.qn*k.infl(root), "kPa", trace.Ref{}, "stress increase at the trial depth")
+		se := k.take(cs, "sigma'_v0", trace.Solved, k.g.SigmaVEff(z), "kPa", trace.Ref{}, "effective overburden at the trial depth")
+		k.eval(cs, "eta", fxEta, []trace.Value{val("Delta_sigma", ds, "kPa"), val("sigma'_v0", se, "kPa")}, "",
 			trace.Ref{Source: Brent1973, Clause: "ch. 4, zero"}, fmt.Sprintf("solved for Δσ = %g σ′_v0 (common practice)", ratio))
 	}
 	switch {
 	case !found:
-		k.add(cs, "z_inf", nil, nil, z, "m", trace.Ref{}, "depth of influence: search limit reached")
+		z = k.take(cs, "z_inf", trace.Given, z, "m", trace.Ref{}, "depth of influence: search limit reached")
 		k.warn(cs, "depth-cap", trace.SevCaution, trace.Ref{}, fmt.Sprintf("Δσ did not fall to %g σ′_v0 within %g m below the base; the zone is cut there", ratio, capZ))
-	case z < minZ:
-		k.add(cs, "z_inf", fAdd(fS("D"), fS("B")), []trace.Value{val("D", D, "m"), val("B", f.B, "m")}, minZ, "m", trace.Ref{}, "depth of influence: not less than one width below the base (common practice)")
-		z = minZ
+	case z < D+f.B:
+		z = k.eval(cs, "z_inf", fxZB, []trace.Value{val("D", D, "m"), val("B", f.B, "m")}, "m", trace.Ref{}, "depth of influence: not less than one width below the base (common practice)")
 	default:
-		if k.full {
-			k.add(cs, "z_inf", nil, nil, z, "m", trace.Ref{}, fmt.Sprintf("depth of influence: where Δσ = %g σ′_v0", ratio))
-		}
+		z = k.take(cs, "z_inf", trace.Solved, z, "m", trace.Ref{}, fmt.Sprintf("depth of influence: where Δσ = %g σ′_v0", ratio))
 	}
 	return z, nil
 }
 
-// widthsDefault is 2 for L/B = 1 rising linearly to 4 at L/B = 10.
-func widthsDefault(f site.Footing) float64 {
-	return 2 + 2*(lb(f)-1)/9
+var fxWidths = trace.Add(trace.N(2), trace.Div(trace.Mul(trace.N(2), trace.Sub(trace.Div(trace.S("L"), trace.S("B")), trace.N(1))), trace.N(9)))
+
+// widths records k, the default depth of influence in widths below the
+// base: 2 for L/B = 1 rising linearly to 4 at L/B ≥ 10, the depth of
+// Schmertmann's strain influence diagram (the interpolation is common
+// practice).
+func (k *calc) widths(cs string) float64 {
+	f := k.f
+	ref := trace.Ref{Source: Schmertmann1978, Clause: "depth of the strain influence diagram (2B to 4B)"}
+	switch lb(f) {
+	case 1:
+		return k.take(cs, "k", trace.Tabulated, 2, "", ref, "depth of influence in widths: 2 for a square or circle; give widths to change it")
+	case 10:
+		return k.take(cs, "k", trace.Tabulated, 4, "", ref, "depth of influence in widths: 4 for a strip (L/B ≥ 10); give widths to change it")
+	}
+	return k.eval(cs, "k", fxWidths, []trace.Value{val("B", f.B, "m"), val("L", f.L, "m")}, "", ref, "depth of influence in widths: 2 for L/B = 1 rising linearly to 4 at L/B = 10 (common practice); give widths to change it")
 }
 
 // lb returns L/B capped to [1, 10] (a strip is 10).
@@ -371,7 +413,7 @@ func (k *calc) sublayers(top, bot float64) error {
 	if k.c.Sublayers == 0 {
 		note = "number of sublayers over the zone: assumed, default; give sublayers to change it"
 	}
-	k.add("zone of influence", "n_sub", nil, nil, float64(k.c.n), "", trace.Ref{}, note)
+	k.take("zone of influence", "n_sub", trace.Given, float64(k.c.n), "", trace.Ref{}, note)
 	type seg struct {
 		layer    int
 		top, bot float64
@@ -456,14 +498,13 @@ func (k *calc) sublayers(top, bot float64) error {
 // values the step formulas use (σ′_v0, Δσ, σ′_f).
 func (k *calc) explainSub(cs string, j int) (se, ds, sf float64) {
 	s := k.r.Sub[j]
-	k.add(cs, "z", fxZmid, []trace.Value{val("z_t", s.Top, "m"), val("h", s.H, "m")}, s.Z, "m", trace.Ref{}, "mid-depth of sublayer "+strconv.Itoa(j+1)+" (midpoint rule)")
-	_, _, se = k.overburden(cs, s.Z)
-	zb := s.Z - k.f.D
-	k.add(cs, "z_b", fxZb, []trace.Value{val("z", s.Z, "m"), val("D", k.f.D, "m")}, zb, "m", trace.Ref{}, "depth below the underside of the footing")
+	z := k.eval(cs, "z", fxZmid, []trace.Value{val("z_t", s.Top, "m"), val("h", s.H, "m")}, "m", trace.Ref{}, "mid-depth of sublayer "+strconv.Itoa(j+1)+" (midpoint rule)")
+	_, _, se = k.overburden(cs, z)
+	zb := k.eval(cs, "z_b", fxZb, []trace.Value{val("z", z, "m"), val("D", k.f.D, "m")}, "m", trace.Ref{}, "depth below the underside of the footing")
 	ds = s.DSigma
 	if k.full {
 		ds, _ = stress.Explain(k.t, k.f, k.so, zb, k.qn, cs)
 	}
-	sf = k.add(cs, "sigma'_f", fxSigF, []trace.Value{val("sigma'_v0", se, "kPa"), val("Delta_sigma", ds, "kPa")}, se+ds, "kPa", trace.Ref{}, "final vertical effective stress")
+	sf = k.eval(cs, "sigma'_f", fxSigF, []trace.Value{val("sigma'_v0", se, "kPa"), val("Delta_sigma", ds, "kPa")}, "kPa", trace.Ref{}, "final vertical effective stress")
 	return se, ds, sf
 }

@@ -86,7 +86,8 @@ type BB struct {
 
 // Result is a settlement calculation. Every number printed from it is a
 // field here; Trace holds the working (representative sublayers written out
-// in full, the rest in Sub) and Symbols the summary for the sheet.
+// in full, the rest in Sub) and Symbols the summary for the sheet, named
+// as Spec.Results names them.
 type Result struct {
 	Method  Method // the method used (Auto resolved)
 	Stress  stress.Method
@@ -126,7 +127,7 @@ func (r *Result) symbols() {
 	v := func(s string, x float64, u string) {
 		r.Symbols = append(r.Symbols, trace.Value{Symbol: s, V: x, Unit: u})
 	}
-	v("q", r.Q, "kPa")
+	v("q_SLS", r.Q, "kPa")
 	v("q_net", r.QNet, "kPa")
 	v("z_inf", r.ZInf, "m")
 	v("s_i", r.Si, "mm")
@@ -134,7 +135,7 @@ func (r *Result) symbols() {
 	v("s_sec", r.Ssec, "mm")
 	v("s_total", r.Total, "mm")
 	v("s_lim", r.Limit, "mm")
-	v("util", r.Util, "")
+	v("util_s", r.Util, "")
 	if r.T50.Set {
 		v("t_50", r.T50.V, "yr")
 	}

@@ -110,26 +110,28 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 	}
 	tr := &t.Trace
 	cs := "tilt"
-	add := func(sym string, fx trace.Expr, vin []trace.Value, v float64, unit string, r trace.Ref, note string) {
-		tr.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
+	eval := func(sym string, fx trace.Expr, vin []trace.Value, unit string, r trace.Ref, note string) float64 {
+		return tr.Eval(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Unit: unit, Ref: r, Note: note, Case: cs})
+	}
+	given := func(sym string, v float64, unit, note string) {
+		tr.Take(trace.Step{Symbol: sym, Kind: trace.Given, Value: v, Unit: unit, Note: note, Case: cs})
 	}
 	esym := "E'"
 	if t.Kind == "E_u" {
 		esym = "E_u"
-		add(esym, nil, nil, t.E, "MPa", trace.Ref{}, "undrained modulus of the founding layer (short term)")
-		add("nu", nil, nil, t.Nu, "", trace.Ref{}, "undrained Poisson's ratio")
+		given(esym, t.E, "MPa", "undrained modulus of the founding layer (short term)")
+		given("nu", t.Nu, "", "undrained Poisson's ratio")
 	} else {
-		add(esym, nil, nil, t.E, "MPa", trace.Ref{}, "drained modulus of the founding layer (long term)")
+		given(esym, t.E, "MPa", "drained modulus of the founding layer (long term)")
 		note := "Poisson's ratio"
 		if !l.Nu.Set {
 			note = "Poisson's ratio, assumed (common practice)"
 		}
-		add("nu", nil, nil, t.Nu, "", trace.Ref{}, note)
+		given("nu", t.Nu, "", note)
 	}
 	refC := trace.Ref{Source: Borowicka1943, Clause: "rigid circle under moment"}
 	tr.Cite(PoulosDavis1974)
 	for _, dir := range []string{"B", "L"} {
-		var m float64
 		var fx trace.Expr
 		var vin []trace.Value
 		for i, a := range in.Actions {
@@ -140,58 +142,55 @@ func TiltOf(in TiltInput) (*Tilt, error) {
 			if mi == 0 || in.Factors[i] == 0 {
 				continue
 			}
-			m += in.Factors[i] * mi
 			ms, ps := fmt.Sprintf("M_%s,%d", dir, i+1), fmt.Sprintf("f_%d", i+1)
-			term := fS(ms)
+			term := trace.S(ms)
 			vin = append(vin, val(ms, mi, "kNm"))
 			if in.Factors[i] != 1 {
-				term = fMul(fS(ps), term)
+				term = trace.Mul(trace.S(ps), term)
 				vin = append(vin, val(ps, in.Factors[i], ""))
 			}
 			if fx == nil {
 				fx = term
 			} else {
-				fx = fAdd(fx, term)
+				fx = trace.Add(fx, term)
 			}
 		}
 		if fx == nil {
+			continue
+		}
+		msym := "M_" + dir
+		m := eval(msym, fx, vin, "kNm", trace.Ref{Source: trace.EN1990, Clause: "6.5.3"}, "serviceability moment (the combination's factors on each action)")
+		if m == 0 {
 			continue
 		}
 		ax := TiltAxis{Dir: dir, M: math.Abs(m), A: f.B, C: f.Length()}
 		if dir == "L" {
 			ax.A, ax.C = ax.C, ax.A
 		}
-		msym := "M_" + dir
-		add(msym, fx, vin, m, "kNm", trace.Ref{Source: trace.EN1990, Clause: "6.5.3"}, "serviceability moment (the combination's factors on each action)")
-		if m == 0 {
-			continue
-		}
 		rsym := "R"
 		if f.Shape == site.Circle {
-			ax.R = f.B / 2
-			add(rsym, fDiv(fS("B"), fN(2)), []trace.Value{val("B", f.B, "m")}, ax.R, "m", trace.Ref{}, "radius")
+			ax.R = eval(rsym, trace.Div(trace.S("B"), trace.N(2)), []trace.Value{val("B", f.B, "m")}, "m", trace.Ref{}, "radius")
 		} else {
 			rsym = "R_" + dir
-			ax.R = math.Pow(ax.C*ax.A*ax.A*ax.A/(3*math.Pi), 0.25)
 			as, csym := "B", "L"
 			if dir == "L" {
 				as, csym = "L", "B"
 			}
-			add(rsym, fPow(fDiv(fMul(fS(csym), fPow(fS(as), fN(3))), fMul(fN(3), fS("pi"))), fN(0.25)),
-				[]trace.Value{val(as, ax.A, "m"), val(csym, ax.C, "m")}, ax.R, "m",
+			ax.R = eval(rsym, trace.Pow(trace.Div(trace.Mul(trace.S(csym), trace.Pow(trace.S(as), trace.N(3))), trace.Mul(trace.N(3), trace.S("pi"))), trace.N(0.25)),
+				[]trace.Value{val(as, ax.A, "m"), val(csym, ax.C, "m")}, "m",
 				trace.Ref{Source: RHW1970, Clause: "equivalent radius for rocking (from memory)"}, "circle of the same second moment of area about the axis of tilt")
 		}
-		ax.Tan = 3 * (1 - t.Nu*t.Nu) * ax.M / (4 * t.E * ax.R * ax.R * ax.R)
 		tsym := "omega_" + dir
-		add(tsym, fDiv(fMul(fN(3), fSub(fN(1), fPow(fS("nu"), fN(2))), fFn("abs", fS(msym))), fMul(fN(4), fS(esym), fPow(fS(rsym), fN(3)))),
-			[]trace.Value{val("nu", t.Nu, ""), val(msym, m, "kNm"), val(esym, t.E, "MPa"), val(rsym, ax.R, "m")}, ax.Tan, "", refC,
+		ax.Tan = eval(tsym, trace.Div(trace.Mul(trace.N(3), trace.Sub(trace.N(1), trace.Pow(trace.S("nu"), trace.N(2))), trace.Fn("abs", trace.S(msym))), trace.Mul(trace.N(4), trace.S(esym), trace.Pow(trace.S(rsym), trace.N(3)))),
+			[]trace.Value{val("nu", t.Nu, ""), val(msym, m, "kNm"), val(esym, t.E, "MPa"), val(rsym, ax.R, "m")}, "", refC,
 			"tilt as a slope, tan θ (rigid circle on an elastic half-space)")
-		ax.Theta = math.Atan(ax.Tan)
-		add("theta_"+dir, fFn("atan", fS(tsym)), []trace.Value{val(tsym, ax.Tan, "")}, ax.Theta, "deg", trace.Ref{}, "tilt")
-		ax.Delta = ax.A * ax.Tan
-		add("delta_s_"+dir, fMul(fS(sideSym(dir)), fS(tsym)), []trace.Value{val(sideSym(dir), ax.A, "m"), val(tsym, ax.Tan, "")}, ax.Delta, "mm", trace.Ref{}, "settlement difference between the edges across "+sideSym(dir))
+		ax.Theta = eval("theta_"+dir, trace.Fn("atan", trace.S(tsym)), []trace.Value{val(tsym, ax.Tan, "")}, "deg", trace.Ref{}, "tilt")
+		ax.Delta = eval("delta_s_"+dir, trace.Mul(trace.S(sideSym(dir)), trace.S(tsym)), []trace.Value{val(sideSym(dir), ax.A, "m"), val(tsym, ax.Tan, "")}, "mm", trace.Ref{}, "settlement difference between the edges across "+sideSym(dir))
 		t.Axes = append(t.Axes, ax)
 		t.Values = append(t.Values, val("theta_"+dir, ax.Theta, "deg"), val(tsym, ax.Tan, ""), val("delta_s_"+dir, ax.Delta, "mm"))
+	}
+	if err := tr.Err(); err != nil {
+		return nil, fmt.Errorf("tilt of %s: %w", w, err)
 	}
 	if len(t.Axes) == 0 {
 		return nil, &site.InputError{Where: w, Param: "tilt", Msg: "the serviceability load has no moment (M_B, M_L): there is no tilt to compute"}

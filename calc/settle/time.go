@@ -101,6 +101,65 @@ func solveTv(u float64) float64 {
 	return r.X
 }
 
+// Engine functions of the time working, printed by name and evaluated by
+// their own code: the inverse of U found by Brent's method, and
+// Terzaghi's series. A value outside their domain gives NaN, which the
+// recorder refuses.
+var (
+	fnTv = func(a []float64) float64 {
+		if !(a[0] >= 0 && a[0] < 1) {
+			return math.NaN()
+		}
+		return timeFactor(a[0])
+	}
+	fnU = func(a []float64) float64 {
+		if !(a[0] >= 0) || math.IsInf(a[0], 0) {
+			return math.NaN()
+		}
+		return degree(a[0])
+	}
+	fxTvU    = trace.Named("T_v", fnTv, trace.S("U"))
+	fxHThick = trace.Sub(trace.S("z_bot"), trace.S("z_top"))
+	fxHInf   = trace.Sub(trace.S("z_inf"), trace.S("z_top"))
+)
+
+// tsym holds the symbols and formulas of layer i's time working (i
+// numbered from 1 in the symbols).
+type tsym struct {
+	h, hdr, cv, t50, t90, tp, hc, ep, sc, ssec, tv, u string
+	hdr1, hdr2, t50x, t90x, tpx, epx, ssecx, tvx, ux  trace.Expr
+}
+
+var tsyms [64]*tsym
+
+func init() {
+	for i := range tsyms {
+		tsyms[i] = newTsym(i)
+	}
+}
+
+func layerTime(i int) *tsym {
+	if i < len(tsyms) {
+		return tsyms[i]
+	}
+	return newTsym(i)
+}
+
+func newTsym(i int) *tsym {
+	s := &tsym{h: ix("H_", i), hdr: ix("H_dr,", i), cv: ix("c_v,", i), t50: ix("t_50,", i), t90: ix("t_90,", i), tp: ix("t_p,", i),
+		hc: ix("H_c,", i), ep: ix("e_p,", i), sc: ix("s_c,", i), ssec: ix("s_sec,", i), tv: ix("T_v,", i), u: ix("U_", i)}
+	S := trace.S
+	s.hdr1 = S(s.h)
+	s.hdr2 = trace.Div(S(s.h), trace.N(2))
+	tOf := func(T string) trace.Expr { return trace.Div(trace.Mul(S(T), trace.Pow(S(s.hdr), trace.N(2))), S(s.cv)) }
+	s.t50x, s.t90x, s.tpx = tOf("T_50"), tOf("T_90"), tOf("T_95")
+	s.epx = trace.Sub(S("e_0"), trace.Mul(trace.Add(trace.N(1), S("e_0")), trace.Div(S(s.sc), S(s.hc))))
+	s.ssecx = trace.Mul(trace.Div(trace.Mul(S("C_alpha"), S(s.hc)), trace.Add(trace.N(1), S(s.ep))), trace.Fn("log10", trace.Div(S("t_life"), S(s.tp))))
+	s.tvx = trace.Div(trace.Mul(S(s.cv), S("t")), trace.Pow(S(s.hdr), trace.N(2)))
+	s.ux = trace.Named("U", fnU, S(s.tv))
+	return s
+}
+
 // timed is a consolidating layer with a time scale.
 type timed struct {
 	li  int // index in r.Layers
@@ -123,7 +182,10 @@ func (k *calc) timing() {
 		i := lr.Layer
 		l := g.Layers[i]
 		name := lr.Name
-		cs := name + ": time"
+		cs := ""
+		if k.full {
+			cs = name + ": time"
+		}
 		if !l.Cv.Set {
 			if len(k.c.Times) > 0 {
 				k.unverified(fmt.Sprintf("%s has no c_v for the time curve asked for", name))
@@ -131,13 +193,20 @@ func (k *calc) timing() {
 			k.warn(cs, "no-cv", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no c_v given: its consolidation settlement is shown as complete at every time, and it has no t_50 or t_90", name))
 			continue
 		}
+		ts := layerTime(i)
 		top := math.Max(l.Top, k.f.D)
 		bot := g.Bottom(i)
 		unbounded := math.IsInf(bot, 1)
 		if unbounded {
 			bot = math.Max(r.ZInf, top+1e-6)
 		}
-		H := bot - top
+		var H float64
+		if unbounded {
+			H = k.eval(cs, ts.h, fxHInf, []trace.Value{val("z_inf", bot, "m"), val("z_top", top, "m")}, "m", trace.Ref{}, "drainage thickness: the layer has no base in the ground model, taken to the bottom of the zone")
+			k.warn(cs, "unbounded-layer", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no base given, so its drainage thickness is taken to the bottom of the zone of influence; give the layer below to fix the drainage path", name))
+		} else {
+			H = k.eval(cs, ts.h, fxHThick, []trace.Value{val("z_bot", bot, "m"), val("z_top", top, "m")}, "m", trace.Ref{}, "thickness of the consolidating layer below the base")
+		}
 		topDrains := i == 0 || !g.Layers[i-1].Fine()
 		botDrains := !unbounded && i+1 < len(g.Layers) && !g.Layers[i+1].Fine()
 		two := topDrains && botDrains
@@ -147,25 +216,17 @@ func (k *calc) timing() {
 		case DrainTwoWay:
 			two = true
 		}
-		hdr := H
 		lr.Drainage = "one-way"
+		hx := ts.hdr1
 		if two {
-			hdr = H / 2
 			lr.Drainage = "two-way"
+			hx = ts.hdr2
 		}
-		lr.H, lr.Hdr, lr.Cv = H, hdr, l.Cv.V
+		how := ""
 		if k.full {
-			if unbounded {
-				k.add(cs, ix("H_", i), fSub(fS("z_inf"), fS("z_top")), []trace.Value{val("z_inf", bot, "m"), val("z_top", top, "m")}, H, "m", trace.Ref{}, "drainage thickness: the layer has no base in the ground model, taken to the bottom of the zone")
-				k.warn(cs, "unbounded-layer", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no base given, so its drainage thickness is taken to the bottom of the zone of influence; give the layer below to fix the drainage path", name))
-			} else {
-				k.add(cs, ix("H_", i), fSub(fS("z_bot"), fS("z_top")), []trace.Value{val("z_bot", bot, "m"), val("z_top", top, "m")}, H, "m", trace.Ref{}, "thickness of the consolidating layer below the base")
-			}
-			how := "one-way drainage: H_dr = H"
-			var hx trace.Expr = fS(ix("H_", i))
+			how = "one-way drainage: H_dr = H"
 			if two {
 				how = "two-way drainage: H_dr = H/2"
-				hx = fDiv(hx, fN(2))
 			}
 			switch {
 			case k.c.Drainage != DrainAuto:
@@ -179,24 +240,21 @@ func (k *calc) timing() {
 			default:
 				how += " (no free-draining boundary found)"
 			}
-			k.add(cs, ix("H_dr,", i), hx, []trace.Value{val(ix("H_", i), H, "m")}, hdr, "m", refU, how)
-			if k.c.Drainage == DrainAuto && !topDrains && !botDrains {
-				k.warn(cs, "no-drain", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no free-draining boundary identified: one-way drainage over its thickness assumed", name))
-			}
 		}
-		for _, p := range []struct {
-			u   float64
-			sym string
-			dst *site.Opt
-		}{{0.5, "50", &lr.T50}, {0.9, "90", &lr.T90}} {
-			T := timeFactor(p.u)
-			t := T * hdr * hdr / l.Cv.V
+		hdr := k.eval(cs, ts.hdr, hx, []trace.Value{val(ts.h, H, "m")}, "m", refU, how)
+		if k.c.Drainage == DrainAuto && !topDrains && !botDrains {
+			k.warn(cs, "no-drain", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no free-draining boundary identified: one-way drainage over its thickness assumed", name))
+		}
+		lr.H, lr.Hdr, lr.Cv = H, hdr, l.Cv.V
+		for _, p := range [...]struct {
+			u      float64
+			T, sym string
+			fx     trace.Expr
+			dst    *site.Opt
+		}{{0.5, "T_50", ts.t50, ts.t50x, &lr.T50}, {0.9, "T_90", ts.t90, ts.t90x, &lr.T90}} {
+			T := k.eval(cs, p.T, fxTvU, []trace.Value{val("U", p.u, "")}, "", refU, "time factor, inverse of U(T_v) by Brent's method")
+			t := k.eval(cs, p.sym, p.fx, []trace.Value{val(p.T, T, ""), val(ts.hdr, hdr, "m"), val(ts.cv, l.Cv.V, "m2/yr")}, "yr", refU, "")
 			*p.dst = site.Some(t)
-			if k.full {
-				k.add(cs, "T_"+p.sym, fFn("T_v", fS("U")), []trace.Value{val("U", p.u, "")}, T, "", refU, "time factor, inverse of U(T_v) by Brent's method")
-				k.add(cs, ix("t_"+p.sym+",", i), fDiv(fMul(fS("T_"+p.sym), fPow(fS(ix("H_dr,", i)), fN(2))), fS(ix("c_v,", i))),
-					[]trace.Value{val("T_"+p.sym, T, ""), val(ix("H_dr,", i), hdr, "m"), val(ix("c_v,", i), l.Cv.V, "m2/yr")}, t, "yr", refU, "")
-			}
 		}
 		tl = append(tl, timed{li: li, cv: l.Cv.V, hdr: hdr, sc: lr.Sc})
 	}
@@ -213,23 +271,19 @@ func (k *calc) composite(tl []timed) {
 	}
 	r := k.r
 	cs := "time"
-	for _, p := range []struct {
+	for _, p := range [...]struct {
 		u   float64
 		sym string
 		dst *site.Opt
-	}{{0.5, "50", &r.T50}, {0.9, "90", &r.T90}} {
+	}{{0.5, "t_50", &r.T50}, {0.9, "t_90", &r.T90}} {
 		if len(tl) == 1 {
 			lr := r.Layers[tl[0].li]
-			v := lr.T50.V
+			ts := layerTime(lr.Layer)
+			src, v := ts.t50, lr.T50.V
 			if p.u == 0.9 {
-				v = lr.T90.V
+				src, v = ts.t90, lr.T90.V
 			}
-			*p.dst = site.Some(v)
-			if !k.full {
-				continue
-			}
-			src := ix("t_"+p.sym+",", lr.Layer)
-			k.add(cs, "t_"+p.sym, fS(src), []trace.Value{val(src, v, "yr")}, v, "yr", refU, "the only consolidating layer with c_v")
+			*p.dst = site.Some(k.eval(cs, p.sym, trace.S(src), []trace.Value{val(src, v, "yr")}, "yr", refU, "the only consolidating layer with c_v"))
 			continue
 		}
 		var total, hi float64
@@ -252,7 +306,7 @@ func (k *calc) composite(tl []timed) {
 		if !k.full {
 			continue
 		}
-		k.add(cs, "t_"+p.sym, nil, nil, root.X, "yr", trace.Ref{Source: Brent1973, Clause: "ch. 4, zero"},
+		k.take(cs, p.sym, trace.Solved, root.X, "yr", trace.Ref{Source: Brent1973, Clause: "ch. 4, zero"},
 			fmt.Sprintf("time at which Σ U(c_v t/H_dr²)·s_c of the consolidating layers reaches %g%% of their total (Brent's method, %d iterations, tolerance %.2g s)", p.u*100, root.Iter, root.Tol))
 	}
 }
@@ -275,50 +329,46 @@ func (k *calc) secondary() {
 			continue
 		}
 		i := lr.Layer
+		ts := layerTime(i)
 		var tp float64
 		switch {
 		case k.c.Tp.Set:
-			tp = k.add(cs, ix("t_p,", i), nil, nil, k.c.Tp.V, "yr", trace.Ref{}, "end of primary consolidation, given")
+			tp = k.take(cs, ts.tp, trace.Given, k.c.Tp.V, "yr", trace.Ref{}, "end of primary consolidation, given")
 		case lr.Cv > 0:
-			T := timeFactor(0.95)
-			tp = T * lr.Hdr * lr.Hdr / lr.Cv
-			if k.full {
-				k.add(cs, "T_95", fFn("T_v", fS("U")), []trace.Value{val("U", 0.95, "")}, T, "", refU, "")
-				k.add(cs, ix("t_p,", i), fDiv(fMul(fS("T_95"), fPow(fS(ix("H_dr,", i)), fN(2))), fS(ix("c_v,", i))),
-					[]trace.Value{val("T_95", T, ""), val(ix("H_dr,", i), lr.Hdr, "m"), val(ix("c_v,", i), lr.Cv, "m2/yr")}, tp, "yr", refU, "end of primary consolidation taken at U = 95 % (common practice)")
-			}
+			T := k.eval(cs, "T_95", fxTvU, []trace.Value{val("U", 0.95, "")}, "", refU, "")
+			tp = k.eval(cs, ts.tp, ts.tpx, []trace.Value{val("T_95", T, ""), val(ts.hdr, lr.Hdr, "m"), val(ts.cv, lr.Cv, "m2/yr")}, "yr", refU, "end of primary consolidation taken at U = 95 % (common practice)")
 		default:
 			k.warn(cs, "secondary-no-tp", trace.SevCaution, trace.Ref{}, fmt.Sprintf("%s: no c_v and no t_p given: secondary compression not computed", name))
 			continue
 		}
 		lr.Tp = site.Some(tp)
-		hc := lr.Bot - lr.Top
-		ep := l.E0.V - (1+l.E0.V)*lr.Sc/hc
+		hc := k.eval(cs, ts.hc, fxHThick, []trace.Value{val("z_bot", lr.Bot, "m"), val("z_top", lr.Top, "m")}, "m", trace.Ref{}, "compressing thickness within the zone of influence")
+		ep := k.eval(cs, ts.ep, ts.epx, []trace.Value{val("e_0", l.E0.V, ""), val(ts.sc, lr.Sc, "mm"), val(ts.hc, hc, "m")}, "", refCc, "void ratio at the end of primary consolidation (average strain of the layer)")
 		lr.Ep = site.Some(ep)
-		ssym := ix("s_c,", i)
-		k.add(cs, ix("H_c,", i), fSub(fS("z_bot"), fS("z_top")), []trace.Value{val("z_bot", lr.Bot, "m"), val("z_top", lr.Top, "m")}, hc, "m", trace.Ref{}, "compressing thickness within the zone of influence")
-		k.add(cs, ix("e_p,", i), fSub(fS("e_0"), fMul(fAdd(fN(1), fS("e_0")), fDiv(fS(ssym), fS(ix("H_c,", i))))),
-			[]trace.Value{val("e_0", l.E0.V, ""), val(ssym, lr.Sc, "mm"), val(ix("H_c,", i), hc, "m")}, ep, "", refCc, "void ratio at the end of primary consolidation (average strain of the layer)")
 		k.life(cs)
 		if life <= tp {
-			k.add(cs, ix("s_sec,", i), nil, nil, 0, "mm", trace.Ref{}, "the design life ends before primary consolidation")
+			k.take(cs, ts.ssec, trace.Given, 0, "mm", trace.Ref{}, "the design life ends before primary consolidation")
 			continue
 		}
-		v := l.Calpha.V * hc / (1 + ep) * math.Log10(life/tp)
-		lr.Ssec = v
-		k.add(cs, ix("s_sec,", i), fMul(fDiv(fMul(fS("C_alpha"), fS(ix("H_c,", i))), fAdd(fN(1), fS(ix("e_p,", i)))), fFn("log10", fDiv(fS("t_life"), fS(ix("t_p,", i))))),
-			[]trace.Value{val("C_alpha", l.Calpha.V, ""), val(ix("H_c,", i), hc, "m"), val(ix("e_p,", i), ep, ""), val("t_life", life, "yr"), val(ix("t_p,", i), tp, "yr")},
-			v, "mm", trace.Ref{Source: TPM1996, Clause: "secondary compression, C_α/(1 + e_p) per log cycle of time"}, "secondary compression at the design life t_life")
+		lr.Ssec = k.eval(cs, ts.ssec, ts.ssecx, k.secIn(lr, l, life), "mm", trace.Ref{Source: TPM1996, Clause: "secondary compression, C_α/(1 + e_p) per log cycle of time"}, "secondary compression at the design life t_life")
 	}
 }
 
-// secAt is the secondary compression of all layers at time t.
+// secIn returns the inputs of layer lr's secondary compression at time t.
+func (k *calc) secIn(lr *LayerResult, l site.Layer, t float64) []trace.Value {
+	ts := layerTime(lr.Layer)
+	return []trace.Value{val("C_alpha", l.Calpha.V, ""), val(ts.hc, lr.Bot-lr.Top, "m"), val(ts.ep, lr.Ep.V, ""), val("t_life", t, "yr"), val(ts.tp, lr.Tp.V, "yr")}
+}
+
+// secAt is the secondary compression of all layers at time t, each by the
+// formula of its working with t for t_life.
 func (k *calc) secAt(t float64) float64 {
 	var s float64
-	for _, lr := range k.r.Layers {
+	for i := range k.r.Layers {
+		lr := &k.r.Layers[i]
 		if lr.Ssec > 0 && lr.Tp.Set && t > lr.Tp.V {
-			l := k.g.Layers[lr.Layer]
-			s += l.Calpha.V * (lr.Bot - lr.Top) / (1 + lr.Ep.V) * math.Log10(t/lr.Tp.V)
+			v, _ := trace.Eval(layerTime(lr.Layer).ssecx, k.secIn(lr, k.g.Layers[lr.Layer], t))
+			s += v
 		}
 	}
 	return s
@@ -334,40 +384,32 @@ func (k *calc) curve(tl []timed) {
 		}
 		var sc float64
 		in := []trace.Value{val("s_i", r.Si, "mm")}
-		var fx trace.Expr = fS("s_i")
+		var fx trace.Expr = trace.S("s_i")
 		timedSet := map[int]bool{}
 		for _, x := range tl {
 			lr := r.Layers[x.li]
 			timedSet[x.li] = true
-			i := lr.Layer
-			T := x.cv * t / (x.hdr * x.hdr)
-			u := degree(T)
+			ts := layerTime(lr.Layer)
+			T := k.eval(cs, ts.tv, ts.tvx, []trace.Value{val(ts.cv, x.cv, "m2/yr"), val("t", t, "yr"), val(ts.hdr, x.hdr, "m")}, "", refU, "")
+			u := k.eval(cs, ts.u, ts.ux, []trace.Value{val(ts.tv, T, "")}, "", refU, "Terzaghi's series, converged")
 			sc += u * lr.Sc
-			if k.full {
-				k.add(cs, ix("T_v,", i), fDiv(fMul(fS(ix("c_v,", i)), fS("t")), fPow(fS(ix("H_dr,", i)), fN(2))),
-					[]trace.Value{val(ix("c_v,", i), x.cv, "m2/yr"), val("t", t, "yr"), val(ix("H_dr,", i), x.hdr, "m")}, T, "", refU, "")
-				k.add(cs, ix("U_", i), fFn("U", fS(ix("T_v,", i))), []trace.Value{val(ix("T_v,", i), T, "")}, u, "", refU, "Terzaghi's series, converged")
-				fx = fAdd(fx, fMul(fS(ix("U_", i)), fS(ix("s_c,", i))))
-				in = append(in, val(ix("U_", i), u, ""), val(ix("s_c,", i), lr.Sc, "mm"))
-			}
+			fx = trace.Add(fx, trace.Mul(trace.S(ts.u), trace.S(ts.sc)))
+			in = append(in, val(ts.u, u, ""), val(ts.sc, lr.Sc, "mm"))
 		}
 		for li, lr := range r.Layers {
 			if lr.Sc > 0 && !timedSet[li] {
 				sc += lr.Sc
-				if k.full {
-					fx = fAdd(fx, fS(ix("s_c,", lr.Layer)))
-					in = append(in, val(ix("s_c,", lr.Layer), lr.Sc, "mm"))
-				}
+				fx = trace.Add(fx, trace.S(layerTime(lr.Layer).sc))
+				in = append(in, val(layerTime(lr.Layer).sc, lr.Sc, "mm"))
 			}
 		}
 		sec := k.secAt(t) + k.creepAt(t)
-		if sec > 0 && k.full {
-			k.add(cs, "s_sec,t", nil, nil, sec, "mm", trace.Ref{}, "secondary compression and creep at t (formulas as at the design life)")
-			fx = fAdd(fx, fS("s_sec,t"))
+		if sec > 0 {
+			sec = k.take(cs, "s_sec,t", trace.Summed, sec, "mm", trace.Ref{}, "secondary compression and creep at t (formulas as at the design life)")
+			fx = trace.Add(fx, trace.S("s_sec,t"))
 			in = append(in, val("s_sec,t", sec, "mm"))
 		}
-		s := r.Si + sc + sec
-		k.add(cs, "s_t", fx, in, s, "mm", trace.Ref{}, "settlement at time t")
+		s := k.eval(cs, "s_t", fx, in, "mm", trace.Ref{}, "settlement at time t")
 		u := 1.0
 		if r.Sc > 0 {
 			u = sc / r.Sc

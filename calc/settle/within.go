@@ -1,7 +1,7 @@
 package settle
 
 import (
-	"math"
+	"fmt"
 
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/stress"
@@ -60,34 +60,35 @@ func WithinFooting(in Input) (*Within, error) {
 	w := &Within{Centre: ra.Total, Corner: rc.Total}
 	t := &w.Trace
 	cs := "within the footing"
-	add := func(sym string, fx trace.Expr, vin []trace.Value, v float64, unit string, r trace.Ref, note string) {
-		t.Add(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Value: v, Unit: unit, Ref: r, Note: note, Case: cs})
-	}
 	ref := trace.Ref{Source: Bowles1996, Clause: "§5-6, superposition of corner rectangles"}
-	add("s_centre", nil, nil, w.Centre, "mm", ref, "total settlement at the centre ("+ra.Method.String()+")")
+	eval := func(sym string, fx trace.Expr, vin []trace.Value, unit string, r trace.Ref, note string) float64 {
+		return t.Eval(trace.Step{Symbol: sym, Formula: fx, Inputs: vin, Unit: unit, Ref: r, Note: note, Case: cs})
+	}
+	// The settlements at the points are the totals of calculations run
+	// without their working (their formulas are those of Compute's).
+	take := func(sym string, v float64, note string) {
+		t.Take(trace.Step{Symbol: sym, Kind: trace.Summed, Value: v, Unit: "mm", Ref: ref, Note: note, Case: cs})
+	}
+	take("s_centre", w.Centre, "total settlement at the centre ("+ra.Method.String()+")")
 	edge := "corner"
 	if f.Shape == site.Strip || f.Shape == site.Circle {
 		edge = "edge"
 	}
-	add("s_"+edge, nil, nil, w.Corner, "mm", ref, "total settlement at the "+edge+", same method, stress distribution and sublayers")
-	w.Delta = w.Centre - w.Corner
-	add("delta_s_in", fSub(fS("s_centre"), fS("s_"+edge)), []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm")}, w.Delta, "mm", trace.Ref{}, "differential settlement within the footing")
+	take("s_"+edge, w.Corner, "total settlement at the "+edge+", same method, stress distribution and sublayers")
+	w.Delta = eval("delta_s_in", trace.Sub(trace.S("s_centre"), trace.S("s_"+edge)), []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm")}, "mm", trace.Ref{}, "differential settlement within the footing")
 	switch f.Shape {
 	case site.Strip, site.Circle:
-		w.Dist = f.B / 2
-		add("d", fDiv(fS("B"), fN(2)), []trace.Value{val("B", f.B, "m")}, w.Dist, "m", trace.Ref{}, "centre to edge")
+		w.Dist = eval("d", trace.Div(trace.S("B"), trace.N(2)), []trace.Value{val("B", f.B, "m")}, "m", trace.Ref{}, "centre to edge")
 	default:
 		L := f.Length()
-		w.Dist = math.Hypot(f.B, L) / 2
-		add("d", fDiv(fFn("sqrt", fAdd(fPow(fS("B"), fN(2)), fPow(fS("L"), fN(2)))), fN(2)), []trace.Value{val("B", f.B, "m"), val("L", L, "m")}, w.Dist, "m", trace.Ref{}, "centre to corner (half-diagonal)")
+		w.Dist = eval("d", trace.Div(trace.Fn("sqrt", trace.Add(trace.Pow(trace.S("B"), trace.N(2)), trace.Pow(trace.S("L"), trace.N(2)))), trace.N(2)), []trace.Value{val("B", f.B, "m"), val("L", L, "m")}, "m", trace.Ref{}, "centre to corner (half-diagonal)")
 	}
-	w.Beta = w.Delta / w.Dist
-	add("beta_in", fDiv(fS("delta_s_in"), fS("d")), []trace.Value{val("delta_s_in", w.Delta, "mm"), val("d", w.Dist, "m")}, w.Beta, "", trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion within the footing")
+	w.Beta = eval("beta_in", trace.Div(trace.S("delta_s_in"), trace.S("d")), []trace.Value{val("delta_s_in", w.Delta, "mm"), val("d", w.Dist, "m")}, "", trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion within the footing")
 	t.WarnAll(trace.Caution{Code: "within-flexible", Severity: trace.SevNote, Case: cs,
 		Message: "the footing is taken as flexible: a stiff footing or raft spreads the load and settles more evenly than this"})
 	w.Values = []trace.Value{val("s_centre", w.Centre, "mm"), val("s_"+edge, w.Corner, "mm"), val("delta_s_in", w.Delta, "mm"), val("beta_in", w.Beta, "")}
 	if edge == "edge" {
-		return w, nil
+		return w.done(f.Name)
 	}
 	for _, m := range []struct {
 		p          stress.Point
@@ -102,7 +103,7 @@ func WithinFooting(in Input) (*Within, error) {
 		}
 		*m.s = r.Total
 		ss := "s_mid_" + m.side
-		add(ss, nil, nil, r.Total, "mm", ref, "total settlement at the "+m.what+", "+m.side+"/2 from the centre")
+		take(ss, r.Total, "total settlement at the "+m.what+", "+m.side+"/2 from the centre")
 		side, sv := m.side, f.B
 		if m.side == "L" {
 			sv = f.Length()
@@ -110,10 +111,18 @@ func WithinFooting(in Input) (*Within, error) {
 				side = "B"
 			}
 		}
-		*m.beta = (w.Centre - r.Total) / (sv / 2)
-		add("beta_"+m.side, fDiv(fSub(fS("s_centre"), fS(ss)), fDiv(fS(side), fN(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(side, sv, "m")}, *m.beta, "",
+		*m.beta = eval("beta_"+m.side, trace.Div(trace.Sub(trace.S("s_centre"), trace.S(ss)), trace.Div(trace.S(side), trace.N(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(side, sv, "m")}, "",
 			trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion from the centre to the "+m.what)
 		w.Values = append(w.Values, val(ss, r.Total, "mm"), val("beta_"+m.side, *m.beta, ""))
+	}
+	return w.done(f.Name)
+}
+
+// done returns w, or the first of its steps whose formula was out of its
+// domain.
+func (w *Within) done(name string) (*Within, error) {
+	if err := w.Trace.Err(); err != nil {
+		return nil, fmt.Errorf("settlement within %s: %w", name, err)
 	}
 	return w, nil
 }

@@ -70,6 +70,24 @@ func (f Footing) Area() float64 {
 	return f.B * f.B
 }
 
+// ForceUnit is the unit a footing's forces are given and printed in: kN,
+// or kN/m for a strip (per metre run).
+func (f Footing) ForceUnit() string {
+	if f.Shape == Strip {
+		return "kN/m"
+	}
+	return "kN"
+}
+
+// MomentUnit is the unit of a footing's moments: kNm, or kNm/m for a
+// strip.
+func (f Footing) MomentUnit() string {
+	if f.Shape == Strip {
+		return "kNm/m"
+	}
+	return "kNm"
+}
+
 // MinWidth is the smallest footing width or length accepted, m.
 const MinWidth = 0.1
 
@@ -125,6 +143,18 @@ type Action struct {
 	Psi0       Opt  // combination factor ψ0 (variable actions), 0–1; EN 1990 Table A1.1
 	Psi2       Opt  // quasi-permanent factor ψ2 (variable actions), 0–1, for long-term settlement
 	Favourable bool // a permanent action that always helps (e.g. a counterweight): γ_G,inf applies
+}
+
+// Sum adds the characteristic actions as given, each component
+// unfactored (ΣV, ΣH_B, ΣH_L, ΣM_B, ΣM_L; per metre run for a strip): the
+// resultant a section of the footing shows and the capacity table's
+// load check reads. The sum has no name and counts as permanent.
+func Sum(acts []Action) Action {
+	var s Action
+	for _, a := range acts {
+		s.V, s.HB, s.HL, s.MB, s.ML = s.V+a.V, s.HB+a.HB, s.HL+a.HL, s.MB+a.MB, s.ML+a.ML
+	}
+	return s
 }
 
 // ValidateActions checks ψ factors and that there is at least one action.

@@ -75,6 +75,19 @@ type Ground struct {
 	Layers []Layer
 	Water  Opt     // depth of the groundwater table below ground level, m, −50 to 200 (negative: free water above ground level, a flooded or tidal site); not set = no groundwater in the depth of interest
 	GammaW float64 // unit weight of water, N/m³, 9–10.5 kN/m³; 0 means GammaWDefault
+	// Platform says the first layer is a granular working platform laid
+	// on the layer below it (BR 470), as the user states it (platform =
+	// yes): it needs a layer below and must be coarse-grained.
+	Platform bool
+}
+
+// PlatformDepth is the thickness of the working platform (the top of the
+// second layer), and false when the ground model has none.
+func (g Ground) PlatformDepth() (float64, bool) {
+	if !g.Platform || len(g.Layers) < 2 {
+		return 0, false
+	}
+	return g.Layers[1].Top, true
 }
 
 // Gw returns the unit weight of water, applying the default.
@@ -90,6 +103,12 @@ func (g Ground) Validate() error {
 	var errs Errors
 	if len(g.Layers) == 0 {
 		errs = append(errs, &InputError{Where: g.Name, Msg: "the ground model has no layers"})
+	}
+	if g.Platform && len(g.Layers) == 1 {
+		errs = append(errs, &InputError{Where: g.Name, Param: "platform", Msg: "a working platform lies on the ground below it: the ground model needs a second layer"})
+	}
+	if g.Platform && len(g.Layers) > 0 && g.Layers[0].Fine() {
+		errs = append(errs, &InputError{Where: g.Name, Param: "platform", Msg: "the working platform (the first layer) must be granular: give it type coarse, or no c_u"})
 	}
 	seen := map[string]int{}
 	for i, l := range g.Layers {

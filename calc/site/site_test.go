@@ -123,3 +123,55 @@ func TestRangeWords(t *testing.T) {
 		}
 	}
 }
+
+// Sum adds each component as given (hand-added, common practice); the
+// units follow the shape.
+func TestSumAndUnits(t *testing.T) {
+	acts := []site.Action{
+		{Name: "Dead", V: 500 * kN, HB: 10 * kN, MB: 20 * kN},
+		{Name: "Wind", Kind: site.Variable, V: -40 * kN, HB: 30 * kN, HL: -5 * kN, ML: 7 * kN},
+	}
+	s := site.Sum(acts)
+	if s.V != 460*kN || s.HB != 40*kN || s.HL != -5*kN || s.MB != 20*kN || s.ML != 7*kN {
+		t.Errorf("Sum = %+v", s)
+	}
+	if z := site.Sum(nil); z != (site.Action{}) {
+		t.Errorf("Sum(nil) = %+v", z)
+	}
+	for _, c := range []struct {
+		shape  site.Shape
+		fu, mu string
+	}{{site.Strip, "kN/m", "kNm/m"}, {site.Square, "kN", "kNm"}, {site.Rectangle, "kN", "kNm"}, {site.Circle, "kN", "kNm"}} {
+		f := site.Footing{Shape: c.shape}
+		if f.ForceUnit() != c.fu || f.MomentUnit() != c.mu {
+			t.Errorf("%v: %s, %s; want %s, %s", c.shape, f.ForceUnit(), f.MomentUnit(), c.fu, c.mu)
+		}
+	}
+}
+
+// A working platform is the first layer, granular, on a layer below it.
+func TestPlatform(t *testing.T) {
+	g := site.Ground{Name: "p", Platform: true, Layers: []site.Layer{
+		{Name: "Crushed rock", Top: 0, Gamma: 20 * kN, Phi: site.Some(0.7)},
+		{Name: "Soft clay", Top: 0.8, Gamma: 17 * kN, Cu: site.Some(25e3)},
+	}}
+	if err := g.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	if d, ok := g.PlatformDepth(); !ok || d != 0.8 {
+		t.Errorf("PlatformDepth = %g, %v", d, ok)
+	}
+	g.Platform = false
+	if _, ok := g.PlatformDepth(); ok {
+		t.Error("no platform stated, one found")
+	}
+	one := site.Ground{Name: "p", Platform: true, Layers: g.Layers[:1]}
+	if err := one.Validate(); err == nil || !strings.Contains(err.Error(), "second layer") {
+		t.Errorf("one layer: %v", err)
+	}
+	fine := site.Ground{Name: "p", Platform: true, Layers: []site.Layer{g.Layers[1], {Name: "Sand", Top: 2, Gamma: 19 * kN}}}
+	fine.Layers[0].Top = 0
+	if err := fine.Validate(); err == nil || !strings.Contains(err.Error(), "granular") {
+		t.Errorf("fine platform: %v", err)
+	}
+}

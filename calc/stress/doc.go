@@ -11,7 +11,9 @@
 // SpreadStrip, SpreadCircle) return influence factors Δσ_z/q. Influence
 // applies them to a site.Footing at a chosen point (centre, corner or the
 // characteristic point), and Explain appends the same calculation to a
-// trace.Trace with every formula written out in sheet notation.
+// trace.Trace with every formula written out in sheet notation, each
+// value its formula's (trace.Trace.Eval; the circle's integral as the
+// engine function I_circle).
 //
 // All lengths are metres, stresses pascals, angles radians. Invalid
 // geometry returns a *site.RangeError; no function returns NaN.

@@ -11,22 +11,29 @@ import (
 // at depth zb below the underside of footing f, with every formula written
 // out in sheet notation (symbols B, L, z_b, q_net, m, n, I_sigma,
 // Delta_sigma ...), labels the steps with caseName, and returns Δσ (Pa).
-// It gives the same value as q_net · Influence(f, o, zb).
+// Every value is its step's formula evaluated (trace.Trace.Eval); it
+// agrees with q_net · Influence(f, o, zb) to rounding. A formula out of
+// its domain is returned as the error (and is t's).
 func Explain(t *trace.Trace, f site.Footing, o Options, zb, qn float64, caseName string) (float64, error) {
 	if err := validPoint(f, o, zb); err != nil {
 		return 0, err
 	}
 	e := explainer{t: t, c: caseName, f: f, zb: zb, qn: qn}
-	if o.Method == Spread {
-		return e.spread(o), nil
+	var ds float64
+	switch {
+	case o.Method == Spread:
+		ds = e.spread(o)
+	case f.Shape == site.Strip:
+		ds = e.strip(o.Point)
+	case f.Shape == site.Circle:
+		ds = e.circle(o.Point)
+	default:
+		ds = e.rect(o.Point)
 	}
-	switch f.Shape {
-	case site.Strip:
-		return e.strip(o.Point), nil
-	case site.Circle:
-		return e.circle(o.Point), nil
+	if err := t.Err(); err != nil {
+		return 0, err
 	}
-	return e.rect(o.Point), nil
+	return ds, nil
 }
 
 type explainer struct {
@@ -40,20 +47,10 @@ func (e *explainer) v(sym string, v float64, unit string) trace.Value {
 	return trace.Value{Symbol: sym, V: v, Unit: unit}
 }
 
-func (e *explainer) add(sym string, f trace.Expr, in []trace.Value, val float64, unit string, ref trace.Ref, note string) float64 {
-	return e.t.Add(trace.Step{Symbol: sym, Formula: f, Inputs: in, Value: val, Unit: unit, Ref: ref, Note: note, Case: e.c})
+// eval records a formula step and returns its value.
+func (e *explainer) eval(sym string, f trace.Expr, in []trace.Value, unit string, ref trace.Ref, note string) float64 {
+	return e.t.Eval(trace.Step{Symbol: sym, Formula: f, Inputs: in, Unit: unit, Ref: ref, Note: note, Case: e.c})
 }
-
-var (
-	fS   = trace.S
-	fN   = trace.N
-	fMul = trace.Mul
-	fDiv = trace.Div
-	fPow = trace.Pow
-	fAdd = trace.Add
-	fSub = trace.Sub
-	fFn  = trace.Fn
-)
 
 // Newmark formulas for the symbol pairs Explain uses, built once (an Expr
 // is immutable, so steps may share it).
@@ -64,14 +61,14 @@ var newmarkCached = map[string]trace.Expr{
 
 // NewmarkExpr is Newmark's corner formula in the symbols named m and n.
 func NewmarkExpr(m, n string) trace.Expr {
-	mm, nn := fS(m), fS(n)
-	m2, n2 := fPow(mm, fN(2)), fPow(nn, fN(2))
-	v := fAdd(m2, n2, fN(1))
-	m2n2 := fMul(m2, n2)
-	mnv := fMul(fN(2), mm, nn, fFn("sqrt", v))
-	return fMul(fDiv(fN(1), fMul(fN(4), fS("pi"))),
-		fAdd(fMul(fDiv(mnv, fAdd(v, m2n2)), fDiv(fAdd(v, fN(1)), v)),
-			fFn("atan2", mnv, fSub(v, m2n2))))
+	mm, nn := trace.S(m), trace.S(n)
+	m2, n2 := trace.Pow(mm, trace.N(2)), trace.Pow(nn, trace.N(2))
+	v := trace.Add(m2, n2, trace.N(1))
+	m2n2 := trace.Mul(m2, n2)
+	mnv := trace.Mul(trace.N(2), mm, nn, trace.Fn("sqrt", v))
+	return trace.Mul(trace.Div(trace.N(1), trace.Mul(trace.N(4), trace.S("pi"))),
+		trace.Add(trace.Mul(trace.Div(mnv, trace.Add(v, m2n2)), trace.Div(trace.Add(v, trace.N(1)), v)),
+			trace.Fn("atan2", mnv, trace.Sub(v, m2n2))))
 }
 
 func (e *explainer) rect(p Point) float64 {
@@ -108,143 +105,127 @@ func (e *explainer) rect(p Point) float64 {
 	side := func(k float64, sym string) trace.Expr {
 		switch k {
 		case 1:
-			return fS(sym)
+			return trace.S(sym)
 		case 0.5:
-			return fDiv(fS(sym), fN(2))
+			return trace.Div(trace.S(sym), trace.N(2))
 		}
-		return fMul(fN(k), fS(sym))
+		return trace.Mul(trace.N(k), trace.S(sym))
 	}
-	var isyms []string
-	var ivals []float64
+	ins := []trace.Value{e.v("q_net", e.qn, "kPa")}
+	var sum trace.Expr
 	for i, pt := range parts {
 		ms, ns, is := "m", "n", "I_sigma"
 		if len(parts) > 1 {
 			d := string(rune('1' + i))
 			ms, ns, is = "m_"+d, "n_"+d, "I_sigma,"+d
 		}
-		m := pt.kx * f.B / e.zb
-		n := pt.ky * l / e.zb
-		e.add(ms, fDiv(side(pt.kx, "B"), fS("z_b")), in(), m, "", trace.Ref{}, "")
-		e.add(ns, fDiv(side(pt.ky, lsym), fS("z_b")), in(), n, "", trace.Ref{}, "")
-		iv := newmark(m, n)
-		e.add(is, newmarkCached[ms], []trace.Value{e.v(ms, m, ""), e.v(ns, n, "")}, iv, "", refN, "Newmark influence factor")
-		isyms = append(isyms, is)
-		ivals = append(ivals, iv)
-	}
-	ins := []trace.Value{e.v("q_net", e.qn, "kPa")}
-	var sum trace.Expr
-	var total float64
-	for i, s := range isyms {
-		ins = append(ins, e.v(s, ivals[i], ""))
-		total += ivals[i]
+		m := e.eval(ms, trace.Div(side(pt.kx, "B"), trace.S("z_b")), in(), "", trace.Ref{}, "")
+		n := e.eval(ns, trace.Div(side(pt.ky, lsym), trace.S("z_b")), in(), "", trace.Ref{}, "")
+		iv := e.eval(is, newmarkCached[ms], []trace.Value{e.v(ms, m, ""), e.v(ns, n, "")}, "", refN, "Newmark influence factor")
+		ins = append(ins, e.v(is, iv, ""))
 		if sum == nil {
-			sum = fS(s)
+			sum = trace.S(is)
 		} else {
-			sum = fAdd(sum, fS(s))
+			sum = trace.Add(sum, trace.S(is))
 		}
 	}
-	fx := fMul(fS("q_net"), sum)
+	fx := trace.Mul(trace.S("q_net"), sum)
 	if factor != 1 {
-		fx = fMul(fN(factor), fS("q_net"), sum)
+		fx = trace.Mul(trace.N(factor), trace.S("q_net"), sum)
 	}
-	ds := factor * e.qn * total
 	note := "Boussinesq stress increase at the " + p.String()
 	ref := refB
 	if p == Characteristic {
 		ref = trace.Ref{Source: Grasshoff1955, Clause: "characteristic point at 0.37 B, 0.37 L from the centre"}
 		e.t.Cite(Newmark1935)
 	}
-	e.add("Delta_sigma", fx, ins, ds, "kPa", ref, note)
-	return ds
+	return e.eval("Delta_sigma", fx, ins, "kPa", ref, note)
+}
+
+// Formulas of the circle and the strip.
+var (
+	fxCircleAxis = trace.Mul(trace.S("q_net"), trace.Sub(trace.N(1), trace.Pow(trace.Add(trace.N(1), trace.Pow(trace.Div(trace.S("B"), trace.Mul(trace.N(2), trace.S("z_b"))), trace.N(2))), trace.N(-1.5))))
+	fxHalfB      = trace.Div(trace.S("B"), trace.N(2))
+	// I_circle(r/R, z/R) is the point-load solution integrated over a
+	// circle of unit radius (circle, adaptive Gauss–Legendre quadrature).
+	fxICircle = trace.Named("I_circle", func(a []float64) float64 {
+		if !(a[0] >= 0) || !(a[1] >= 0) || math.IsInf(a[0], 0) || math.IsInf(a[1], 0) {
+			return math.NaN()
+		}
+		return circle(1, a[0], a[1])
+	}, trace.Div(trace.S("r"), fxHalfB), trace.Div(trace.S("z_b"), fxHalfB))
+	fxQI     = trace.Mul(trace.S("q_net"), trace.S("I_sigma"))
+	fxDelta  = trace.Fn("atan", trace.Div(trace.Sub(trace.S("x"), fxHalfB), trace.S("z_b")))
+	fxAlpha  = trace.Sub(trace.Fn("atan", trace.Div(trace.Add(trace.S("x"), fxHalfB), trace.S("z_b"))), fxDelta)
+	fxStrip  = trace.Mul(trace.Div(trace.S("q_net"), trace.S("pi")), trace.Add(trace.S("alpha"), trace.Mul(trace.Fn("sin", trace.S("alpha")), trace.Fn("cos", trace.Add(trace.S("alpha"), trace.Mul(trace.N(2), trace.S("delta")))))))
+	fxGrowB  = grow("B")
+	fxSpread = map[site.Shape]trace.Expr{
+		site.Strip:     trace.Div(trace.Mul(trace.S("q_net"), trace.S("B")), fxGrowB),
+		site.Circle:    trace.Div(trace.Mul(trace.S("q_net"), trace.Pow(trace.S("B"), trace.N(2))), trace.Pow(fxGrowB, trace.N(2))),
+		site.Square:    trace.Div(trace.Mul(trace.S("q_net"), trace.Pow(trace.S("B"), trace.N(2))), trace.Pow(fxGrowB, trace.N(2))),
+		site.Rectangle: trace.Div(trace.Mul(trace.S("q_net"), trace.S("B"), trace.S("L")), trace.Mul(fxGrowB, grow("L"))),
+	}
+)
+
+// grow is a side widened by the load spread, side + 2 z_b tan θ.
+func grow(sym string) trace.Expr {
+	return trace.Add(trace.S(sym), trace.Mul(trace.N(2), trace.S("z_b"), trace.Fn("tan", trace.S("theta"))))
 }
 
 func (e *explainer) circle(p Point) float64 {
 	f := e.f
 	ref := trace.Ref{Source: Boussinesq1885, Clause: "uniformly loaded circle"}
 	if p == Centre {
-		ds := e.qn * circleAxis(f.B/2, e.zb)
-		fx := fMul(fS("q_net"), fSub(fN(1), fPow(fAdd(fN(1), fPow(fDiv(fS("B"), fMul(fN(2), fS("z_b"))), fN(2))), fN(-1.5))))
-		e.add("Delta_sigma", fx, []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("B", f.B, "m"), e.v("z_b", e.zb, "m")}, ds, "kPa", ref, "Boussinesq stress increase on the axis of a circle")
-		return ds
+		return e.eval("Delta_sigma", fxCircleAxis, []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("B", f.B, "m"), e.v("z_b", e.zb, "m")}, "kPa", ref, "Boussinesq stress increase on the axis of a circle")
 	}
-	r, _ := Offset(f, p)
-	var rf trace.Expr = fDiv(fS("B"), fN(2))
+	rf := fxHalfB
 	rref := trace.Ref{}
 	if p == Characteristic {
-		rf = fMul(fN(CharCircle), fDiv(fS("B"), fN(2)))
+		rf = trace.Mul(trace.N(CharCircle), fxHalfB)
 		rref = trace.Ref{Source: Grasshoff1955, Clause: "characteristic point of a circle, r = 0.845 R"}
 	}
-	e.add("r", rf, []trace.Value{e.v("B", f.B, "m")}, r, "m", rref, "distance of the point from the centre")
-	iv := circle(f.B/2, r, e.zb)
-	e.add("I_sigma", fFn("I_circle", fDiv(fS("r"), fDiv(fS("B"), fN(2))), fDiv(fS("z_b"), fDiv(fS("B"), fN(2)))),
-		[]trace.Value{e.v("r", r, "m"), e.v("B", f.B, "m"), e.v("z_b", e.zb, "m")}, iv, "",
+	r := e.eval("r", rf, []trace.Value{e.v("B", f.B, "m")}, "m", rref, "distance of the point from the centre")
+	iv := e.eval("I_sigma", fxICircle, []trace.Value{e.v("r", r, "m"), e.v("B", f.B, "m"), e.v("z_b", e.zb, "m")}, "",
 		trace.Ref{Source: Boussinesq1885, Clause: "point-load solution integrated over the circle"}, "numerical integration (adaptive Gauss–Legendre)")
-	ds := e.qn * iv
-	e.add("Delta_sigma", fMul(fS("q_net"), fS("I_sigma")), []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("I_sigma", iv, "")}, ds, "kPa", ref, "Boussinesq stress increase off the axis of a circle")
-	return ds
+	return e.eval("Delta_sigma", fxQI, []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("I_sigma", iv, "")}, "kPa", ref, "Boussinesq stress increase off the axis of a circle")
 }
 
 func (e *explainer) strip(p Point) float64 {
 	f := e.f
-	x, _ := Offset(f, p)
 	var xf trace.Expr
 	switch p {
 	case Corner, MidB, MidL:
-		xf = fDiv(fS("B"), fN(2))
+		xf = fxHalfB
 	case Characteristic:
-		xf = fMul(fN(CharRect), fS("B"))
+		xf = trace.Mul(trace.N(CharRect), trace.S("B"))
 	}
+	var x float64
 	if xf != nil {
 		ref := trace.Ref{}
 		if p == Characteristic {
 			ref = trace.Ref{Source: Grasshoff1955, Clause: "characteristic point at 0.37 B from the centre line"}
 		}
-		e.add("x", xf, []trace.Value{e.v("B", f.B, "m")}, x, "m", ref, "offset of the point from the centre line")
+		x = e.eval("x", xf, []trace.Value{e.v("B", f.B, "m")}, "m", ref, "offset of the point from the centre line")
 	} else {
-		e.add("x", nil, nil, 0, "m", trace.Ref{}, "on the centre line")
+		x = e.t.Take(trace.Step{Symbol: "x", Kind: trace.Given, Value: 0, Unit: "m", Note: "on the centre line", Case: e.c})
 	}
 	in := []trace.Value{e.v("x", x, "m"), e.v("B", f.B, "m"), e.v("z_b", e.zb, "m")}
-	hb := fDiv(fS("B"), fN(2))
-	t1 := math.Atan((x + f.B/2) / e.zb)
-	d := math.Atan((x - f.B/2) / e.zb)
-	a := t1 - d
-	e.add("alpha", fSub(fFn("atan", fDiv(fAdd(fS("x"), hb), fS("z_b"))), fFn("atan", fDiv(fSub(fS("x"), hb), fS("z_b")))), in, a, "deg", trace.Ref{}, "angle the strip subtends at the point")
-	e.add("delta", fFn("atan", fDiv(fSub(fS("x"), hb), fS("z_b"))), in, d, "deg", trace.Ref{}, "")
-	ds := e.qn / math.Pi * (a + math.Sin(a)*math.Cos(a+2*d))
-	fx := fMul(fDiv(fS("q_net"), fS("pi")), fAdd(fS("alpha"), fMul(fFn("sin", fS("alpha")), fFn("cos", fAdd(fS("alpha"), fMul(fN(2), fS("delta")))))))
-	e.add("Delta_sigma", fx, []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("alpha", a, "deg"), e.v("delta", d, "deg")}, ds, "kPa",
+	a := e.eval("alpha", fxAlpha, in, "deg", trace.Ref{}, "angle the strip subtends at the point")
+	d := e.eval("delta", fxDelta, in, "deg", trace.Ref{}, "")
+	return e.eval("Delta_sigma", fxStrip, []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("alpha", a, "deg"), e.v("delta", d, "deg")}, "kPa",
 		trace.Ref{Source: PoulosDavis, Clause: "uniform strip load"}, "Boussinesq stress increase below a strip")
-	return ds
 }
 
 func (e *explainer) spread(o Options) float64 {
 	f := e.f
 	th := o.angle()
-	k := 2 * e.zb * math.Tan(th)
 	ref := trace.Ref{Source: HoltzKovacs, Clause: "2:1 (load-spread) method"}
-	tanT := fFn("tan", fS("theta"))
-	grow := func(sym string) trace.Expr { return fAdd(fS(sym), fMul(fN(2), fS("z_b"), tanT)) }
 	in := []trace.Value{e.v("q_net", e.qn, "kPa"), e.v("B", f.B, "m")}
-	var fx trace.Expr
-	var ds float64
-	switch f.Shape {
-	case site.Strip:
-		fx = fDiv(fMul(fS("q_net"), fS("B")), grow("B"))
-		ds = e.qn * f.B / (f.B + k)
-	case site.Circle:
-		fx = fDiv(fMul(fS("q_net"), fPow(fS("B"), fN(2))), fPow(grow("B"), fN(2)))
-		ds = e.qn * f.B * f.B / ((f.B + k) * (f.B + k))
-	case site.Square:
-		fx = fDiv(fMul(fS("q_net"), fPow(fS("B"), fN(2))), fPow(grow("B"), fN(2)))
-		ds = e.qn * f.B * f.B / ((f.B + k) * (f.B + k))
-	default:
-		l := f.Length()
-		in = append(in, e.v("L", l, "m"))
-		fx = fDiv(fMul(fS("q_net"), fS("B"), fS("L")), fMul(grow("B"), grow("L")))
-		ds = e.qn * f.B * l / ((f.B + k) * (l + k))
+	if f.Shape == site.Rectangle {
+		in = append(in, e.v("L", f.Length(), "m"))
 	}
 	in = append(in, e.v("z_b", e.zb, "m"), e.v("theta", th, "deg"))
-	e.add("Delta_sigma", fx, in, ds, "kPa", ref, "average stress increase by load spread")
+	ds := e.eval("Delta_sigma", fxSpread[f.Shape], in, "kPa", ref, "average stress increase by load spread")
 	if o.Point != Centre {
 		e.t.Warn(trace.Caution{Code: "spread-point", Severity: trace.SevNote, Message: "the load-spread method gives the average stress over the spread area; the " + o.Point.String() + " point was not used for the stress", Ref: ref})
 	}

@@ -14,36 +14,44 @@ type ErrOpaque struct{ Fn string }
 func (e ErrOpaque) Error() string { return "trace: opaque function " + e.Fn }
 
 // Eval evaluates e in SI units with the values in inputs. A symbol missing
-// from inputs is an error, except "pi".
+// from inputs is an error, except "pi". It is the one evaluator of engine
+// formulas: the recorder (Trace.Eval) computes every step's value with it,
+// and Verify replays a trace with it. It allocates nothing for formulas of
+// up to eight function arguments.
 func Eval(e Expr, inputs []Value) (float64, error) {
-	env := make(map[string]float64, len(inputs))
-	for _, in := range inputs {
-		env[in.Symbol] = in.V
-	}
-	return eval(e, env)
+	return eval(e, inputs)
 }
 
-func eval(e Expr, env map[string]float64) (float64, error) {
+func lookup(name string, in []Value) (float64, bool) {
+	for i := range in {
+		if in[i].Symbol == name {
+			return in[i].V, true
+		}
+	}
+	if name == "pi" {
+		return math.Pi, true
+	}
+	return 0, false
+}
+
+func eval(e Expr, in []Value) (float64, error) {
 	switch e := e.(type) {
 	case Sym:
-		if v, ok := env[e.Name]; ok {
+		if v, ok := lookup(e.Name, in); ok {
 			return v, nil
-		}
-		if e.Name == "pi" {
-			return math.Pi, nil
 		}
 		return 0, fmt.Errorf("trace: symbol %s has no input value", e.Name)
 	case Num:
 		return e.V, nil
 	case Neg:
-		x, err := eval(e.X, env)
+		x, err := eval(e.X, in)
 		return -x, err
 	case Op:
-		a, err := eval(e.L, env)
+		a, err := eval(e.L, in)
 		if err != nil {
 			return 0, err
 		}
-		b, err := eval(e.R, env)
+		b, err := eval(e.R, in)
 		if err != nil {
 			return 0, err
 		}
@@ -61,52 +69,67 @@ func eval(e Expr, env map[string]float64) (float64, error) {
 		}
 		return 0, fmt.Errorf("trace: unknown operator %q", e.Op)
 	case Call:
+		if len(e.Args) == 1 && e.Impl == nil {
+			x, err := eval(e.Args[0], in)
+			if err != nil {
+				return 0, err
+			}
+			if v, ok := call1(e.Fn, x); ok {
+				return v, nil
+			}
+			return call(e, []float64{x})
+		}
 		args := make([]float64, len(e.Args))
 		for i, a := range e.Args {
-			v, err := eval(a, env)
+			v, err := eval(a, in)
 			if err != nil {
 				return 0, err
 			}
 			args[i] = v
 		}
-		return call(e.Fn, args)
+		return call(e, args)
 	}
 	return 0, fmt.Errorf("trace: unknown node %T", e)
 }
 
-func call(fn string, a []float64) (float64, error) {
-	one := map[string]func(float64) float64{
-		"sqrt": math.Sqrt, "abs": math.Abs, "exp": math.Exp, "ln": math.Log,
-		"log10": math.Log10, "sin": math.Sin, "cos": math.Cos, "tan": math.Tan,
-		"asin": math.Asin, "acos": math.Acos, "atan": math.Atan,
-		"cot":   func(x float64) float64 { return 1 / math.Tan(x) },
-		"floor": math.Floor, "ceil": math.Ceil, "round": math.Round,
-	}
-	if f, ok := one[fn]; ok {
-		if len(a) != 1 {
-			return 0, fmt.Errorf("trace: %s takes one argument, got %d", fn, len(a))
-		}
-		return f(a[0]), nil
-	}
+// call1 is the allocation-free path for the common one-argument built-ins;
+// it must agree with the table in funcs.go (TestOneFunctionTable).
+func call1(fn string, x float64) (float64, bool) {
 	switch fn {
-	case "min", "max":
-		if len(a) == 0 {
-			return 0, fmt.Errorf("trace: %s needs arguments", fn)
-		}
-		v := a[0]
-		for _, x := range a[1:] {
-			if fn == "min" {
-				v = math.Min(v, x)
-			} else {
-				v = math.Max(v, x)
-			}
-		}
-		return v, nil
-	case "atan2":
-		if len(a) != 2 {
-			return 0, fmt.Errorf("trace: atan2 takes two arguments")
-		}
-		return math.Atan2(a[0], a[1]), nil
+	case "sqrt":
+		return math.Sqrt(x), true
+	case "abs":
+		return math.Abs(x), true
+	case "exp":
+		return math.Exp(x), true
+	case "ln":
+		return math.Log(x), true
+	case "log10":
+		return math.Log10(x), true
+	case "sin":
+		return math.Sin(x), true
+	case "cos":
+		return math.Cos(x), true
+	case "tan":
+		return math.Tan(x), true
+	case "cot":
+		return 1 / math.Tan(x), true
+	case "atan":
+		return math.Atan(x), true
 	}
-	return 0, ErrOpaque{fn}
+	return 0, false
+}
+
+func call(c Call, a []float64) (float64, error) {
+	if c.Impl != nil {
+		return c.Impl(a), nil
+	}
+	f, ok := functions[c.Fn]
+	if !ok {
+		return 0, ErrOpaque{c.Fn}
+	}
+	if len(a) < f.Min || (f.Max >= 0 && len(a) > f.Max) {
+		return 0, fmt.Errorf("trace: %s takes %d to %d arguments, got %d", c.Fn, f.Min, f.Max, len(a))
+	}
+	return f.F(a), nil
 }

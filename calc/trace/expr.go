@@ -25,13 +25,15 @@ type Op struct {
 // Neg is unary minus.
 type Neg struct{ X Expr }
 
-// Call applies a function. Known functions (evaluated by Eval): sqrt abs
-// min max exp ln log10 sin cos tan asin acos atan atan2 cot floor ceil round.
-// Any other name is an opaque, named function the document prints as
-// written and Eval cannot evaluate (Verify then checks only the inputs).
+// Call applies a function: a built-in one (FunctionNames, evaluated from
+// the table in funcs.go), or an engine function with its own Go
+// implementation in Impl (a series solution such as U(T_v), an influence
+// factor integrated numerically), printed by name as written. A name that is
+// neither is opaque: Eval reports ErrOpaque and the recorder refuses it.
 type Call struct {
 	Fn   string
 	Args []Expr
+	Impl func(a []float64) float64
 }
 
 func (Sym) isExpr()  {}
@@ -67,8 +69,15 @@ func Pow(a, b Expr) Expr { return Op{'^', a, b} }
 // Negate returns −x.
 func Negate(x Expr) Expr { return Neg{x} }
 
-// Fn returns fn(args...).
+// Fn returns fn(args...) for a built-in function.
 func Fn(fn string, args ...Expr) Expr { return Call{Fn: fn, Args: args} }
+
+// Named returns fn(args...) for an engine function evaluated by impl: the
+// document prints the call by name, and the step's value is impl's. The
+// function's doc comment names its source.
+func Named(fn string, impl func(a []float64) float64, args ...Expr) Expr {
+	return Call{Fn: fn, Args: args, Impl: impl}
+}
 
 func fold(op byte, a Expr, more []Expr) Expr {
 	for _, b := range more {

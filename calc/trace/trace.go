@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+
+	"github.com/plinth-calc/plinth/calc/severity"
 )
 
 // Value is one number used in or produced by a step: SI value, and the
@@ -12,6 +14,16 @@ type Value struct {
 	Symbol string
 	V      float64
 	Unit   string
+}
+
+// Find returns the value named sym in vs (an engine's summary values).
+func Find(vs []Value, sym string) (Value, bool) {
+	for _, v := range vs {
+		if v.Symbol == sym {
+			return v, true
+		}
+	}
+	return Value{}, false
 }
 
 // Source is a publication an engine method comes from. Key is short and
@@ -29,10 +41,50 @@ type Ref struct {
 	Clause string
 }
 
+// Kind says how a step's value was reached. The document prints a formula
+// step as formula = substituted values = result, and names the others'
+// origin instead ("from Table 4.1", "solved by Brent's method").
+type Kind uint8
+
+const (
+	// ByFormula: the value is Formula evaluated with Inputs, by Eval.
+	ByFormula Kind = iota
+	// Given: an input, a default or a value the method states (a factor
+	// taken as 1 for a strip); the note says which.
+	Given
+	// Tabulated: read from the published table that Ref names.
+	Tabulated
+	// Interpolated: interpolated in a table or between computed values.
+	Interpolated
+	// Solved: the root of an equation, found numerically (calc/solve);
+	// Formula, if set, is the equation printed, not evaluated.
+	Solved
+	// Summed: a numerical integral or a sum over sublayers or terms whose
+	// parts are steps of their own.
+	Summed
+)
+
+func (k Kind) String() string {
+	switch k {
+	case Given:
+		return "given"
+	case Tabulated:
+		return "tabulated"
+	case Interpolated:
+		return "interpolated"
+	case Solved:
+		return "solved"
+	case Summed:
+		return "summed"
+	}
+	return "formula"
+}
+
 // Step is one computed (or taken) value, in the order of computation.
 type Step struct {
 	Symbol  string  // sheet notation: "N_q", "phi'_d", "B'"
-	Formula Expr    // nil when the value is taken as given or read from a table
+	Kind    Kind    // how Value was reached
+	Formula Expr    // ByFormula: what Value is computed from; nil otherwise (Solved: the equation, optional)
 	Inputs  []Value // every symbol in Formula with the value substituted
 	Value   float64 // SI
 	Unit    string  // display unit ("" = dimensionless)
@@ -41,34 +93,16 @@ type Step struct {
 	Case    string  // the case it belongs to ("" = common to all)
 }
 
-// Severity ranks a caution, lowest first, in the order of the hazard
-// statements of ANSI Z535.4 and ISO 3864-2 (WARNING above CAUTION) without
-// their DANGER:
-//
-//	SevNote     NOTE     information: a choice made, a value assumed
-//	SevCaution  CAUTION  a method used near its limits, or an assumption
-//	                     the engineer must confirm
-//	SevWarning  WARNING  a result that may be unsafe or is missing: a limit
-//	                     exceeded, a check not made, a layer left out
-//
-// The document boxes them with these words.
-type Severity int
+// Severity ranks a caution, lowest first: NOTE, CAUTION, WARNING. It is
+// severity.Level (the one definition of the order, the words and what
+// each means); the constants are the engine's names for its levels.
+type Severity = severity.Level
 
 const (
-	SevNote Severity = iota
-	SevCaution
-	SevWarning
+	SevNote    = severity.Note    // information: a choice made, a value assumed
+	SevCaution = severity.Caution // a method used near its limits, or an assumption the engineer must confirm
+	SevWarning = severity.Warning // a result that may be unsafe or is missing
 )
-
-func (s Severity) String() string {
-	switch s {
-	case SevWarning:
-		return "WARNING"
-	case SevCaution:
-		return "CAUTION"
-	}
-	return "NOTE"
-}
 
 // Caution records a method near or past its limits, or an input that needs
 // the engineer's attention. Step is the index of the step that raised it
@@ -88,14 +122,89 @@ type Trace struct {
 	Steps    []Step
 	Cautions []Caution
 	Sources  []Source
+	err      error // the first step that could not be evaluated
 }
 
-// Add appends s, cites its source and returns its value, so calculations
-// read as v := t.Add(trace.Step{...}).
-func (t *Trace) Add(s Step) float64 {
+// Eval is the recorder of formula steps: it evaluates s.Formula with
+// s.Inputs (the one evaluator, Eval), sets s.Value and s.Kind = ByFormula,
+// appends s, cites its source and returns the value, so calculations read
+// as v := t.Eval(trace.Step{...}) and the printed formula is the number's
+// only definition. A formula that cannot be evaluated (an input missing, an
+// unknown function) or whose value is NaN or infinite is recorded as the
+// trace's error (Err) and its value returned as NaN: the engine returns
+// Err, never the number.
+func (t *Trace) Eval(s Step) float64 {
+	s.Value = t.Compute(s)
+	s.Kind = ByFormula
 	t.Steps = append(t.Steps, s)
 	t.Cite(s.Ref.Source)
 	return s.Value
+}
+
+// Compute evaluates s's formula as Eval records it, without appending: for
+// callers that need a value whose working is not printed this time (a
+// settlement profile solved for a limit without its trace). Errors go to t
+// as for Eval.
+func (t *Trace) Compute(s Step) float64 {
+	if s.Formula == nil {
+		t.fail(fmt.Errorf("trace: step %s has no formula", s.Symbol))
+		return math.NaN()
+	}
+	v, err := Eval(s.Formula, s.Inputs)
+	if err == nil && (math.IsNaN(v) || math.IsInf(v, 0)) {
+		err = &DomainError{Symbol: s.Symbol, Value: v, Inputs: s.Inputs}
+	}
+	if err != nil {
+		t.fail(err)
+		return math.NaN()
+	}
+	return v
+}
+
+// Take appends a step whose value was not computed by a formula (a given
+// value, a table, a numerical solution or sum: s.Kind says which; the zero
+// Kind is taken as Given) and returns its value. A NaN or infinite value is
+// recorded as the trace's error.
+func (t *Trace) Take(s Step) float64 {
+	if s.Kind == ByFormula {
+		s.Kind = Given
+	}
+	if math.IsNaN(s.Value) || math.IsInf(s.Value, 0) {
+		t.fail(&DomainError{Symbol: s.Symbol, Value: s.Value, Inputs: s.Inputs})
+	}
+	t.Steps = append(t.Steps, s)
+	t.Cite(s.Ref.Source)
+	return s.Value
+}
+
+// Err returns the first step the recorder could not evaluate, or nil.
+func (t *Trace) Err() error { return t.err }
+
+func (t *Trace) fail(err error) {
+	if t.err == nil {
+		t.err = err
+	}
+}
+
+// DomainError is a step whose value is NaN or infinite: an input outside
+// the range its formula holds for.
+type DomainError struct {
+	Symbol string
+	Value  float64
+	Inputs []Value
+}
+
+func (e *DomainError) Error() string {
+	msg := fmt.Sprintf("%s evaluates to %v", e.Symbol, e.Value)
+	for i, in := range e.Inputs {
+		if i == 0 {
+			msg += " with "
+		} else {
+			msg += ", "
+		}
+		msg += fmt.Sprintf("%s = %.6g", in.Symbol, in.V)
+	}
+	return msg + ": an input is outside the range the formula holds for"
 }
 
 // Cite adds src to the sources list unless it is empty or already there.
@@ -150,6 +259,9 @@ func (t *Trace) Append(u Trace, caseName string) {
 	for _, s := range u.Sources {
 		t.Cite(s)
 	}
+	if u.err != nil {
+		t.fail(u.err)
+	}
 }
 
 // Verify replays every step: each symbol of a formula has an input, each
@@ -171,7 +283,13 @@ func Verify(t Trace, rel float64) error {
 			errs = append(errs, fmt.Errorf("step %d %s: source %s not in Sources", i, s.Symbol, k))
 		}
 		if s.Formula == nil {
+			if s.Kind == ByFormula {
+				errs = append(errs, fmt.Errorf("step %d %s: a formula step with no formula", i, s.Symbol))
+			}
 			continue
+		}
+		if s.Kind == Solved {
+			continue // the equation solved, printed, not evaluated
 		}
 		have := map[string]bool{"pi": true}
 		for _, in := range s.Inputs {

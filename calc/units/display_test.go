@@ -204,3 +204,17 @@ func ExampleDisplay() {
 	// L^2 T^-1 -> "m2/yr" (SI "m2/s")
 	// L^2 M T^-2 -> "kNm" (SI "N*m")
 }
+
+// Printed is Format with the minus sign U+2212, and no "−0".
+func TestPrinted(t *testing.T) {
+	kPa := units.MustParse("kPa")
+	for _, c := range []struct {
+		v    float64
+		dec  int
+		want string
+	}{{-12.5e3, -1, "−12.5"}, {245.7e3, -1, "246"}, {-0.0001, 1, "0.0"}, {-1e3, 2, "−1.00"}} {
+		if got := units.Printed(c.v, kPa, c.dec); got != c.want {
+			t.Errorf("Printed(%g, kPa, %d) = %q, want %q", c.v, c.dec, got, c.want)
+		}
+	}
+}

@@ -27,6 +27,19 @@ import (
 // would round it onto or across the other.
 func Format(v float64, u Unit, decimals int) string { return format(v, u, decimals, 0) }
 
+// Printed is Format as the document prints it: a negative value with
+// the minus sign U+2212 ("−12.5"), not a hyphen.
+func Printed(v float64, u Unit, decimals int) string { return Minus(Format(v, u, decimals)) }
+
+// Minus writes the leading hyphen-minus of a formatted number as the
+// minus sign U+2212.
+func Minus(s string) string {
+	if strings.HasPrefix(s, "-") {
+		return "−" + s[1:]
+	}
+	return s
+}
+
 // format is Format with extra digits: decimals+extra places when decimals
 // are fixed, else extra more than the automatic rule gives.
 func format(v float64, u Unit, decimals, extra int) string {
@@ -116,4 +129,31 @@ func clean(s string) string {
 		return s[1:]
 	}
 	return s
+}
+
+// Significant prints v with at most sig significant digits, trailing zeros
+// dropped, a negative value with the minus sign U+2212 and negative zero
+// as "0": the constants inside formulas ("0.866", "45"), for magnitudes
+// from 1e-4 to 1e6 (the typesetter writes others as m × 10ⁿ). It is the one
+// rule for numbers the typesetter writes (doc/layout/eqn) beside Format's
+// rules for quantities.
+func Significant(v float64, sig int) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		if v == 0 {
+			return "0"
+		}
+		return strconv.FormatFloat(v, 'g', -1, 64)
+	}
+	mag := int(math.Floor(math.Log10(math.Abs(v))))
+	dec := sig - 1 - mag
+	if dec < 0 {
+		p := math.Pow(10, float64(-dec))
+		v = math.Round(v/p) * p
+		dec = 0
+	}
+	s := trimZeros(strconv.FormatFloat(v, 'f', dec, 64))
+	if s == "-0" {
+		return "0"
+	}
+	return Minus(s)
 }

@@ -122,3 +122,17 @@ func TestBesideEqual(t *testing.T) {
 		}
 	}
 }
+
+// Significant: the typesetter's rule for constants in formulas (common
+// practice: six significant figures, trailing zeros dropped).
+func TestSignificant(t *testing.T) {
+	for _, c := range []struct {
+		v    float64
+		sig  int
+		want string
+	}{{0.866, 6, "0.866"}, {45, 6, "45"}, {-2.5, 3, "−2.5"}, {123456789, 3, "123000000"}, {-0.00001, 1, "−0.00001"}, {0, 3, "0"}} {
+		if got := units.Significant(c.v, c.sig); got != c.want {
+			t.Errorf("Significant(%v, %d) = %q, want %q", c.v, c.sig, got, c.want)
+		}
+	}
+}

@@ -87,3 +87,34 @@ func TestBadDocument(t *testing.T) {
 		t.Errorf("only %d cases", n)
 	}
 }
+
+// TestBadLayout runs the cases of testdata/bad/layout: problems only the
+// layout finds (characters the fonts lack), which check --layout and
+// render report at the line and column of the text, as the annotations
+// say.
+func TestBadLayout(t *testing.T) {
+	dir := "../../testdata/bad/layout"
+	n := badcase.Run(t, dir, func(path string) source.List {
+		res, diags := evaluate(path, nil)
+		if res == nil {
+			return diags
+		}
+		return documentErrors(res, diags, true)
+	})
+	if n < 1 {
+		t.Errorf("only %d cases", n)
+	}
+	out := filepath.Join(t.TempDir(), "x.pdf")
+	ents, err := os.ReadDir(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range ents {
+		c := filepath.Join(dir, e.Name())
+		_, rerr, rcode := runCmd("render", c, "-o", out)
+		_, cerr, ccode := runCmd("check", "--layout", c)
+		if rcode != exitErrors || ccode != exitErrors || strings.Join(errorLines(rerr), "\n") != strings.Join(errorLines(cerr), "\n") {
+			t.Errorf("%s: render (status %d) and check --layout (status %d) differ:\n%s\n%s", c, rcode, ccode, rerr, cerr)
+		}
+	}
+}

@@ -49,7 +49,7 @@ func FuzzPipeline(f *testing.F) {
 		if diags.HasErrors() || res == nil {
 			return
 		}
-		pages, cd := compose.Pages(res, compose.Options{})
+		pages, cd := layOut(res, compose.Options{}, nil)
 		if cd.HasErrors() {
 			return
 		}

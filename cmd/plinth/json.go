@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/source"
@@ -230,6 +231,45 @@ func blockJSON(b *eval.Block) jsonBlock {
 				g := jc
 				jb.Governing = &g
 			}
+		}
+	}
+	if zr := b.Size; zr != nil {
+		// one case per check at the chosen width, then at one increment
+		// smaller; the governing case is the chosen width's governing check
+		for _, t := range []*size.Trial{&zr.At, zr.Below} {
+			if t == nil {
+				continue
+			}
+			for i, ch := range t.Checks {
+				jc := jsonCase{Name: fmt.Sprintf("B = %g m · %s", t.B, ch.Name), Check: "size", Combination: ch.Detail,
+					Util: ch.Util, OK: ch.OK, Factors: map[string]float64{"B": t.B, "L": t.L}}
+				jb.Cases = append(jb.Cases, jc)
+				if t == &zr.At && i == t.Governing {
+					g := jc
+					jb.Governing = &g
+				}
+			}
+		}
+	}
+	if sr := b.Schedule; sr != nil {
+		// one case per footing at its chosen size, then one per pair of
+		// neighbours; the governing case is the highest utilisation
+		for i, row := range sr.Rows {
+			gov := row.At.Checks[row.At.Governing]
+			f := map[string]float64{"B": row.B, "L": row.L, "D": row.Footing.D, "x": sr.X[i], "y": sr.Y[i]}
+			if row.Settle != nil {
+				f["s_total"] = row.Settle.Total
+			}
+			jc := jsonCase{Name: sr.Names[i], Check: "size", Combination: gov.Name, Util: row.At.Util(), OK: row.At.OK, Factors: f}
+			jb.Cases = append(jb.Cases, jc)
+			if i == sr.RowMax {
+				g := jc
+				jb.Governing = &g
+			}
+		}
+		for _, p := range sr.Pairs {
+			jb.Cases = append(jb.Cases, jsonCase{Name: sr.Names[p.A] + " to " + sr.Names[p.B], Check: "differential", Util: p.Diff.Util, OK: p.Diff.OK,
+				Factors: map[string]float64{"L": p.Spacing, "delta_s": p.Diff.Delta, "beta": p.Diff.Beta, "beta_lim": p.Diff.Limit}})
 		}
 	}
 	for _, c := range b.Cautions {

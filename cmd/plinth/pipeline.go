@@ -4,7 +4,9 @@ import (
 	"fmt"
 	"io"
 
+	"github.com/plinth-calc/plinth/doc/compose"
 	"github.com/plinth-calc/plinth/doc/eval"
+	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/parse"
 	"github.com/plinth-calc/plinth/doc/sheet"
@@ -43,6 +45,21 @@ func evaluateWith(path string, sets []string, hook func(*sheet.Package)) (*eval.
 		return nil, diags
 	}
 	return res, diags
+}
+
+// layOut runs compose → layout: the pages of res with every diagnostic
+// of both stages, sorted (no pages when compose or layout found an
+// error). progress, when set, hears of the sheets laid out.
+func layOut(res *eval.Result, opt compose.Options, progress func(done, total int)) (*layout.Pages, source.List) {
+	doc, diags := compose.Document(res, opt)
+	if diags.HasErrors() {
+		return nil, diags
+	}
+	doc.Progress = progress
+	pages, ld := layout.Document(doc)
+	diags.Append(ld)
+	diags.Sort()
+	return pages, diags
 }
 
 // printDiags writes each diagnostic on its own line, then a count.

@@ -68,7 +68,7 @@ func (p *progress) print() {
 	fmt.Fprintf(p.w, "\r%s\x1b[K", line)
 }
 
-// sheet records sheets laid out (compose.Options.Progress).
+// sheet records sheets laid out (layout.Doc.Progress).
 func (p *progress) sheet(done, total int) {
 	p.sheets.Store(int64(done))
 	p.sheetsN.Store(int64(total))

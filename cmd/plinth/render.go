@@ -43,7 +43,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		return exitErrors
 	}
 	prog := newProgress(stderr) // a line on a terminal for a long render
-	copt := compose.Options{Progress: prog.sheetFunc()}
+	var copt compose.Options
 	if o.since != "" {
 		ch, ok := sinceChanges(o.since, o.path, res, stderr)
 		if !ok {
@@ -51,8 +51,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		}
 		copt.Changes = ch
 	}
-	pages, cd := compose.Pages(res, copt)
-	compose.MarkChanges(pages, copt.Changes)
+	pages, cd := layOut(res, copt, prog.sheetFunc())
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)

@@ -325,7 +325,7 @@ func sum(xs []float64) float64 {
 
 // Drawing draws the chart as a layout block W × H points, at pos, with an
 // optional caption.
-func (c *Chart) Drawing(pos source.Position, caption []layout.Run) (*layout.Drawing, error) {
+func (c *Chart) Drawing(pos source.Span, caption []layout.Run) (*layout.Drawing, error) {
 	items, err := c.Draw()
 	if err != nil {
 		return nil, err

@@ -3,7 +3,6 @@ package chart_test
 import (
 	"errors"
 	"flag"
-	"fmt"
 	"github.com/plinth-calc/plinth/internal/golden"
 	"math"
 	"path/filepath"
@@ -169,50 +168,6 @@ func TestLegendClear(t *testing.T) {
 			}
 		}
 	}
-}
-
-func TestLower(t *testing.T) {
-	a := chart.Series{Name: "bearing", X: []float64{1, 2, 3, 4}, Y: []float64{100, 200, 300, 400}}
-	b := chart.Series{Name: "settlement", X: []float64{1, 2, 3, 4}, Y: []float64{400, 300, 200, 100}}
-	env, regs, err := chart.Lower("lower", a, b)
-	if err != nil {
-		t.Fatal(err)
-	}
-	if got := fmt.Sprint(env.X, env.Y); got != "[1 2 2.5 3 4] [100 200 250 200 100]" {
-		t.Errorf("envelope %s", got)
-	}
-	if got := fmt.Sprint(regs); got != "[{1 2.5 bearing governs} {2.5 4 settlement governs}]" {
-		t.Errorf("regions %s", got)
-	}
-	// touching at a sample: the change of side is at the touch
-	b.Y = []float64{400, 200, 100, 50}
-	if _, regs, _ = chart.Lower("lower", a, b); fmt.Sprint(regs) != "[{1 2 bearing governs} {2 4 settlement governs}]" {
-		t.Errorf("touching: regions %v", regs)
-	}
-	// one governs throughout
-	b.Y = []float64{900, 900, 900, 900}
-	if _, regs, _ = chart.Lower("lower", a, b); fmt.Sprint(regs) != "[{1 4 bearing governs}]" {
-		t.Errorf("one side: regions %v", regs)
-	}
-	if _, _, err := chart.Lower("x", a, chart.Series{X: []float64{5, 6}, Y: []float64{1, 1}}); err == nil {
-		t.Error("ranges that do not overlap: no error")
-	}
-	if _, _, err := chart.Lower("x", a, chart.Series{X: []float64{2, 1}, Y: []float64{1, 1}}); err == nil {
-		t.Error("decreasing X: no error")
-	}
-}
-
-func ExampleLower() {
-	widths := []float64{1, 2, 3, 4}
-	bearing := chart.Series{Name: "bearing resistance", X: widths, Y: []float64{160, 220, 280, 340}}
-	settle := chart.Series{Name: "settlement 25 mm", X: widths, Y: []float64{610, 340, 240, 190}}
-	_, regions, _ := chart.Lower("governing", bearing, settle)
-	for _, r := range regions {
-		fmt.Printf("%.2f to %.2f m: %s\n", r.From, r.To, r.Label)
-	}
-	// Output:
-	// 1.00 to 2.75 m: bearing resistance governs
-	// 2.75 to 4.00 m: settlement 25 mm governs
 }
 
 func BenchmarkDraw(b *testing.B) {

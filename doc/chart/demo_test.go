@@ -112,10 +112,21 @@ func capacity() chart.Chart {
 	}
 	bear := chart.Series{Name: "bearing resistance", X: b, Y: qb}
 	sett := chart.Series{Name: "settlement 25 mm", X: b, Y: qs}
-	env, regs, err := chart.Lower("governing (lower)", bear, sett)
-	if err != nil {
-		panic(err)
+	// the envelope and where each limit governs, as an engine gives them
+	// (the curves cross where 95 + 62w = 610/w^0.85, by bisection)
+	env := chart.Series{Name: "governing (lower)", Style: chart.Band, X: b}
+	for i := range b {
+		env.Y = append(env.Y, math.Min(qb[i], qs[i]))
 	}
+	lo, hi := 1.0, 4.0
+	for range 60 {
+		if m := (lo + hi) / 2; 95+62*m < 610/math.Pow(m, 0.85) {
+			lo = m
+		} else {
+			hi = m
+		}
+	}
+	regs := []chart.Region{{From: 1, To: lo, Label: "bearing resistance governs"}, {From: lo, To: 4, Label: "settlement 25 mm governs"}}
 	return chart.Chart{W: 420, H: 260,
 		X:       chart.Axis{Title: "Footing width B (m)"},
 		Y:       chart.Axis{Title: "Allowable net pressure (kPa)", Min: chart.At(0)},

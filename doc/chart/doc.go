@@ -31,8 +31,9 @@
 // in series order unless chosen — never by colour alone, so a black-and-white
 // print reads; colour (Palette) only supports them. Emphasis draws a
 // heavier line with filled markers; Band draws a broad light band under the
-// other curves, for an envelope (see Lower, which also returns the Regions
-// where each of two limits governs). Markers sit at data points, thinned
+// other curves, for an envelope the caller gives (an engine's governing
+// limit, with Regions where each limit governs: the chart computes none).
+// Markers sit at data points, thinned
 // so they keep about 14 pt apart. Curves are clipped to the plot and dashed
 // by this package (each dash a solid polyline), so a pattern runs on
 // through the points of a dense curve.

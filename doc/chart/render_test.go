@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"flag"
 	"os"
+	"strings"
 	"testing"
 	"time"
 
@@ -15,7 +16,9 @@ import (
 
 var demo = flag.String("demo", "", "write the demo charts as a PDF to this path (look at it)")
 
-func at(line int) source.Position { return source.Position{Path: "demo.md", Line: line, Col: 1} }
+var demoFile = source.NewFile("demo.md", []byte(strings.Repeat("\n", 200)))
+
+func at(line int) source.Span { return source.Span{File: demoFile, Start: demoFile.LineStart(line)} }
 
 func cap(s string) []layout.Run { return []layout.Run{{Text: s}} }
 
@@ -50,9 +53,9 @@ func TestDemoPDF(t *testing.T) {
 		Sheets: []layout.Sheet{{Pos: at(1), Fields: layout.Fields{Project: "Larchfield Depot", Title: "Charts", Calc: "D-1", By: "XY"},
 			Blocks: demoBlocks(t)}},
 	}
-	pages, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var b bytes.Buffer
 	if err := pdf.Write(&b, pages, pdf.Options{Time: time.Date(2026, 1, 2, 3, 4, 5, 0, time.UTC)}); err != nil {

@@ -1,6 +1,7 @@
 package chart
 
 import (
+	"github.com/plinth-calc/plinth/calc/units"
 	"math"
 	"strconv"
 	"strings"
@@ -170,17 +171,9 @@ func decimals(step float64) int {
 	return 12
 }
 
-// fixed formats v with d decimals, with a true minus sign and no "−0".
-func fixed(v float64, d int) string {
-	s := strconv.FormatFloat(v, 'f', d, 64)
-	if strings.Trim(s, "-0.") == "" {
-		return strings.TrimPrefix(s, "-")
-	}
-	if s[0] == '-' {
-		return "−" + s[1:]
-	}
-	return s
-}
+// fixed formats v with d decimals by the document's one rule
+// (units.Printed): a true minus sign and no "−0".
+func fixed(v float64, d int) string { return units.Printed(v, units.Dimensionless, d) }
 
 // pow10 is 10ᵏ, exactly as the decimal literal 1ek reads.
 func pow10(k int) float64 {

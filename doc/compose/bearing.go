@@ -24,7 +24,7 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 	r := b.Bearing
 	o := c.engineOut(s, b)
 	tr := &r.Trace
-	fu := forceUnit(b.Of.Model)
+	fu := units.MustParse(b.Of.Model.ForceUnit())
 	names, steps := groups(tr)
 
 	o.head(fmt.Sprintf("Bearing resistance of %s on %s", b.Of.Name, b.On.Name))
@@ -165,7 +165,7 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 		u = units.Dimensionless
 	}
 	as, rs := units.Apart(a, r, u, -1, -1) // the demand and its resistance, never rounded onto each other
-	as, rs = strings.Replace(as, "-", "−", 1), strings.Replace(rs, "-", "−", 1)
+	as, rs = units.Minus(as), units.Minus(rs)
 	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(as)}, {txt(num(b, unit))}, {txt(rs)},
 		{mark(units.Utilisation(util))}, {verdict}}
 	if i == gov {

@@ -6,10 +6,12 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
-	"runtime"
+	"runtime/debug"
 	"runtime/metrics"
 	"strings"
+	"sync/atomic"
 	"testing"
+	"time"
 
 	"github.com/plinth-calc/plinth/doc/compose"
 	"github.com/plinth-calc/plinth/doc/pdf"
@@ -62,44 +64,99 @@ func BenchmarkRenderEngine1000(b *testing.B) {
 
 func benchEngine(b *testing.B, n int) { benchPackage(b, writeEngineBenchPackage, n) }
 
+// BenchmarkEvalEngine100 loads, parses and evaluates the 100 engine
+// sheets (the engine's bearing checks included): the part of plinth
+// render before BenchmarkRenderEngine100's.
+func BenchmarkEvalEngine100(b *testing.B) {
+	dir := b.TempDir()
+	if err := writeEngineBenchPackage(dir, 100); err != nil {
+		b.Fatal(err)
+	}
+	cpu0 := cpuSeconds()
+	b.ReportAllocs()
+	b.ResetTimer()
+	for b.Loop() {
+		evaluate(b, dir)
+	}
+	b.StopTimer()
+	if cpu := cpuSeconds() - cpu0; cpu > 0 {
+		b.ReportMetric(cpu/float64(b.N), "cpu-s/op")
+	}
+}
+
 // benchPackage renders a generated package of n sheets from its
-// evaluated form (compose, layout, PDF) and reports pages, PDF size and
-// peak memory.
+// evaluated form as plinth render does (compose, layout, the PDF with
+// each page's boxes released once drawn) and reports pages, PDF size,
+// peak memory and the CPU time per render (the machine may be shared,
+// so wall time alone says little).
 func benchPackage(b *testing.B, write func(string, int) error, n int) {
 	dir := b.TempDir()
 	if err := write(dir, n); err != nil {
 		b.Fatal(err)
 	}
 	res := evaluate(b, dir)
-	runtime.GC()
+	debug.FreeOSMemory()
+	peak := watchPeak()
+	cpu0 := cpuSeconds()
 	b.ReportAllocs()
 	b.ResetTimer()
 	var pages, size int
 	for b.Loop() {
-		p, d := compose.Pages(res, compose.Options{})
+		p, d := pagesOf(res, compose.Options{})
 		if d.HasErrors() {
 			b.Fatal(d)
 		}
+		pages = len(p.Pages)
 		var buf bytes.Buffer
-		if err := pdf.Write(&buf, p, pdf.Options{}); err != nil {
+		if err := pdf.Write(&buf, p, pdf.Options{Release: true}); err != nil {
 			b.Fatal(err)
 		}
-		pages, size = len(p.Pages), buf.Len()
+		size = buf.Len()
 	}
 	b.StopTimer()
+	cpu := cpuSeconds() - cpu0
 	b.ReportMetric(float64(pages), "pages")
 	b.ReportMetric(float64(size)/1e6, "MB-pdf")
-	b.ReportMetric(peakMB(), "MB-peak")
+	b.ReportMetric(peak()/1e6, "MB-peak")
+	if cpu > 0 {
+		b.ReportMetric(cpu/float64(b.N), "cpu-s/op")
+	}
 }
 
-// peakMB is the most memory the Go runtime has mapped from the system so
-// far, a stand-in for peak resident memory.
-func peakMB() float64 {
-	s := []metrics.Sample{{Name: "/memory/classes/total:bytes"}}
-	metrics.Read(s)
-	var ms runtime.MemStats
-	runtime.ReadMemStats(&ms)
-	return float64(max(s[0].Value.Uint64(), ms.Sys)) / 1e6
+// watchPeak samples the memory the Go runtime holds from the system
+// (mapped less released: what is resident, near enough) every
+// millisecond until the returned function is called, which returns the
+// most seen, in bytes.
+func watchPeak() func() float64 {
+	s := []metrics.Sample{{Name: "/memory/classes/total:bytes"}, {Name: "/memory/classes/heap/released:bytes"}}
+	read := func() uint64 {
+		metrics.Read(s)
+		return s[0].Value.Uint64() - s[1].Value.Uint64()
+	}
+	var most atomic.Uint64
+	most.Store(read())
+	stop := make(chan struct{})
+	done := make(chan struct{})
+	go func() {
+		defer close(done)
+		t := time.NewTicker(time.Millisecond)
+		defer t.Stop()
+		for {
+			select {
+			case <-stop:
+				return
+			case <-t.C:
+				if v := read(); v > most.Load() {
+					most.Store(v)
+				}
+			}
+		}
+	}()
+	return func() float64 {
+		close(stop)
+		<-done
+		return float64(max(most.Load(), read()))
+	}
 }
 
 // TestWriteEngineBenchPackage writes the engine benchmark package of

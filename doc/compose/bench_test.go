@@ -80,8 +80,7 @@ func TestWriteBenchPackage(t *testing.T) {
 
 // BenchmarkRender100 renders a generated 100-sheet package (about 300
 // pages) from its evaluated form: compose, layout (two passes for the
-// cover's page numbers) and the PDF. Target: under 1 s and 200 MB on one
-// core.
+// cover's page numbers) and the PDF. Target: 0.15 s on two cores.
 func BenchmarkRender100(b *testing.B) { benchPackage(b, writeBenchPackage, 100) }
 
 // BenchmarkRenderDemo renders the example package end to end, as plinth

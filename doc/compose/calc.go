@@ -19,7 +19,7 @@ func (c *composer) calc(s *eval.Sheet, b *sheet.Calc) []layout.Block {
 				continue
 			}
 			runs := c.citedText(s, sheet.Str{Value: l.Text}, layout.Italic)
-			out = append(out, &layout.Para{Pos: pos(l.Span), Runs: runs})
+			out = append(out, &layout.Para{Pos: l.Span, Runs: runs})
 		case *sheet.Stmt:
 			switch x := l.X.(type) {
 			case *expr.Assign:
@@ -49,7 +49,7 @@ func runsOfLines(bs []layout.Block) []layout.Block {
 					continue
 				}
 			}
-			out = append(out, &layout.Steps{Pos: b.Position(), Lines: []layout.Block{b}})
+			out = append(out, &layout.Steps{Pos: b.Where(), Lines: []layout.Block{b}})
 		default:
 			out = append(out, b)
 		}
@@ -70,7 +70,7 @@ func literal(n expr.Node) (*expr.Num, bool) {
 
 // assign converts one statement.
 func (c *composer) assign(s *eval.Sheet, st *sheet.Stmt, a *expr.Assign, y *eval.Symbol) layout.Block {
-	p := pos(st.Span)
+	p := st.Span
 	sym := eqn.Sym{Name: a.Sym.Name}
 	note := c.noteRuns(s, y.Note)
 	f := newFormula(a.X, y.Uses)
@@ -121,7 +121,7 @@ var relText = map[string]string{"<=": "≤", ">=": "≥", "<": "<", ">": ">", "=
 
 // check converts a check line.
 func (c *composer) check(s *eval.Sheet, ch *eval.Check) layout.Block {
-	p := pos(ch.Span)
+	p := ch.Span
 	note := c.noteRuns(s, ch.Note)
 	lt, rt := ch.Values()
 	side := func(n expr.Node, text string) (eqn.Node, eqn.Node) {

@@ -53,21 +53,33 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 	}
 	if len(xs) > 1 {
+		// The engine's crossings join the rows: there both limits are the
+		// allowable pressure, and the governing limit changes.
+		governs := r.Rows[0].Governs
+		for _, row := range r.Rows {
+			if row.B == xs[0] {
+				governs = row.Governs
+			}
+		}
+		var regions []chart.Region
+		from := xs[0]
+		for _, cr := range r.Crossings {
+			xs, qb, qs, qa = append(xs, cr.B), append(qb, cr.QB/1e3), append(qs, cr.QS/1e3), append(qa, cr.Q/1e3)
+			regions = append(regions, chart.Region{From: from, To: cr.B, Label: cr.Below + " governs"})
+			from, governs = cr.B, cr.Above
+		}
 		sortByX(xs, qb, qs, qa)
+		regions = append(regions, chart.Region{From: from, To: xs[len(xs)-1], Label: governs + " governs"})
 		bear := chart.Series{Name: "bearing", X: xs, Y: qb, Dash: chart.Dashed}
 		sett := chart.Series{Name: "settlement", X: xs, Y: qs, Dash: chart.Dotted}
+		low := chart.Series{Name: "allowable (the lower)", X: xs, Y: qa, Style: chart.Band}
 		// the chart beside the table of its values
 		share := math.Min(0.55, (layout.NaturalWidth(t)+4)/(c.width-chartGap))
 		ch := chart.Chart{W: (c.width - chartGap) * (1 - share), H: 180,
-			X:      chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
-			Y:      chart.Axis{Title: "allowable pressure (kPa)"},
-			Series: []chart.Series{bear, sett}}
-		if low, regions, err := chart.Lower("allowable (the lower)", bear, sett); err == nil {
-			ch.Series = append([]chart.Series{low}, ch.Series...)
-			ch.Regions = regions
-		} else {
-			ch.Series = append(ch.Series, chart.Series{Name: "allowable (the lower)", X: xs, Y: qa, Emphasis: true})
-		}
+			X:       chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
+			Y:       chart.Axis{Title: "allowable pressure (kPa)"},
+			Series:  []chart.Series{low, bear, sett},
+			Regions: regions}
 		if r.Own >= 0 && r.Own < len(r.Rows) {
 			ch.Guides = []chart.Guide{{Value: r.Rows[r.Own].B, Label: b.Of.Name + " B = " + f(r.Rows[r.Own].B, mU) + " m"}}
 		}

@@ -2,8 +2,6 @@ package compose
 
 import (
 	"github.com/plinth-calc/plinth/doc/layout"
-	"github.com/plinth-calc/plinth/doc/layout/draw"
-	"github.com/plinth-calc/plinth/doc/layout/fonts"
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
@@ -16,8 +14,7 @@ type Changes struct {
 	Sections []ChangeSection
 	Empty    string // printed when there are no sections ("No changes.")
 	// Lines are the source lines whose printed values changed; they get
-	// change bars (see MarkChanges), labelled Letter (the current
-	// revision).
+	// change bars (layout.Bars), labelled Letter (the current revision).
 	Lines  []ChangeLine
 	Letter string
 }
@@ -67,102 +64,23 @@ func (c *composer) changesSheet() layout.Sheet {
 	return out
 }
 
-// MarkChanges draws a change bar in the left margin beside the boxes of
-// the sheets printed from one of ch.Lines, with ch.Letter beside the bar
-// in small type. A line printed as one or two boxes (a statement, a table
-// row, a check) is marked whole; a line printed as many (an engine block
-// and its working) is marked at its first box and at each box that prints
-// one of the line's changed values. A box inside a marked box is not
-// marked again.
-func MarkChanges(pages *layout.Pages, ch *Changes) {
-	if pages == nil || ch == nil || len(ch.Lines) == 0 {
-		return
+// bars are the change bars of the changed lines (layout.Bars): each
+// line's path matched to the package file it names. A line in no file of
+// the package (the file was removed) has nothing printed to bar.
+func (c *composer) bars() *layout.Bars {
+	ch := c.opt.Changes
+	if ch == nil || len(ch.Lines) == 0 {
+		return nil
 	}
-	type key struct {
-		path string
-		line int
+	files := map[string]*source.File{}
+	for _, f := range c.res.Src.Files {
+		files[f.Path] = f
 	}
-	values := map[key][]string{}
+	b := &layout.Bars{Letter: ch.Letter}
 	for _, l := range ch.Lines {
-		k := key{l.Pos.Path, l.Pos.Line}
-		values[k] = append(values[k], l.Values...)
-	}
-	skip := func(b *layout.Box) bool {
-		return b.Kind == "title-block" || b.Kind == "footer" || b.Kind == "anchor" || b.H <= 0
-	}
-	count := map[key]int{}
-	var walk func(b *layout.Box, fn func(*layout.Box) bool)
-	walk = func(b *layout.Box, fn func(*layout.Box) bool) {
-		if skip(b) {
-			return
-		}
-		if fn(b) {
-			return
-		}
-		for _, k := range b.Kids {
-			walk(k, fn)
+		if f := files[l.Pos.Path]; f != nil {
+			b.Lines = append(b.Lines, layout.BarLine{Line: source.Line{File: f, Line: l.Pos.Line}, Values: l.Values})
 		}
 	}
-	for _, pg := range pages.Pages {
-		for _, b := range pg.Boxes {
-			walk(b, func(b *layout.Box) bool {
-				k := key{b.Pos.Path, b.Pos.Line}
-				if _, ok := values[k]; ok {
-					count[k]++
-					return true
-				}
-				return false
-			})
-		}
-	}
-	seen := map[key]bool{}
-	prints := func(b *layout.Box, vs []string) bool {
-		found := false
-		b.Walk(func(x *layout.Box) {
-			for _, it := range x.Items {
-				if t, ok := it.(draw.Text); ok {
-					for _, v := range vs {
-						if v != "" && containsNumber(t.Text, v) {
-							found = true
-						}
-					}
-				}
-			}
-		})
-		return found
-	}
-	for _, pg := range pages.Pages {
-		for _, b := range pg.Boxes {
-			walk(b, func(b *layout.Box) bool {
-				k := key{b.Pos.Path, b.Pos.Line}
-				vs, ok := values[k]
-				if !ok {
-					return false
-				}
-				if count[k] <= 2 || !seen[k] || prints(b, vs) {
-					b.Items = append(b.Items, draw.Line{X1: -7, Y1: 0, X2: -7, Y2: b.H, Paint: draw.Stroke(draw.Gray(0), 1.2)})
-					if ch.Letter != "" {
-						b.Items = append(b.Items, draw.Text{X: -10, Y: min(b.H, 9) - 2, Face: fonts.Regular, Size: 6, Align: draw.Right, Text: ch.Letter})
-					}
-				}
-				seen[k] = true
-				return true
-			})
-		}
-	}
-}
-
-// containsNumber reports whether s holds the number v, not as part of a
-// longer number ("19.75" in "= 19.75 mm", not in "119.75" or "19.755").
-func containsNumber(s, v string) bool {
-	digit := func(c byte) bool { return c >= '0' && c <= '9' || c == '.' }
-	for i := 0; i+len(v) <= len(s); i++ {
-		if s[i:i+len(v)] != v {
-			continue
-		}
-		if (i == 0 || !digit(s[i-1])) && (i+len(v) == len(s) || !digit(s[i+len(v)])) {
-			return true
-		}
-	}
-	return false
+	return b
 }

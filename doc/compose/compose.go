@@ -4,9 +4,11 @@ import (
 	"fmt"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -18,9 +20,6 @@ type Options struct {
 	// numbers, but the references list they point to is not printed, so
 	// they are not linked.
 	Bare bool
-	// Progress is passed to the layout (layout.Doc.Progress): sheets laid
-	// out, once per layout pass.
-	Progress func(done, total int)
 	// Changes, when set, prints a page "Changes since revision X" after
 	// the summary (plinth render --since).
 	Changes *Changes
@@ -37,20 +36,19 @@ type composer struct {
 	refs      refList
 	inputs    map[*eval.Symbol]string // anchor of the line or table that prints an input
 	nAnchor   int
-	cautions  []raised // engine cautions, for the cautions summary
-	contents  *layout.Table
-	sheetRows []int                         // layout sheet of each contents row
-	matter    []matterTitle                 // the matter sheets after the calculation sheets, in order
-	quote     int                           // depth of block quotes being converted (their text is italic)
-	level     int                           // level of the sheet's latest heading (engine sub-headings go below it)
-	refSeen   map[trace.Ref]bool            // citations printed in the current engine block
-	appendix  []layout.Block                // working left out of the main flow (detail = governing)
-	pageRefs  []pageRef                     // runs that print the page of an anchor
-	selfShown map[*eval.Footing]*eval.Block // the block that printed each footing's self-weight working
-	printed   map[string]bool               // engine steps printed on the current sheet (stepKey)
-	shapes    map[string]string             // formulas printed in full on the current sheet (shapeKey) → the symbol
-	written   map[string]writtenOut         // long settlement formulas written out in the package (shapeKey)
-	firstAt   map[string]*firstLine         // the line that first printed each computed engine step (stepKey)
+	cautions  []raised                        // engine cautions, for the cautions summary
+	matter    []matterTitle                   // the matter sheets after the calculation sheets, in order
+	quote     int                             // depth of block quotes being converted (their text is italic)
+	level     int                             // level of the sheet's latest heading (engine sub-headings go below it)
+	refSeen   map[trace.Ref]bool              // citations printed in the current engine block
+	appendix  []layout.Block                  // working left out of the main flow (detail = governing)
+	selfShown map[*eval.Footing]*eval.Block   // the block that printed each footing's self-weight working
+	uses      map[*eval.Footing][]*eval.Block // each footing's analyses (sketch.go)
+	texts     *eqn.Texts                      // formula texts set by fits, reused
+	printed   map[string]bool                 // engine steps printed on the current sheet (stepKey)
+	shapes    map[string]string               // formulas printed in full on the current sheet (shapeKey) → the symbol
+	written   map[string]writtenOut           // long settlement formulas written out in the package (shapeKey)
+	firstAt   map[string]*firstLine           // the line that first printed each computed engine step (stepKey)
 }
 
 // writtenOut is a long formula written out in full: its symbol, its sheet
@@ -59,19 +57,11 @@ type writtenOut struct {
 	symbol, sheet, anchor string
 }
 
-// pageRef is a run that prints the page an anchor is on, filled in once
-// the pages are laid out.
-type pageRef struct {
-	run    *layout.Run
-	anchor string
-	format string // "page %d"
-}
-
 // raised is an engine caution with the place it was printed.
 type raised struct {
 	sheet  *eval.Sheet
 	block  *eval.Block
-	sev    layout.Severity
+	sev    severity.Level
 	text   string
 	where  string // case or step
 	anchor string
@@ -98,7 +88,8 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, written: map[string]writtenOut{}, firstAt: map[string]*firstLine{}}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, texts: eqn.NewTexts(),
+		written: map[string]writtenOut{}, firstAt: map[string]*firstLine{}}
 	c.refs.linked = !opt.Bare
 	return c
 }
@@ -106,7 +97,7 @@ func newComposer(res *eval.Result, opt Options) *composer {
 func (c *composer) document() layout.Doc {
 	c.tpl = c.template()
 	c.width = c.tpl.BodyWidth()
-	doc := layout.Doc{Info: c.info(), Template: c.tpl}
+	doc := layout.Doc{Info: c.info(), Template: c.tpl, Bars: c.bars()}
 	var sheets []layout.Sheet
 	for _, s := range c.res.Sheets {
 		sheets = append(sheets, c.sheet(s))
@@ -115,24 +106,16 @@ func (c *composer) document() layout.Doc {
 		doc.Sheets = sheets
 		return doc
 	}
-	// Layout sheets: cover, summary, the sheets, the appendix (when any
-	// working was moved there), the end matter; sheetRows maps each
-	// contents row to its layout sheet.
+	// Layout sheets: cover, summary, the changes, the sheets, the appendix
+	// (when any working was moved there), the end matter. The cover's
+	// contents give each one's pages (layout.PageRef on its anchor).
 	c.matter = matterTitles
 	doc.Sheets = append(doc.Sheets, c.cover(), c.summary())
 	if c.opt.Changes != nil {
-		c.sheetRows = append(c.sheetRows, len(doc.Sheets))
 		doc.Sheets = append(doc.Sheets, c.changesSheet())
 	}
-	for i := range sheets {
-		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+i)
-	}
 	doc.Sheets = append(doc.Sheets, sheets...)
-	for i, m := range c.endMatter() {
-		c.sheetRows = append(c.sheetRows, len(doc.Sheets)+0*i)
-		doc.Sheets = append(doc.Sheets, m)
-	}
-	c.sheetRows = append([]int{1}, c.sheetRows...) // the summary is the first row
+	doc.Sheets = append(doc.Sheets, c.endMatter()...) // the appendix opens it
 	return doc
 }
 
@@ -153,7 +136,7 @@ const appendixTitle = "Appendix: further working"
 // sheet converts one evaluated sheet.
 func (c *composer) sheet(s *eval.Sheet) layout.Sheet {
 	out := layout.Sheet{
-		Pos:    source.Position{Path: s.Src.File.Path, Line: 1, Col: 1},
+		Pos:    source.Span{File: s.Src.File},
 		Fields: c.fields(s.Meta),
 	}
 	c.level = 0
@@ -229,14 +212,6 @@ func (c *composer) fields(m sheet.Meta) layout.Fields {
 		}
 	}
 	return f
-}
-
-// pos is the position of a span (zero for an empty span).
-func pos(sp source.Span) source.Position {
-	if sp.File == nil {
-		return source.Position{}
-	}
-	return sp.Pos()
 }
 
 func plural(n int, word string) string {

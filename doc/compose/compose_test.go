@@ -4,7 +4,6 @@ import (
 	"bytes"
 	"flag"
 	"fmt"
-	"github.com/plinth-calc/plinth/internal/tools"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -19,7 +18,9 @@ import (
 	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/parse"
 	"github.com/plinth-calc/plinth/doc/pdf"
+	"github.com/plinth-calc/plinth/doc/source"
 	"github.com/plinth-calc/plinth/internal/golden"
+	"github.com/plinth-calc/plinth/internal/tools"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
@@ -46,10 +47,22 @@ func evaluate(t testing.TB, path string, sets ...string) *eval.Result {
 	return res
 }
 
+// pagesOf composes and lays out a result, as plinth render does.
+func pagesOf(res *eval.Result, opt compose.Options) (*layout.Pages, source.List) {
+	doc, d := compose.Document(res, opt)
+	if d.HasErrors() {
+		return nil, d
+	}
+	pages, ld := layout.Document(doc)
+	d.Append(ld)
+	d.Sort()
+	return pages, d
+}
+
 // render makes the PDF bytes of a result, as plinth render does.
 func render(t testing.TB, res *eval.Result) ([]byte, *layout.Pages) {
 	t.Helper()
-	pages, d := compose.Pages(res, compose.Options{})
+	pages, d := pagesOf(res, compose.Options{})
 	if d.HasErrors() {
 		t.Fatal(d)
 	}
@@ -226,7 +239,7 @@ func TestDeterministic(t *testing.T) {
 // and of its cover and check register.
 func TestLayoutGolden(t *testing.T) {
 	res := evaluate(t, filepath.Join(goldenDir, "mini"))
-	pages, d := compose.Pages(res, compose.Options{})
+	pages, d := pagesOf(res, compose.Options{})
 	if d.HasErrors() {
 		t.Fatal(d)
 	}

@@ -22,15 +22,16 @@ func (c *composer) packageMeta() sheet.Meta {
 	return c.res.Sheets[0].Meta
 }
 
-// matterPos is the position matter sheets report problems at.
-func (c *composer) matterPos() source.Position {
+// matterPos is where matter sheets report problems: the start of
+// package.yaml, else of the first sheet.
+func (c *composer) matterPos() source.Span {
 	if f := c.res.Src.Meta.Span.File; f != nil {
-		return source.Position{Path: f.Path, Line: 1, Col: 1}
+		return source.Span{File: f}
 	}
 	if len(c.res.Sheets) > 0 {
-		return source.Position{Path: c.res.Sheets[0].Src.File.Path, Line: 1, Col: 1}
+		return source.Span{File: c.res.Sheets[0].Src.File}
 	}
-	return source.Position{Path: c.res.Src.Dir}
+	return source.Span{}
 }
 
 // matterSheet starts a sheet of package matter.
@@ -55,11 +56,24 @@ func users(rs []layout.Run) []layout.Run {
 	}
 	return rs
 }
+
+// pageOf prints the page an anchor lands on after prefix ("page 12"),
+// linked to it; the layout fills it in (layout.PageRef).
+func pageOf(anchor, prefix string) layout.Run {
+	return layout.Run{Page: layout.PageRef{Anchor: anchor, Prefix: prefix}, Link: anchor, Own: true}
+}
+
+// sheetPages prints the pages of the sheet an anchor opens ("3–5"), for
+// the contents.
+func sheetPages(anchor string) layout.Run {
+	return layout.Run{Page: layout.PageRef{Anchor: anchor, Sheet: true}, Own: true}
+}
+
 func cell(runs ...layout.Run) layout.Cell {
 	return layout.Cell(runs)
 }
 
-func heading(p source.Position, level int, text string) *layout.Heading {
+func heading(p source.Span, level int, text string) *layout.Heading {
 	return &layout.Heading{Pos: p, Level: level, NoNumber: true, Runs: []layout.Run{txt(text)}}
 }
 
@@ -145,14 +159,14 @@ func (c *composer) cover() layout.Sheet {
 	add(data)
 
 	add(heading(p, 2, "Contents"))
-	c.contents = &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
+	contents := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Pages")), cell(txt("Calc no.")), cell(txt("Title")), cell(txt("Rev")), cell(txt("Checks"))},
 		Align: []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft, layout.AlignLeft}}
-	c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-		cell(txt("—")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
+	contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+		cell(sheetPages("summary")), nil, cell(layout.Run{Text: "Summary of results and design basis", Link: "summary", Own: true}), nil, nil,
 	}})
 	if ch := c.opt.Changes; ch != nil {
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(txt("—")), nil, cell(layout.Run{Text: "Changes since revision ", Link: "changes", Own: true}, layout.Run{Text: ch.Since, Link: "changes"}), nil, nil,
+		contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(sheetPages("changes")), nil, cell(layout.Run{Text: "Changes since revision ", Link: "changes", Own: true}, layout.Run{Text: ch.Since, Link: "changes"}), nil, nil,
 		}})
 	}
 	for _, s := range c.res.Sheets {
@@ -161,8 +175,8 @@ func (c *composer) cover() layout.Sheet {
 		if title == "" {
 			title = s.Name()
 		}
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: pos(s.Src.Meta.Title.Span), Cells: []layout.Cell{
-			cell(txt("—")), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
+		contents.Rows = append(contents.Rows, layout.Row{Pos: s.Src.Meta.Title.Span, Cells: []layout.Cell{
+			cell(sheetPages(sheetAnchor(s.Index))), cell(txt(f.Calc)), cell(layout.Run{Text: title, Link: sheetAnchor(s.Index)}), cell(txt(f.Rev)), cell(checkSummary(s.Checks)...),
 		}})
 	}
 	for _, mt := range c.matter {
@@ -180,11 +194,11 @@ func (c *composer) cover() layout.Sheet {
 				title = append(title, layout.Run{Text: sec.title, Link: sec.anchor, Own: true})
 			}
 		}
-		c.contents.Rows = append(c.contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(txt("—")), nil, title, nil, nil,
+		contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
+			cell(sheetPages(mt.anchor)), nil, title, nil, nil,
 		}})
 	}
-	add(c.contents)
+	add(contents)
 
 	add(heading(p, 2, "Revision history"))
 	if len(m.Revisions) == 0 {
@@ -192,7 +206,7 @@ func (c *composer) cover() layout.Sheet {
 	} else {
 		rh := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Rev")), cell(txt("Date")), cell(txt("By")), cell(txt("Checked")), cell(txt("Description"))}}
 		for _, r := range m.Revisions {
-			rh.Rows = append(rh.Rows, layout.Row{Pos: pos(r.Span), Cells: []layout.Cell{
+			rh.Rows = append(rh.Rows, layout.Row{Pos: r.Span, Cells: []layout.Cell{
 				cell(user(r.Rev.Value)), cell(user(r.Date.Value)), cell(user(r.By.Value)), cell(user(r.Checked.Value)), cell(user(r.Note.Value)),
 			}})
 		}
@@ -213,7 +227,7 @@ func (c *composer) cover() layout.Sheet {
 }
 
 // signOff is the checker's box: name, signature, date and comments.
-func (c *composer) signOff(p source.Position) *layout.Drawing {
+func (c *composer) signOff(p source.Span) *layout.Drawing {
 	w, h := c.width, 54.0
 	d := &layout.Drawing{Pos: p, W: w, H: h}
 	line := draw.Stroke(draw.Gray(120), 0.6)

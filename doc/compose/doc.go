@@ -1,20 +1,20 @@
 // Package compose is the render stage's first half: it turns an evaluated
-// package (eval.Result) into the layout input model (layout.Doc). It
-// computes nothing of its own — every number it prints comes from the
-// evaluator or the engine's traces — it only chooses how each is shown.
+// package (eval.Result) into the layout input model (layout.Doc) and
+// stops; doc/layout lays the Doc out. It computes nothing of its own —
+// every number it prints comes from the evaluator or the engine's traces
+// — it only chooses how each is shown.
 //
 // Entry points:
 //
 //	Document(res, opt) (layout.Doc, source.List)   the layout input
-//	Pages(res, opt) (*layout.Pages, source.List)   Document, laid out (the
-//	                                               cover's page numbers filled in)
 //	Created(res, epoch) (time.Time, source.List)   the document date
 //
 // The page template is the package's template field: a built-in one (a4,
 // letter) or a YAML file read through the package's Inside reader; a file
 // that cannot be read or used is an error at the field. Images are read
-// the same way, errors at the image's path. Layout problems come back from
-// Pages as diagnostics at the source line they concern.
+// the same way, errors at the image's path. Every block carries the
+// source span it prints, so layout problems come back from
+// layout.Document at the source line they concern.
 //
 // # What a package prints as
 //
@@ -35,9 +35,15 @@
 // every page; the end sheet's sections share one row of the contents.
 //
 // Page numbers printed in text (summary, check register, appendix
-// pointers) are runs registered in composer.pageRefs and filled in from
-// the anchors' pages after layout (Pages lays out again until nothing
-// moves), like the cover's contents.
+// pointers) and the cover's contents are page references
+// (layout.PageRef: pageOf, sheetPages) to anchors: the layout fills them
+// in once it knows where the anchors land. The changed lines of a render
+// --since become the Doc's change bars (layout.Bars).
+//
+// Formulas. The engine's formulas (trace.Expr) and the sheet's
+// expressions, converted to the same form, are typeset by one converter
+// (fromExpr, convert.go) into eqn nodes; a table cell computed from other
+// symbols prints the expression the evaluator parsed, with its place.
 //
 // Detail. package.yaml's detail (governing, the default, or full) says
 // how much of each engine block is printed in place. With governing the

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"strings"
 
-	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
@@ -19,7 +18,7 @@ type engineOut struct {
 	c         *composer
 	s         *eval.Sheet
 	b         *eval.Block
-	p         source.Position
+	p         source.Span
 	blocks    []layout.Block
 	apx       []layout.Block    // working moved to the appendix (detail = governing)
 	shown     map[shownKey]bool // cautions already boxed
@@ -34,7 +33,7 @@ type shownKey struct {
 
 func (c *composer) engineOut(s *eval.Sheet, b *eval.Block) *engineOut {
 	c.refSeen = map[trace.Ref]bool{} // each citation once per block
-	o := &engineOut{c: c, s: s, b: b, p: pos(b.Span), shown: map[shownKey]bool{}}
+	o := &engineOut{c: c, s: s, b: b, p: b.Span, shown: map[shownKey]bool{}}
 	o.add(&layout.Anchor{Pos: o.p, Name: blockAnchor(b)})
 	return o
 }
@@ -63,10 +62,7 @@ func apxAnchor(b *eval.Block) string { return "apx-" + blockAnchor(b) }
 // toAppendix says where working left out of the main flow is: a
 // sentence linked to the block's part of the appendix, with its page.
 func (o *engineOut) toAppendix(what string) {
-	runs := []layout.Run{txt(what + " "), {Text: "appendix, page —", Link: apxAnchor(o.b), Own: true}, txt(".")}
-	para := &layout.Para{Pos: o.p, Runs: runs}
-	o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[1], anchor: apxAnchor(o.b), format: "appendix, page %d"})
-	o.add(para)
+	o.para(txt(what+" "), pageOf(apxAnchor(o.b), "appendix, page "), txt("."))
 }
 
 // governingOnly reports whether the package prints the governing working
@@ -104,12 +100,27 @@ func (o *engineOut) label(text string) {
 	o.add(&layout.Para{Pos: o.p, Runs: []layout.Run{{Text: text, Style: layout.BoldItalic}}})
 }
 
+// kindWords say how a step with no formula was reached (trace.Kind); a
+// given value says so in its own note.
+var kindWords = map[trace.Kind]string{
+	trace.Tabulated:    "tabulated",
+	trace.Interpolated: "interpolated",
+	trace.Solved:       "solved numerically",
+	trace.Summed:       "summed",
+}
+
 // stepLine prints one engine step: a value taken as given prints as an
 // input; a computed one as symbol = formula = values substituted =
 // result, the note and the reference beside it.
-func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
+func (c *composer) stepLine(p source.Span, st trace.Step) layout.Block {
 	sym := eqn.Sym{Name: st.Symbol}
 	var note []layout.Run
+	if w := kindWords[st.Kind]; w != "" {
+		note = append(note, layout.Run{Text: w, Style: layout.Italic, Own: true})
+		if st.Note != "" {
+			note = append(note, txt(": "))
+		}
+	}
 	if st.Note != "" {
 		note = append(note, richText(st.Note, layout.Regular)...)
 	}
@@ -123,16 +134,16 @@ func (c *composer) stepLine(p source.Position, st trace.Step) layout.Block {
 	if isUtil(st.Symbol, st.Unit) {
 		res = numberNode(units.Utilisation(st.Value)) // two decimals, as in the check line and the register
 	}
-	if st.Formula == nil {
+	if st.Formula == nil || st.Kind != trace.ByFormula {
 		return &layout.Input{Pos: p, Symbol: sym, Value: res, Note: note, Own: true}
 	}
-	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: eqn.FromExpr(st.Formula, eqn.Options{Number: constant}), Result: res, Note: note, Own: true}
+	stmt := &layout.Statement{Pos: p, Symbol: sym, Expr: fromExpr(st.Formula, exprOptions{Number: constant}), Result: res, Note: note, Own: true}
 	if _, lone := st.Formula.(trace.Sym); !lone && len(st.Inputs) > 0 {
 		vals := map[string]trace.Value{}
 		for _, in := range st.Inputs {
 			vals[in.Symbol] = in
 		}
-		stmt.Subst = eqn.FromExpr(st.Formula, eqn.Options{Number: constant, Subst: func(name string) (eqn.Node, bool) {
+		stmt.Subst = fromExpr(st.Formula, exprOptions{Number: constant, Subst: func(name string) (eqn.Node, bool) {
 			v, ok := vals[name]
 			if !ok {
 				return nil, false
@@ -173,7 +184,7 @@ func (c *composer) fits(n eqn.Node) bool {
 	if n == nil {
 		return true
 	}
-	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: layout.MathSize})
+	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: layout.MathSize, Texts: c.texts})
 	if err != nil {
 		return true // the layout reports it
 	}
@@ -225,36 +236,13 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 // printed beside them; they are left out.
 var restates = map[string]bool{"governing": true, "governing-sliding": true}
 
-// engineSeverity is the box an engine caution prints in: the same word
-// (an unknown severity prints as the highest, WARNING).
-func engineSeverity(s trace.Severity) layout.Severity {
-	switch s {
-	case trace.SevNote:
-		return layout.SevNote
-	case trace.SevCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
-// alertSeverity is the box a "> [!WORD]" blockquote prints in.
-func alertSeverity(k sheet.Alert) layout.Severity {
-	switch k {
-	case sheet.AlertNote:
-		return layout.SevNote
-	case sheet.AlertCaution:
-		return layout.SevCaution
-	}
-	return layout.SevWarning
-}
-
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
 		return
 	}
 	a := o.c.anchor("caution")
-	sev := engineSeverity(ca.Severity)
+	sev := ca.Severity
 	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	body := richText(ca.Message, layout.Regular)
@@ -295,7 +283,7 @@ func (c *composer) sources(b *eval.Block) {
 
 // checkBlock prints an engine check (one that entered the check register)
 // with both sides, named by their symbols.
-func (c *composer) checkBlock(p source.Position, ch *eval.Check, left, right string) layout.Block {
+func (c *composer) checkBlock(p source.Span, ch *eval.Check, left, right string) layout.Block {
 	if !ch.HasUtil() {
 		// No utilisation (a check not verified, with no resistance): the
 		// relation and the verdict on one line, as for a calc check.
@@ -321,21 +309,13 @@ func findCheck(b *eval.Block, kind string) *eval.Check {
 	return nil
 }
 
-// forceUnit is kN for a pad and kN/m for a strip.
-func forceUnit(f site.Footing) units.Unit {
-	if f.Shape == site.Strip {
-		return units.MustParse("kN/m")
-	}
-	return units.MustParse("kN")
-}
-
 // num formats an SI value in a unit, for table cells.
 func num(v float64, unit string) string {
 	u, err := units.Parse(unit)
 	if unit == "" || err != nil {
 		u = units.Dimensionless
 	}
-	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+	return units.Printed(v, u, -1)
 }
 
 // unitHeader is a table header cell: a symbol over its unit.
@@ -362,6 +342,10 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return c.capacity(s, b)
 	case b.Diff != nil:
 		return c.differential(s, b)
+	case b.Size != nil:
+		return c.size(s, b)
+	case b.Schedule != nil:
+		return c.schedule(s, b)
 	}
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))
@@ -379,10 +363,8 @@ func (o *engineOut) selfWeight() {
 	if first, ok := o.c.selfShown[o.b.Of]; ok && o.c.governingOnly() {
 		runs := []layout.Run{txt("Self-weight added by plinth (self_weight = auto): "),
 			{Math: eqn.Row{eqn.Sym{Name: w.Symbol}, eqn.Op{Text: "="}, siNode(w.Value, w.Unit)}, Own: true},
-			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), {Text: "page —", Link: blockAnchor(first), Own: true}, txt(".")}
-		para := &layout.Para{Pos: o.p, Runs: runs}
-		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &para.Runs[3], anchor: blockAnchor(first), format: "page %d"})
-		o.add(para)
+			txt(", worked out in " + first.Kind.String() + " " + first.Name + ", "), pageOf(blockAnchor(first), "page "), txt(".")}
+		o.add(&layout.Para{Pos: o.p, Runs: runs})
 		return
 	}
 	if o.c.selfShown == nil {

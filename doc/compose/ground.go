@@ -30,7 +30,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 			opts = append(opts, l.Name.Value+" = "+l.Value.Value)
 		case *sheet.Comment:
 			if l.Text != "" {
-				out = append(out, &layout.Para{Pos: pos(l.Span), Runs: c.citedText(s, sheet.Str{Value: l.Text}, layout.Italic)})
+				out = append(out, &layout.Para{Pos: l.Span, Runs: c.citedText(s, sheet.Str{Value: l.Text}, layout.Italic)})
 			}
 		}
 	}
@@ -42,7 +42,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 // in that unit, a cell computed from other symbols as its expression and
 // value, text cells (names, types, sources) with their citations.
 func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []units.Unit, cells [][]*eval.Symbol, anchor string) *layout.Table {
-	t := &layout.Table{Pos: pos(g.Span), Compact: true}
+	t := &layout.Table{Pos: g.Span, Compact: true}
 	numeric := make([]bool, len(cols))
 	for j, name := range cols {
 		for _, row := range cells {
@@ -63,7 +63,7 @@ func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []u
 		}
 	}
 	for i, r := range g.Rows {
-		row := layout.Row{Pos: pos(r.Span)}
+		row := layout.Row{Pos: r.Span}
 		for j := range cols {
 			var y *eval.Symbol
 			if i < len(cells) && j < len(cells[i]) {
@@ -74,6 +74,7 @@ func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []u
 				text = r.Cells[j]
 			}
 			row.Cells = append(row.Cells, c.gridCell(s, y, text, anchor))
+			row.CellPos = append(row.CellPos, text.Span)
 		}
 		t.Rows = append(t.Rows, row)
 	}
@@ -92,14 +93,10 @@ func (c *composer) gridCell(s *eval.Sheet, y *eval.Symbol, text sheet.Str, ancho
 	if y.Override != nil {
 		return layout.Cell{{Math: val}, bold(" (VARIANT)")}
 	}
-	if len(y.Uses) == 0 {
+	if len(y.Uses) == 0 || y.Expr == nil {
 		return layout.Cell{{Math: val}}
 	}
-	n, errs := expr.ParseExpr(text.Value, 0)
-	if len(errs) > 0 || n == nil {
-		return layout.Cell{{Math: val}}
-	}
-	f := newFormula(n, y.Uses)
+	f := newFormula(y.Expr, y.Uses)
 	return layout.Cell{{Math: eqn.Row{f.symbolic(), eqn.Op{Text: "="}, val}}}
 }
 
@@ -129,9 +126,12 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 	if g.Water == nil {
 		o.para(txt("No groundwater is given: the ground is taken as dry to the depth considered."))
 	}
+	if t, ok := g.Model.PlatformDepth(); ok {
+		o.para(txt(fmt.Sprintf("The first layer, %s, is a granular working platform %s m thick on the layer below (platform = yes).", g.Model.Layers[0].Name, f(t, mU))))
+	}
 	if src.Table != nil {
 		a := c.anchor("ground")
-		o.add(&layout.Anchor{Pos: pos(src.Table.Span), Name: a})
+		o.add(&layout.Anchor{Pos: src.Table.Span, Name: a})
 		cells := make([][]*eval.Symbol, len(g.Layers))
 		for i, l := range g.Layers {
 			cells[i] = l.Cells
@@ -149,7 +149,11 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 	}
 	f := b.Footing
 	o := c.engineOut(s, b)
-	o.label(fmt.Sprintf("Footing %s: %s", f.Name, shapeWords(f.Model)))
+	if f.NoB {
+		o.label(fmt.Sprintf("Footing %s: %s, width to be chosen by its size block", f.Name, toSize(f.Model)))
+	} else {
+		o.label(fmt.Sprintf("Footing %s: %s", f.Name, shapeWords(f.Model)))
+	}
 	lines, _ := c.blockLines(s, src.Lines)
 	o.add(lines...)
 	if f.SelfWeight {
@@ -163,7 +167,7 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 	}
 	if src.Table != nil {
 		a := c.anchor("footing")
-		o.add(&layout.Anchor{Pos: pos(src.Table.Span), Name: a})
+		o.add(&layout.Anchor{Pos: src.Table.Span, Name: a})
 		t := c.gridTable(s, src.Table, f.Columns, f.Units, f.Rows, a)
 		per := ""
 		if f.Model.Shape == site.Strip {
@@ -182,6 +186,18 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 		c.printed[stepKey(trace.Step{Symbol: d.sym, Value: d.v, Unit: "m"})] = true
 	}
 	return o.blocks
+}
+
+// toSize describes a footing a size block sizes: its shape, the fixed L
+// of a rectangle that gives one, and its depth.
+func toSize(f site.Footing) string {
+	m := units.MustParse("m")
+	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	plan := f.Shape.String()
+	if f.Shape == site.Rectangle && f.L > 0 {
+		plan += " of fixed length " + l(f.L)
+	}
+	return plan + ", underside " + l(f.D) + " below ground level"
 }
 
 // shapeWords describes a footing's plan: "rectangle 2.7 m × 3.2 m,

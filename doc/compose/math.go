@@ -14,7 +14,7 @@ import (
 // formula typesets a sheet expression twice: in symbols, and with every
 // symbol replaced by its value. Numbers print as written ("2.4 m") in
 // both. The expression is converted to the engine's formula form
-// (trace.Expr) so the one typesetter (eqn.FromExpr) serves sheets and
+// (trace.Expr) so the one converter (fromExpr) serves sheets and
 // engine alike; numbers travel as placeholder symbols so their text as
 // written survives.
 type formula struct {
@@ -91,13 +91,13 @@ func (f *formula) number(name string) (eqn.Node, bool) {
 
 // symbolic is the formula in symbols.
 func (f *formula) symbolic() eqn.Node {
-	return eqn.FromExpr(f.x, eqn.Options{Subst: f.number})
+	return fromExpr(f.x, exprOptions{Subst: f.number})
 }
 
 // substituted is the formula with each symbol's value as its own line
 // prints it.
 func (f *formula) substituted() eqn.Node {
-	return eqn.FromExpr(f.x, eqn.Options{Subst: func(name string) (eqn.Node, bool) {
+	return fromExpr(f.x, exprOptions{Subst: func(name string) (eqn.Node, bool) {
 		if n, ok := f.number(name); ok {
 			return n, true
 		}
@@ -178,7 +178,7 @@ func numberNode(s string) eqn.Node {
 
 // valueText prints a quantity as plain text ("245.7 kPa", "30°").
 func valueText(q units.Quantity, u units.Unit, decimals int) string {
-	s := strings.Replace(units.Format(q.V, u, decimals), "-", "−", 1)
+	s := units.Printed(q.V, u, decimals)
 	switch u.Name {
 	case "":
 		return s

@@ -5,6 +5,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -83,12 +84,11 @@ func (c *composer) checkRegister() []layout.Block {
 		if ch.Op == ">=" || ch.Op == ">" {
 			demand, capacity = ch.R, ch.L
 		}
-		page := cell(layout.Run{Text: "—", Link: ch.Anchor, Own: true})
-		c.pageRefs = append(c.pageRefs, pageRef{run: &page[0], anchor: ch.Anchor, format: "%d"})
+		page := cell(pageOf(ch.Anchor, ""))
 		what := append(c.checkMath(ch), txt("; "))
 		what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
 		what = append(what, txt("; "), layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(ch.Span), Cells: []layout.Cell{
+		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
 			cell(what...),
 			cell(layout.Run{Math: valueNode(demand, ch.Unit, -1), Own: true}),
@@ -153,14 +153,14 @@ func (c *composer) inputRegister() []layout.Block {
 			if a := c.inputs[y]; a != "" {
 				at.Link = a
 			}
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(layout.Run{Math: eqn.Sym{Name: y.Name}}), cell(val), cell(note...), cell(at),
 			}})
 		}
 		for _, a := range order {
 			y := first[a]
 			block, _, _ := strings.Cut(y.Name, ".")
-			rows = append(rows, layout.Row{Pos: pos(y.Span), Cells: []layout.Cell{
+			rows = append(rows, layout.Row{Pos: y.Span, Cells: []layout.Cell{
 				cell(user(block + ".*")), cell(txt(plural(tables[a], "value"))),
 				cell(txt("every cell of the table of " + block + ", with the source given in its row; see the table")),
 				cell(layout.Run{Text: where(y.Span), Link: a, Own: true}),
@@ -226,7 +226,7 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 	}
 	for _, r := range c.cautions {
-		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= layout.SevWarning {
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
 			continue
 		}
 		add("", 0, "", r.text, use{s: r.sheet, b: r.block, where: r.where, anchor: r.anchor})
@@ -264,7 +264,7 @@ func (c *composer) assumedValues() []layout.Block {
 			if from > 0 {
 				note = cell(txt("as the row above, in more blocks"))
 			}
-			t.Rows = append(t.Rows, layout.Row{Pos: pos(e.uses[from].b.Span), Cells: []layout.Cell{sym, val, at}})
+			t.Rows = append(t.Rows, layout.Row{Pos: e.uses[from].b.Span, Cells: []layout.Cell{sym, val, at}})
 		}
 	}
 	return append(out, t)
@@ -356,8 +356,15 @@ var standing = []string{
 	"The input fingerprint in every page footer identifies the inputs of this print. A print showing a different fingerprint was made from different inputs.",
 }
 
-// severityOrder states the order of the caution words (calc/trace.Severity).
-const severityOrder = "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): WARNING, a result that may be unsafe or is missing (a limit exceeded, a check not made, a layer left out); CAUTION, a method used near its limits or an assumption the engineer must confirm; NOTE, information (a choice made, a value assumed)."
+// severityOrder states the order of the caution words and what each
+// means (calc/severity), highest first.
+func severityOrder() string {
+	var parts []string
+	for l := severity.Warning; l >= severity.Note; l-- {
+		parts = append(parts, l.String()+", "+l.Meaning())
+	}
+	return "Severity, highest first (the order of ANSI Z535.4 and ISO 3864-2): " + strings.Join(parts, "; ") + "."
+}
 
 // cautionSheet lists every engine caution with where it was raised, then
 // the standing cautions. A caution raised in the same words in several
@@ -366,7 +373,7 @@ func (c *composer) cautionSheet() []layout.Block {
 	p := c.matterPos()
 	out := c.section("Cautions", "cautions")
 	out = append(out, heading(p, 2, "Cautions raised by the engine"))
-	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder)}})
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder())}})
 	if len(c.cautions) == 0 {
 		out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {
@@ -386,7 +393,7 @@ func (c *composer) cautionSheet() []layout.Block {
 			}
 			uses = append(uses, 1)
 			rowOf[k] = len(t.Rows)
-			t.Rows = append(t.Rows, layout.Row{Pos: pos(r.block.Span), Cells: []layout.Cell{
+			t.Rows = append(t.Rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
 				cell(txt(fmt.Sprint(len(t.Rows) + 1))), cell(bold(r.sev.String())), append(richText(r.text, layout.Regular), txt("\nRaised at "), at),
 			}})
 		}
@@ -396,6 +403,6 @@ func (c *composer) cautionSheet() []layout.Block {
 	for _, s := range standing {
 		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: []layout.Run{txt(s)}}})
 	}
-	return append(out, &layout.Caution{Pos: p, Severity: layout.SevCaution, Title: []layout.Run{txt("Standing cautions")},
+	return append(out, &layout.Caution{Pos: p, Severity: severity.Caution, Title: []layout.Run{txt("Standing cautions")},
 		Body: []layout.Block{&layout.List{Pos: p, Items: items}}})
 }

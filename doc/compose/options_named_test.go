@@ -27,8 +27,8 @@ func TestNamedOptionsExist(t *testing.T) {
 	res := evaluate(t, glyphPackage(t))
 	lookup := func(name string) []sheet.OptionSpec {
 		var out []sheet.OptionSpec
-		for k := range sheet.Options {
-			if o, ok := sheet.LookupOption(k, name); ok {
+		for _, k := range sheet.Specs {
+			if o, ok := k.Option(name); ok {
 				out = append(out, o)
 			}
 		}

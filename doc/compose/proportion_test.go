@@ -81,7 +81,7 @@ func TestNothingLeftOut(t *testing.T) {
 // total as a metric.
 func TestExamplePages(t *testing.T) {
 	res := evaluate(t, "../../examples/brackenfield")
-	pages, d := compose.Pages(res, compose.Options{})
+	pages, d := pagesOf(res, compose.Options{})
 	if d.HasErrors() {
 		t.Fatal(d)
 	}

@@ -20,7 +20,7 @@ func (c *composer) blocks(s *eval.Sheet, bs []sheet.Block) []layout.Block {
 }
 
 func (c *composer) block(s *eval.Sheet, b sheet.Block) []layout.Block {
-	p := pos(b.Where())
+	p := b.Where()
 	switch b := b.(type) {
 	case *sheet.Heading:
 		lvl := min(max(b.Level, 1), 3)
@@ -45,7 +45,7 @@ func (c *composer) block(s *eval.Sheet, b sheet.Block) []layout.Block {
 	case *sheet.CodeBlock:
 		return []layout.Block{&layout.Code{Pos: p, Text: b.Text}}
 	case *sheet.Caution:
-		return []layout.Block{&layout.Caution{Pos: p, Severity: alertSeverity(b.Kind), Body: c.blocks(s, b.Body)}}
+		return []layout.Block{&layout.Caution{Pos: p, Severity: b.Kind, Body: c.blocks(s, b.Body)}}
 	case *sheet.Quote:
 		c.quote++
 		defer func() { c.quote-- }()
@@ -68,7 +68,7 @@ func (c *composer) block(s *eval.Sheet, b sheet.Block) []layout.Block {
 
 // proseTable converts a GFM table.
 func (c *composer) proseTable(s *eval.Sheet, b *sheet.Table) *layout.Table {
-	t := &layout.Table{Pos: pos(b.Span)}
+	t := &layout.Table{Pos: b.Span}
 	for _, h := range b.Header {
 		t.Header = append(t.Header, c.inlines(s, h.Text))
 	}
@@ -79,9 +79,10 @@ func (c *composer) proseTable(s *eval.Sheet, b *sheet.Table) *layout.Table {
 		row := layout.Row{}
 		for i, cell := range r {
 			if i == 0 {
-				row.Pos = pos(cell.Span)
+				row.Pos = cell.Span
 			}
 			row.Cells = append(row.Cells, c.inlines(s, cell.Text))
+			row.CellPos = append(row.CellPos, cell.Span)
 		}
 		t.Rows = append(t.Rows, row)
 	}
@@ -106,7 +107,7 @@ func (c *composer) image(s *eval.Sheet, b *sheet.Image) []layout.Block {
 		c.diags.Add(b.Path.Span, "image %q: %v", b.Path.Value, err)
 		return nil
 	}
-	return []layout.Block{&layout.Image{Pos: pos(b.Span), Data: data, Caption: c.inlines(s, b.Caption)}}
+	return []layout.Block{&layout.Image{Pos: b.Span, Data: data, Caption: c.inlines(s, b.Caption)}}
 }
 
 // inlines converts a line of prose. Block quotes print in italic.

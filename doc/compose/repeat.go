@@ -125,11 +125,11 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 	}
 	o.closeAgain(at, again)
 	if elsewhere != nil {
-		a := o.c.lineAnchor(from.line)
+		page := pageOf(o.c.lineAnchor(from.line), "page ")
+		page.Style = layout.Italic
 		elsewhere.Runs = append([]layout.Run{{Text: "As computed in " + from.sheet + ", ", Style: layout.Italic, Own: true},
-			{Text: "page —", Style: layout.Italic, Link: a, Own: true}, {Text: ": ", Style: layout.Italic, Own: true}}, there...)
+			page, {Text: ": ", Style: layout.Italic, Own: true}}, there...)
 		elsewhere.Runs = append(elsewhere.Runs, txt("."))
-		o.c.pageRefs = append(o.c.pageRefs, pageRef{run: &elsewhere.Runs[1], anchor: a, format: "page %d"})
 	}
 	if byAt != nil {
 		byAt.Runs = append([]layout.Run{{Text: "By the formulas of the governing case above, with this case's factors: ", Style: layout.Italic, Own: true}}, byCase...)
@@ -194,16 +194,15 @@ func (c *composer) writtenAt(in *layout.Input, w writtenOut) {
 		if r.Text != " above" {
 			continue
 		}
-		tail := append([]layout.Run{txt(" in " + w.sheet + ", "), {Text: "page —", Link: w.anchor, Own: true}}, in.Note[i+1:]...)
+		tail := append([]layout.Run{txt(" in " + w.sheet + ", "), pageOf(w.anchor, "page ")}, in.Note[i+1:]...)
 		in.Note = append(in.Note[:i:i], tail...)
-		c.pageRefs = append(c.pageRefs, pageRef{run: &in.Note[i+1], anchor: w.anchor, format: "page %d"})
 		return
 	}
 }
 
 // byFormula prints a step by the formula of a step printed in full above
 // (first, its symbol): the value, its note, and the values that went in.
-func (c *composer) byFormula(p source.Position, st trace.Step, first string) layout.Block {
+func (c *composer) byFormula(p source.Span, st trace.Step, first string) layout.Block {
 	var note []layout.Run
 	if st.Note != "" {
 		note = append(richText(st.Note, layout.Regular), txt("; "))

@@ -5,9 +5,9 @@ import (
 	"unicode"
 	"unicode/utf8"
 
-	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/notation"
 )
 
 // richText sets running text, printing each short symbol written in sheet
@@ -40,7 +40,7 @@ func richText(s string, style layout.Style) []layout.Run {
 			}
 			j += n2
 		}
-		if name, ok := notation(s[i:j]); ok {
+		if name, ok := shortSymbol(s[i:j]); ok {
 			flush(i)
 			out = append(out, layout.Run{Math: eqn.Sym{Name: name}, Own: true})
 			plain = j
@@ -73,12 +73,12 @@ func wordRune(r rune) bool {
 	return unicode.IsLetter(r) || unicode.IsDigit(r) || r == '_' || r == '\'' || r == '′'
 }
 
-// notation reports whether w is a short symbol in sheet notation and
+// shortSymbol reports whether w is a short symbol in sheet notation and
 // returns it with primes written as '.
-func notation(w string) (string, bool) {
+func shortSymbol(w string) (string, bool) {
 	base, sub, ok := strings.Cut(w, "_")
 	letters := strings.TrimRight(base, "'′")
-	_, greek := expr.Greek(letters)
+	_, greek := notation.Greek(letters)
 	if n := utf8.RuneCountInString(letters); !greek && (n < 1 || n > 2) {
 		return "", false
 	}

@@ -138,7 +138,7 @@ func capital(s string) string {
 }
 
 func f(v float64, u units.Unit) string {
-	return strings.Replace(units.Format(v, u, -1), "-", "−", 1)
+	return units.Printed(v, u, -1)
 }
 
 // stressTable lists every sublayer: depth, stresses, how it settles.
@@ -293,7 +293,7 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 	}
 	for _, p := range r.Curve {
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(f(p.T, yr))}, {txt(fmt.Sprintf("%.3f", p.U))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
+			{txt(f(p.T, yr))}, {txt(units.Printed(p.U, units.Dimensionless, 3))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
 		}})
 	}
 	return t

@@ -2,9 +2,7 @@ package compose
 
 import (
 	"fmt"
-	"strings"
 
-	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -18,24 +16,25 @@ import (
 func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	f := b.Footing
 	m := f.Model
+	var on *eval.Ground
+	var gov *eval.Block
+	for _, x := range c.footingUses()[f] {
+		if on == nil {
+			on = x.On
+		}
+		if f.NoB && x.Size != nil && m.B == 0 {
+			m = x.Size.Footing // drawn at the size its size block chose
+		}
+		if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
+			gov = x
+		}
+	}
+	if m.B == 0 {
+		return nil // a footing to be sized that no size block sized: nothing to draw
+	}
 	sk := sketch.Footing{Shape: m.Shape.String(), B: m.B, L: m.L, D: m.D}
 	if f.SelfWeight {
 		sk.Thickness = f.H
-	}
-	var on *eval.Ground
-	var gov *eval.Block
-	for _, t := range c.res.Sheets {
-		for _, x := range t.Blocks() {
-			if x.Of != f {
-				continue
-			}
-			if on == nil {
-				on = x.On
-			}
-			if gov == nil && x.Bearing != nil && x.Bearing.Governing >= 0 {
-				gov = x
-			}
-		}
 	}
 	if on != nil {
 		g := on.Model
@@ -44,29 +43,18 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			sk.Water = &w
 		}
 		layers := g.Layers
-		if len(layers) > 1 && strings.Contains(strings.ToLower(layers[0].Name), "platform") && m.D < layers[1].Top {
-			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: layers[1].Top}
+		if t, ok := g.PlatformDepth(); ok && m.D < t { // the ground model states it (platform = yes)
+			sk.Platform = &sketch.Platform{Name: layers[0].Name, Thickness: t}
 			layers = layers[1:]
 		}
 		for _, l := range layers {
 			sk.Layers = append(sk.Layers, sketch.Layer{Name: l.Name, Top: l.Top})
 		}
 	}
-	w := 0.0
-	if on != nil {
-		w = f.SelfWeightOn(on) // the engine's self-weight, 0 unless self_weight = auto
-	}
-	sk.V = w
-	for _, a := range f.Actions {
-		sk.V += a.V
-		sk.H += a.HB
-		sk.M += a.MB
-	}
-	fu := forceUnit(m)
-	mu := units.MustParse("kNm")
-	if m.Shape == site.Strip {
-		mu = units.MustParse("kNm/m")
-	}
+	sum, w := f.Resultant(on) // the engine's sum, with its self-weight W (0 unless self_weight = auto)
+	sk.V, sk.H, sk.M = sum.V, sum.HB, sum.MB
+	fu := units.MustParse(m.ForceUnit())
+	mu := units.MustParse(m.MomentUnit())
 	if sk.V != 0 {
 		sk.VLabel = "ΣV = " + valueText(units.Quantity{V: sk.V, Dim: fu.Dim}, fu, -1)
 		if w != 0 {
@@ -94,6 +82,9 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 		return nil
 	}
 	caption := fmt.Sprintf("Footing %s: section through B", f.Name)
+	if f.NoB {
+		caption += " at the width its size block chose"
+	}
 	if on != nil {
 		caption += " on ground model " + on.Name
 	}
@@ -104,5 +95,23 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if sk.BEff != nil {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
-	return []layout.Block{&layout.Drawing{Pos: pos(b.Span), W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+	return []layout.Block{&layout.Drawing{Pos: b.Span, W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+}
+
+// footingUses lists the analyses of every footing in document order,
+// indexed once per document (a search of every sheet for each footing's
+// sketch grew with the square of the sheets).
+func (c *composer) footingUses() map[*eval.Footing][]*eval.Block {
+	if c.uses != nil {
+		return c.uses
+	}
+	c.uses = map[*eval.Footing][]*eval.Block{}
+	for _, t := range c.res.Sheets {
+		for _, x := range t.Blocks() {
+			if x.Of != nil {
+				c.uses[x.Of] = append(c.uses[x.Of], x)
+			}
+		}
+	}
+	return c.uses
 }

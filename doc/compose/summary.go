@@ -163,7 +163,7 @@ func (c *composer) summary() layout.Sheet {
 			continue
 		}
 		seen[r.where+r.text] = true
-		place := []layout.Run{txt(sheetLabel(r.sheet) + ", " + r.where + ", "), {Text: "page —", Link: r.anchor, Own: true}}
+		place := []layout.Run{txt(sheetLabel(r.sheet) + ", " + r.where + ", "), pageOf(r.anchor, "page ")}
 		k := r.sev.String() + "\x00" + r.text
 		if i, ok := item[k]; ok {
 			last := open[i][len(open[i])-1]
@@ -188,13 +188,7 @@ func (c *composer) summary() layout.Sheet {
 		{Text: "cautions", Link: "cautions", Own: true}, txt(", by severity).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
-		para := &layout.Para{Pos: p, Runs: runs, Small: true}
-		for i := range para.Runs {
-			if para.Runs[i].Text == "page —" && para.Runs[i].Link != "" {
-				c.pageRefs = append(c.pageRefs, pageRef{run: &para.Runs[i], anchor: para.Runs[i].Link, format: "page %d"})
-			}
-		}
-		items = append(items, []layout.Block{para})
+		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: runs, Small: true}})
 	}
 	add(&layout.List{Pos: p, Items: items})
 	return out
@@ -214,7 +208,7 @@ func (c *composer) openAt(bs []*eval.Block, st trace.Step) []layout.Run {
 		if i > 0 {
 			sep = ", "
 		}
-		runs = append(runs, txt(sep), layout.Run{Text: "page —", Link: blockAnchor(b), Own: true})
+		runs = append(runs, txt(sep), pageOf(blockAnchor(b), "page "))
 	}
 	return append(runs, txt(")."))
 }
@@ -244,7 +238,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	for _, fr := range rows {
 		b := fr.footing
 		f := b.Footing
-		page := layout.Run{Text: "page —", Link: blockAnchor(b), Own: true}
+		page := pageOf(blockAnchor(b), "page ")
 		name := layout.Cell{userBold(f.Name), txt("  " + sheetLabel(b.Sheet) + ", "), page}
 		size := layout.Cell{txt(shortShape(f.Model))}
 		strata := map[string]bool{}
@@ -267,7 +261,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			case a.Bearing != nil:
 				bear = append(bear, c.verdictCell(a, "bearing", a.Bearing.Governing >= 0, func() string { return a.Bearing.Cases[a.Bearing.Governing].Name })...)
 				if u, d := result(a, "util_u"), result(a, "util_dr"); u != nil && d != nil {
-					bear = append(bear, txt(fmt.Sprintf("\nshort term %.2f, long term %.2f", u.Q.V, d.Q.V)))
+					bear = append(bear, txt("\nshort term "+units.Utilisation(u.Q.V)+", long term "+units.Utilisation(d.Q.V)))
 				}
 				slide = append(slide, c.verdictCell(a, "sliding", a.Bearing.GoverningSliding >= 0, func() string { return a.Bearing.Sliding[a.Bearing.GoverningSliding].Name })...)
 			case a.Settle != nil:
@@ -283,6 +277,9 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 				if y := result(a, "q_allow"); y != nil {
 					allow = append(allow, layout.Run{Math: rowEq("q_allow", y.Q.V, "kPa"), Own: true})
 				}
+			case a.Size != nil:
+				size = layout.Cell{txt("sized: " + shortShape(a.Size.Footing))}
+				bear, slide, settl = sizeCells(a)
 			}
 		}
 		dash := func(c layout.Cell) layout.Cell {
@@ -307,9 +304,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 			}
 			settl = append(settl, allow...)
 		}
-		// the page run is registered once the cell is complete (appends move it)
-		c.pageRefs = append(c.pageRefs, pageRef{run: &name[2], anchor: blockAnchor(b), format: "page %d"})
-		t.Rows = append(t.Rows, layout.Row{Pos: pos(b.Span), Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl)}})
+		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl)}})
 	}
 	return t
 }
@@ -320,7 +315,7 @@ func (c *composer) verdictCell(a *eval.Block, kind string, has bool, gov func() 
 	if ch == nil || !has {
 		return nil
 	}
-	cl := layout.Cell{txt(fmt.Sprintf("%.2f  ", ch.Util)), verdictRun(ch), txt("\n" + gov())}
+	cl := layout.Cell{txt(units.Utilisation(ch.Util) + "  "), verdictRun(ch), txt("\n" + gov())}
 	return cl
 }
 
@@ -375,6 +370,8 @@ func governingAnalyses(as []*eval.Block) []*eval.Block {
 			kind = "settlement"
 		case a.Capacity != nil:
 			kind = "capacity"
+		case a.Size != nil:
+			kind = "size"
 		default:
 			continue
 		}

@@ -97,7 +97,7 @@ func TestSummary(t *testing.T) {
 func TestDetail(t *testing.T) {
 	res := evaluate(t, "../../examples/brackenfield")
 	count := func() (main, total int, apx bool) {
-		pages, d := compose.Pages(res, compose.Options{})
+		pages, d := pagesOf(res, compose.Options{})
 		if d.HasErrors() {
 			t.Fatal(d)
 		}

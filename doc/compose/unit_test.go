@@ -124,7 +124,7 @@ func TestFileErrors(t *testing.T) {
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			res, _ := pkg(t, c.files)
-			pages, d := compose.Pages(res, compose.Options{})
+			pages, d := pagesOf(res, compose.Options{})
 			if pages != nil || !strings.Contains(d.Error(), c.want) {
 				t.Errorf("diagnostics lack %q:\n%s", c.want, d.Error())
 			}
@@ -142,9 +142,9 @@ func TestBare(t *testing.T) {
 	if len(doc.Sheets) != 1 || doc.Sheets[0].Fields.Calc != "X-01" {
 		t.Errorf("bare document has %d sheets", len(doc.Sheets))
 	}
-	pages, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err) // citations are not linked: no dangling links
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags) // citations are not linked: no dangling links
 	}
 	if len(pages.Pages) != 1 {
 		t.Errorf("%d pages", len(pages.Pages))
@@ -191,7 +191,7 @@ func TestTemplateFile(t *testing.T) {
 	if doc.Template == nil || doc.Template.Name != "Firm letter" {
 		t.Fatalf("template %+v", doc.Template)
 	}
-	if _, d := compose.Pages(res, compose.Options{}); d.HasErrors() {
+	if _, d := pagesOf(res, compose.Options{}); d.HasErrors() {
 		t.Fatal(d)
 	}
 }

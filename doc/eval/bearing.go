@@ -12,18 +12,6 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-// bearingNotes describe the bearing block's result symbols.
-var bearingNotes = map[string]string{
-	"R_d": "design bearing resistance, governing case", "util": "bearing utilisation V_d/R_d, governing case",
-	"q_Ed": "design bearing pressure V_d/A'", "q_Rd": "design resistance pressure R_d/A'",
-	"q_ult": "ultimate bearing pressure used", "V_d": "design vertical action, governing bearing case",
-	"H_d": "design horizontal action, governing bearing case", "e_B": "eccentricity along B", "e_L": "eccentricity along L",
-	"B'": "effective width", "L'": "effective length", "A'": "effective area",
-	"util_u": "highest undrained (short-term) utilisation", "util_dr": "highest drained (long-term) utilisation",
-	"R_h_d": "design sliding resistance, governing sliding case", "util_h": "sliding utilisation, governing sliding case",
-	"H_d_h": "design horizontal action, governing sliding case", "V_d_h": "design vertical action of the governing sliding case (V'_d drained, V_d undrained)",
-}
-
 // bearingInput builds the engine input shared by bearing and capacity
 // blocks: ground, footing, actions (with self-weight when asked) and the
 // bearing options.
@@ -143,6 +131,17 @@ func (f *Footing) SelfWeightOn(g *Ground) float64 {
 	return selfWeight(f, g, &tr)
 }
 
+// Resultant is the sum of the footing's characteristic actions as the
+// engine takes them on ground g (site.Sum), with the self-weight
+// self_weight = auto adds; w is that self-weight (0 when none). A nil g
+// sums the actions as given.
+func (f *Footing) Resultant(g *Ground) (sum site.Action, w float64) {
+	if g == nil {
+		return site.Sum(f.Actions), 0
+	}
+	return site.Sum(withSelfWeight(f, g)), f.SelfWeightOn(g)
+}
+
 // bearing runs the bearing engine for a block.
 func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bool {
 	in, ok := e.bearingInput(s, b, blk, o, "method")
@@ -162,10 +161,10 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 	blk.Bearing = res
 	blk.Cautions = res.Trace.Cautions
 	blk.Sources = res.Trace.Sources
-	e.defineResults(s, blk, res.Values, bearingNotes)
+	e.defineResults(s, blk, res.Values)
 	if res.Governing >= 0 {
 		c := res.Cases[res.Governing]
-		fu := forceUnit(in.Footing)
+		fu := units.MustParse(in.Footing.ForceUnit())
 		ch := e.addCheck(s, blk, blk.Name+" bearing: V_d <= R_d", "<=",
 			units.Quantity{V: c.V, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
 			"bearing resistance, governing case: "+c.Name)
@@ -174,25 +173,17 @@ func (e *evaluator) bearing(s *Sheet, b *sheet.Analysis, blk *Block, o opts) boo
 		}
 	} else if res.Unverified != "" {
 		// every load lifts the base: the check that fails is V_d > 0
-		fu := forceUnit(in.Footing)
+		fu := units.MustParse(in.Footing.ForceUnit())
 		c := e.addCheck(s, blk, blk.Name+" bearing: V_d > 0", ">",
 			units.Quantity{V: res.UpliftV, Dim: fu.Dim}, units.Quantity{Dim: fu.Dim}, fu, math.NaN(), false, res.Unverified)
 		c.unverified(res.Unverified, res.Unverified)
 	}
 	if res.GoverningSliding >= 0 {
 		c := res.Sliding[res.GoverningSliding]
-		fu := forceUnit(in.Footing)
+		fu := units.MustParse(in.Footing.ForceUnit())
 		e.addCheck(s, blk, blk.Name+" sliding: H_d_h <= R_h_d", "<=",
 			units.Quantity{V: c.H, Dim: fu.Dim}, units.Quantity{V: c.R, Dim: fu.Dim}, fu, c.Util, c.OK,
 			"sliding resistance, governing case: "+c.Name)
 	}
 	return true
-}
-
-// forceUnit is kN for a pad and kN/m for a strip.
-func forceUnit(f site.Footing) units.Unit {
-	if f.Shape == site.Strip {
-		return units.MustParse("kN/m")
-	}
-	return units.MustParse("kN")
 }

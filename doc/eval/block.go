@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Block is an evaluated plinth block other than calc: a ground model, a
@@ -30,7 +31,9 @@ type Block struct {
 	Settle   *SettleResult
 	Capacity *CapacityResult
 	Diff     *DiffResult // differential blocks
-	Options  []string    // the options in force, "method = ec7", for printing
+	Size     *SizeResult // size blocks
+	Schedule *ScheduleResult
+	Options  []string // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order
@@ -69,12 +72,6 @@ func (s *Sheet) Blocks() []*Block {
 		}
 	}
 	return out
-}
-
-// resultNames lists the symbols each analysis kind may define, for
-// "used above its definition" messages before evaluation.
-var resultNames = map[sheet.Kind][]string{
-	sheet.KindBearing: {"R_d", "util", "q_Ed", "q_Rd", "q_ult", "V_d", "H_d", "e_B", "e_L", "B'", "L'", "A'", "util_u", "util_dr", "H_d_h", "V_d_h", "R_h_d", "util_h"},
 }
 
 // findFooting and findGround look a block name up on the sheet and the
@@ -118,7 +115,7 @@ func (e *evaluator) missingBlock(s *Sheet, name sheet.Str, kind string, names fu
 		all = append(all, e.blockNames[t.Index][kind]...)
 	}
 	hint := ""
-	if n, ok := sheet.Nearest(name.Value, all); ok {
+	if n, ok := suggest.Nearest(name.Value, all); ok {
 		hint = fmt.Sprintf("did you mean %s?", n)
 	} else if len(all) == 0 {
 		hint = fmt.Sprintf("define it in a ```%s %s block", kind, name.Value)
@@ -143,6 +140,15 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 		e.differential(s, b, blk)
 		return
 	}
+	if b.Kind == sheet.KindSchedule {
+		g, gok := e.findGround(s, b.Ground)
+		blk.On = g
+		opts := e.options(b)
+		if !gok || opts == nil || !e.schedule(s, b, blk, opts) {
+			e.failResults(s, blk)
+		}
+		return
+	}
 	f, fok := e.findFooting(s, b.Footing)
 	g, gok := e.findGround(s, b.Ground)
 	blk.Of, blk.On = f, g
@@ -154,8 +160,16 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 	for _, o := range b.Options() {
 		blk.Options = append(blk.Options, o.Name.Value+" = "+o.Value.Value)
 	}
+	if f.NoB && b.Kind != sheet.KindSize {
+		e.errs.AddHint(b.Footing.Span, "size it with a block such as ```size "+f.Name+" on "+b.Ground.Value+"```, or give the footing its B",
+			"footing %s has no B, which a %s block needs", f.Name, b.Kind)
+		e.failResults(s, blk)
+		return
+	}
 	var ok bool
 	switch b.Kind {
+	case sheet.KindSize:
+		ok = e.sizeBlock(s, b, blk, opts)
 	case sheet.KindBearing:
 		ok = e.bearing(s, b, blk, opts)
 	case sheet.KindSettlement:
@@ -171,19 +185,24 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 // failResults marks an analysis' result names as failed so uses of them
 // are not reported again.
 func (e *evaluator) failResults(s *Sheet, blk *Block) {
-	for _, n := range resultNames[blk.Kind] {
+	for _, n := range blk.Kind.Spec().ResultNames() {
 		e.fail(s, blk.Name+"."+n)
 	}
 }
 
-// defineResults turns engine summary values into symbols PREFIX.name.
-func (e *evaluator) defineResults(s *Sheet, blk *Block, vals []trace.Value, notes map[string]string) {
+// defineResults turns engine summary values into symbols PREFIX.name,
+// each with its meaning from the kind's spec as its note.
+func (e *evaluator) defineResults(s *Sheet, blk *Block, vals []trace.Value) {
+	spec := blk.Kind.Spec()
 	for _, v := range vals {
 		name := blk.Name + "." + v.Symbol
 		if old := s.local[name]; old != nil {
 			e.errs.AddHint(blk.Span, fmt.Sprintf("name this block's results: %s ... as %s_2", strings.Fields(blk.Span.Text())[0], blk.Name),
 				"%s is already defined at %s", name, posText(old.Span, s.Src.File))
 			return
+		}
+		if _, ok := spec.Result(v.Symbol); !ok {
+			e.errs.Add(blk.Span, "internal: the engine gave %s, which the %s block's spec does not declare", v.Symbol, blk.Kind)
 		}
 		u, err := units.Parse(v.Unit)
 		if err != nil {
@@ -192,7 +211,7 @@ func (e *evaluator) defineResults(s *Sheet, blk *Block, vals []trace.Value, note
 		}
 		y := &Symbol{
 			Name: name, Q: units.Quantity{V: v.V, Dim: u.Dim}, Unit: u, Decimals: -1,
-			Note: sheet.Str{Value: notes[v.Symbol]}, Span: headerSpan(blk.Span), Sheet: s,
+			Note: sheet.Str{Value: spec.Meaning(v.Symbol)}, Span: headerSpan(blk.Span), Sheet: s,
 		}
 		if strings.HasPrefix(v.Symbol, "util") && u.Dim == units.None {
 			// a utilisation: two decimals, never printed onto or across 1

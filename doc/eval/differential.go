@@ -17,16 +17,6 @@ type DiffResult struct {
 	*settle.Diff
 }
 
-// diffNotes describe the differential block's result symbols.
-var diffNotes = map[string]string{
-	"delta_s": "differential settlement |s_A − s_B| of the two footings", "beta": "angular distortion Δs/L",
-	"beta_lim": "limiting angular distortion", "util": "angular distortion utilisation β/β_lim",
-}
-
-func init() {
-	resultNames[sheet.KindDifferential] = []string{"delta_s", "beta", "beta_lim", "util"}
-}
-
 // settleBlock finds the settlement block named name above this block, on
 // this sheet or a sheet it uses: by its result prefix, else by its
 // footing's name (which must then have exactly one settlement block).
@@ -141,7 +131,7 @@ func (e *evaluator) differential(s *Sheet, b *sheet.Analysis, blk *Block) {
 	blk.Diff = &DiffResult{A: a, B: c, Spacing: in.Spacing, Diff: d}
 	blk.Cautions = d.Trace.Cautions
 	blk.Sources = d.Trace.Sources
-	e.defineResults(s, blk, d.Symbols, diffNotes)
+	e.defineResults(s, blk, d.Symbols)
 	e.addCheck(s, blk, blk.Name+" angular distortion: beta <= beta_lim", "<=",
 		units.Quantity{V: d.Beta}, units.Quantity{V: d.Limit}, units.Dimensionless,
 		d.Util, d.OK, "angular distortion between "+a.Of.Name+" and "+c.Of.Name+" (s_total of "+a.Name+" and "+c.Name+")")

@@ -6,10 +6,12 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Options control an evaluation.
@@ -156,7 +158,7 @@ func (e *evaluator) collect(s *Sheet) map[string]def {
 		for _, c := range e.tableDefs(b) {
 			add(c.name, c.def)
 		}
-		e.blockDefs(s, b, add)
+		e.blockDefs(s, b, add, func(name string) bool { _, ok := defs[name]; return ok })
 	}
 	return defs
 }
@@ -176,6 +178,11 @@ func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
 			t = e.readTable(b.Table, footingCol, b.Name.Value+".", "action", "A")
 			e.tables[b.Table] = t
 		}
+	case *sheet.Analysis:
+		if b.Kind == sheet.KindSchedule && b.Table != nil {
+			t = e.readTable(b.Table, scheduleCol, b.ResultPrefix().Value+".", "footing", "F")
+			e.tables[b.Table] = t
+		}
 	}
 	if t == nil || !t.ok {
 		return nil
@@ -185,7 +192,7 @@ func (e *evaluator) tableDefs(b sheet.Block) []namedDef {
 
 // blockDefs records ground, footing and analysis names, and the result
 // symbols an analysis will define.
-func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
+func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), has func(string) bool) {
 	names := e.blockNames[s.Index]
 	if names == nil {
 		names = map[string][]string{}
@@ -207,11 +214,23 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def)) {
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		for _, n := range resultNames[b.Kind] {
+		for _, n := range b.Kind.Spec().ResultNames() {
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue
 			}
+			if b.Kind == sheet.KindSize && (n == "B" || n == "L") && has(p.Value+"."+n) {
+				// the footing's own B or L: a size block reports a given B
+				// itself, and a rectangle's given L is the fixed length
+				continue
+			}
 			add(p.Value+"."+n, def{span: headerSpan(b.Span)})
+		}
+		if t := e.tables[b.Table]; b.Kind == sheet.KindSchedule && t != nil && t.ok {
+			for i, key := range t.keys {
+				for _, r := range size.RowResults {
+					add(p.Value+"."+key+"."+r.Symbol, def{span: t.grid.Rows[i].Span})
+				}
+			}
 		}
 	}
 }
@@ -282,7 +301,7 @@ func (e *evaluator) resolveUses() {
 			switch {
 			case t == nil:
 				hint := ""
-				if n, ok := sheet.Nearest(u.Value, names); ok {
+				if n, ok := suggest.Nearest(u.Value, names); ok {
 					hint = fmt.Sprintf("did you mean %s?", n)
 				}
 				e.errs.AddHint(u.Span, hint, "uses %q: no such sheet in this package", u.Value)

@@ -48,7 +48,10 @@ type Footing struct {
 	// GammaCGiven and HGiven say whether gamma_c and h were written
 	// (else 24 kN/m3 and D are assumed).
 	GammaCGiven, HGiven bool
-	OK                  bool
+	// NoB: the footing gives no B, so only a size block may use it (it
+	// chooses B); Model.B is then 0.
+	NoB bool
+	OK  bool
 }
 
 // footing evaluates a footing block: shape, dimensions and actions.
@@ -57,7 +60,7 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 	s.blocks[b] = &Block{Kind: sheet.KindFooting, Name: f.Name, Span: b.Span, Sheet: s, Footing: f}
 	s.footings[f.Name] = f
 	prefix := f.Name + "."
-	ok := e.unknownStmts(sheet.KindFooting, f.Name, b.Lines, footingStmts)
+	ok := e.unknownStmts(sheet.KindFooting, f.Name, b.Lines)
 	f.Model.Name = f.Name
 	shapeSet := false
 	for _, o := range b.Options() {
@@ -97,10 +100,11 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		return y.Q.V, e.wantDim(y, d, name+" ("+what+")")
 	}
 	var good bool
-	f.Model.B, good = get("B", units.Length, "width; diameter of a circle", true)
+	f.Model.B, good = get("B", units.Length, "width; diameter of a circle", false)
 	ok = ok && good
+	f.NoB = s.local[prefix+"B"] == nil
 	if f.Model.Shape == site.Rectangle {
-		f.Model.L, good = get("L", units.Length, "length", true)
+		f.Model.L, good = get("L", units.Length, "length", !f.NoB)
 		ok = ok && good
 	} else if y := s.local[prefix+"L"]; y != nil && shapeSet {
 		b0 := s.local[prefix+"B"]
@@ -138,7 +142,14 @@ func (e *evaluator) footing(s *Sheet, b *sheet.Footing) {
 		ok = ok && g
 	}
 	if ok {
-		if err := f.Model.Validate(); err != nil {
+		m := f.Model
+		if f.NoB { // validated at each width the size block tries; the rest here
+			m.B = site.MinWidth
+			if m.Shape == site.Rectangle && m.L == 0 {
+				m.L = m.B
+			}
+		}
+		if err := m.Validate(); err != nil {
 			e.siteErrors(err, b.Name.Span, func(_ int, param string) source.Span {
 				if y := s.local[prefix+param]; y != nil {
 					return y.Span

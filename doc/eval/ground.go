@@ -3,11 +3,13 @@ package eval
 import (
 	"errors"
 	"fmt"
+	"strings"
 
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // groundColumns are the columns a ground table may have (SHEET-FORMAT §3).
@@ -72,7 +74,27 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	e.assumedOverride(s, prefix+"gamma_w", b.Name.Span)
 	g.GammaW = s.local[prefix+"gamma_w"]
 	g.Model = site.Ground{Name: g.Name}
-	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines, groundStmts)
+	ok := e.unknownStmts(sheet.KindGround, g.Name, b.Lines)
+	var platform source.Span
+	for _, o := range b.Options() {
+		if o.Name.Value != "platform" {
+			continue
+		}
+		platform = o.Value.Span
+		switch v := strings.TrimSpace(o.Value.Value); v {
+		case "yes":
+			g.Model.Platform = true
+		case "no":
+		default:
+			spec, _ := sheet.LookupOption(sheet.KindGround, "platform")
+			hint := ""
+			if n, near := suggest.Nearest(v, spec.Words); near {
+				hint = "did you mean " + n + "?"
+			}
+			e.errs.AddHint(o.Value.Span, hint, "platform = %q: expected %s", v, strings.Join(spec.Words, ", "))
+			ok = false
+		}
+	}
 	if g.Water != nil {
 		if !e.wantDim(g.Water, units.Length, "water (depth of the groundwater table below ground level)") {
 			ok = false
@@ -131,6 +153,9 @@ func (e *evaluator) ground(s *Sheet, b *sheet.Ground) {
 	// listed; problems in rows with a failed cell are not reported again.
 	if err := g.Model.Validate(); err != nil {
 		e.siteErrors(err, b.Span, func(layer int, param string) source.Span {
+			if param == "platform" && platform.File != nil {
+				return platform
+			}
 			if layer >= 1 && layer <= len(rowOK) && !rowOK[layer-1] {
 				return source.Span{}
 			}

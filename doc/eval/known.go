@@ -6,19 +6,16 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
-)
-
-// Statements a ground or footing block reads; any other is refused, so
-// no input is printed under a block that does not use it.
-var (
-	groundStmts  = []string{"water", "gamma_w"}
-	footingStmts = []string{"B", "L", "D", "alpha", "h", "gamma_c"}
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // unknownStmts reports each statement of a ground or footing block whose
-// name the block does not read, with the nearest known name (or the list
-// of them); the block's word options are named in the list too.
-func (e *evaluator) unknownStmts(kind sheet.Kind, name string, lines []sheet.Line, known []string) bool {
+// name the block does not read (its spec's Statements; any other is
+// refused, so no input is printed under a block that does not use it),
+// with the nearest known name (or the list of them); the block's word
+// options are named in the list too.
+func (e *evaluator) unknownStmts(kind sheet.Kind, name string, lines []sheet.Line) bool {
+	known := kind.Spec().StatementNames()
 	all := append(append([]string{}, known...), sheet.OptionNames(kind)...)
 	ok := true
 	for _, l := range lines {
@@ -44,7 +41,7 @@ func (e *evaluator) unknownStmts(kind sheet.Kind, name string, lines []sheet.Lin
 // or more letters that the statement's name extends (water_table → water,
 // gamma_conc → gamma_c).
 func nearestStmt(name string, known []string) (string, bool) {
-	if n, ok := sheet.Nearest(name, known); ok {
+	if n, ok := suggest.Nearest(name, known); ok {
 		return n, true
 	}
 	best := ""

@@ -7,6 +7,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // opts are an analysis block's options by name, values checked against
@@ -33,7 +34,7 @@ func (e *evaluator) options(b *sheet.Analysis) opts {
 		v := strings.TrimSpace(o.Value.Value)
 		if spec.Words != nil && spec.Form == "" && !spec.Allows(v) {
 			hint := ""
-			if n, near := sheet.Nearest(v, spec.Words); near {
+			if n, near := suggest.Nearest(v, spec.Words); near {
 				hint = fmt.Sprintf("did you mean %s?", n)
 			}
 			e.errs.AddHint(o.Value.Span, hint, "%s = %q: expected %s", spec.Name, v, strings.Join(spec.Words, ", "))

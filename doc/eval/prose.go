@@ -4,6 +4,7 @@ import (
 	"fmt"
 
 	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // cites checks the [KEY] references in a note and returns their keys.
@@ -27,7 +28,7 @@ func (e *evaluator) cite(s *Sheet, c *sheet.Cite) bool {
 		keys = append(keys, r.Key.Value)
 	}
 	hint := "references are listed under references: in package.yaml or the sheet's front matter"
-	if n, ok := sheet.Nearest(c.Key.Value, keys); ok {
+	if n, ok := suggest.Nearest(c.Key.Value, keys); ok {
 		hint = fmt.Sprintf("did you mean [%s]?", n)
 	}
 	e.errs.AddHint(c.Key.Span, hint, "unknown reference [%s]", c.Key.Value)

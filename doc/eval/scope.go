@@ -6,8 +6,8 @@ import (
 
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
-	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // scope resolves names for one statement: the block's own symbols (when
@@ -97,7 +97,7 @@ func (sc scope) unresolved(name string, sp source.Span) {
 		}
 	}
 	hint := ""
-	if near, ok := sheet.Nearest(name, sc.visible()); ok {
+	if near, ok := suggest.Nearest(name, sc.visible()); ok {
 		hint = fmt.Sprintf("did you mean %s?", near)
 	}
 	e.errs.AddHint(sp, hint, "undefined symbol %s", name)

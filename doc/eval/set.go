@@ -12,6 +12,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // parseOverrides reads the --set arguments and finds the input each one
@@ -174,7 +175,7 @@ func (e *evaluator) nearest(name string, s *Sheet) string {
 			names = append(names, sortedKeys(e.defs[t.Index])...)
 		}
 	}
-	if n, ok := sheet.Nearest(name, names); ok {
+	if n, ok := suggest.Nearest(name, names); ok {
 		return fmt.Sprintf("did you mean %s?", n)
 	}
 	return ""

@@ -28,35 +28,6 @@ type SettleResult struct {
 // CapacityResult is a capacity block's table.
 type CapacityResult = capacity.Result
 
-// settleNotes describe the settlement block's result symbols. Engine
-// names that would clash with a bearing block on the same footing are
-// renamed (util → util_s, q → q_SLS).
-var settleNotes = map[string]string{
-	"q_SLS": "gross bearing pressure, serviceability load", "q_net": "net bearing pressure q - sigma_v0 (gross less the total overburden at founding level)",
-	"z_inf": "depth of the zone of influence below ground level", "s_i": "immediate settlement",
-	"s_c": "consolidation settlement", "s_sec": "secondary compression (creep) at the design life",
-	"s_total": "total settlement", "s_lim": "settlement limit", "util_s": "settlement utilisation s_total/s_lim",
-	"t_50": "time to 50 % consolidation", "t_90": "time to 90 % consolidation",
-	"C_1": "Schmertmann embedment factor", "C_2": "Schmertmann creep factor", "I_zp": "Schmertmann peak strain influence factor",
-	"N_bar": "Burland & Burbidge average SPT N over z_I", "I_c": "Burland & Burbidge compressibility index",
-	"z_I": "Burland & Burbidge depth of influence", "f_s": "Burland & Burbidge shape factor",
-	"f_l": "Burland & Burbidge thickness factor", "f_t": "Burland & Burbidge time factor",
-	"V_SLS": "serviceability vertical load",
-}
-
-var settleRename = map[string]string{"util": "util_s", "q": "q_SLS"}
-
-var capacityNotes = map[string]string{
-	"q_allow": "allowable bearing pressure at the footing's width", "q_a_b": "bearing-limited allowable pressure",
-	"q_a_s": "settlement-limited pressure",
-}
-
-func init() {
-	resultNames[sheet.KindSettlement] = []string{"V_SLS", "q_SLS", "q_net", "z_inf", "s_i", "s_c", "s_sec", "s_total", "s_lim", "util_s", "t_50", "t_90",
-		"C_1", "C_2", "I_zp", "N_bar", "I_c", "z_I", "f_s", "f_l", "f_t"}
-	resultNames[sheet.KindCapacity] = []string{"q_allow", "q_a_b", "q_a_s"}
-}
-
 // settleInput reads the settlement options shared by settlement and
 // capacity blocks.
 func (e *evaluator) settleInput(s *Sheet, blk *Block, o opts, methodKey string) (settle.Input, bool) {
@@ -181,7 +152,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	}
 	kind, _ := design.ParseServiceKind(o.word("load", "characteristic"))
 	res := &SettleResult{}
-	fu := forceUnit(in.Footing)
+	fu := units.MustParse(in.Footing.ForceUnit())
 	blk.selfWeight()
 	svc, err := design.ServiceLoad(withSelfWeight(blk.Of, blk.On), kind, &res.Load, fu.Name)
 	if err != nil {
@@ -199,14 +170,7 @@ func (e *evaluator) settlement(s *Sheet, b *sheet.Analysis, blk *Block, o opts) 
 	blk.Settle = res
 	blk.Cautions = append(append([]trace.Caution(nil), res.Load.Cautions...), r.Trace.Cautions...)
 	blk.Sources = mergeSources(res.Load.Sources, r.Trace.Sources)
-	vals := []trace.Value{{Symbol: "V_SLS", V: svc.V, Unit: fu.Name}}
-	for _, v := range r.Symbols {
-		if n, ok := settleRename[v.Symbol]; ok {
-			v.Symbol = n
-		}
-		vals = append(vals, v)
-	}
-	e.defineResults(s, blk, vals, settleNotes)
+	e.defineResults(s, blk, append([]trace.Value{{Symbol: "V_SLS", V: svc.V, Unit: fu.Name}}, r.Symbols...))
 	e.tilt(s, b, blk, o, res)
 	e.within(s, b, blk, o, res, in)
 	mm := units.MustParse("mm")
@@ -255,7 +219,7 @@ func (e *evaluator) capacity(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 	blk.Capacity = r
 	blk.Cautions = r.Trace.Cautions
 	blk.Sources = r.Trace.Sources
-	e.defineResults(s, blk, r.Values, capacityNotes)
+	e.defineResults(s, blk, r.Values)
 	return true
 }
 

@@ -24,7 +24,7 @@ func (e *evaluator) sheet(s *Sheet) {
 			// The block's header has an earlier error: its names may be
 			// wrong, so it is not evaluated and its results count as failed.
 			if a, ok := b.(*sheet.Analysis); ok {
-				for _, n := range resultNames[a.Kind] {
+				for _, n := range a.Kind.Spec().ResultNames() {
 					e.fail(s, a.ResultPrefix().Value+"."+n)
 				}
 			}
@@ -100,7 +100,7 @@ func (e *evaluator) assign(sc scope, st *sheet.Stmt, a *expr.Assign, name string
 	}
 	y := &Symbol{
 		Name: name, Q: q, Decimals: -1, Note: st.Note(), Span: symSpan(st, a),
-		Sheet: s, Stmt: a, Input: e.defs[s.Index][name].input, Uses: used,
+		Sheet: s, Stmt: a, Expr: a.X, Input: e.defs[s.Index][name].input, Uses: used,
 	}
 	if o := e.over[s][name]; o != nil {
 		y.Q = o.Q

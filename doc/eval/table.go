@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // colSpec describes a column a ground or footing table may have.
@@ -86,7 +87,7 @@ func (e *evaluator) readTable(g *sheet.Grid, specs []colSpec, prefix, nameCol, f
 		switch {
 		case spec == nil:
 			hint := "columns are: " + strings.Join(names, ", ")
-			if n, ok := sheet.Nearest(c.Name.Value, names); ok {
+			if n, ok := suggest.Nearest(c.Name.Value, names); ok {
 				hint = fmt.Sprintf("did you mean %s?", n)
 			}
 			e.errs.AddHint(c.Name.Span, hint, "unknown column %q", c.Name.Value)
@@ -269,7 +270,7 @@ func (e *evaluator) evalCells(sc scope, t *table) ([][]*Symbol, []bool) {
 			}
 			y := &Symbol{
 				Name: name, Q: q, Unit: hu, Decimals: -1, Span: cell.Span, Sheet: sc.s,
-				Input: len(used) == 0, Uses: used,
+				Expr: n, Input: len(used) == 0, Uses: used,
 			}
 			if y.Unit.Dim != q.Dim {
 				y.Unit = units.Display(q.Dim)

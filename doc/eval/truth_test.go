@@ -2,13 +2,11 @@ package eval_test
 
 import (
 	"fmt"
-	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
 
 	"github.com/plinth-calc/plinth/doc/eval"
-	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/parse"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
@@ -116,18 +114,9 @@ func TestFailingRelation(t *testing.T) {
 // the symbol does (the pad's conclusion: 24.59 mm against 25 mm prints
 // 24.6 mm at mm:0).
 func TestExampleProseApart(t *testing.T) {
-	dirs, _ := filepath.Glob("../../examples/*")
 	n := 0
-	for _, dir := range dirs {
-		lp, d := load.Path(dir)
-		if lp == nil {
-			t.Fatal(d)
-		}
-		pkg, _ := parse.Package(lp)
-		res, diags := eval.Package(pkg, eval.Options{})
-		if diags.HasErrors() {
-			t.Fatal(diags)
-		}
+	for _, ex := range examples(t) {
+		pkg, res := ex.pkg, ex.res
 		for i, s := range res.Sheets {
 			for _, in := range interps(pkg.Sheets[i]) {
 				it := s.Interp(in)

@@ -88,6 +88,7 @@ type Symbol struct {
 	Span     source.Span    // the defining statement or cell
 	Sheet    *Sheet
 	Stmt     *expr.Assign // nil for symbols not defined by a statement
+	Expr     expr.Node    // the expression it was read from, with its file offsets (a statement's right side, a table cell); nil for engine results and --set values
 	Input    bool         // its expression holds no symbol: a value the engineer gave
 	Override *Override    // non-nil when --set replaced it
 	Uses     []*Symbol    // symbols its expression reads, in order of first use

@@ -35,18 +35,18 @@ type Ident struct {
 }
 
 // Const is a named constant: pi, or g, the standard acceleration of
-// gravity (see Gravity).
+// gravity (9.80665 m/s², the constant gravity).
 type Const struct {
 	Pos, End int
 	Name     string    // "pi" or "g"
-	V        float64   // math.Pi; Gravity
+	V        float64   // math.Pi; gravity
 	Dim      units.Dim // None; units.Accel
 }
 
-// Gravity is g, the standard acceleration of gravity, 9.80665 m/s²
+// gravity is g, the standard acceleration of free fall, 9.80665 m/s²
 // (3rd CGPM, 1901; NIST SP 811 (2008) §8.2 and B.8), so that a density
 // becomes a unit weight: 1.9 t/m3 * g.
-const Gravity = 9.80665
+const gravity = 9.80665
 
 // Unary is a sign: -x or +x.
 type Unary struct {
@@ -159,49 +159,6 @@ type Ref struct {
 	Sym      Ident
 	Display  *DisplayUnit
 }
-
-// Visitor is called by Walk for each node; when Visit returns w != nil,
-// Walk visits the node's children with w and then calls w.Visit(nil).
-type Visitor interface {
-	Visit(n Node) (w Visitor)
-}
-
-// Walk traverses the tree in source order, as go/ast.Walk does.
-func Walk(v Visitor, n Node) {
-	if n == nil {
-		return
-	}
-	if v = v.Visit(n); v == nil {
-		return
-	}
-	switch n := n.(type) {
-	case *Unary:
-		Walk(v, n.X)
-	case *Binary:
-		Walk(v, n.L)
-		Walk(v, n.R)
-	case *Paren:
-		Walk(v, n.X)
-	case *Call:
-		for _, a := range n.Args {
-			Walk(v, a)
-		}
-	}
-	v.Visit(nil)
-}
-
-type inspector func(Node) bool
-
-func (f inspector) Visit(n Node) Visitor {
-	if n != nil && f(n) {
-		return f
-	}
-	return nil
-}
-
-// Inspect calls f for each node in source order; f returning false skips
-// the node's children.
-func Inspect(n Node, f func(Node) bool) { Walk(inspector(f), n) }
 
 // Idents returns every symbol occurrence in n in source order (repeats
 // included, pi excluded).

@@ -11,7 +11,7 @@ import (
 	"github.com/Knetic/govaluate"
 )
 
-// Canonical writes n in govaluate's syntax, fully parenthesised, with its
+// canonical writes n in govaluate's syntax, fully parenthesised, with its
 // parameters: each distinct symbol as an escaped positional parameter
 // "[$0]", "[$1]" ... in order of first use, valued from env (SI float64),
 // so a name such as phi' or F1.R_d never reaches govaluate's lexer; every
@@ -23,7 +23,7 @@ import (
 // radians). The map is never nil. Because numbers and symbols are parameters,
 // lines of the same shape share one canonical string, so compiled
 // expressions are cached by it.
-func Canonical(n Node, env Env) (string, map[string]interface{}) {
+func canonical(n Node, env Env) (string, map[string]interface{}) {
 	c := canon{env: env, params: make(map[string]interface{}, 8)}
 	c.b.Grow(64)
 	c.write(n)

@@ -32,10 +32,10 @@ func Dims(n Node, env Env) (units.Dim, []Error) {
 	return d, a.errs
 }
 
-// StmtDims is Dims for a statement: for an *Assign the dimension of its
+// stmtDims is Dims for a statement: for an *Assign the dimension of its
 // expression, which its display unit must share; for a *Check the common
 // dimension of both sides, which must agree. A *Comment has none.
-func StmtDims(s Stmt, env Env) (units.Dim, []Error) {
+func stmtDims(s Stmt, env Env) (units.Dim, []Error) {
 	a := analyzer{env: env}
 	switch s := s.(type) {
 	case *Assign:
@@ -207,7 +207,7 @@ func (a *analyzer) call(n *Call) (units.Dim, bool) {
 			return units.Angle, true
 		}
 		return ds[0], true
-	case "sin", "cos", "tan":
+	case "sin", "cos", "tan", "cot":
 		if ds[0] == units.Angle {
 			return units.None, true
 		}

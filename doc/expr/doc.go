@@ -29,7 +29,7 @@
 //	primary    = number [ unit ] | symbol | "pi" | "g" | call | "(" expr ")" .
 //	call       = function "(" [ expr { "," expr } ] ")" .
 //	function   = "sqrt" | "abs" | "min" | "max" | "exp" | "ln" | "log10"
-//	           | "sin" | "cos" | "tan" | "asin" | "acos" | "atan" | "atan2"
+//	           | "sin" | "cos" | "tan" | "cot" | "asin" | "acos" | "atan" | "atan2"
 //	           | "floor" | "ceil" | "round" .
 //
 //	number     = digits [ "." { digit } ] [ exp ] | "." digits [ exp ] .
@@ -65,12 +65,12 @@
 //
 // pi is the constant π; pi, check and the function names cannot be
 // assigned; names with "." are block results and cannot be assigned either.
-// SplitSymbol and Greek give the typesetter a symbol's base, primes and
-// subscript.
+// How a name prints (base, primes, subscript, Greek letters) is
+// doc/notation's.
 //
 // # Dimensions
 //
-// Dims and StmtDims check that:
+// Dims (and, for a whole statement, EvalAssign and EvalCheck) check that:
 //
 //   - + - and the comparisons of a check join equal dimensions ("cannot add
 //     m and kPa", at the operator);
@@ -94,13 +94,14 @@
 //
 // # Evaluation
 //
-// All values are SI float64; angles are radians. Direct walks the tree.
-// Eval gets the value from govaluate on the Canonical form — fully
+// All values are SI float64; angles are radians. A direct evaluator walks
+// the tree.
+// Eval gets the value from govaluate on the canonical form — fully
 // parenthesised, every symbol an escaped positional parameter "[$0]" (so
 // names such as phi' never reach govaluate's lexer), every number
 // a parameter "[#0]" (govaluate cannot read 1e3 and a formatted float would
 // be rounded), unary minus as "(-(x))", powers as "(a ** b)" — and runs
-// Direct as well: Direct places domain errors (division by zero, sqrt of
+// the direct evaluator as well, which places domain errors (division by zero, sqrt of
 // a negative, ln 0, asin 2, tan 90°, overflow) at the node where they happen and
 // also catches an infinity that govaluate would let vanish (1/(1/0) = 0).
 // A disagreement beyond 1e-9 relative is a KindInternal error. No panic

@@ -9,7 +9,7 @@ import (
 )
 
 // Eval evaluates n: the dimension from Dims, the value from govaluate on
-// the Canonical form, checked against Direct. Every domain problem
+// the canonical form, checked against the direct evaluator. Every domain problem
 // (division by zero, sqrt of a negative, ln 0, asin 2, overflow, a
 // negative base to a fractional power) is an Error at the node where it
 // happens, found by the direct evaluator, which also catches an infinity
@@ -31,7 +31,7 @@ func evalDim(n Node, env Env, d units.Dim) (units.Quantity, []Error) {
 	if err != nil {
 		return units.Quantity{}, []Error{*err}
 	}
-	src, params := Canonical(n, env)
+	src, params := canonical(n, env)
 	v, gerr := run(src, params)
 	if gerr == nil && !agree(v, ref) {
 		gerr = fmt.Errorf("govaluate gives %v, the direct evaluator %v", v, ref)
@@ -44,10 +44,10 @@ func evalDim(n Node, env Env, d units.Dim) (units.Quantity, []Error) {
 	return units.Quantity{V: v, Dim: d}, nil
 }
 
-// EvalAssign evaluates an assignment: StmtDims (so a display unit that
+// EvalAssign evaluates an assignment: stmtDims (so a display unit that
 // does not fit is an error) and then Eval of its expression.
 func EvalAssign(a *Assign, env Env) (units.Quantity, []Error) {
-	d, errs := StmtDims(a, env)
+	d, errs := stmtDims(a, env)
 	if len(errs) > 0 {
 		return units.Quantity{}, errs
 	}
@@ -63,7 +63,7 @@ type CheckValue struct {
 // EvalCheck evaluates both sides of a check, whose dimensions must agree,
 // and whether the comparison holds.
 func EvalCheck(c *Check, env Env) (CheckValue, []Error) {
-	d, errs := StmtDims(c, env)
+	d, errs := stmtDims(c, env)
 	if len(errs) > 0 {
 		return CheckValue{}, errs
 	}
@@ -96,10 +96,10 @@ func agree(a, b float64) bool {
 	return math.Abs(a-b) <= 1e-9*math.Max(math.Abs(a), math.Abs(b))
 }
 
-// Direct evaluates n by walking the tree, without govaluate: the
+// direct evaluates n by walking the tree, without govaluate: the
 // independent reference for Eval. The error, if any, is an Error (the
 // first dimension or domain problem).
-func Direct(n Node, env Env) (units.Quantity, error) {
+func direct(n Node, env Env) (units.Quantity, error) {
 	d, errs := Dims(n, env)
 	if len(errs) > 0 {
 		return units.Quantity{}, errs[0]
@@ -221,6 +221,11 @@ func (e *evaluator) call(n *Call) (float64, *Error) {
 		// returns about 1.6e16 there because π/2 is not exact in binary.
 		if math.Abs(math.Cos(x)) < 1e-12 {
 			return 0, domain(n, "tan is infinite at an odd multiple of 90°; got %s°", fmtNum(x*180/math.Pi))
+		}
+	case "cot":
+		// At a multiple of 180° the cotangent is infinite.
+		if math.Abs(math.Sin(x)) < 1e-12 {
+			return 0, domain(n, "cot is infinite at a multiple of 180°; got %s°", fmtNum(x*180/math.Pi))
 		}
 	case "asin", "acos":
 		if x < -1 || x > 1 {

@@ -240,6 +240,8 @@ func TestDomainErrors(t *testing.T) {
 		{"log10(-x)", 0, 9, "log10 needs a positive value; got -3"},
 		{"tan(90 deg)", 0, 11, "tan is infinite at an odd multiple of 90°; got 90°"},
 		{"tan(-270 deg)", 0, 13, "tan is infinite at an odd multiple of 90°; got -270°"},
+		{"cot(180 deg)", 0, 12, "cot is infinite at a multiple of 180°; got 180°"},
+		{"cot(0 deg)", 0, 10, "cot is infinite at a multiple of 180°; got 0°"},
 		{"asin(2)", 0, 7, "asin needs a value from -1 to 1; got 2"},
 		{"acos(-x)", 0, 8, "acos needs a value from -1 to 1"},
 		{"(-8)^(1/3)", 0, 10, "a negative base (-8) to a fractional power"},
@@ -298,7 +300,7 @@ func TestBearingFactors(t *testing.T) {
 		t.Fatalf("N_q = %v %v", nq, errs)
 	}
 	e["N_q"] = nq
-	for src, want := range map[string]float64{"(N_q - 1) / tan(phi')": 30.14, "2 * (N_q - 1) * tan(phi')": 20.09} {
+	for src, want := range map[string]float64{"(N_q - 1) / tan(phi')": 30.14, "(N_q - 1) * cot(phi')": 30.14, "2 * (N_q - 1) * tan(phi')": 20.09} {
 		q, errs := expr.Eval(mustExpr(t, src), e)
 		if len(errs) > 0 || !close(q.V, want, 5e-4) {
 			t.Errorf("%s = %v %v, want %v", src, q, errs, want)

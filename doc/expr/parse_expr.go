@@ -116,7 +116,7 @@ func (p *parser) primary() Node {
 			return &Const{Pos: t.pos, End: t.end, Name: "pi", V: math.Pi}
 		}
 		if t.text == "g" {
-			return &Const{Pos: t.pos, End: t.end, Name: "g", V: Gravity, Dim: gravityDim}
+			return &Const{Pos: t.pos, End: t.end, Name: "g", V: gravity, Dim: gravityDim}
 		}
 		if f, ok := functions[t.text]; ok {
 			if p.tok.kind != tLparen {

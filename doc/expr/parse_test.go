@@ -306,40 +306,6 @@ func TestParseList(t *testing.T) {
 	}
 }
 
-// Symbol rows follow SHEET-FORMAT.md §2.
-func TestSplitSymbol(t *testing.T) {
-	for _, r := range []struct {
-		in, base string
-		primes   int
-		sub      string
-	}{
-		{"gamma_sat", "gamma", 0, "sat"},
-		{"q_ult_net", "q", 0, "ult,net"},
-		{"phi'_d", "phi", 1, "d"},
-		{"phi'", "phi", 1, ""},
-		{"sigma_v'", "sigma", 0, "v'"},
-		{"gamma_phi'", "gamma", 0, "phi'"},
-		{"B'", "B", 1, ""},
-		{"c''", "c", 2, ""},
-		{"F1.R_d", "F1.R", 0, "d"},
-		{"F2_vesic.util", "F2_vesic.util", 0, ""},
-		{"φ", "φ", 0, ""},
-	} {
-		b, p, s := expr.SplitSymbol(r.in)
-		if b != r.base || p != r.primes || s != r.sub {
-			t.Errorf("SplitSymbol(%q) = %q %d %q, want %q %d %q", r.in, b, p, s, r.base, r.primes, r.sub)
-		}
-	}
-	for in, want := range map[string]string{"gamma": "γ", "Gamma": "Γ", "phi": "φ", "sigma": "σ", "nu": "ν", "delta": "δ", "alpha": "α", "pi": "π", "Omega": "Ω", "psi": "ψ"} {
-		if got, ok := expr.Greek(in); !ok || got != want {
-			t.Errorf("Greek(%q) = %q, %v", in, got, ok)
-		}
-	}
-	if _, ok := expr.Greek("q"); ok {
-		t.Errorf("Greek(q) should be false")
-	}
-}
-
 func TestWalk(t *testing.T) {
 	n, _ := expr.ParseExpr("max(a, -b) + (c ^ 2)", 0)
 	var kinds []string
@@ -351,22 +317,6 @@ func TestWalk(t *testing.T) {
 	if got := strings.Join(kinds, " "); got != "Binary Call Paren Binary Ident Num" {
 		t.Errorf("Inspect order: %s", got)
 	}
-}
-
-func ExampleSplitSymbol() {
-	for _, name := range []string{"gamma_sat", "q_ult_net", "phi'_d", "B'"} {
-		base, primes, sub := expr.SplitSymbol(name)
-		g, ok := expr.Greek(base)
-		if !ok {
-			g = base
-		}
-		fmt.Printf("%s%s sub %q\n", g, strings.Repeat("′", primes), sub)
-	}
-	// Output:
-	// γ sub "sat"
-	// q sub "ult,net"
-	// φ′ sub "d"
-	// B′ sub ""
 }
 
 func ExampleParseLine() {

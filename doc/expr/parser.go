@@ -122,7 +122,7 @@ func (p *parser) checkName(id Ident) {
 		p.errorf(id.Pos, id.End, "g is the standard acceleration of gravity, 9.80665 m/s2; choose another name")
 	case id.Name == "check":
 		p.errorf(id.Pos, id.End, "check is a keyword; choose another name")
-	case IsFunction(id.Name):
+	case isFunction(id.Name):
 		p.errorf(id.Pos, id.End, "%s is a function; choose another name", id.Name)
 	case strings.Contains(id.Name, "."):
 		p.errorf(id.Pos, id.End, "%s is a block result name (NAME.result); choose a name without \".\"", id.Name)
@@ -286,7 +286,7 @@ func ParseList(src string, base int) ([]Node, []Error) {
 func ParseRef(text string, base int) (*Ref, []Error) {
 	p := newParser(text, base)
 	r := &Ref{Pos: p.tok.pos}
-	if p.tok.kind != tIdent || Reserved(p.tok.text) {
+	if p.tok.kind != tIdent || reserved(p.tok.text) {
 		p.errorf(p.tok.pos, p.tok.end, "expected a symbol inside {…}, found %s", p.tok.describe())
 		r.End = base + len(text)
 		return r, p.result()

@@ -11,20 +11,20 @@ import (
 // (a table beside the chart of its values). It never splits across
 // pages.
 type Beside struct {
-	Pos         source.Position
+	Pos         source.Span
 	Left, Right []Block
 	Share       float64
 }
 
-func (b *Beside) Position() source.Position { return b.Pos }
-func (*Beside) isBlock()                    {}
+func (b *Beside) Where() source.Span { return b.Pos }
+func (*Beside) isBlock()             {}
 
 // besideGap is the space between the columns of a Beside.
 const besideGap = 16.0
 
 func (e *engine) beside(b *Beside, width float64) []*piece {
 	if b.Share <= 0 || b.Share >= 1 {
-		e.probs.add(b.Pos, "side-by-side blocks: share %.2f of the width, want between 0 and 1", b.Share)
+		e.diags.Add(b.Pos, "side-by-side blocks: share %.2f of the width, want between 0 and 1", b.Share)
 		return nil
 	}
 	lw := (width - besideGap) * b.Share

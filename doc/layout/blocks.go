@@ -19,10 +19,10 @@ var bodyStyle = textStyle{size: bodySize, lead: bodyLead, color: ink}
 
 // linePieces turns set lines into one piece each, keeping the first two
 // and the last two lines of a paragraph together.
-func linePieces(kind string, pos source.Position, lines []line, width, before float64) []*piece {
+func linePieces(kind string, pos source.Span, lines []line, width, before float64) []*piece {
 	ps := make([]*piece, len(lines))
 	for i, ln := range lines {
-		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.items}
+		b := &Box{Kind: kind, Pos: pos, W: width, H: ln.h, Items: ln.appendItems(nil, 0, 0)}
 		ps[i] = &piece{box: b, base: ln.base}
 	}
 	if n := len(ps); n > 1 {
@@ -49,7 +49,7 @@ func (e *engine) para(p *Para, width float64) []*piece {
 func (e *engine) heading(h *Heading, width float64) []*piece {
 	lvl := h.Level
 	if lvl < 1 || lvl > 3 {
-		e.probs.add(h.Pos, "heading level %d: want 1, 2 or 3", h.Level)
+		e.diags.Add(h.Pos, "heading level %d: want 1, 2 or 3", h.Level)
 		lvl = min(max(lvl, 1), 3)
 	}
 	number := h.Number
@@ -87,7 +87,7 @@ func (e *engine) heading(h *Heading, width float64) []*piece {
 			e.checkGlyphs(number, fonts.Bold, h.Pos)
 			b.Items = append(b.Items, draw.Text{X: 0, Y: ln.base, Face: fonts.Bold, Size: size, Color: accent, Text: number})
 		}
-		b.Items = appendOffset(b.Items, ln.items, numW, y)
+		b.Items = ln.appendItems(b.Items, numW, y)
 		y += ln.h
 	}
 	if lvl == 1 {
@@ -198,17 +198,29 @@ func (e *engine) code(c *Code, width float64) []*piece {
 	return ps
 }
 
-// caption sets a caption centred under (or over) a figure.
-func (e *engine) caption(runs []Run, width float64, pos source.Position) (items []draw.Item, h float64) {
+// captionStyle is how every caption is set, a figure's or a table's:
+// small, italic, muted.
+var captionStyle = textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
+
+// captionUnder sets a figure's caption centred under it, in nine tenths
+// of the width, the figure being h tall in b; it returns the height with
+// the caption.
+func (e *engine) captionUnder(b *Box, runs []Run, width, h float64) float64 {
 	if len(runs) == 0 {
-		return nil, 0
+		return h
 	}
-	st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
-	for _, ln := range e.setText(runs, width*0.9, st, pos) {
-		items = appendOffset(items, ln.items, (width-ln.w)/2, h)
-		h += ln.h
+	var items []draw.Item
+	capH := 0.0
+	for _, ln := range e.setText(runs, width*0.9, captionStyle, b.Pos) {
+		items = ln.appendItems(items, (width-ln.w)/2, capH)
+		capH += ln.h
 	}
-	return items, h
+	if capH == 0 {
+		return h
+	}
+	draw.OffsetAll(items, 0, h+4)
+	b.Items = append(b.Items, items...)
+	return h + 4 + capH
 }
 
 func (e *engine) image(im *Image, width float64) []*piece {
@@ -216,7 +228,7 @@ func (e *engine) image(im *Image, width float64) []*piece {
 	// enough here.
 	cfg, err := media.Header(im.Data)
 	if err != nil {
-		e.probs.add(im.Pos, "image %v", err)
+		e.diags.Add(im.Pos, "image %v", err)
 		return nil
 	}
 	w := float64(cfg.Width) * 0.75 // 96 px per inch
@@ -230,19 +242,13 @@ func (e *engine) image(im *Image, width float64) []*piece {
 	}
 	b := &Box{Kind: "image", Pos: im.Pos, W: width}
 	b.Items = append(b.Items, draw.Image{X: (width - w) / 2, Y: 0, W: w, H: h, Data: im.Data})
-	capItems, capH := e.caption(im.Caption, width, im.Pos)
-	if capH > 0 {
-		draw.OffsetAll(capItems, 0, h+4)
-		b.Items = append(b.Items, capItems...)
-		h += 4 + capH
-	}
-	b.H = h
+	b.H = e.captionUnder(b, im.Caption, width, h)
 	return []*piece{{box: b, before: paraGap + 3}}
 }
 
 func (e *engine) drawing(d *Drawing, width float64) []*piece {
 	if d.W <= 0 || d.H <= 0 {
-		e.probs.add(d.Pos, "drawing has no size (%.1f × %.1f pt)", d.W, d.H)
+		e.diags.Add(d.Pos, "drawing has no size (%.1f × %.1f pt)", d.W, d.H)
 		return nil
 	}
 	s := math.Min(1, width/d.W)
@@ -255,7 +261,7 @@ func (e *engine) drawing(d *Drawing, width float64) []*piece {
 		}
 		if t, ok := it.(draw.Text); ok {
 			if !t.Face.Valid() {
-				e.probs.add(d.Pos, "drawing text %q has no valid face", t.Text)
+				e.diags.Add(d.Pos, "drawing text %q has no valid face", t.Text)
 				continue
 			}
 			t.Text = e.checkGlyphs(t.Text, t.Face, d.Pos)
@@ -264,13 +270,7 @@ func (e *engine) drawing(d *Drawing, width float64) []*piece {
 		}
 		b.Items = append(b.Items, draw.Offset(it, dx, 0))
 	}
-	capItems, capH := e.caption(d.Caption, width, d.Pos)
-	if capH > 0 {
-		draw.OffsetAll(capItems, 0, h+4)
-		b.Items = append(b.Items, capItems...)
-		h += 4 + capH
-	}
-	b.H = h
+	b.H = e.captionUnder(b, d.Caption, width, h)
 	return []*piece{{box: b, before: paraGap + 3}}
 }
 
@@ -281,12 +281,4 @@ func imageSize(data []byte) (w, h float64, ok bool) {
 		return 0, 0, false
 	}
 	return float64(cfg.Width), float64(cfg.Height), true
-}
-
-// appendOffset appends items moved by (dx, dy) to dst.
-func appendOffset(dst, items []draw.Item, dx, dy float64) []draw.Item {
-	for _, it := range items {
-		dst = append(dst, draw.Offset(it, dx, dy))
-	}
-	return dst
 }

@@ -26,14 +26,14 @@ func TestBreakLongWord(t *testing.T) {
 	e := &engine{}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			lines := e.setText(plain(c.text), c.width, bodyStyle, source.Position{Path: "a.md", Line: 1, Col: 1})
+			lines := e.setText(plain(c.text), c.width, bodyStyle, source.Span{File: source.NewFile("a.md", nil)})
 			var got strings.Builder
 			hyphens := 0
 			for i, ln := range lines {
 				if ln.w > c.width+1e-6 && c.width > 8 {
 					t.Errorf("line %d is %.1f pt wide, over %.1f", i, ln.w, c.width)
 				}
-				for _, it := range ln.items {
+				for _, it := range ln.appendItems(nil, 0, 0) {
 					s := it.(draw.Text).Text
 					if i < len(lines)-1 && strings.HasSuffix(s, "-") {
 						s = strings.TrimSuffix(s, "-")

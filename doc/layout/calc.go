@@ -24,7 +24,7 @@ func (e *engine) statement(s *Statement, width float64) []*piece {
 		row = append(row, eqn.Op{Text: "="}, eqn.Strong{X: s.Result})
 	}
 	if s.Symbol == nil {
-		e.probs.add(s.Pos, "statement has no symbol")
+		e.diags.Add(s.Pos, "statement has no symbol")
 		return nil
 	}
 	return e.calcLine("statement", s.Pos, s.Own, row, noteRuns(s.Note, s.Ref), s.Anchor, width)
@@ -32,7 +32,7 @@ func (e *engine) statement(s *Statement, width float64) []*piece {
 
 func (e *engine) input(in *Input, width float64) []*piece {
 	if in.Symbol == nil || in.Value == nil {
-		e.probs.add(in.Pos, "input needs a symbol and a value")
+		e.diags.Add(in.Pos, "input needs a symbol and a value")
 		return nil
 	}
 	row := eqn.Row{in.Symbol, eqn.Op{Text: "="}, in.Value}
@@ -65,8 +65,8 @@ type formula struct {
 
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
-func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Position, own bool) (formula, bool) {
-	st := eqn.Style{Size: mathSize, Color: ink}
+func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Span, own bool) (formula, bool) {
+	st := eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
 		e.mathProblem(pos, own, err)
@@ -101,25 +101,23 @@ var noteStops = [...]float64{0.3, 0.48, 0.64}
 // calcLine lays out a formula with its note beside it (at the first note
 // stop clear of the formula), or below it when the formula needs the
 // whole width.
-func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
+func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
 	const gap = 12.0
 	last := noteStops[len(noteStops)-1] * width
 	eqW := width
 	if len(note) > 0 {
 		eqW = last - gap
 	}
-	f, ok := e.stackFormula(row, eqW, 0, calcPad, pos, own)
+	// The note goes beside a formula that is one line no wider than eqW;
+	// such a formula is that same line at the full width, so one
+	// breaking at the full width serves both cases.
+	f, ok := e.stackFormula(row, width, 0, calcPad, pos, own)
 	if !ok {
 		return nil
 	}
 	beside := len(note) == 0 || f.lines == 1 && f.w <= eqW
-	if !beside {
-		if f, ok = e.stackFormula(row, width, 0, calcPad, pos, own); !ok {
-			return nil
-		}
-	}
 	if f.w > width+float64(e.tpl.Margin.Right)-4 {
-		e.probs.add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
+		e.diags.Add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
 	}
 	b := &Box{Kind: kind, Pos: pos, W: width, Items: f.items}
 	h := calcPad + f.h
@@ -147,7 +145,7 @@ func (e *engine) calcLine(kind string, pos source.Position, own bool, row eqn.Ro
 			y = calcPad + f.base - lines[0].base
 		}
 		for _, ln := range lines {
-			b.Items = appendOffset(b.Items, ln.items, x, y)
+			b.Items = ln.appendItems(b.Items, x, y)
 			y += ln.h
 		}
 		h = math.Max(h, y)
@@ -164,11 +162,11 @@ var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥":
 func (e *engine) check(c *Check, width float64) []*piece {
 	rel, ok := relations[strings.TrimSpace(c.Rel)]
 	if !ok {
-		e.probs.add(c.Pos, "check relation %q: want ≤, ≥, <, > or =", c.Rel)
+		e.diags.Add(c.Pos, "check relation %q: want ≤, ≥, <, > or =", c.Rel)
 		return nil
 	}
 	if c.Left == nil || c.Right == nil {
-		e.probs.add(c.Pos, "check needs both sides")
+		e.diags.Add(c.Pos, "check needs both sides")
 		return nil
 	}
 	row := eqn.Row{c.Left}
@@ -194,7 +192,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	if len(c.Note) > 0 {
 		y := h + 1
 		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
-			noteItems = appendOffset(noteItems, ln.items, pad, y)
+			noteItems = ln.appendItems(noteItems, pad, y)
 			y += ln.h
 		}
 		h = y
@@ -207,7 +205,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 		util = "utilisation " + c.UtilText
 	}
 	if math.IsNaN(c.Util) || math.IsInf(c.Util, 0) {
-		e.probs.add(c.Pos, "check utilisation is %v", c.Util)
+		e.diags.Add(c.Pos, "check utilisation is %v", c.Util)
 		util = "utilisation —"
 	}
 	const wordSize = 8.6

@@ -1,6 +1,7 @@
 package layout
 
 import (
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
@@ -12,9 +13,9 @@ import (
 // next page.
 func (e *engine) caution(c *Caution, width float64) []*piece {
 	sev := c.Severity
-	if sev > SevWarning {
-		e.probs.add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", sev)
-		sev = SevWarning
+	if !sev.Valid() {
+		e.diags.Add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", int(sev))
+		sev = severity.Warning
 	}
 	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 3.5
 	inner := width - bar - padL - padR
@@ -31,7 +32,7 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	if para, ok := soleParagraph(c); ok {
 		// no title and one paragraph: the word heads the paragraph's
 		// first line, the paragraph hanging beside it
-		if sev == SevNote { // information: in the note size
+		if sev == severity.Note { // information: in the note size
 			small := *para
 			small.Small = true
 			para = &small
@@ -65,7 +66,7 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 		head.Items = append(head.Items, draw.Text{X: mark, Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
 		y := 0.0
 		for _, ln := range lines {
-			head.Items = appendOffset(head.Items, ln.items, wordW, y)
+			head.Items = ln.appendItems(head.Items, wordW, y)
 			y += ln.h
 		}
 		head.H = y
@@ -141,9 +142,9 @@ type cautionStyle struct {
 }
 
 var cautionStyles = [3]cautionStyle{
-	SevNote:    {word: accent, bar: accent, barW: 1.2},
-	SevCaution: {word: ink, bar: ink, barW: 3, fill: true},
-	SevWarning: {word: ink, bar: ink, barW: 3, fill: true, frame: 0.8, triangle: true},
+	severity.Note:    {word: accent, bar: accent, barW: 1.2},
+	severity.Caution: {word: ink, bar: ink, barW: 3, fill: true},
+	severity.Warning: {word: ink, bar: ink, barW: 3, fill: true, frame: 0.8, triangle: true},
 }
 
 // warnTriangle is the warning sign before the word WARNING: an ink

@@ -1,5 +1,5 @@
 // Package layout sets plinth's calculation packages on pages: plinth's own
-// layout engine, in points, producing a tree of boxes with source positions
+// layout engine, in points, producing a tree of boxes with source spans
 // before any PDF byte is written (doc/pdf draws the result).
 //
 // # Input: the contract
@@ -9,8 +9,8 @@
 // optional page Template (nil = built-in A4), and Sheets. Each Sheet starts
 // on a new page; its Fields fill the title block (a blank Checked prints
 // NOT CHECKED), its Bookmark names its one PDF bookmark, and its Blocks are
-// the body. Every block carries the source.Position that problems with it
-// are reported at.
+// the body. Every block carries the source.Span (Pos) that problems with
+// it are reported at.
 //
 // Blocks (all used as pointers):
 //
@@ -31,19 +31,32 @@
 //
 // Text is a list of Runs, each in one Style (Regular, Bold, Italic,
 // BoldItalic, Mono), optionally raised or lowered (Sup, Sub), optionally a
-// link to a named anchor, or an inline formula (Math). Formulas are
-// eqn.Nodes: build them with the eqn package (eqn.FromExpr converts the
-// engine's trace.Expr, eqn.Quantity and eqn.Unit print values with units).
+// link to a named anchor, or an inline formula (Math), or a page
+// reference (Page: the page an anchor lands on, or the pages of the sheet
+// holding it, which the layout fills in). Formulas are
+// eqn.Nodes: build them with the eqn package (eqn.Quantity and eqn.Unit
+// print values with units; compose converts the engine's formulas into
+// them, so the layout knows no engine type).
 //
 // # Output
 //
-// Document returns Pages: each Page holds Boxes (kind, source position,
+// Document returns Pages: each Page holds Boxes (kind, source span,
 // rectangle on the page, draw.Items relative to the box's top-left corner,
-// kids), and the Outline holds one bookmark per sheet. Pages.Dump writes the tree as text for golden
-// tests. Problems — a character missing from the fonts, a link to an anchor
-// that does not exist, an anchor defined twice, a calculation line taller
-// than a page, an image that is not PNG or JPEG — are collected and
-// returned together as a Problems error, sorted by position.
+// kids), and the Outline holds one bookmark per sheet. Pages.Dump writes
+// the tree as text for golden tests. Problems — a character missing from
+// the fonts, a link or page reference to an anchor that does not exist,
+// an anchor defined twice, a calculation line taller than a page, an
+// image that is not PNG or JPEG — are collected and returned together as
+// a source.List, sorted, each at its span.
+//
+// # Passes
+//
+// Sheets are laid out in parallel, each on its own: a sheet's pages
+// depend on nothing outside it. Page references print a dash in the
+// first pass; then the anchors' pages are read off and each sheet whose
+// references now read differently is laid out again (refs.go), until
+// none does, at most three layouts of a sheet. Change bars (Doc.Bars,
+// bars.go) are drawn on the final pages.
 //
 // # Rules of the page
 //

@@ -12,11 +12,15 @@ import (
 // engine carries the state of one Document call.
 type engine struct {
 	tpl   *Template
-	probs Problems
+	diags source.List
+	fills map[PageRef]string // the text of each page reference known so far (refs.go)
+	used  map[PageRef]refUse // the page references set in this sheet, with their text
 	// the text column of every page
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
+	refCalls                   int   // page references set so far (reuse.go)
+	sp                         space // word and frag chunks (space.go)
 }
 
 // piece is an unbreakable strip of a sheet's body, stacked by the
@@ -31,24 +35,26 @@ type piece struct {
 	base   float64 // first baseline below the top
 }
 
-// Document lays out doc: every sheet's body into pages, then the title
-// block, variant banner and footer on each page. Problems (with their
-// source positions) come back as a Problems error; no pages are returned
-// then.
-func Document(doc Doc) (pages *Pages, err error) {
+// Document lays out doc: every sheet's body into pages, the page
+// references filled in (refs.go: a sheet whose filled text changes is laid
+// out again, a bounded number of times), then the title block, variant
+// banner and footer on each page. Problems come back as diagnostics at
+// the source span of the block they concern, every one found, sorted; no
+// pages are returned then.
+func Document(doc Doc) (pages *Pages, diags source.List) {
 	defer func() {
 		if r := recover(); r != nil { // a defect here must not take the caller down
-			pages, err = nil, fmt.Errorf("layout: internal error: %v", r)
+			pages, diags = nil, internal(doc, fmt.Sprintf("layout: internal error: %v", r))
 		}
 	}()
 	if len(doc.Sheets) == 0 {
-		return nil, Problems{{Msg: "layout: no sheets to lay out"}}
+		return nil, internal(doc, "layout: no sheets to lay out")
 	}
 	tpl := doc.Template
 	if tpl == nil {
 		var err error
 		if tpl, err = BuiltinTemplate("a4"); err != nil {
-			return nil, err
+			return nil, internal(doc, err.Error())
 		}
 	}
 	e := &engine{tpl: tpl}
@@ -58,17 +64,13 @@ func Document(doc Doc) (pages *Pages, err error) {
 		e.bodyY += banner.H + 8
 		e.bodyH -= banner.H + 8
 	}
-	out := &Pages{Info: doc.Info}
-	laid, err := e.sheets(doc.Sheets)
+	laid, err := e.passes(doc)
 	if err != nil {
-		return nil, err
+		return nil, internal(doc, err.Error())
 	}
+	out := &Pages{Info: doc.Info}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
-		pieces := laid[si]
-		laid[si] = nil
-		first := len(out.Pages)
-		e.paginate(si, sh.Pos, pieces, out)
 		title := sh.Bookmark
 		if title == "" {
 			title = joinNonEmpty(" ", sh.Fields.Calc, sh.Fields.Title)
@@ -76,29 +78,51 @@ func Document(doc Doc) (pages *Pages, err error) {
 		if title == "" {
 			title = fmt.Sprintf("Sheet %d", si+1)
 		}
-		out.Outline = append(out.Outline, Bookmark{Title: title, Page: first})
-		if doc.Progress != nil {
-			doc.Progress(si+1, len(doc.Sheets))
-		}
+		out.Outline = append(out.Outline, Bookmark{Title: title, Page: len(out.Pages)})
+		out.Pages = append(out.Pages, laid[si].pages...)
+		e.diags = append(e.diags, laid[si].diags...)
 	}
 	e.furnish(doc, out, banner)
+	markChanges(out, doc.Bars)
 	e.checkLinks(out)
-	if len(e.probs) > 0 {
-		return nil, e.probs.sorted()
+	if e.diags.HasErrors() {
+		e.diags.Sort()
+		return nil, e.diags
 	}
 	return out, nil
 }
 
-// sheets lays out the body of every sheet into pieces, the sheets in
-// parallel: each is independent until it is paginated. Each sheet gets its
-// own copy of the engine state; the problems are gathered in sheet order.
-func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
-	laid := make([][]*piece, len(shs))
-	probs := make([]Problems, len(shs))
-	fails := make([]error, len(shs))
-	workers := min(runtime.GOMAXPROCS(0), len(shs))
+// internal is a problem of the layout itself, not of a block: reported
+// at the document's first file (its path only), so it still says where.
+func internal(doc Doc, msg string) source.List {
+	d := source.Diagnostic{Msg: msg}
+	if len(doc.Sheets) > 0 && doc.Sheets[0].Pos.File != nil {
+		d.Path = doc.Sheets[0].Pos.File.Path
+	}
+	return source.List{d}
+}
+
+// laidSheet is one sheet laid out and paginated: its pages (Sheet set,
+// numbered within the sheet), the problems found, and the text each page
+// reference in it was set with.
+type laidSheet struct {
+	pages  []*Page
+	diags  source.List
+	refs   map[PageRef]refUse
+	blocks []laidBlock // its blocks' pieces, when it may be laid out again (reuse.go)
+}
+
+// sheets lays out and paginates the sheets numbered in which, in
+// parallel: each is independent of the others (a page reference's text
+// comes from fills, read only). Each sheet gets its own copy of the
+// engine state. done counts the sheets finished for doc.Progress, out of
+// total.
+func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []laidSheet, done *int, total int) error {
+	fails := make([]error, len(doc.Sheets))
+	workers := min(runtime.GOMAXPROCS(0), len(which))
 	next := make(chan int)
 	var wg sync.WaitGroup
+	var mu sync.Mutex
 	for range workers {
 		wg.Add(1)
 		go func() {
@@ -111,25 +135,32 @@ func (e *engine) sheets(shs []Sheet) ([][]*piece, error) {
 						}
 					}()
 					se := *e
-					se.probs, se.num, se.listDepth = nil, [4]int{}, 0
-					laid[si] = se.blocks(shs[si].Blocks, se.bodyW)
-					probs[si] = se.probs
+					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
+					se.fills, se.used = fills, map[PageRef]refUse{}
+					pieces, kept := se.sheetBlocks(doc.Sheets[si].Blocks, out[si].blocks)
+					pages := se.paginate(si, pieces)
+					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept}
 				}()
+				if doc.Progress != nil {
+					mu.Lock()
+					*done++
+					doc.Progress(*done, total)
+					mu.Unlock()
+				}
 			}
 		}()
 	}
-	for si := range shs {
+	for _, si := range which {
 		next <- si
 	}
 	close(next)
 	wg.Wait()
-	for si := range shs {
+	for _, si := range which {
 		if fails[si] != nil {
-			return nil, fails[si]
+			return fails[si]
 		}
-		e.probs = append(e.probs, probs[si]...)
 	}
-	return laid, nil
+	return nil
 }
 
 // blocks lays out a list of blocks at width.
@@ -173,29 +204,24 @@ func (e *engine) block(b Block, width float64) []*piece {
 		return []*piece{{box: &Box{Kind: "page-break", Pos: b.Pos}, brk: true}}
 	case *Anchor:
 		if b.Name == "" {
-			e.probs.add(b.Pos, "anchor with no name")
+			e.diags.Add(b.Pos, "anchor with no name")
 		}
 		return []*piece{{box: &Box{Kind: "anchor", Pos: b.Pos, W: width, Items: []draw.Item{draw.Anchor{Name: b.Name}}}, keep: true}}
 	case nil:
 		return nil
 	}
-	e.probs.add(b.Position(), "layout: unknown block %T", b)
+	e.diags.Add(b.Where(), "layout: unknown block %T", b)
 	return nil
 }
 
-// paginate stacks pieces into pages for sheet si.
-func (e *engine) paginate(si int, pos source.Position, ps []*piece, out *Pages) {
+// paginate stacks pieces into pages for sheet si, numbered from 1.
+func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 	var page *Page
 	y, empty := 0.0, true
 	bottom := e.bodyY + e.bodyH
 	newPage := func() {
-		page = &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si}
-		if n := len(out.Pages); n > 0 && out.Pages[n-1].Sheet == si {
-			page.Number = out.Pages[n-1].Number + 1
-		} else {
-			page.Number = 1
-		}
-		out.Pages = append(out.Pages, page)
+		page = &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: len(pages) + 1}
+		pages = append(pages, page)
 		y, empty = e.bodyY, true
 	}
 	place := func(p *piece, gap float64) {
@@ -236,10 +262,11 @@ func (e *engine) paginate(si int, pos source.Position, ps []*piece, out *Pages) 
 			}
 		}
 		if p.box.H > e.bodyH+1e-6 {
-			e.probs.add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
+			e.diags.Add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
 		}
 		place(p, p.before)
 	}
+	return pages
 }
 
 func kindName(k string) string {
@@ -282,10 +309,10 @@ func shift(ps []*piece, dx float64) {
 // checkLinks reports duplicate anchors and links to anchors that do not
 // exist (the PDF writer would otherwise write a dangling link).
 func (e *engine) checkLinks(out *Pages) {
-	anchors := map[string]source.Position{}
+	anchors := map[string]source.Span{}
 	type ref struct {
 		target string
-		pos    source.Position
+		pos    source.Span
 	}
 	var links []ref
 	for _, pg := range out.Pages {
@@ -295,7 +322,7 @@ func (e *engine) checkLinks(out *Pages) {
 					switch it := it.(type) {
 					case draw.Anchor:
 						if prev, dup := anchors[it.Name]; dup {
-							e.probs.add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
+							e.diags.Add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
 						} else {
 							anchors[it.Name] = b.Pos
 						}
@@ -308,7 +335,7 @@ func (e *engine) checkLinks(out *Pages) {
 	}
 	for _, l := range links {
 		if _, ok := anchors[l.target]; !ok {
-			e.probs.add(l.pos, "link to %q, which is not an anchor in this document", l.target)
+			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.target)
 		}
 	}
 }

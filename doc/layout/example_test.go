@@ -9,7 +9,8 @@ import (
 )
 
 func ExampleDocument() {
-	pos := func(line int) source.Position { return source.Position{Path: "01-loads.md", Line: line, Col: 1} }
+	f := source.NewFile("01-loads.md", []byte("---\ntitle: Abutment loads\ncalc: L-01\n---\n# Loads\n\n    G_k = 420 kN  # permanent action\n"))
+	pos := func(line int) source.Span { return source.Span{File: f, Start: f.LineStart(line)} }
 	doc := layout.Doc{
 		Info: layout.Info{Title: "Heron Quay", Fingerprint: "5be0c3a1d2e4f60718293a4b5c6d7e8f"},
 		Sheets: []layout.Sheet{{
@@ -22,9 +23,9 @@ func ExampleDocument() {
 			},
 		}},
 	}
-	pages, err := layout.Document(doc)
-	if err != nil {
-		fmt.Println(err)
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		fmt.Println(diags)
 		return
 	}
 	for _, b := range pages.Pages[0].Boxes {

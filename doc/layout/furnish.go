@@ -21,12 +21,12 @@ func (e *engine) variantBanner(variant []string) *Box {
 	const pad = 5.0
 	st := textStyle{size: 9, lead: 1.3, color: badInk}
 	runs := []Run{{Text: "VARIANT", Style: Bold}, {Text: "  inputs overridden: " + strings.Join(variant, "; ")}}
-	lines := e.setText(runs, w-2*pad-4, st, source.Position{})
+	lines := e.setText(runs, w-2*pad-4, st, source.Span{})
 	b := &Box{Kind: "variant", X: x, Y: y, W: w}
 	h := pad
 	var text []draw.Item
 	for _, ln := range lines {
-		text = appendOffset(text, ln.items, pad+4, h)
+		text = ln.appendItems(text, pad+4, h)
 		h += ln.h
 	}
 	h += pad
@@ -103,17 +103,41 @@ func (e *engine) furnish(doc Doc, out *Pages, banner *Box) {
 
 // expand fills {field} placeholders; ok is false when a field printed a
 // warning value (NOT CHECKED).
+// It matches as the placeholder pattern does, scanned by hand: every page
+// expands its title block and footer.
 func expand(s string, value func(string) (string, bool)) (string, bool) {
+	if strings.IndexByte(s, '{') < 0 {
+		return strings.TrimSpace(s), true
+	}
 	ok := true
-	out := placeholder.ReplaceAllStringFunc(s, func(m string) string {
-		v, good := value(m[1 : len(m)-1])
-		ok = ok && good
-		return v
-	})
-	return strings.TrimSpace(out), ok
+	var out strings.Builder
+	out.Grow(len(s) + 16)
+	for i := 0; i < len(s); {
+		if s[i] == '{' {
+			j := i + 1
+			for j < len(s) && fieldChar(s[j]) {
+				j++
+			}
+			if j < len(s) && s[j] == '}' {
+				v, good := value(s[i+1 : j])
+				ok = ok && good
+				out.WriteString(v)
+				i = j + 1
+				continue
+			}
+		}
+		out.WriteByte(s[i])
+		i++
+	}
+	return strings.TrimSpace(out.String()), ok
 }
 
-func (e *engine) titleBlock(value func(string) (string, bool), pos source.Position) *Box {
+// fieldChar reports whether c may be in a field name ([A-Za-z0-9_]).
+func fieldChar(c byte) bool {
+	return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c >= '0' && c <= '9' || c == '_'
+}
+
+func (e *engine) titleBlock(value func(string) (string, bool), pos source.Span) *Box {
 	tb := &e.tpl.TitleBlock
 	w := e.tpl.BodyWidth()
 	b := &Box{Kind: "title-block", Pos: pos, X: float64(e.tpl.Margin.Left), Y: float64(e.tpl.Margin.Top), W: w, H: float64(tb.Height)}
@@ -175,7 +199,7 @@ func (e *engine) titleBlock(value func(string) (string, bool), pos source.Positi
 	return b
 }
 
-func (e *engine) footer(value func(string) (string, bool), pos source.Position) *Box {
+func (e *engine) footer(value func(string) (string, bool), pos source.Span) *Box {
 	ft := e.tpl.Footer
 	w := e.tpl.BodyWidth()
 	size := float64(ft.Size)

@@ -1,6 +1,7 @@
 package layout
 
 import (
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
@@ -13,8 +14,13 @@ type Doc struct {
 	Info     Info
 	Template *Template // nil = the built-in A4 template
 	Sheets   []Sheet
+	// Bars, when set, are change bars beside what the given source lines
+	// print (bars.go).
+	Bars *Bars
 	// Progress, when set, is called after each sheet is laid out with the
-	// sheets done and the total (it does not change the pages).
+	// sheet layouts done and the total, which grows when sheets are laid
+	// out again with their page references filled in (it does not change
+	// the pages).
 	Progress func(done, total int)
 }
 
@@ -47,16 +53,16 @@ type Fields struct {
 
 // Sheet is one calc sheet: its title block fields and its body.
 type Sheet struct {
-	Pos      source.Position
+	Pos      source.Span
 	Fields   Fields
 	Bookmark string // the sheet's PDF bookmark; "" = Calc and Title
 	Blocks   []Block
 }
 
 // Block is one piece of a sheet's body. Every block carries the source
-// position problems are reported at.
+// span (Pos) problems are reported at; Where returns it.
 type Block interface {
-	Position() source.Position
+	Where() source.Span
 	isBlock()
 }
 
@@ -89,12 +95,27 @@ type Run struct {
 	Shift Shift
 	Link  string   // name of the anchor this run links to; "" = none
 	Math  eqn.Node // inline formula; replaces Text
+	// Page, when its Anchor is set, makes the run print where that anchor
+	// lands, filled in by the layout; it replaces Text.
+	Page PageRef
 	// Own marks text plinth wrote (engine notes, cautions, references,
 	// fixed wording) rather than the user. It is spelled with
 	// fonts.Spell (⅔ as 2/3); a character still missing from the fonts
 	// is plinth's defect, reported as an internal error that names
 	// plinth, never at the user's line.
 	Own bool
+}
+
+// PageRef is a page number the layout fills in once it knows where an
+// anchor lands: Prefix then the page, counted from 1 across the document
+// ("page 12", "appendix, page 40"), or with Sheet the pages of the sheet
+// holding the anchor ("3" or "3–5"). Until then (the first pass) it
+// prints Prefix and a dash ("page —"). A reference to an anchor the
+// document does not have is a problem.
+type PageRef struct {
+	Anchor string
+	Prefix string
+	Sheet  bool
 }
 
 // Align is a table column's alignment.
@@ -111,7 +132,7 @@ const (
 // next number in the sheet (1, 1.1, 1.1.1); NoNumber prints none. A
 // heading is kept on the page with what follows it.
 type Heading struct {
-	Pos      source.Position
+	Pos      source.Span
 	Level    int
 	Number   string
 	NoNumber bool
@@ -122,7 +143,7 @@ type Heading struct {
 // Para is a paragraph of text. A Small one is set in the note size, with
 // a smaller gap above it (lists of entries: references).
 type Para struct {
-	Pos   source.Position
+	Pos   source.Span
 	Runs  []Run
 	Small bool
 }
@@ -130,7 +151,7 @@ type Para struct {
 // List is a bullet list, or a numbered one from Start (0 means 1). Each
 // item is a list of blocks; lists nest.
 type List struct {
-	Pos     source.Position
+	Pos     source.Span
 	Ordered bool
 	Start   int
 	Items   [][]Block
@@ -139,17 +160,19 @@ type List struct {
 // Cell is a table cell's content.
 type Cell = []Run
 
-// Row is a table body row.
+// Row is a table body row. CellPos, when given, holds each cell's span,
+// where a problem in that cell is reported (else at the row's).
 type Row struct {
-	Pos   source.Position
-	Cells []Cell
+	Pos     source.Span
+	Cells   []Cell
+	CellPos []source.Span
 }
 
 // Table is a table with one header row, which repeats at the top of each
 // page the table runs onto. Column widths follow the content; cell text
 // wraps. Align gives each column's alignment (missing = left).
 type Table struct {
-	Pos     source.Position
+	Pos     source.Span
 	Header  []Cell
 	Rows    []Row
 	Align   []Align
@@ -162,7 +185,7 @@ type Table struct {
 // Image is a PNG or JPEG picture, scaled to fit the text width (and at
 // most Width points wide when Width > 0), with an optional caption below.
 type Image struct {
-	Pos     source.Position
+	Pos     source.Span
 	Data    []byte
 	Width   float64
 	Caption []Run
@@ -170,7 +193,7 @@ type Image struct {
 
 // Code is preformatted text in the monospaced face on a shaded ground.
 type Code struct {
-	Pos  source.Position
+	Pos  source.Span
 	Text string
 }
 
@@ -182,7 +205,7 @@ type Code struct {
 // when the formula leaves no room. A statement never splits across pages;
 // a formula too wide for the column wraps at its top-level = or +.
 type Statement struct {
-	Pos    source.Position
+	Pos    source.Span
 	Symbol eqn.Node
 	Expr   eqn.Node // the formula in symbols
 	Subst  eqn.Node // the formula with values substituted
@@ -195,7 +218,7 @@ type Statement struct {
 
 // Input is a given value: Symbol = Value, with its note and reference.
 type Input struct {
-	Pos    source.Position
+	Pos    source.Span
 	Symbol eqn.Node
 	Value  eqn.Node
 	Note   []Run
@@ -209,7 +232,7 @@ type Input struct {
 // supports them). Rel is one of ≤ ≥ < > = ≠ (or <= >= !=): the relation
 // the printed sides stand in, so a failing ≤ check is given as >.
 type Check struct {
-	Pos        source.Position
+	Pos        source.Span
 	Left       eqn.Node // the left symbol, e.g. q_Ed
 	LeftValue  eqn.Node // its value with unit
 	Rel        string
@@ -222,31 +245,12 @@ type Check struct {
 	Anchor     string // the check register links here
 }
 
-// Severity is a caution's heading word, lowest first: NOTE, CAUTION,
-// WARNING (the order of calc/trace.Severity).
-type Severity uint8
-
-const (
-	SevNote Severity = iota
-	SevCaution
-	SevWarning
-)
-
-func (s Severity) String() string {
-	switch s {
-	case SevWarning:
-		return "WARNING"
-	case SevCaution:
-		return "CAUTION"
-	}
-	return "NOTE"
-}
-
-// Caution is a boxed caution: the word NOTE, CAUTION or WARNING, an
-// optional title, and body blocks. A long one may run onto the next page.
+// Caution is a boxed caution: the word of its Severity (NOTE, CAUTION or
+// WARNING, calc/severity), an optional title, and body blocks. A long one
+// may run onto the next page.
 type Caution struct {
-	Pos      source.Position
-	Severity Severity
+	Pos      source.Span
+	Severity severity.Level
 	Title    []Run
 	Body     []Block
 }
@@ -256,34 +260,34 @@ type Caution struct {
 // the text column is scaled down to fit (Template.BodyWidth tells a
 // component the width to draw at). It never splits across pages.
 type Drawing struct {
-	Pos     source.Position
+	Pos     source.Span
 	W, H    float64
 	Items   []draw.Item
 	Caption []Run
 }
 
 // PageBreak starts a new page.
-type PageBreak struct{ Pos source.Position }
+type PageBreak struct{ Pos source.Span }
 
 // Anchor names the current place, for links.
 type Anchor struct {
-	Pos  source.Position
+	Pos  source.Span
 	Name string
 }
 
-func (b *Heading) Position() source.Position   { return b.Pos }
-func (b *Para) Position() source.Position      { return b.Pos }
-func (b *List) Position() source.Position      { return b.Pos }
-func (b *Table) Position() source.Position     { return b.Pos }
-func (b *Image) Position() source.Position     { return b.Pos }
-func (b *Code) Position() source.Position      { return b.Pos }
-func (b *Statement) Position() source.Position { return b.Pos }
-func (b *Input) Position() source.Position     { return b.Pos }
-func (b *Check) Position() source.Position     { return b.Pos }
-func (b *Caution) Position() source.Position   { return b.Pos }
-func (b *Drawing) Position() source.Position   { return b.Pos }
-func (b *PageBreak) Position() source.Position { return b.Pos }
-func (b *Anchor) Position() source.Position    { return b.Pos }
+func (b *Heading) Where() source.Span   { return b.Pos }
+func (b *Para) Where() source.Span      { return b.Pos }
+func (b *List) Where() source.Span      { return b.Pos }
+func (b *Table) Where() source.Span     { return b.Pos }
+func (b *Image) Where() source.Span     { return b.Pos }
+func (b *Code) Where() source.Span      { return b.Pos }
+func (b *Statement) Where() source.Span { return b.Pos }
+func (b *Input) Where() source.Span     { return b.Pos }
+func (b *Check) Where() source.Span     { return b.Pos }
+func (b *Caution) Where() source.Span   { return b.Pos }
+func (b *Drawing) Where() source.Span   { return b.Pos }
+func (b *PageBreak) Where() source.Span { return b.Pos }
+func (b *Anchor) Where() source.Span    { return b.Pos }
 
 func (*Heading) isBlock()   {}
 func (*Para) isBlock()      {}

@@ -34,10 +34,10 @@ type Page struct {
 // a statement, the title block. X, Y, W, H place it on the page (top-left
 // origin, y down); Items hold its primitives relative to the box's top-left
 // corner (X, Y), and Kids any boxes inside it (placed on the page in their
-// own right). Pos is the source position it came from.
+// own right). Pos is the source span it came from.
 type Box struct {
 	Kind       string
-	Pos        source.Position
+	Pos        source.Span
 	X, Y, W, H float64
 	Items      []draw.Item
 	Kids       []*Box

@@ -15,12 +15,12 @@ import (
 // Any other line (or any other block in Lines) is set as it would be
 // alone, across the whole width.
 type Steps struct {
-	Pos   source.Position
+	Pos   source.Span
 	Lines []Block
 }
 
-func (b *Steps) Position() source.Position { return b.Pos }
-func (*Steps) isBlock()                    {}
+func (b *Steps) Where() source.Span { return b.Pos }
+func (*Steps) isBlock()             {}
 
 const (
 	stepColGap  = 14.0 // between the columns of a row of short lines
@@ -30,7 +30,7 @@ const (
 // cellLine is a calculation line measured for a row of short lines.
 type cellLine struct {
 	kind   string
-	pos    source.Position
+	pos    source.Span
 	anchor string
 	line   *eqn.Box // the formula on one line
 	note   []word
@@ -91,7 +91,7 @@ func (e *engine) shortLine(b Block, width float64) (cellLine, bool) {
 		return c, false
 	}
 	half := (width - stepColGap) / 2
-	lines, err := eqn.Break(row, half, eqn.Style{Size: mathSize, Color: ink})
+	lines, err := eqn.Break(row, half, eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()})
 	if err != nil || len(lines) != 1 || lines[0].W > half {
 		return c, false // the line alone reports any problem
 	}
@@ -105,7 +105,7 @@ func noteLines(ws []word, width float64) int {
 	if len(ws) == 0 {
 		return 0
 	}
-	return len(breakLines(append([]word(nil), ws...), width, noteStyle))
+	return len(breakLines(ws, width, noteStyle))
 }
 
 // packLines sets a run of short lines in rows of three (each note beside
@@ -235,13 +235,13 @@ func (e *engine) cellRow(cs []cellLine, noteX []float64, colW, width float64) *p
 			if c.below {
 				nx, nw = stepIndent, colW-stepIndent
 			}
-			lines := breakLines(append([]word(nil), c.note...), nw, noteStyle)
+			lines := breakLines(c.note, nw, noteStyle)
 			y := base - lines[0].base
 			if c.below {
 				y = bottom + 0.5
 			}
 			for _, ln := range lines {
-				k.Items = appendOffset(k.Items, ln.items, nx, y)
+				k.Items = ln.appendItems(k.Items, nx, y)
 				y += ln.h
 			}
 			kh = math.Max(kh, y)

@@ -84,7 +84,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	var out []*piece
 	var header, pristine *piece
 	if capRuns := t.Caption; len(capRuns) > 0 {
-		st := textStyle{size: captionSize, lead: 1.3, color: muted, face: fonts.Italic}
+		st := captionStyle
 		if t.Compact {
 			st.size = noteSize
 		}
@@ -106,7 +106,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		kind := "table-header"
 		if ri > 0 {
 			kind = "row"
-			if t.Rows[ri-1].Pos.Line > 0 {
+			if t.Rows[ri-1].Pos.File != nil {
 				pos = t.Rows[ri-1].Pos
 			}
 		}
@@ -116,7 +116,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 		x := 0.0
 		for c, cw := range row {
 			inner := math.Max(widths[c]-2*cellPadX, 1)
-			lines := breakLines(append([]word(nil), cw.ws...), inner, cw.style)
+			lines := breakLines(cw.ws, inner, cw.style)
 			y := cellPadY
 			for _, ln := range lines {
 				dx := cellPadX
@@ -133,7 +133,7 @@ func (e *engine) table(t *Table, width float64) []*piece {
 				case AlignCenter:
 					dx += (inner - ln.w) / 2
 				}
-				cells = appendOffset(cells, ln.items, x+dx, y)
+				cells = ln.appendItems(cells, x+dx, y)
 				y += ln.h
 			}
 			h = math.Max(h, y+cellPadY)
@@ -293,7 +293,7 @@ func (e *engine) measureTable(t *Table) *measured {
 			continue
 		}
 		pos := t.Pos
-		if ri > 0 && t.Rows[ri-1].Pos.Line > 0 {
+		if ri > 0 && t.Rows[ri-1].Pos.File != nil {
 			pos = t.Rows[ri-1].Pos
 		}
 		st := look.cell
@@ -303,7 +303,11 @@ func (e *engine) measureTable(t *Table) *measured {
 		row := make([]cellWords, ncol)
 		for c := 0; c < ncol; c++ {
 			if c < len(cells) {
-				row[c] = cellWords{e.words(cells[c], st, pos), st}
+				at := pos
+				if ri > 0 && c < len(t.Rows[ri-1].CellPos) && t.Rows[ri-1].CellPos[c].File != nil {
+					at = t.Rows[ri-1].CellPos[c]
+				}
+				row[c] = cellWords{e.words(cells[c], st, at), st}
 			} else {
 				row[c] = cellWords{style: st}
 			}

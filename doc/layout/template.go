@@ -14,7 +14,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"github.com/plinth-calc/plinth/doc/sheet"
+	"github.com/plinth-calc/plinth/internal/suggest"
 	"github.com/plinth-calc/plinth/templates"
 )
 
@@ -24,7 +24,7 @@ type Length float64
 
 // UnmarshalYAML reads a length with its unit.
 func (l *Length) UnmarshalYAML(n *yaml.Node) error {
-	v, err := ParseLength(n.Value)
+	v, err := parseLength(n.Value)
 	if err != nil {
 		return fmt.Errorf("line %d: %v", n.Line, err)
 	}
@@ -32,9 +32,9 @@ func (l *Length) UnmarshalYAML(n *yaml.Node) error {
 	return nil
 }
 
-// ParseLength reads "12mm", "1.5cm", "0.5in", "9pt" or a bare number of
+// parseLength reads "12mm", "1.5cm", "0.5in", "9pt" or a bare number of
 // points, and returns points.
-func ParseLength(s string) (float64, error) {
+func parseLength(s string) (float64, error) {
 	s = strings.TrimSpace(s)
 	unit := 1.0
 	for _, u := range []struct {
@@ -146,9 +146,6 @@ func (t *Template) body() (x, y, w, h float64) {
 	return
 }
 
-// BuiltinTemplates lists the names of the built-in templates.
-func BuiltinTemplates() []string { return templates.PageNames() }
-
 // BuiltinTemplate returns a built-in template by name ("a4", "letter").
 func BuiltinTemplate(name string) (*Template, error) {
 	data, err := templates.Page(name)
@@ -202,7 +199,7 @@ func fieldHint(name string) string {
 		names = append(names, n)
 	}
 	sort.Strings(names)
-	if n, ok := sheet.Nearest(name, names); ok {
+	if n, ok := suggest.Nearest(name, names); ok {
 		return "did you mean {" + n + "}?"
 	}
 	return "fields are: " + strings.Join(names, ", ")

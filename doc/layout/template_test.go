@@ -11,12 +11,14 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
+	sheetmodel "github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/templates"
 )
 
 func TestBuiltinTemplates(t *testing.T) {
-	if got := strings.Join(layout.BuiltinTemplates(), ","); got != "a4,letter" {
-		t.Errorf("built-in templates %q", got)
+	// the names the parser accepts are the templates built in
+	if got, want := strings.Join(templates.PageNames(), ","), strings.Join(sheetmodel.Templates, ","); got != want || got != "a4,letter" {
+		t.Errorf("built-in templates %q, the sheet model knows %q", got, want)
 	}
 	for _, tt := range []struct {
 		name string
@@ -31,8 +33,8 @@ func TestBuiltinTemplates(t *testing.T) {
 		}
 		doc := sheet(para(2, "x"))
 		doc.Template = tpl
-		if _, err := layout.Document(doc); err != nil {
-			t.Errorf("%s: %v", tt.name, err)
+		if _, diags := layout.Document(doc); diags.HasErrors() {
+			t.Errorf("%s: %v", tt.name, diags)
 		}
 	}
 	if _, err := layout.BuiltinTemplate("a3"); err == nil {
@@ -102,9 +104,9 @@ func TestTemplateLogo(t *testing.T) {
 	}
 	doc := sheet(para(2, "x"))
 	doc.Template = tpl
-	p, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	found := false
 	for _, it := range p.Pages[0].Boxes[0].Items {

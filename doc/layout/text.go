@@ -43,13 +43,13 @@ type textStyle struct {
 // frag is a stretch of one word in one face, or one inline formula.
 type frag struct {
 	text  string
-	face  fonts.Face
+	link  string
 	size  float64
 	rise  float64 // baseline shift, up
-	color draw.Color
-	link  string
 	w     float64
 	math  *eqn.Box // an inline formula (text then holds a lone number's digits, else "")
+	face  fonts.Face
+	color draw.Color
 }
 
 // word is what the line breaker moves: frags with no break opportunity
@@ -61,10 +61,11 @@ type word struct {
 	hard  bool    // a forced line break follows
 }
 
-// line is a set line: items relative to the left end of its baseline.
+// line is a set line: its words, measured; appendItems draws them.
 type line struct {
 	w, h, base float64 // width, height, baseline from the top
-	items      []draw.Item
+	ws         []word
+	st         textStyle
 }
 
 func (st textStyle) faceOf(s Style) fonts.Face {
@@ -89,12 +90,29 @@ func (st textStyle) faceOf(s Style) fonts.Face {
 }
 
 // words cuts runs into words, checking every character against its font.
-func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
-	var ws []word
+func (e *engine) words(runs []Run, st textStyle, pos source.Span) []word {
+	// at most one word and one frag a run and a separator (the room
+	// asked of the chunks; more only if spelling adds spaces)
+	n := 0
+	for _, r := range runs {
+		n++
+		for i := 0; i < len(r.Text); i++ {
+			switch r.Text[i] {
+			case ' ', '\t', '\r', '\n':
+				n++
+			}
+		}
+	}
+	sp := e.space()
+	ws := sp.words(n)
+	// the frags of every word, each word's a full slice of its own part
+	frags := sp.frags(n)
 	var cur word
+	from := 0 // where cur's frags begin in frags
 	open := false
 	end := func(space float64, hard bool) {
 		if open || hard {
+			cur.frags = frags[from:len(frags):len(frags)]
 			cur.space, cur.hard = space, hard
 			if !open && len(ws) > 0 && hard { // a break right after a space
 				ws[len(ws)-1].hard = true
@@ -105,6 +123,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			ws[len(ws)-1].space = space
 		}
 		cur, open = word{}, false
+		from = len(frags)
 	}
 	for _, r := range runs {
 		color := st.color
@@ -112,7 +131,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			color = linkInk
 		}
 		if r.Math != nil {
-			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color})
+			b, err := eqn.Layout(r.Math, eqn.Style{Size: st.size, Color: color, Texts: e.texts()})
 			if err != nil {
 				e.mathProblem(pos, r.Own, err)
 				continue
@@ -121,7 +140,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			if n, ok := leadNum(r.Math); ok {
 				fr.text, fr.face = n, fonts.Regular // a number (with its unit): its digits, for decimal alignment
 			}
-			cur.frags = append(cur.frags, fr)
+			frags = append(frags, fr)
 			cur.w += b.W
 			open = true
 			continue
@@ -139,6 +158,9 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 		}
 		f := fonts.Get(face)
 		text := r.Text
+		if r.Page.Anchor != "" {
+			text = e.pageText(r.Page, pos)
+		}
 		if r.Own {
 			text = e.ownGlyphs(text, face, pos)
 		} else {
@@ -150,7 +172,7 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 			if i > start {
 				s := text[start:i]
 				w := f.Width(s, size)
-				cur.frags = append(cur.frags, frag{text: s, face: face, size: size, rise: rise, color: color, link: r.Link, w: w})
+				frags = append(frags, frag{text: s, face: face, size: size, rise: rise, color: color, link: r.Link, w: w})
 				cur.w += w
 				open = true
 			}
@@ -172,11 +194,12 @@ func (e *engine) words(runs []Run, st textStyle, pos source.Position) []word {
 	if open {
 		end(0, false)
 	}
-	return ws
+	sp.used(ws, frags)
+	return ws[:len(ws):len(ws)]
 }
 
 // checkGlyphs reports each character the face lacks and drops it.
-func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) string {
+func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Span) string {
 	f := fonts.Get(face)
 	r, bad := f.Missing(strings.Map(func(r rune) rune {
 		if r == '\n' || r == '\t' || r == '\r' {
@@ -187,7 +210,7 @@ func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) str
 	if !bad {
 		return s
 	}
-	e.probs.add(pos, "character %q (U+%04X) in %q is not in font %s", r, r, excerpt(s, r), face)
+	e.diags.Add(pos, "character %q (U+%04X) in %q is not in font %s", r, r, excerpt(s, r), face)
 	return strings.Map(func(c rune) rune {
 		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
 			return c
@@ -199,7 +222,7 @@ func (e *engine) checkGlyphs(s string, face fonts.Face, pos source.Position) str
 // ownGlyphs spells plinth's own text for the face (fonts.Spell) and
 // reports any character still missing as an internal error of plinth,
 // naming the block only as the place it was printed for.
-func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) string {
+func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Span) string {
 	s = fonts.Spell(s, face)
 	f := fonts.Get(face)
 	r, bad := f.Missing(strings.Map(func(r rune) rune {
@@ -215,7 +238,7 @@ func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) strin
 	if p := pos.String(); p != "" {
 		where = " (in the printout of " + p + ")"
 	}
-	e.probs.add(source.Position{}, "internal error in plinth: plinth's own text %q has character %q (U+%04X), which font %s lacks%s; this is a defect of plinth, not of the input", excerpt(s, r), r, r, face, where)
+	e.diags.Add(source.Span{}, "internal error in plinth: plinth's own text %q has character %q (U+%04X), which font %s lacks%s; this is a defect of plinth, not of the input", excerpt(s, r), r, r, face, where)
 	return strings.Map(func(c rune) rune {
 		if c == '\n' || c == '\t' || c == '\r' || f.Has(c) {
 			return c
@@ -226,16 +249,16 @@ func (e *engine) ownGlyphs(s string, face fonts.Face, pos source.Position) strin
 
 // mathProblem reports a formula that cannot be set: at pos, or, for
 // plinth's own formula, as an internal error of plinth.
-func (e *engine) mathProblem(pos source.Position, own bool, err error) {
+func (e *engine) mathProblem(pos source.Span, own bool, err error) {
 	if !own {
-		e.probs.add(pos, "%v", err)
+		e.diags.Add(pos, "%v", err)
 		return
 	}
 	where := ""
 	if p := pos.String(); p != "" {
 		where = " (in the printout of " + p + ")"
 	}
-	e.probs.add(source.Position{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
+	e.diags.Add(source.Span{}, "internal error in plinth: its own formula cannot be set: %v%s; this is a defect of plinth, not of the input", err, where)
 }
 
 // excerpt is up to 40 characters of s around the first r.
@@ -266,45 +289,75 @@ func excerpt(s string, r rune) string {
 // characters of the text.
 func breakLines(ws []word, width float64, st textStyle) []line {
 	var lines []line
-	var cur []word
+	// The line being filled: lead (the rest of a word split at the end of
+	// the line before) when leadIn, then the whole words ws[from:to]. A
+	// line of whole words only is set from ws itself, not a copy.
+	from, to := 0, 0
+	var lead, pend word // pend: the rest of a split word, still to place
+	leadIn, hasPend := false, false
 	x := 0.0
-	flush := func() {
-		lines = append(lines, setLine(cur, st))
-		cur, x = nil, 0
-	}
-	for i := 0; i < len(ws); i++ {
-		w := ws[i]
-		gap := 0.0
-		if len(cur) > 0 {
-			gap = cur[len(cur)-1].space
+	flush := func(head *word) {
+		lw := ws[from:to:to]
+		if leadIn || head != nil {
+			lw = make([]word, 0, to-from+2)
+			if leadIn {
+				lw = append(lw, lead)
+			}
+			lw = append(lw, ws[from:to]...)
+			if head != nil {
+				lw = append(lw, *head)
+			}
 		}
+		lines = append(lines, setLine(lw, st))
+		from, x, leadIn = to, 0, false
+	}
+	place := func(w word, isPend bool) {
+		if isPend {
+			lead, leadIn, hasPend = w, true, false
+		} else {
+			to++
+		}
+	}
+	for hasPend || to < len(ws) {
+		w, isPend := pend, hasPend
+		if !isPend {
+			w = ws[to]
+		}
+		gap := 0.0
+		if to > from {
+			gap = ws[to-1].space
+		} else if leadIn {
+			gap = lead.space
+		}
+		empty := to == from && !leadIn
 		switch {
 		case x+gap+w.w <= width+1e-9:
-			cur = append(cur, w)
+			place(w, isPend)
 			x += gap + w.w
-		case len(cur) > 0:
-			flush()
-			i--
+		case !empty:
+			flush(nil)
 			continue
 		default: // alone and too long: split it
 			head, tail, ok := splitWord(w, width)
 			if !ok { // nothing to split: set it as it is
-				cur = append(cur, w)
+				place(w, isPend)
 				x += w.w
 				break
 			}
-			cur = append(cur, head)
-			flush()
-			ws[i] = tail
-			i--
+			flush(&head)
+			if !isPend {
+				to++ // its head is set, its tail comes next
+				from = to
+			}
+			pend, hasPend = tail, true
 			continue
 		}
 		if w.hard {
-			flush()
+			flush(nil)
 		}
 	}
-	if len(cur) > 0 || len(lines) == 0 {
-		flush()
+	if to > from || leadIn || len(lines) == 0 {
+		flush(nil)
 	}
 	return lines
 }
@@ -402,13 +455,11 @@ done:
 	return head, tail, true
 }
 
-// setLine places words on a line and measures it. Items are relative to
-// the top-left of the line; the baseline is at ln.base.
+// setLine measures a line of words; appendItems places them.
 func setLine(ws []word, st textStyle) line {
 	f := fonts.Get(st.face)
 	asc, desc := f.Ascent(st.size), f.Descent(st.size)
 	leading := st.lead*st.size - asc - desc
-	textAsc := asc
 	for _, w := range ws { // inline formulas may make the line taller
 		for _, fr := range w.frags {
 			if fr.math != nil {
@@ -417,22 +468,55 @@ func setLine(ws []word, st textStyle) line {
 			}
 		}
 	}
-	var ln line
+	ln := line{ws: ws, st: st}
 	ln.h = math.Max(st.lead*st.size, asc+desc+leading)
 	ln.base = leading/2 + asc
+	x := 0.0
+	for i, w := range ws {
+		for _, fr := range w.frags {
+			x += fr.w
+		}
+		if i < len(ws)-1 {
+			x += w.space
+		}
+	}
+	ln.w = x
+	return ln
+}
+
+// appendItems appends the line's primitives to dst with the top-left of
+// the line at (dx, dy), and returns the extended slice. Consecutive words
+// in one face, size, colour and baseline, a space apart, are one text
+// item.
+func (ln *line) appendItems(dst []draw.Item, dx, dy float64) []draw.Item {
+	st := ln.st
+	f := fonts.Get(st.face)
+	textAsc := f.Ascent(st.size)
 	base := ln.base
 	x := 0.0
 	var linkTarget string
 	var linkX float64
 	closeLink := func(at float64) {
 		if linkTarget != "" {
-			ln.items = append(ln.items, draw.Link{X: linkX, Y: base - textAsc, W: at - linkX, H: textAsc + f.Descent(st.size), Target: linkTarget})
+			dst = append(dst, draw.Link{X: linkX + dx, Y: base - textAsc + dy, W: at - linkX, H: textAsc + f.Descent(st.size), Target: linkTarget})
 		}
 		linkTarget = ""
 	}
-	lastText := -1 // index in ln.items of a text item the next frag may extend
-	pending := ""  // the space between that item and the next frag
-	for i, w := range ws {
+	lastText := -1 // index in dst of the text item the next frag may extend (cur)
+	var cur draw.Text
+	var curY float64  // cur's baseline before the move by dy
+	var joined []byte // cur's text once words are joined to it
+	closeText := func() {
+		if lastText >= 0 {
+			if joined != nil {
+				cur.Text = string(joined)
+			}
+			dst[lastText] = cur
+		}
+		lastText, joined = -1, nil
+	}
+	pending := false // a space between cur and the next frag
+	for i, w := range ln.ws {
 		for _, fr := range w.frags {
 			if fr.link != linkTarget {
 				closeLink(x)
@@ -441,47 +525,48 @@ func setLine(ws []word, st textStyle) line {
 				}
 			}
 			if fr.math != nil {
-				ln.items = fr.math.AppendItems(ln.items, x, base)
-				lastText = -1
+				closeText()
+				dst = fr.math.AppendItemsThen(dst, x, base, dx, dy)
 			} else {
-				t := draw.Text{X: x, Y: base - fr.rise, Face: fr.face, Size: fr.size, Color: fr.color, Text: fr.text}
-				if lastText >= 0 {
-					prev := ln.items[lastText].(draw.Text)
-					if prev.Face == t.Face && prev.Size == t.Size && prev.Color == t.Color && prev.Y == t.Y {
-						prev.Text += pending + t.Text
-						ln.items[lastText] = prev
-						t.Text = ""
+				y := base - fr.rise
+				t := draw.Text{X: x + dx, Y: y + dy, Face: fr.face, Size: fr.size, Color: fr.color, Text: fr.text}
+				if lastText >= 0 && cur.Face == t.Face && cur.Size == t.Size && cur.Color == t.Color && curY == y {
+					if joined == nil {
+						joined = append(make([]byte, 0, 2*len(cur.Text)+len(t.Text)+8), cur.Text...)
 					}
+					if pending {
+						joined = append(joined, ' ')
+					}
+					joined = append(joined, t.Text...)
+				} else if t.Text != "" {
+					closeText()
+					cur, curY, lastText = t, y, len(dst)
+					dst = append(dst, nil) // cur's place, filled when it closes
 				}
-				if t.Text != "" {
-					ln.items = append(ln.items, t)
-					lastText = len(ln.items) - 1
-				}
-				pending = ""
+				pending = false
 			}
 			x += fr.w
 		}
-		if i < len(ws)-1 {
+		if i < len(ln.ws)-1 {
 			x += w.space
 			// a gap of exactly one space of the last face keeps the text
 			// item open; any other gap closes it
 			if lastText >= 0 {
-				prev := ln.items[lastText].(draw.Text)
-				if sp := fonts.Get(prev.Face).Width(" ", prev.Size); math.Abs(sp-w.space) < 1e-9 {
-					pending = " "
+				if sp := fonts.Get(cur.Face).Width(" ", cur.Size); math.Abs(sp-w.space) < 1e-9 {
+					pending = true
 				} else {
-					lastText = -1
+					closeText()
 				}
 			}
 		}
 	}
+	closeText()
 	closeLink(x)
-	ln.w = x
-	return ln
+	return dst
 }
 
 // setText breaks runs into lines of at most width.
-func (e *engine) setText(runs []Run, width float64, st textStyle, pos source.Position) []line {
+func (e *engine) setText(runs []Run, width float64, st textStyle, pos source.Span) []line {
 	return breakLines(e.words(runs, st, pos), width, st)
 }
 

@@ -13,8 +13,8 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-// ConfigName is the name of the package settings file.
-const ConfigName = "package.yaml"
+// configName is the name of the package settings file.
+const configName = "package.yaml"
 
 // Package is a package's source files as read from disk.
 type Package struct {
@@ -115,10 +115,10 @@ func Path(p string) (*Package, source.List) {
 	}
 	// Every file is read through ReadInside: a sheet or package.yaml that
 	// is a symbolic link to a file outside the package folder is refused.
-	if text, err := pkg.ReadInside(ConfigName); err == nil {
-		pkg.Config = source.NewFile(join(ConfigName), text)
+	if text, err := pkg.ReadInside(configName); err == nil {
+		pkg.Config = source.NewFile(join(configName), text)
 	} else if !errors.Is(err, fs.ErrNotExist) {
-		fail(join(ConfigName), "cannot read: %s", describe(err))
+		fail(join(configName), "cannot read: %s", describe(err))
 	}
 	if _, err := os.Stat(join("package.yml")); err == nil {
 		diags = append(diags, source.Diagnostic{Severity: source.Warning, Path: join("package.yml"),

@@ -14,8 +14,10 @@ import (
 	"github.com/yuin/goldmark/text"
 	"github.com/yuin/goldmark/util"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 var (
@@ -318,15 +320,10 @@ func (c *conv) quote(n *ast.Blockquote) sheet.Block {
 	ms := l0.Start + bytes.IndexByte(raw, '[')
 	mark := c.span(ms, ms+len(g[0]))
 	word := strings.ToUpper(string(g[1]))
-	kind := -1
-	for i, a := range sheet.Alerts {
-		if a == word {
-			kind = i
-		}
-	}
-	if kind < 0 {
+	kind, known := severity.Parse(word)
+	if !known {
 		hint := "write > [!WARNING], > [!CAUTION] or > [!NOTE] (highest severity first)"
-		if s, ok := sheet.Nearest(word, sheet.Alerts); ok {
+		if s, ok := suggest.Nearest(word, severity.Words); ok {
 			hint = "did you mean [!" + s + "]?"
 		}
 		c.diags.AddHint(mark, hint, "unknown caution [!%s]", g[1])
@@ -351,5 +348,5 @@ func (c *conv) quote(n *ast.Blockquote) sheet.Block {
 			}
 		}
 	}
-	return &sheet.Caution{Span: sp, Kind: sheet.Alert(kind), KindSpan: mark, Body: body}
+	return &sheet.Caution{Span: sp, Kind: kind, KindSpan: mark, Body: body}
 }

@@ -7,7 +7,7 @@
 // Entry points, one per stage input:
 //
 //	Sheet(f)   one sheet file      → *sheet.Sheet
-//	Config(f)  a package.yaml file → sheet.Meta
+//	config(f)  a package.yaml file → sheet.Meta
 //	Package(p) a loaded package    → *sheet.Package (sheets, settings, cross-checks)
 //
 // Every problem is collected, not just the first, as source diagnostics

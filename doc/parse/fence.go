@@ -1,14 +1,16 @@
 package parse
 
 import (
-	"github.com/plinth-calc/plinth/doc/expr"
 	"regexp"
 	"strings"
 
 	"github.com/yuin/goldmark/ast"
 
+	spec "github.com/plinth-calc/plinth/calc/kind"
+	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // word is a word of a fence's info string, at body offsets [start, end).
@@ -102,7 +104,7 @@ func (c *conv) fenced(n *ast.FencedCodeBlock) sheet.Block {
 		return &sheet.Footing{Span: sp, Name: h.name, Lines: b.lines, Table: b.table}
 	}
 	return &sheet.Analysis{Span: sp, Kind: kind, KindSpan: c.span(ws[0].start, ws[0].end),
-		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, To: h.to, Lines: b.lines}
+		Footing: h.footing, Ground: h.ground, Prefix: h.prefix, To: h.to, Lines: b.lines, Table: b.table}
 }
 
 // container names what an unclosed fence runs to the end of.
@@ -113,18 +115,10 @@ func (c *conv) container() string {
 	return "file"
 }
 
-// nearKind returns the block word w is one edit (or a letter case) away
-// from, or "".
+// nearKind returns the block word nearest to w (internal/suggest), or "".
 func nearKind(w string) string {
-	if len(w) < 3 {
-		return ""
-	}
-	for _, k := range sheet.Kinds {
-		if strings.EqualFold(w, k) || sheet.Distance(w, k) == 1 {
-			return k
-		}
-	}
-	return ""
+	k, _ := suggest.Nearest(w, sheet.Kinds)
+	return k
 }
 
 // looksPlinth reports whether the text of an unnamed code block reads as
@@ -190,21 +184,28 @@ func (c *conv) header(kind sheet.Kind, ws []word) header {
 		i++
 		return true
 	}
-	switch kind {
-	case sheet.KindCalc:
-	case sheet.KindGround:
-		h.name, _ = take("a ground model name", "ground")
-	case sheet.KindFooting:
-		h.name, _ = take("a footing name", "footing")
+	switch kind.Spec().Header {
+	case spec.Bare:
+	case spec.Named:
+		what := "a " + kind.String() + " name"
+		if kind == sheet.KindGround {
+			what = "a ground model name"
+		}
+		h.name, _ = take(what, kind.String())
 	default:
 		form := "write " + kind.String() + " FOOTING on GROUND [as PREFIX]"
 		kw, second, dst := "on", "a ground model name", &h.ground
-		if kind == sheet.KindDifferential {
-			form = "write differential FOOTING to FOOTING [as PREFIX]"
+		if kind.Spec().Header == spec.To {
+			form = "write " + kind.String() + " FOOTING to FOOTING [as PREFIX]"
 			kw, second, dst = "to", "a footing name", &h.to
 		}
 		var ok bool
-		if h.footing, ok = take("a footing name", kind.String()); !ok {
+		first := "a footing name"
+		if kind.Spec().Header == spec.NamedOn {
+			form = "write " + kind.String() + " NAME on GROUND [as PREFIX]"
+			first = "a " + kind.String() + " name"
+		}
+		if h.footing, ok = take(first, kind.String()); !ok {
 			return h
 		}
 		if !keyword(kw, form) {

@@ -11,10 +11,11 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
-// Config parses a package.yaml file into the package settings.
-func Config(f *source.File) (sheet.Meta, source.List) {
+// config parses a package.yaml file into the package settings.
+func config(f *source.File) (sheet.Meta, source.List) {
 	var diags source.List
 	if !utf8.Valid(f.Text) {
 		checkText(f, &diags)
@@ -165,7 +166,7 @@ func decodeMeta(f *source.File, start, end int, pkg bool, diags *source.List) sh
 				keys = packageKeys()
 			}
 			hint := "known keys: " + strings.Join(keys, ", ")
-			if s, ok := sheet.Nearest(key, keys); ok {
+			if s, ok := suggest.Nearest(key, keys); ok {
 				hint = "did you mean " + strconv.Quote(s) + "?"
 			}
 			diags.AddHint(ks, hint, "unknown key %q in %s", key, d.where())
@@ -306,7 +307,7 @@ func (d *yamlDoc) revisions(n *yaml.Node) []sheet.Revision {
 				dst = &r.Note
 			default:
 				hint := "a revision has rev, date, by, checked and note"
-				if s, ok := sheet.Nearest(k.Value, sheet.RevisionKeys); ok {
+				if s, ok := suggest.Nearest(k.Value, sheet.RevisionKeys); ok {
 					hint = "did you mean " + strconv.Quote(s) + "?"
 				}
 				d.diags.AddHint(ks, hint, "unknown key %q in a revision", k.Value)

@@ -13,6 +13,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/parse"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
@@ -55,20 +56,7 @@ func TestGolden(t *testing.T) {
 				t.Errorf("a good package has errors:\n%v", diags)
 			}
 			got := dumpPackage(pkg, diags)
-			golden := dir + ".golden"
-			if *update {
-				if err := os.WriteFile(golden, got, 0o644); err != nil {
-					t.Fatal(err)
-				}
-				return
-			}
-			want, err := os.ReadFile(golden)
-			if err != nil {
-				t.Fatalf("%v (run go test -update to create it)", err)
-			}
-			if !bytes.Equal(got, want) {
-				t.Errorf("tree differs from %s (go test -update rewrites it; read the diff):\n%s", golden, diff(string(want), string(got)))
-			}
+			golden.Compare(t, dir+".golden", got, *update)
 		})
 	}
 	if n == 0 {
@@ -76,7 +64,7 @@ func TestGolden(t *testing.T) {
 	}
 }
 
-// diff lists the first differing lines.
+// diff lists the first differing lines of two trees.
 func diff(want, got string) string {
 	w, g := strings.Split(want, "\n"), strings.Split(got, "\n")
 	var b strings.Builder

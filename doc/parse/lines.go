@@ -6,6 +6,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // blockLines collects the lines of one plinth block.
@@ -60,7 +61,7 @@ func (b *blockLines) line(text string, off int) {
 // tableLine takes a line starting with '|'.
 func (b *blockLines) tableLine(l rawLine, ts, te int) {
 	switch b.kind {
-	case sheet.KindGround, sheet.KindFooting:
+	case sheet.KindGround, sheet.KindFooting, sheet.KindSchedule:
 	default:
 		if len(b.run) == 0 {
 			what := "statements and checks"
@@ -137,7 +138,7 @@ func (b *blockLines) wordOption(text string, off int) bool {
 		return true
 	}
 	if nameRE.MatchString(value) {
-		if near, ok := sheet.Nearest(name, sheet.OptionNames(b.kind)); ok {
+		if near, ok := suggest.Nearest(name, sheet.OptionNames(b.kind)); ok {
 			s := off + strings.Index(text, name)
 			b.c.diags.AddHint(b.span(s, s+len(name)), "did you mean "+quote(near)+"?", "unknown %s option %q", b.kind, name)
 			return true
@@ -163,7 +164,7 @@ func (b *blockLines) option(text string, off int) {
 		if len(names) == 0 {
 			hint = "a " + b.kind.String() + " block takes statements only"
 		}
-		if near, ok := sheet.Nearest(name, names); ok {
+		if near, ok := suggest.Nearest(name, names); ok {
 			hint = "did you mean " + quote(near) + "?"
 		}
 		b.c.diags.AddHint(ks, hint, "unknown %s option %q", b.kind, name)

@@ -12,6 +12,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/suggest"
 )
 
 // Package parses a loaded package: package.yaml, then every sheet in
@@ -23,7 +24,7 @@ func Package(p *load.Package) (*sheet.Package, source.List) {
 	var diags source.List
 	pkg := &sheet.Package{Dir: p.Dir, Files: p.Files(), Inside: p}
 	if p.Config != nil {
-		m, d := Config(p.Config)
+		m, d := config(p.Config)
 		pkg.Meta = m
 		diags.Append(d)
 	}
@@ -98,7 +99,7 @@ type checker struct {
 func (ck *checker) meta(m *sheet.Meta) {
 	if t := m.Template; t.IsSet() && !contains(sheet.Templates, t.Value) {
 		hint := "a built-in template (" + strings.Join(sheet.Templates, ", ") + ") or a file inside the package folder"
-		if near, ok := sheet.Nearest(t.Value, sheet.Templates); ok {
+		if near, ok := suggest.Nearest(t.Value, sheet.Templates); ok {
 			hint = "did you mean " + quote(near) + "?"
 		}
 		ck.file(t, "template", hint)
@@ -206,7 +207,7 @@ func (ck *checker) uses(s *sheet.Sheet) {
 		case contains(names, u.Value):
 		case ck.p.Single:
 			hint := "uses lists file names of the other sheets in this sheet's folder"
-			if near, ok := sheet.Nearest(u.Value, contextNames(ck.p)); ok {
+			if near, ok := suggest.Nearest(u.Value, contextNames(ck.p)); ok {
 				hint = "did you mean " + quote(near) + "?"
 			}
 			ck.diags.AddHint(u.Span, hint, "no sheet %q in this sheet's folder", u.Value)
@@ -214,7 +215,7 @@ func (ck *checker) uses(s *sheet.Sheet) {
 			hint := "uses lists file names of the package's other sheets: " + strings.Join(others, ", ")
 			if contains(others, u.Value+".md") {
 				hint = "did you mean " + quote(u.Value+".md") + "?"
-			} else if near, ok := sheet.Nearest(u.Value, others); ok {
+			} else if near, ok := suggest.Nearest(u.Value, others); ok {
 				hint = "did you mean " + quote(near) + "?"
 			}
 			ck.diags.AddHint(u.Span, hint, "no sheet %q in this package", u.Value)

@@ -6,11 +6,11 @@ import (
 	"io"
 	"testing"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 	"github.com/plinth-calc/plinth/doc/pdf"
-	"github.com/plinth-calc/plinth/doc/source"
 )
 
 // bigDoc is a generated package of about 10 pages per sheet: prose,
@@ -27,15 +27,13 @@ func bigDoc(sheets int) layout.Doc {
 	prose := "The footing is founded in firm clay below the made ground; the groundwater table lies above the underside, so effective stresses are used throughout and the buoyant unit weight below the water table. "
 	var out []layout.Sheet
 	for s := 0; s < sheets; s++ {
-		pos := func(l int) source.Position {
-			return source.Position{Path: fmt.Sprintf("%02d.md", s+1), Line: l, Col: 1}
-		}
+		pos := lines(fmt.Sprintf("%02d.md", s+1))
 		var bs []layout.Block
 		for sec := 0; sec < 6; sec++ {
 			bs = append(bs, &layout.Heading{Pos: pos(sec * 100), Level: 1, Runs: []layout.Run{txt(fmt.Sprintf("Section %d", sec+1))}})
 			bs = append(bs, &layout.Para{Pos: pos(sec*100 + 1), Runs: []layout.Run{txt(prose + prose), {Text: "Bold words", Style: layout.Bold}, txt(" and " + prose)}})
 			for i := 0; i < 14; i++ {
-				bs = append(bs, &layout.Statement{Pos: pos(sec*100 + 2 + i), Symbol: sym(fmt.Sprintf("q_ult_%d", i)), Expr: eqn.FromExpr(e, eqn.Options{}),
+				bs = append(bs, &layout.Statement{Pos: pos(sec*100 + 2 + i), Symbol: sym(fmt.Sprintf("q_ult_%d", i)), Expr: conv(e, nil),
 					Subst: v.subst(e), Result: q("473", "kPa"), Note: []layout.Run{txt("drained bearing resistance")}, Ref: "EN 1997-1 D.4"})
 			}
 			bs = append(bs, &layout.Check{Pos: pos(sec*100 + 20), Left: sym("V_d"), LeftValue: q("1883", "kN"), Rel: "<=", Right: sym("R_d"),
@@ -47,7 +45,7 @@ func bigDoc(sheets int) layout.Doc {
 		}
 		bs = append(bs, &layout.Table{Pos: pos(699), Header: []layout.Cell{{txt("Layer")}, {txt("Description")}, {txt("γ (kN/m³)")}, {txt("c_u (kPa)")}},
 			Align: []layout.Align{0, 0, layout.AlignRight, layout.AlignRight}, Rows: rows})
-		bs = append(bs, &layout.Caution{Pos: pos(800), Severity: layout.SevNote, Body: []layout.Block{&layout.Para{Pos: pos(801), Runs: []layout.Run{txt(prose)}}}})
+		bs = append(bs, &layout.Caution{Pos: pos(800), Severity: severity.Note, Body: []layout.Block{&layout.Para{Pos: pos(801), Runs: []layout.Run{txt(prose)}}}})
 		f := d.Sheets[1].Fields
 		f.Calc = fmt.Sprintf("C-%02d", s+1)
 		out = append(out, layout.Sheet{Pos: pos(1), Fields: f, Blocks: bs})
@@ -57,9 +55,9 @@ func bigDoc(sheets int) layout.Doc {
 }
 
 func TestBigDocPages(t *testing.T) {
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	t.Logf("%d pages", len(p.Pages))
 	if len(p.Pages) < 200 { // the house style sets about 9 pages a sheet
@@ -73,9 +71,9 @@ func BenchmarkRender(b *testing.B) {
 	doc := bigDoc(25)
 	b.ReportAllocs()
 	for b.Loop() {
-		p, err := layout.Document(doc)
-		if err != nil {
-			b.Fatal(err)
+		p, diags := layout.Document(doc)
+		if diags.HasErrors() {
+			b.Fatal(diags)
 		}
 		if err := pdf.Write(io.Discard, p, pdf.Options{Time: when}); err != nil {
 			b.Fatal(err)
@@ -87,16 +85,16 @@ func BenchmarkLayout(b *testing.B) {
 	doc := bigDoc(25)
 	b.ReportAllocs()
 	for b.Loop() {
-		if _, err := layout.Document(doc); err != nil {
-			b.Fatal(err)
+		if _, diags := layout.Document(doc); diags.HasErrors() {
+			b.Fatal(diags)
 		}
 	}
 }
 
 func BenchmarkWrite(b *testing.B) {
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		b.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		b.Fatal(diags)
 	}
 	b.ReportAllocs()
 	for b.Loop() {
@@ -114,9 +112,9 @@ func TestBigRender(t *testing.T) {
 	if !*big {
 		t.Skip("run with -big")
 	}
-	p, err := layout.Document(bigDoc(25))
-	if err != nil {
-		t.Fatal(err)
+	p, diags := layout.Document(bigDoc(25))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var n countWriter
 	if err := pdf.Write(&n, p, pdf.Options{Time: when}); err != nil {

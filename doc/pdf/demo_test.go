@@ -3,12 +3,15 @@ package pdf_test
 import (
 	"bytes"
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/units"
 	"image"
 	"image/color"
 	"image/jpeg"
 	"image/png"
 	"math"
+	"strings"
 
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -20,7 +23,14 @@ import (
 // The demo package: an invented site, firm and footing, for looking at the
 // output as a user would.
 
-func at(line int) source.Position { return source.Position{Path: "02-bearing.md", Line: line, Col: 1} }
+// lines is a stand-in source file of the given name: a span at the start
+// of each line prints as name:line:1.
+func lines(name string) func(line int) source.Span {
+	f := source.NewFile(name, []byte(strings.Repeat("\n", 2000)))
+	return func(line int) source.Span { return source.Span{File: f, Start: f.LineStart(line)} }
+}
+
+var at = lines("02-bearing.md")
 
 func q(num, unit string) eqn.Node { return eqn.Quantity(num, unit) }
 
@@ -28,12 +38,82 @@ func sym(s string) eqn.Node { return eqn.Sym{Name: s} }
 
 type vals map[string]eqn.Node
 
-func (v vals) subst(e trace.Expr) eqn.Node {
-	return eqn.FromExpr(e, eqn.Options{Subst: func(n string) (eqn.Node, bool) { x, ok := v[n]; return x, ok }})
+func (v vals) subst(e trace.Expr) eqn.Node { return conv(e, v) }
+
+// conv typesets an engine formula for the demo, with the values of v put
+// in for its symbols: a small stand-in for compose's converter
+// (parentheses by precedence, stacked fractions, powers as superscripts,
+// tan² for the power of a function, √ for sqrt, × between values), enough
+// to give the writer every kind of formula node.
+func conv(e trace.Expr, v vals) eqn.Node {
+	n, _ := convPrec(e, v)
+	return n
+}
+
+// convPrec converts e and says how tightly it binds: 1 sum, 2 product,
+// 3 negation, 4 fraction, 5 power, 6 atom.
+func convPrec(e trace.Expr, v vals) (eqn.Node, int) {
+	wrap := func(n eqn.Node, p, min int) eqn.Node {
+		if p < min {
+			return eqn.Paren(n)
+		}
+		return n
+	}
+	switch e := e.(type) {
+	case trace.Sym:
+		if x, ok := v[e.Name]; ok {
+			if _, row := x.(eqn.Row); row {
+				return x, 2
+			}
+			return x, 6
+		}
+		return eqn.Sym{Name: e.Name}, 6
+	case trace.Num:
+		if e.Unit == "deg" {
+			return eqn.Num{Text: units.Significant(e.V*180/math.Pi, 6) + "°"}, 6
+		}
+		return eqn.Number(e.V, 6), 6
+	case trace.Neg:
+		x, p := convPrec(e.X, v)
+		return eqn.Row{eqn.Op{Text: "−"}, wrap(x, p, 4)}, 3
+	case trace.Call:
+		var args []eqn.Node
+		for _, a := range e.Args {
+			args = append(args, conv(a, v))
+		}
+		if e.Fn == "sqrt" && len(args) == 1 {
+			return eqn.Sqrt{X: args[0]}, 6
+		}
+		return eqn.Func{Name: e.Fn, Args: args}, 6
+	case trace.Op:
+		l, lp := convPrec(e.L, v)
+		r, rp := convPrec(e.R, v)
+		switch e.Op {
+		case '+':
+			return eqn.Row{l, eqn.Op{Text: "+"}, r}, 1
+		case '-':
+			return eqn.Row{l, eqn.Op{Text: "−"}, wrap(r, rp, 2)}, 1
+		case '*':
+			sign := "·"
+			if v != nil {
+				sign = "×"
+			}
+			return eqn.Row{wrap(l, lp, 2), eqn.Op{Text: sign}, wrap(r, rp, 2)}, 2
+		case '/':
+			return eqn.Frac{Num: l, Den: r}, 4
+		case '^':
+			if f, ok := l.(eqn.Func); ok && f.Name != "sqrt" {
+				f.Sup = r
+				return f, 6
+			}
+			return eqn.Script{Base: wrap(l, lp, 6), Sup: r}, 5
+		}
+	}
+	return eqn.Text{Text: "?"}, 6
 }
 
 func stmt(line int, name string, e trace.Expr, v vals, result eqn.Node, note string, ref string) *layout.Statement {
-	s := &layout.Statement{Pos: at(line), Symbol: sym(name), Expr: eqn.FromExpr(e, eqn.Options{}), Result: result, Ref: ref}
+	s := &layout.Statement{Pos: at(line), Symbol: sym(name), Expr: conv(e, nil), Result: result, Ref: ref}
 	if v != nil {
 		s.Subst = v.subst(e)
 	}
@@ -205,10 +285,10 @@ func demoDoc(longTable int) layout.Doc {
 			Util: 1.105, OK: false, Note: []layout.Run{txt("settlement limit for the frame [S1]")}},
 		&layout.Check{Pos: at(29), Anchor: "chk-ecc", Left: sym("e_B"), LeftValue: q("0.10", "m"), Rel: "<=", Right: eqn.Frac{Num: sym("B"), Den: eqn.Num{Text: "6"}}, RightValue: q("0.40", "m"),
 			Util: 0.25, OK: true},
-		&layout.Caution{Pos: at(31), Severity: layout.SevWarning, Title: []layout.Run{txt("Settlement exceeds the limit")},
+		&layout.Caution{Pos: at(31), Severity: severity.Warning, Title: []layout.Run{txt("Settlement exceeds the limit")},
 			Body: []layout.Block{para(32, txt("The immediate settlement alone exceeds the 20 mm limit. Consider widening the footing to 2.8 m or founding on the dense sand at 5.0 m; the consolidation settlement of the clay has not yet been added."))}},
-		&layout.Caution{Pos: at(34), Severity: layout.SevNote, Body: []layout.Block{para(35, txt("Short-term (undrained) case is on sheet C-03."))}},
-		&layout.Caution{Pos: at(36), Severity: layout.SevCaution, Title: []layout.Run{txt("Method near its limits")},
+		&layout.Caution{Pos: at(34), Severity: severity.Note, Body: []layout.Block{para(35, txt("Short-term (undrained) case is on sheet C-03."))}},
+		&layout.Caution{Pos: at(36), Severity: severity.Caution, Title: []layout.Run{txt("Method near its limits")},
 			Body: []layout.Block{para(37, txt("Load inclination H/V = 0.19: inclination factors from EN 1997-1 Annex D are approximate beyond 0.2."))}},
 		&layout.Heading{Pos: at(39), Level: 2, Runs: []layout.Run{txt("Footing sketch")}},
 		sketch(),
@@ -225,8 +305,8 @@ func demoDoc(longTable int) layout.Doc {
 		Info: layout.Info{Title: "Kestrel Park: foundation calculations", Author: "AB", Subject: "Pad footing design",
 			Keywords: "bearing settlement", Fingerprint: "9f2c41d07be35a6e1c0d2b8f44a91e7d5c3b2a190f8e7d6c5b4a39281706f5e4"},
 		Sheets: []layout.Sheet{
-			{Pos: source.Position{Path: "01-ground.md", Line: 1, Col: 1}, Fields: f1, Blocks: ground},
-			{Pos: source.Position{Path: "02-bearing.md", Line: 1, Col: 1}, Fields: f2, Blocks: bearing},
+			{Pos: lines("01-ground.md")(1), Fields: f1, Blocks: ground},
+			{Pos: at(1), Fields: f2, Blocks: bearing},
 		},
 	}
 }

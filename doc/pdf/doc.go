@@ -15,6 +15,19 @@
 // name order (embed.go, after pack); Files reads them back from a PDF
 // Write made, and refuses anything else with an error.
 //
+// The page content streams are plinth's own (stream.go, paint.go): each
+// page is painted with strconv into a reused buffer, with the font and
+// colours set only when they change and consecutive text in one text
+// object, and compressed at once on another core (zip.go); only the
+// compressed bytes are kept, and with Options.Release the page's boxes
+// are dropped as soon as it is painted. Glyph indices and kerning are
+// gopdf's own (glyphs.go reads the faces with gopdf's parser), and gopdf
+// writes everything else: the font subsets (told the characters used, in
+// the order first met), pages, outlines, links, anchors, images and the
+// cross-reference table. gopdf opens each page's content object where
+// the painter starts drawing, and pack puts the painted stream in its
+// place.
+//
 // Write draws into memory and copies the finished file to the writer; the
 // caller writes to a temporary file and renames it into place.
 package pdf

@@ -16,9 +16,9 @@ import (
 
 func withFiles(t testing.TB, files []pdf.File) []byte {
 	t.Helper()
-	pages, err := layout.Document(demoDoc(3))
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(demoDoc(3))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var b bytes.Buffer
 	if err := pdf.Write(&b, pages, pdf.Options{Time: when, Creator: "plinth test", Files: files}); err != nil {
@@ -97,9 +97,9 @@ func TestFilesBad(t *testing.T) {
 }
 
 func mustPages(t testing.TB) *layout.Pages {
-	pages, err := layout.Document(demoDoc(1))
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(demoDoc(1))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	return pages
 }
@@ -150,9 +150,9 @@ func BenchmarkFiles(b *testing.B) {
 func TestPageTexts(t *testing.T) {
 	doc := demoDoc(3)
 	doc.Info.Fingerprint = "0123456789abcdef"
-	pages, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var b bytes.Buffer
 	if err := pdf.Write(&b, pages, pdf.Options{Time: when}); err != nil {

@@ -8,26 +8,61 @@ import (
 	"strconv"
 )
 
-// pack compresses the page content streams of a PDF gopdf wrote without
-// compression, and rebuilds the cross-reference table. gopdf opens a new
-// compressor for every page, which costs more than drawing the page; one
-// reused compressor does the same work in a fraction of the time.
+// zipper compresses page streams with one reused compressor (opening a
+// compressor costs more than compressing a page).
+type zipper struct {
+	z   *zlib.Writer
+	buf bytes.Buffer
+}
+
+func newZipper() *zipper {
+	z := &zipper{}
+	z.z, _ = zlib.NewWriterLevel(&z.buf, zlib.BestSpeed)
+	return z
+}
+
+// compress returns data compressed, in a slice of its own.
+func (z *zipper) compress(data []byte) ([]byte, error) {
+	z.buf.Reset()
+	z.z.Reset(&z.buf)
+	if _, err := z.z.Write(data); err != nil {
+		return nil, err
+	}
+	if err := z.z.Close(); err != nil {
+		return nil, err
+	}
+	return bytes.Clone(z.buf.Bytes()), nil
+}
+
+// pack finishes the PDF gopdf wrote without compression: each page's
+// content stream is replaced by the one the painter wrote and compressed
+// (pages[i] for the i-th page object; gopdf's own stream there holds only
+// a placeholder), every other uncompressed stream is compressed, and the
+// cross-reference table is rebuilt.
 //
 // It relies on the simple layout gopdf writes: objects 1..n in order, each
 // starting "n 0 obj", a classic xref table, then the trailer. An
-// uncompressed content stream is exactly "<<\n/Length L\n>>\nstream\n".
-func pack(in []byte) ([]byte, error) {
+// uncompressed stream is exactly "<<\n/Length L\n>>\nstream\n"; a page
+// object starts "<<\n  /Type /Page\n" and names its content object in
+// "/Contents  n 0 R".
+func pack(in []byte, pages [][]byte) ([]byte, error) {
 	offs, xref, trailer, err := xrefTable(in)
 	if err != nil {
 		return nil, err
 	}
 	count := len(offs)
-	out := bytes.NewBuffer(make([]byte, 0, len(in)/3))
+	size := xref
+	for _, p := range pages {
+		size += len(p)
+	}
+	out := bytes.NewBuffer(make([]byte, 0, size+len(in)-xref+1<<10)) // at most: the other streams only shrink
 	out.Write(in[:offs[1]])
 	newOffs := make([]int, count)
-	var z *zlib.Writer
-	var zbuf bytes.Buffer
+	z := newZipper()
+	page := 0
+	contents := map[int][]byte{} // content object number → its stream
 	const head = "<<\n/Length "
+	const pageHead = "<<\n  /Type /Page\n"
 	for i := 1; i < count; i++ {
 		end := xref
 		if i+1 < count {
@@ -37,6 +72,15 @@ func pack(in []byte) ([]byte, error) {
 		newOffs[i] = out.Len()
 		nl := bytes.IndexByte(obj, '\n') + 1
 		body := obj[nl:]
+		if bytes.HasPrefix(body, []byte(pageHead)) {
+			if page >= len(pages) {
+				return nil, errors.New("pdf: more pages written than drawn")
+			}
+			if c, ok := contentsOf(body); ok {
+				contents[c] = pages[page]
+			}
+			page++
+		}
 		if !bytes.HasPrefix(body, []byte(head)) {
 			out.Write(obj)
 			continue
@@ -49,26 +93,34 @@ func pack(in []byte) ([]byte, error) {
 			out.Write(obj)
 			continue
 		}
-		data := rest[eol+len(open) : eol+len(open)+n]
-		zbuf.Reset()
-		if z == nil {
-			z, _ = zlib.NewWriterLevel(&zbuf, zlib.BestSpeed)
-		} else {
-			z.Reset(&zbuf)
-		}
-		z.Write(data)
-		if err := z.Close(); err != nil {
+		data, ok := contents[i]
+		if ok {
+			if data == nil {
+				return nil, fmt.Errorf("pdf: no stream drawn for content object %d", i)
+			}
+		} else if data, err = z.compress(rest[eol+len(open) : eol+len(open)+n]); err != nil {
 			return nil, err
 		}
 		out.Write(obj[:nl])
-		fmt.Fprintf(out, "<<\n/Filter/FlateDecode/Length %d\n>>\nstream\n", zbuf.Len())
-		out.Write(zbuf.Bytes())
+		out.WriteString("<<\n/Filter/FlateDecode/Length ")
+		out.WriteString(strconv.Itoa(len(data)))
+		out.WriteString("\n>>\nstream\n")
+		out.Write(data)
 		out.Write(rest[eol+len(open)+n:])
+	}
+	if page != len(pages) {
+		return nil, fmt.Errorf("pdf: %d pages drawn, %d written", len(pages), page)
 	}
 	start := out.Len()
 	fmt.Fprintf(out, "xref\n0 %d\n0000000000 65535 f \n", count)
+	var line []byte
 	for i := 1; i < count; i++ {
-		fmt.Fprintf(out, "%010d 00000 n \n", newOffs[i])
+		line = strconv.AppendInt(line[:0], int64(newOffs[i]), 10)
+		for range 10 - len(line) {
+			out.WriteByte('0')
+		}
+		out.Write(line)
+		out.WriteString(" 00000 n \n")
 	}
 	t := in[trailer:]
 	sx := bytes.LastIndex(t, []byte("startxref\n"))
@@ -78,6 +130,22 @@ func pack(in []byte) ([]byte, error) {
 	out.Write(t[:sx])
 	fmt.Fprintf(out, "startxref\n%d\n%%%%EOF\n", start)
 	return out.Bytes(), nil
+}
+
+// contentsOf reads the content object number of a page object gopdf
+// wrote ("  /Contents  12 0 R \n").
+func contentsOf(page []byte) (int, bool) {
+	const key = "/Contents "
+	at := bytes.Index(page, []byte(key))
+	if at < 0 {
+		return 0, false
+	}
+	f := bytes.Fields(page[at+len(key):])
+	if len(f) < 3 || string(f[1]) != "0" || string(f[2]) != "R" {
+		return 0, false
+	}
+	n, err := strconv.Atoi(string(f[0]))
+	return n, err == nil
 }
 
 // xrefTable reads the classic cross-reference table of a PDF laid out as

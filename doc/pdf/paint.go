@@ -10,22 +10,71 @@ import (
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
-// painter draws items, setting graphics state only when it changes.
+// painter draws items into the page's content stream, setting graphics
+// and text state only when it changes. It writes the stream itself
+// (stream.go); gopdf is asked only for what lives outside the stream: the
+// page's content object (opened on the first operator), images, links,
+// anchors and, at the end, the characters each font subset needs.
 type painter struct {
-	gp     *gopdf.GoPdf
-	face   fonts.Face
-	size   float64
-	text   draw.Color
+	gp      *gopdf.GoPdf
+	c       content
+	opened  bool // gopdf has made the page's content object
+	inText  bool // a text object is open
+	glyphs  [fonts.NumFaces]*glyphs
+	images  map[string]int // image ID → gopdf object index
+	scratch []glyphKern    // one text's glyphs
+
+	size   float64 // size of the last text drawn (anchors are placed by it)
+	font   *glyphs // the font set, at fontSize
+	fontSz float64
 	stroke draw.Color
-	fill   draw.Color
+	fill   draw.Color // the fill colour, text's included
 	width  float64
 	dash   []float64
 	// which of the above hold on the current page (a new page's content
 	// stream starts from the default graphics state)
-	hasFont, hasText, hasStroke, hasFill bool
+	hasFont, hasStroke, hasFill bool
 }
 
-func (p *painter) reset() { p.hasFont, p.hasText, p.hasStroke, p.hasFill = false, false, false, false }
+// glyphKern is a glyph and the kerning before it.
+type glyphKern struct {
+	g    uint
+	kern int
+}
+
+// page starts a page h points high, its stream written into buf.
+func (p *painter) page(h float64, buf []byte) {
+	p.hasFont, p.hasStroke, p.hasFill, p.inText = false, false, false, false
+	p.c.b, p.c.h, p.opened = buf[:0], h, false
+}
+
+// finish ends the page's stream: it closes the open text object.
+func (p *painter) finish() {
+	if p.inText {
+		p.c.textEnd()
+		p.inText = false
+	}
+}
+
+// open makes sure gopdf has the page's content object, so the objects of
+// the file keep the order gopdf gives them when it draws the page itself
+// (pack puts this stream in the object's place).
+func (p *painter) open() {
+	if !p.opened {
+		p.gp.SetStrokeColor(0, 0, 0)
+		p.opened = true
+	}
+}
+
+// shapes makes ready for a path or image: the page's stream open and no
+// text object.
+func (p *painter) shapes() {
+	p.open()
+	if p.inText {
+		p.c.textEnd()
+		p.inText = false
+	}
+}
 
 func (p *painter) box(b *layout.Box) error {
 	for _, it := range b.Items {
@@ -41,40 +90,22 @@ func (p *painter) box(b *layout.Box) error {
 	return nil
 }
 
-func (p *painter) setFont(f fonts.Face, size float64) error {
-	if p.hasFont && f == p.face && size == p.size {
-		return nil
-	}
-	if err := p.gp.SetFont(f.PDFName(), "", size); err != nil {
-		return err
-	}
-	p.face, p.size, p.hasFont = f, size, true
-	return nil
-}
-
-func (p *painter) setText(c draw.Color) {
-	if !p.hasText || c != p.text {
-		p.gp.SetTextColor(c.R, c.G, c.B)
-		p.text, p.hasText = c, true
-	}
-}
-
 func (p *painter) setStroke(pt draw.Paint) {
 	fresh := !p.hasStroke
 	p.hasStroke = true
 	if fresh || pt.Stroke != p.stroke {
-		p.gp.SetStrokeColor(pt.Stroke.R, pt.Stroke.G, pt.Stroke.B)
+		p.c.color(pt.Stroke.R, pt.Stroke.G, pt.Stroke.B, "RG")
 		p.stroke = pt.Stroke
 	}
 	if fresh || pt.Width != p.width {
-		p.gp.SetLineWidth(pt.Width)
+		p.c.lineWidth(pt.Width)
 		p.width = pt.Width
 	}
 	if fresh || !slices.Equal(pt.Dash, p.dash) {
 		if len(pt.Dash) == 0 {
-			p.gp.SetLineType("solid")
+			p.c.solid()
 		} else {
-			p.gp.SetCustomLineType(append([]float64(nil), pt.Dash...), 0)
+			p.c.dash(pt.Dash)
 		}
 		p.dash = append(p.dash[:0], pt.Dash...)
 	}
@@ -82,23 +113,91 @@ func (p *painter) setStroke(pt draw.Paint) {
 
 func (p *painter) setFill(c draw.Color) {
 	if !p.hasFill || c != p.fill {
-		p.gp.SetFillColor(c.R, c.G, c.B)
+		p.c.color(c.R, c.G, c.B, "rg")
 		p.fill, p.hasFill = c, true
 	}
 }
 
-// style sets the paint for a shape and returns gopdf's style letters.
+// style sets the paint for a shape and returns its style letters (F fill,
+// D stroke).
 func (p *painter) style(pt draw.Paint) string {
 	s := ""
 	if pt.Filled {
-		p.setFill(pt.Fill)
 		s += "F"
 	}
 	if pt.Width > 0 {
-		p.setStroke(pt)
 		s += "D"
 	}
+	if s == "" {
+		return s
+	}
+	p.shapes()
+	if pt.Filled {
+		p.setFill(pt.Fill)
+	}
+	if pt.Width > 0 {
+		p.setStroke(pt)
+	}
 	return s
+}
+
+// drawText writes a text item: in the open text object (or a new one),
+// its font and colour if they changed, its position, then the glyphs with
+// gopdf's kerning adjustments between them (TJ when there are any).
+func (p *painter) drawText(v draw.Text, x, y float64) error {
+	var g *glyphs
+	if v.Face.Valid() {
+		g = p.glyphs[v.Face]
+	}
+	if g == nil {
+		return gopdf.ErrMissingFontFamily
+	}
+	p.size = v.Size
+	gs := p.scratch[:0]
+	kerned := false
+	var prev uint
+	for i, r := range v.Text {
+		_, gi, err := g.glyph(r)
+		if err != nil {
+			return err
+		}
+		k := 0
+		if i > 0 {
+			k = g.kern(prev, gi)
+			kerned = kerned || k != 0
+		}
+		gs = append(gs, glyphKern{gi, k})
+		prev = gi
+	}
+	p.scratch = gs
+	p.open()
+	if !p.inText {
+		p.c.textBegin()
+		p.inText = true
+	}
+	if !p.hasFont || g != p.font || v.Size != p.fontSz {
+		p.c.font(g.number+1, v.Size)
+		p.font, p.fontSz, p.hasFont = g, v.Size, true
+	}
+	p.setFill(v.Color)
+	p.c.textAt(x, y)
+	if kerned {
+		p.c.s("[<")
+	} else {
+		p.c.s("<")
+	}
+	for _, gk := range gs {
+		if gk.kern != 0 {
+			p.c.kern(-gk.kern)
+		}
+		p.c.glyph(gk.g)
+	}
+	if kerned {
+		p.c.s(">] TJ\n")
+	} else {
+		p.c.s("> Tj\n")
+	}
+	return nil
 }
 
 // item draws it moved by (dx, dy) (its box's corner).
@@ -108,27 +207,18 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 		if v.Text == "" {
 			return nil
 		}
-		if err := p.setFont(v.Face, v.Size); err != nil {
-			return err
-		}
-		p.setText(v.Color)
-		p.gp.SetXY(v.Start()+dx, v.Y+dy)
-		// gopdf writes the text colour as the fill colour ("rg") inside
-		// the text object, so the fill we last set no longer holds.
-		p.hasFill = false
-		return p.gp.Text(v.Text)
+		return p.drawText(v, v.Start()+dx, v.Y+dy)
 	case draw.Line:
 		if v.Width <= 0 {
 			return nil
 		}
+		p.shapes()
 		p.setStroke(v.Paint)
-		p.gp.Line(v.X1+dx, v.Y1+dy, v.X2+dx, v.Y2+dy)
+		p.c.line(v.X1+dx, v.Y1+dy, v.X2+dx, v.Y2+dy)
 	case draw.Rect:
-		s := p.style(v.Paint)
-		if s == "" {
-			return nil
+		if s := p.style(v.Paint); s != "" {
+			p.c.rect(v.X+dx, v.Y+dy, v.W, v.H, s)
 		}
-		p.gp.RectFromUpperLeftWithStyle(v.X+dx, v.Y+dy, v.W, v.H, s)
 	case draw.Poly:
 		if len(v.Points) < 2 {
 			return nil
@@ -138,37 +228,67 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 			if s == "" {
 				return nil
 			}
-			if s == "FD" {
-				s = "DF"
-			}
-			pts := make([]gopdf.Point, len(v.Points))
 			for i, q := range v.Points {
-				pts[i] = gopdf.Point{X: q.X + dx, Y: q.Y + dy}
+				p.c.polygonPoint(q.X+dx, q.Y+dy, i == 0)
 			}
-			p.gp.Polygon(pts, s)
+			p.c.polygonEnd(s)
 			return nil
 		}
 		if v.Width <= 0 {
 			return nil
 		}
+		p.shapes()
 		p.setStroke(v.Paint)
 		for i := 1; i < len(v.Points); i++ {
 			a, b := v.Points[i-1], v.Points[i]
-			p.gp.Line(a.X+dx, a.Y+dy, b.X+dx, b.Y+dy)
+			p.c.line(a.X+dx, a.Y+dy, b.X+dx, b.Y+dy)
 		}
 	case draw.Image:
 		h, err := gopdf.ImageHolderByBytes(v.Data)
 		if err != nil {
 			return err
 		}
-		return p.gp.ImageByHolder(h, v.X+dx, v.Y+dy, &gopdf.Rect{W: v.W, H: v.H})
+		// gopdf adds a new image's object before it opens the page's
+		// content object
+		index, seen := p.images[h.ID()]
+		if !seen {
+			index = p.gp.GetNextObjectID() - 1
+		}
+		if err := p.gp.ImageByHolder(h, v.X+dx, v.Y+dy, &gopdf.Rect{W: v.W, H: v.H}); err != nil {
+			return err
+		}
+		if !seen {
+			p.images[h.ID()] = index
+		}
+		p.opened = true
+		p.shapes()
+		p.c.image(index, v.X+dx, v.Y+dy, v.W, v.H)
 	case draw.Link:
 		p.gp.AddInternalLink(v.Target, v.X+dx, v.Y+dy, v.W, v.H)
 	case draw.Anchor:
 		// gopdf places an anchor at (page height − y + font size): aim a
 		// little above the anchored line.
+		p.gp.SetFontSize(p.size)
 		p.gp.SetY(v.Y + dy - 8 + p.size)
 		p.gp.SetAnchor(v.Name)
+	}
+	return nil
+}
+
+// subsetFonts tells gopdf the characters each face drew, in the order they
+// were met, so its font subsets hold those glyphs.
+func (p *painter) subsetFonts() error {
+	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
+		g := p.glyphs[f]
+		if g == nil || len(g.used) == 0 {
+			continue
+		}
+		if err := p.gp.SetFont(f.PDFName(), "", 10); err != nil {
+			return err
+		}
+		if _, err := p.gp.MeasureTextWidth(string(g.used)); err != nil {
+			return err
+		}
 	}
 	return nil
 }

@@ -60,23 +60,35 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 		Producer:     "plinth",
 		CreationDate: opt.Time,
 	})
+	p := &painter{gp: gp, images: map[string]int{}}
 	faces := usedFaces(pages)
+	n := 0
 	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
 		if !faces[f] {
 			continue
 		}
-		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), gopdf.TtfOption{UseKerning: true}); err != nil {
+		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), ttfOption); err != nil {
 			return fmt.Errorf("pdf: embedding %s: %w", f, err)
 		}
+		g, err := newGlyphs(f, n)
+		if err != nil {
+			return err
+		}
+		p.glyphs[f] = g
+		n++
 	}
 	marks := map[int][]layout.Bookmark{}
 	for _, b := range pages.Outline {
 		marks[b.Page] = append(marks[b.Page], b)
 	}
-	p := &painter{gp: gp}
+	// Each page's stream is compressed as soon as it is drawn (on another
+	// core); only the compressed bytes are kept (pack puts them in place),
+	// and with Release the page's boxes go too.
+	zp := newZipPool(len(pages.Pages))
+	defer zp.close()
 	for i, pg := range pages.Pages {
 		gp.AddPageWithOption(gopdf.PageOption{PageSize: &gopdf.Rect{W: pg.W, H: pg.H}})
-		p.reset()
+		p.page(pg.H, zp.buffer())
 		for _, b := range marks[i] {
 			gp.SetY(b.Y + 20)
 			gp.AddOutlineWithPosition(b.Title)
@@ -86,6 +98,11 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 				return fmt.Errorf("pdf: page %d, %s at %s: %w", i+1, b.Kind, b.Pos, err)
 			}
 		}
+		p.finish()
+		if p.opened {
+			zp.add(i, p.c.b)
+			p.c.b = nil
+		}
 		if opt.Release {
 			pg.Boxes = nil
 		}
@@ -93,16 +110,28 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			opt.Progress(i+1, len(pages.Pages))
 		}
 	}
+	if err := p.subsetFonts(); err != nil {
+		return err
+	}
+	streams, err := zp.streams()
+	if err != nil {
+		return fmt.Errorf("pdf: %w", err)
+	}
+	// gopdf's part is small now the page streams are apart: fonts, page
+	// objects, links, outlines (about 1.6 kB a page)
 	var buf bytes.Buffer
-	buf.Grow(64<<10 + 56<<10*len(pages.Pages)) // spare the doublings of a growing buffer
+	buf.Grow(256<<10 + 2<<10*len(pages.Pages))
 	if _, err := gp.WriteTo(&buf); err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
-	out, err := pack(buf.Bytes())
+	// the information is completed in gopdf's trailer, which pack copies
+	// as it is, rather than in a copy of the finished file
+	small, err := patchInfo(buf.Bytes(), info, opt.Time)
 	if err != nil {
 		return err
 	}
-	if out, err = patchInfo(out, info, opt.Time); err != nil {
+	out, err := pack(small, streams)
+	if err != nil {
 		return err
 	}
 	if len(opt.Files) > 0 {

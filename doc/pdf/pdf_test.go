@@ -22,9 +22,9 @@ var when = time.Date(2026, 12, 2, 9, 30, 0, 0, time.UTC)
 
 func render(t testing.TB, doc layout.Doc) []byte {
 	t.Helper()
-	pages, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var b bytes.Buffer
 	if err := pdf.Write(&b, pages, pdf.Options{Time: when, Creator: "plinth test"}); err != nil {
@@ -111,14 +111,14 @@ func TestToolsReadIt(t *testing.T) {
 }
 
 func TestMissingAnchor(t *testing.T) {
-	pages, err := layout.Document(demoDoc(3))
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(demoDoc(3))
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	// break a link by hand: the writer refuses rather than write a dangling link
 	b := pages.Pages[0].Boxes[len(pages.Pages[0].Boxes)-1]
 	b.Items = append(b.Items, draw.Link{X: 1, Y: 1, W: 1, H: 1, Target: "gone"})
-	err = pdf.Write(io.Discard, pages, pdf.Options{})
+	err := pdf.Write(io.Discard, pages, pdf.Options{})
 	if err == nil || !strings.Contains(err.Error(), `"gone"`) {
 		t.Errorf("err = %v", err)
 	}

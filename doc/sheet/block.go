@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"github.com/plinth-calc/plinth/calc/kind"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -16,10 +17,18 @@ const (
 	KindSettlement
 	KindCapacity
 	KindDifferential
+	KindSize
+	KindSchedule
 )
 
-// Kinds are the block words in Kind order.
-var Kinds = []string{"calc", "ground", "footing", "bearing", "settlement", "capacity", "differential"}
+// Kinds are the block words in Kind order (from Specs).
+var Kinds = func() []string {
+	out := make([]string, len(Specs))
+	for i, s := range Specs {
+		out[i] = s.Word
+	}
+	return out
+}()
 
 func (k Kind) String() string { return Kinds[k] }
 
@@ -69,6 +78,7 @@ type Analysis struct {
 	Prefix   Str    // the "as" name; zero when absent (results go under Footing)
 	To       Str    // differential blocks: the second footing (Ground is then zero)
 	Lines    []Line // *Option and *Comment
+	Table    *Grid  // schedule blocks: the table of footings (nil otherwise)
 }
 
 // ResultPrefix is the name the block's results are published under:
@@ -77,7 +87,7 @@ func (a *Analysis) ResultPrefix() Str {
 	if a.Prefix.IsSet() {
 		return a.Prefix
 	}
-	if a.Kind == KindDifferential {
+	if a.Kind.Spec().Header == kind.To {
 		return Str{Value: a.Footing.Value + "_" + a.To.Value, Span: a.Footing.Span}
 	}
 	return a.Footing

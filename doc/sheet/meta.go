@@ -77,8 +77,8 @@ var (
 	Templates = []string{"a4", "letter"}
 )
 
-// Key returns the key as written and true when the field was set.
-func (m *Meta) Key(name string) (Str, bool) {
+// key returns the key as written and true when the field was set.
+func (m *Meta) key(name string) (Str, bool) {
 	for _, k := range m.Keys {
 		if k.Value == name {
 			return k, true
@@ -133,9 +133,9 @@ func (m *Meta) Field(key string) *Str {
 	return nil
 }
 
-// Has reports whether the field was set.
-func (m *Meta) Has(name string) bool {
-	_, ok := m.Key(name)
+// has reports whether the field was set.
+func (m *Meta) has(name string) bool {
+	_, ok := m.key(name)
 	return ok
 }
 
@@ -149,17 +149,17 @@ func (m *Meta) Reference(key string) (Reference, bool) {
 	return Reference{}, false
 }
 
-// Merge returns the settings in force when over (a sheet's front matter) is
+// merge returns the settings in force when over (a sheet's front matter) is
 // laid on defaults (package.yaml): each field set in over wins; references
 // are merged by key (over's text wins, new keys follow the defaults' in
 // over's order); revisions are replaced when over sets them; uses is
 // over's alone. Keys lists defaults' keys then over's new ones.
-func Merge(defaults, over *Meta) Meta {
+func merge(defaults, over *Meta) Meta {
 	m := *defaults
 	m.Span = over.Span
 	m.Keys = append([]Str(nil), defaults.Keys...)
 	for _, k := range over.Keys {
-		if !defaults.Has(k.Value) {
+		if !defaults.has(k.Value) {
 			m.Keys = append(m.Keys, k)
 		}
 	}
@@ -188,7 +188,7 @@ func Merge(defaults, over *Meta) Meta {
 	str(&m.Exclusions, over.Exclusions)
 	str(&m.Detail, over.Detail)
 	m.Uses = over.Uses
-	if over.Has("revisions") {
+	if over.has("revisions") {
 		m.Revisions = over.Revisions
 	}
 	if len(over.References) > 0 {

@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"github.com/plinth-calc/plinth/calc/severity"
 	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -96,26 +97,12 @@ type CodeBlock struct {
 	Text string
 }
 
-// Alert is the kind of a boxed caution, lowest severity first (the order
-// of calc/trace.Severity: NOTE, CAUTION, WARNING).
-type Alert int
-
-const (
-	AlertNote Alert = iota
-	AlertCaution
-	AlertWarning
-)
-
-// Alerts are the words of "> [!WORD]" in Alert order.
-var Alerts = []string{"NOTE", "CAUTION", "WARNING"}
-
-func (k Alert) String() string { return Alerts[k] }
-
 // Caution is a blockquote opened by "> [!CAUTION]", "> [!WARNING]" or
-// "> [!NOTE]". KindSpan covers the marker; Body holds the rest.
+// "> [!NOTE]": Kind is its level (calc/severity). KindSpan covers the
+// marker; Body holds the rest.
 type Caution struct {
 	Span     source.Span
-	Kind     Alert
+	Kind     severity.Level
 	KindSpan source.Span
 	Body     []Block
 }

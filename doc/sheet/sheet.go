@@ -64,5 +64,5 @@ type Package struct {
 }
 
 // Effective returns the settings in force for sheet s: its own front
-// matter over the package's (see Merge).
-func (p *Package) Effective(s *Sheet) Meta { return Merge(&p.Meta, &s.Meta) }
+// matter over the package's (see merge).
+func (p *Package) Effective(s *Sheet) Meta { return merge(&p.Meta, &s.Meta) }

@@ -8,66 +8,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-func TestNearest(t *testing.T) {
-	keys := sheet.MetaKeys
-	for _, c := range []struct{ in, want string }{
-		{"titel", "title"},     // transposition: two edits, long name
-		{"Title", "title"},     // letter case
-		{"chekced", "checked"}, // two edits
-		{"byy", "by"},          // one edit, short name
-		{"colour", ""},         // nothing close
-		{"title", ""},          // itself is never suggested
-		{"x", ""},              // a single letter is not corrected
-		{"", ""},
-	} {
-		got, ok := sheet.Nearest(c.in, keys)
-		if got != c.want || ok != (c.want != "") {
-			t.Errorf("Nearest(%q) = %q, %v; want %q", c.in, got, ok, c.want)
-		}
-	}
-	cells := []string{"site.firm_clay.top", "site.firm_clay.c'", "site.firm_clay.c_u", "site.firm_clay.phi'"}
-	for _, c := range []struct{ in, want string }{
-		{"site.firm_clay.cu", "site.firm_clay.c_u"}, // underscores only, before the equally near c'
-		{"site.firm_clay.C_U", "site.firm_clay.c_u"},
-		{"site.firm_clay.phi", "site.firm_clay.phi'"},
-	} {
-		if got, _ := sheet.Nearest(c.in, cells); got != c.want {
-			t.Errorf("Nearest(%q) = %q; want %q", c.in, got, c.want)
-		}
-	}
-	if d := sheet.Distance("γ_w", "g_w"); d != 1 {
-		t.Errorf("Distance counts bytes, not runes: %d", d)
-	}
-	// Optimal string alignment: a transposition is one edit (hand-counted).
-	for _, c := range []struct {
-		a, b string
-		d    int
-	}{
-		{"clac", "calc", 1}, {"cehck", "check", 1}, {"grund", "ground", 1},
-		{"ca", "abc", 3}, {"kitten", "sitting", 3}, {"", "abc", 3}, {"abc", "abc", 0},
-	} {
-		if d := sheet.Distance(c.a, c.b); d != c.d {
-			t.Errorf("Distance(%q, %q) = %d, want %d", c.a, c.b, d, c.d)
-		}
-	}
-}
-
 func TestOptions(t *testing.T) {
-	for k, specs := range sheet.Options {
-		seen := map[string]bool{}
-		for _, o := range specs {
-			if seen[o.Name] {
-				t.Errorf("%s: option %s listed twice", k, o.Name)
-			}
-			seen[o.Name] = true
-			if len(o.Words) == 0 && o.Form == "" {
-				t.Errorf("%s %s: neither words nor a form", k, o.Name)
-			}
-			if o.Default == "" {
-				t.Errorf("%s %s: no default documented", k, o.Name)
-			}
-		}
-	}
 	o, ok := sheet.LookupOption(sheet.KindBearing, "approach")
 	if !ok || !o.Allows("DA2") || o.Allows("DA4") {
 		t.Errorf("approach = %+v, %v", o, ok)

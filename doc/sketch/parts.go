@@ -2,8 +2,6 @@ package sketch
 
 import (
 	"math"
-	"strconv"
-	"strings"
 
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -102,13 +100,11 @@ func metres(v float64) string { return units.Format(v, metre, -1) + " m" }
 
 var metre = units.MustParse("m")
 
-// amount prints a load's size to at most two decimals, trailing zeros
-// dropped: 1270, 35.5.
-func amount(v float64) string {
-	s := strconv.FormatFloat(math.Abs(v), 'f', 2, 64)
-	s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
-	return s
-}
+// amount prints a load's size (kN, kNm) by the display rules of the rest
+// of the document (units.Format): 1270, 35.5.
+func amount(v float64) string { return units.Format(math.Abs(v)*1e3, kilonewton, -1) }
+
+var kilonewton = units.MustParse("kN")
 
 // arcPts approximates the arc of radius r round c from angle a0 to a1
 // (radians, counterclockwise as seen, y up) by n segments.

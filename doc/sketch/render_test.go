@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"flag"
 	"os"
+	"strings"
 	"testing"
 	"time"
 
@@ -18,21 +19,22 @@ var demo = flag.String("demo", "", "write the test sketches as a PDF to this pat
 // TestDemoPDF lays the test sketches out on pages through layout and pdf;
 // with -demo PATH it keeps the file.
 func TestDemoPDF(t *testing.T) {
+	src := source.NewFile("demo.md", []byte(strings.Repeat("\n", len(cases)+1)))
 	var blocks []layout.Block
 	for i, c := range cases {
 		items, err := sketch.Draw(c.f, c.w, c.h)
 		if err != nil {
 			t.Fatalf("%s: %v", c.name, err)
 		}
-		blocks = append(blocks, &layout.Drawing{Pos: source.Position{Path: "demo.md", Line: i + 1, Col: 1}, W: c.w, H: c.h,
+		blocks = append(blocks, &layout.Drawing{Pos: source.Span{File: src, Start: src.LineStart(i + 1)}, W: c.w, H: c.h,
 			Items: items, Caption: []layout.Run{{Text: "Sketch: " + c.name}}})
 	}
 	doc := layout.Doc{Info: layout.Info{Title: "Footing sketches", Fingerprint: "0123456789abcdef"},
-		Sheets: []layout.Sheet{{Pos: source.Position{Path: "demo.md", Line: 1, Col: 1},
+		Sheets: []layout.Sheet{{Pos: source.Span{File: src},
 			Fields: layout.Fields{Project: "Larchfield Depot", Title: "Sketches", Calc: "D-2", By: "XY"}, Blocks: blocks}}}
-	pages, err := layout.Document(doc)
-	if err != nil {
-		t.Fatal(err)
+	pages, diags := layout.Document(doc)
+	if diags.HasErrors() {
+		t.Fatal(diags)
 	}
 	var b bytes.Buffer
 	if err := pdf.Write(&b, pages, pdf.Options{Time: time.Date(2026, 1, 2, 3, 4, 5, 0, time.UTC)}); err != nil {

@@ -129,14 +129,6 @@ func (l List) Error() string {
 	return b.String()
 }
 
-// Err returns the list as an error if it holds any error, else nil.
-func (l List) Err() error {
-	if l.HasErrors() {
-		return l
-	}
-	return nil
-}
-
 // Line names one line of one file, for matching diagnostics by line.
 type Line struct {
 	File *File

@@ -57,9 +57,6 @@ func (f *File) Position(off int) Position {
 	return Position{Path: f.Path, Line: i + 1, Col: col}
 }
 
-// LineCount is the number of lines in the file.
-func (f *File) LineCount() int { return len(f.lines) }
-
 // LineStart is the byte offset of the first byte of 1-based line n.
 func (f *File) LineStart(n int) int {
 	if n < 1 {
@@ -69,22 +66,6 @@ func (f *File) LineStart(n int) int {
 		return len(f.Text)
 	}
 	return f.lines[n-1]
-}
-
-// Line returns the text of 1-based line n without its line ending.
-func (f *File) Line(n int) string {
-	start := f.LineStart(n)
-	end := len(f.Text)
-	if n < len(f.lines) {
-		end = f.lines[n] - 1
-	}
-	if end > start && f.Text[end-1] == '\r' {
-		end--
-	}
-	if end < start {
-		end = start
-	}
-	return string(f.Text[start:end])
 }
 
 // Span is a half-open byte range [Start, End) in a file.
@@ -106,3 +87,7 @@ func (s Span) Text() string {
 
 // IsZero reports whether the span points nowhere.
 func (s Span) IsZero() bool { return s.File == nil }
+
+// String is the human position of the span's start ("calcs/03-pad.md:12:5"),
+// "" for a span that points nowhere.
+func (s Span) String() string { return s.Pos().String() }

@@ -54,11 +54,11 @@ type Item interface {
 // Text is a string set in one face at one size; Y is the baseline.
 type Text struct {
 	X, Y  float64
-	Face  fonts.Face
 	Size  float64
+	Text  string
+	Face  fonts.Face // the small fields last: 48 bytes in all, not 56
 	Color Color
 	Align Align
-	Text  string
 }
 
 // Line is a straight stroke.
@@ -153,13 +153,6 @@ func span(ps []Point) Rect {
 	return Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
 }
 
-// Union is the smallest rectangle holding a and b, without paint.
-func Union(a, b Rect) Rect {
-	x0, y0 := math.Min(a.X, b.X), math.Min(a.Y, b.Y)
-	x1, y1 := math.Max(a.X+a.W, b.X+b.W), math.Max(a.Y+a.H, b.Y+b.H)
-	return Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
-}
-
 // Offset returns it moved by (dx, dy). Points of a Poly are copied.
 func Offset(it Item, dx, dy float64) Item {
 	switch v := it.(type) {
@@ -198,6 +191,43 @@ func Offset(it Item, dx, dy float64) Item {
 		return v
 	}
 	return it
+}
+
+// OffsetThen returns it moved by (dx, dy) and then by (ex, ey): the same
+// values as Offset(Offset(it, dx, dy), ex, ey), made with one copy.
+func OffsetThen(it Item, dx, dy, ex, ey float64) Item {
+	switch v := it.(type) {
+	case Text:
+		v.X += dx
+		v.Y += dy
+		v.X += ex
+		v.Y += ey
+		return v
+	case Line:
+		v.X1 += dx
+		v.X2 += dx
+		v.Y1 += dy
+		v.Y2 += dy
+		v.X1 += ex
+		v.X2 += ex
+		v.Y1 += ey
+		v.Y2 += ey
+		return v
+	case Poly:
+		ps := make([]Point, len(v.Points))
+		for i, p := range v.Points {
+			ps[i] = Point{p.X + dx + ex, p.Y + dy + ey}
+		}
+		v.Points = ps
+		return v
+	case Rect:
+		v.X += dx
+		v.Y += dy
+		v.X += ex
+		v.Y += ey
+		return v
+	}
+	return Offset(Offset(it, dx, dy), ex, ey)
 }
 
 // OffsetAll moves every item of items by (dx, dy) in place.

@@ -7,6 +7,7 @@ import (
 
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
+	"github.com/plinth-calc/plinth/doc/notation"
 )
 
 // Box is a measured formula: its width and how far its ink reaches above
@@ -16,6 +17,10 @@ type Box struct {
 	W, Ascent, Descent float64
 	items              []draw.Item // its own primitives
 	kids               []kid       // boxes placed inside it
+	// a box of text (ctx.text) holds its one primitive here, so it is
+	// boxed into an Item only once, when placed
+	text    draw.Text
+	hasText bool
 }
 
 type kid struct {
@@ -29,15 +34,43 @@ func (b *Box) Items() []draw.Item { return b.AppendItems(nil, 0, 0) }
 // AppendItems appends every primitive of the box to dst, moved by
 // (dx, dy), and returns the extended slice.
 func (b *Box) AppendItems(dst []draw.Item, dx, dy float64) []draw.Item {
+	return b.appendItems(dst, dx, dy, 0, 0, false)
+}
+
+// AppendItemsThen appends every primitive of the box to dst, moved by
+// (dx, dy) and then by (ex, ey): the values AppendItems followed by
+// draw.Offset gives, without the second copy.
+func (b *Box) AppendItemsThen(dst []draw.Item, dx, dy, ex, ey float64) []draw.Item {
+	return b.appendItems(dst, dx, dy, ex, ey, true)
+}
+
+func (b *Box) appendItems(dst []draw.Item, dx, dy, ex, ey float64, then bool) []draw.Item {
+	if b.hasText {
+		t := b.text
+		if dx != 0 || dy != 0 {
+			t.X += dx
+			t.Y += dy
+		}
+		if then {
+			t.X += ex
+			t.Y += ey
+		}
+		dst = append(dst, t)
+	}
 	for _, it := range b.items {
-		if dx == 0 && dy == 0 {
+		switch {
+		case then && dx == 0 && dy == 0:
+			dst = append(dst, draw.Offset(it, ex, ey))
+		case then:
+			dst = append(dst, draw.OffsetThen(it, dx, dy, ex, ey))
+		case dx == 0 && dy == 0:
 			dst = append(dst, it)
-		} else {
+		default:
 			dst = append(dst, draw.Offset(it, dx, dy))
 		}
 	}
 	for _, k := range b.kids {
-		dst = k.b.AppendItems(dst, dx+k.x, dy+k.y)
+		dst = k.b.appendItems(dst, dx+k.x, dy+k.y, ex, ey, then)
 	}
 	return dst
 }
@@ -46,6 +79,10 @@ func (b *Box) AppendItems(dst []draw.Item, dx, dy float64) []draw.Item {
 type Style struct {
 	Size  float64    // size of the main line in points
 	Color draw.Color // ink colour
+	// Texts, when set, keeps the box of every text set (cache.go), so a
+	// caller setting many formulas measures each symbol, number and
+	// operator once. One goroutine's at a time.
+	Texts *Texts
 }
 
 // GlyphError reports a character the font cannot draw.
@@ -61,7 +98,7 @@ func (e *GlyphError) Error() string {
 
 // Layout measures n and returns its box.
 func Layout(n Node, st Style) (*Box, error) {
-	c := &ctx{size: st.Size, base: st.Size, color: st.Color}
+	c := &ctx{size: st.Size, base: st.Size, color: st.Color, texts: st.Texts}
 	b := c.layout(n)
 	if c.err != nil {
 		return nil, c.err
@@ -76,6 +113,7 @@ type ctx struct {
 	bold       bool
 	color      draw.Color
 	err        error
+	texts      *Texts // boxes of texts set before, when the caller keeps them
 }
 
 func (c *ctx) em(f float64) float64 { return f * c.size }
@@ -100,6 +138,9 @@ func (c *ctx) sub(d *ctx) {
 }
 
 func (b *Box) place(c *Box, x, dy float64) {
+	if b.kids == nil {
+		b.kids = make([]kid, 0, 4)
+	}
 	b.kids = append(b.kids, kid{c, x, dy})
 	b.Ascent = math.Max(b.Ascent, c.Ascent-dy)
 	b.Descent = math.Max(b.Descent, c.Descent+dy)
@@ -130,14 +171,29 @@ func (c *ctx) opFace(s string) fonts.Face {
 
 // text sets s in one face at the current size.
 func (c *ctx) text(s string, face fonts.Face) *Box {
-	f := fonts.Get(face)
-	if r, bad := f.Missing(s); bad && c.err == nil {
-		c.err = &GlyphError{Rune: r, Face: face, Text: s}
+	key := textKey{s, face, c.size, c.color}
+	if c.texts != nil {
+		if t, ok := c.texts.m[key]; ok {
+			if t.err != nil && c.err == nil {
+				c.err = t.err
+			}
+			return t.box
+		}
 	}
-	a, d := f.Ink(s, c.size)
-	return &Box{W: f.Width(s, c.size), Ascent: a, Descent: d, items: []draw.Item{
-		draw.Text{Face: face, Size: c.size, Color: c.color, Text: s},
-	}}
+	w, a, d, r, bad := fonts.Get(face).Measure(s, c.size)
+	var err error
+	if bad {
+		err = &GlyphError{Rune: r, Face: face, Text: s}
+		if c.err == nil {
+			c.err = err
+		}
+	}
+	b := &Box{W: w, Ascent: a, Descent: d, hasText: true,
+		text: draw.Text{Face: face, Size: c.size, Color: c.color, Text: s}}
+	if c.texts != nil {
+		c.texts.m[key] = textBox{b, err}
+	}
+	return b
 }
 
 func (c *ctx) axis() float64 { return fonts.Get(fonts.Regular).XHeight(c.size)/2 + 0.01*c.size }
@@ -151,7 +207,7 @@ func (c *ctx) layout(n Node) *Box {
 	case Row:
 		return c.row(n)
 	case Sym:
-		return c.sym(n, nil)
+		return c.symbol(n)
 	case Num:
 		s := n.Text
 		if strings.HasPrefix(s, "-") {
@@ -185,6 +241,17 @@ func (c *ctx) layout(n Node) *Box {
 		c.err = fmt.Errorf("eqn: unknown node %T", n)
 	}
 	return &Box{}
+}
+
+// flat is r with its nested rows spliced in and nils dropped: r itself
+// when it has neither (the nodes are only read).
+func flat(r Row) []Node {
+	for _, n := range r {
+		if _, nested := n.(Row); nested || n == nil {
+			return flatten(r, make([]Node, 0, len(r)+4))
+		}
+	}
+	return r
 }
 
 func flatten(r Row, out []Node) []Node {
@@ -242,7 +309,7 @@ func (c *ctx) opSpace(k opClass) (before, after float64) {
 }
 
 func (c *ctx) row(r Row) *Box {
-	nodes := flatten(r, nil)
+	nodes := flat(r)
 	return c.assemble(nodes, c.boxes(nodes), false)
 }
 
@@ -294,7 +361,7 @@ func (c *ctx) spacing(nodes []Node, i int, cont bool) (before, after float64) {
 
 // assemble sets laid-out nodes side by side with operator spacing.
 func (c *ctx) assemble(nodes []Node, boxes []*Box, cont bool) *Box {
-	b := &Box{}
+	b := &Box{kids: make([]kid, 0, len(nodes))}
 	x := 0.0
 	for i := range nodes {
 		before, after := c.spacing(nodes, i, cont)
@@ -324,7 +391,7 @@ func isOpNode(n Node) bool {
 // sym sets a sheet-notation symbol with an optional superscript stacked
 // after its primes and above its subscript.
 func (c *ctx) sym(s Sym, sup Node) *Box {
-	p := Split(s.Name)
+	p := notation.Split(s.Name)
 	b := &Box{}
 	x := 0.0
 	if p.Prefix != "" {

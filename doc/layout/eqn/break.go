@@ -8,8 +8,13 @@ package eqn
 // further 1 em. Continuation boxes include their indent. A single piece
 // wider than width (a long fraction, say) is left to overflow.
 func Break(n Node, width float64, st Style) ([]*Box, error) {
-	c := &ctx{size: st.Size, base: st.Size, color: st.Color}
-	nodes := flatten(Row{n}, nil)
+	c := &ctx{size: st.Size, base: st.Size, color: st.Color, texts: st.Texts}
+	var nodes []Node
+	if r, ok := n.(Row); ok {
+		nodes = flat(r)
+	} else {
+		nodes = flatten(Row{n}, nil)
+	}
 	boxes := c.boxes(nodes)
 	if c.err != nil {
 		return nil, c.err

@@ -5,69 +5,8 @@ import (
 	"strings"
 	"testing"
 
-	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
-
-var S, N = trace.S, trace.N
-
-func TestFromExpr(t *testing.T) {
-	tests := []struct {
-		name string
-		e    trace.Expr
-		want string
-	}{
-		{"sum", trace.Add(S("a"), S("b"), S("c")), "a + b + c"},
-		{"difference of sum", trace.Sub(S("a"), trace.Add(S("b"), S("c"))), "a − (b + c)"},
-		{"product of sum", trace.Mul(trace.Add(S("a"), S("b")), S("c")), "(a + b) · c"},
-		{"numbers use ×", trace.Mul(N(2), N(3.5)), "2 × 3.5"},
-		{"number then symbol uses ·", trace.Mul(N(2), S("gamma")), "2 · γ"},
-		{"half gamma B N", trace.Mul(trace.Div(N(1), N(2)), S("gamma'"), S("B'"), S("N_gamma")), "{1}/{2} · γ′ · B′ · N_{γ}"},
-		{"power", trace.Pow(S("x"), N(2)), "x^{2}"},
-		{"neg power binds tighter", trace.Negate(trace.Pow(S("x"), N(2))), "−x^{2}"},
-		{"power of sum", trace.Pow(trace.Add(S("a"), S("b")), N(2)), "(a + b)^{2}"},
-		{"power of neg", trace.Pow(trace.Negate(S("a")), N(2)), "(−a)^{2}"},
-		{"fraction base", trace.Pow(trace.Div(S("a"), S("b")), N(2)), "({a}/{b})^{2}"},
-		{"inline fraction in exponent", trace.Pow(S("e"), trace.Div(S("pi"), trace.Mul(N(2), S("x")))), "e^{π/(2 · x)}"},
-		{"negative right operand", trace.Add(S("a"), trace.Negate(S("b"))), "a + (−b)"},
-		{"sqrt", trace.Fn("sqrt", trace.Add(S("a"), S("b"))), "√{a + b}"},
-		{"tan squared", trace.Pow(trace.Fn("tan", trace.Add(trace.Deg(45), trace.Div(S("phi'"), N(2)))), N(2)), "tan^{2}(45° + {φ′}/{2})"},
-		{"abs", trace.Fn("abs", S("e_B")), "|e_{B}|"},
-		{"min", trace.Fn("min", S("a"), S("b")), "min(a, b)"},
-		{"subscripts", trace.Mul(S("q_ult_net"), S("phi'_d"), S("F1.R_d"), S("gamma_sat")), "q_{ult,net} · φ′_{d} · F1.R_{d} · γ_{sat}"},
-		{"capital greek", S("Gamma_R"), "Γ_{R}"},
-		{"pi", trace.Mul(S("pi"), S("D")), "π · D"},
-	}
-	for _, tt := range tests {
-		got := eqn.String(eqn.FromExpr(tt.e, eqn.Options{}))
-		if got != tt.want {
-			t.Errorf("%s: got %q, want %q", tt.name, got, tt.want)
-		}
-	}
-}
-
-func TestSubst(t *testing.T) {
-	vals := map[string]eqn.Node{
-		"gamma": eqn.Quantity("18", "kN/m3"),
-		"B":     eqn.Quantity("2.4", "m"),
-		"x":     eqn.Num{Text: "-3.5"},
-	}
-	opt := eqn.Options{Subst: func(n string) (eqn.Node, bool) { v, ok := vals[n]; return v, ok }}
-	tests := []struct {
-		e    trace.Expr
-		want string
-	}{
-		{trace.Mul(N(0.5), S("gamma"), S("B")), "0.5 × 18 kN/m^{3} × 2.4 m"},
-		{trace.Pow(S("B"), N(2)), "(2.4 m)^{2}"},
-		{trace.Mul(N(2), S("x")), "2 × (-3.5)"},
-		{trace.Sub(S("B"), S("x")), "2.4 m − (-3.5)"},
-	}
-	for _, tt := range tests {
-		if got := eqn.String(eqn.FromExpr(tt.e, opt)); got != tt.want {
-			t.Errorf("got %q, want %q", got, tt.want)
-		}
-	}
-}
 
 func TestNumber(t *testing.T) {
 	tests := []struct {
@@ -99,7 +38,8 @@ func TestUnit(t *testing.T) {
 
 func TestLayout(t *testing.T) {
 	st := eqn.Style{Size: 10}
-	e := eqn.FromExpr(trace.Div(trace.Add(S("a"), S("b")), trace.Fn("sqrt", trace.Pow(S("c"), N(2)))), eqn.Options{})
+	sym := func(n string) eqn.Sym { return eqn.Sym{Name: n} }
+	e := eqn.Frac{Num: eqn.Row{sym("a"), eqn.Op{Text: "+"}, sym("b")}, Den: eqn.Sqrt{X: eqn.Script{Base: sym("c"), Sup: eqn.Num{Text: "2"}}}}
 	b, err := eqn.Layout(e, st)
 	if err != nil {
 		t.Fatal(err)
@@ -115,12 +55,14 @@ func TestLayout(t *testing.T) {
 
 func TestBreak(t *testing.T) {
 	st := eqn.Style{Size: 10}
-	var terms []trace.Expr
-	for _, s := range []string{"a_1", "a_2", "a_3", "a_4", "a_5", "a_6", "a_7", "a_8"} {
-		terms = append(terms, trace.Mul(S(s), S("gamma_w")))
+	var sum eqn.Row
+	for i, s := range []string{"a_1", "a_2", "a_3", "a_4", "a_5", "a_6", "a_7", "a_8"} {
+		if i > 0 {
+			sum = append(sum, eqn.Op{Text: "+"})
+		}
+		sum = append(sum, eqn.Row{eqn.Sym{Name: s}, eqn.Op{Text: "·"}, eqn.Sym{Name: "gamma_w"}})
 	}
-	sum := trace.Add(terms[0], terms[1:]...)
-	row := eqn.Row{eqn.Sym{Name: "x"}, eqn.Op{Text: "="}, eqn.FromExpr(sum, eqn.Options{}), eqn.Op{Text: "="}, eqn.Num{Text: "12.5"}}
+	row := eqn.Row{eqn.Sym{Name: "x"}, eqn.Op{Text: "="}, sum, eqn.Op{Text: "="}, eqn.Num{Text: "12.5"}}
 	lines, err := eqn.Break(row, 120, st)
 	if err != nil {
 		t.Fatal(err)

@@ -2,6 +2,8 @@ package eqn
 
 import (
 	"strings"
+
+	"github.com/plinth-calc/plinth/doc/notation"
 )
 
 // String writes n in a compact linear form, for tests and diagnostics:
@@ -28,7 +30,7 @@ func write(b *strings.Builder, n Node) {
 			write(b, x)
 		}
 	case Sym:
-		p := Split(n.Name)
+		p := notation.Split(n.Name)
 		if p.Prefix != "" {
 			b.WriteString(p.Prefix + ".")
 		}

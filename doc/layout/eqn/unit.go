@@ -2,48 +2,18 @@ package eqn
 
 import (
 	"math"
-	"strconv"
 	"strings"
 	"unicode"
-)
 
-// FormatNumber prints v with at most sig significant digits, trailing
-// zeros trimmed, and the minus sign as "−". It never uses an exponent
-// (see Number for that).
-func FormatNumber(v float64, sig int) string {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		if v == 0 {
-			return "0"
-		}
-		return strconv.FormatFloat(v, 'g', -1, 64)
-	}
-	mag := int(math.Floor(math.Log10(math.Abs(v))))
-	dec := sig - 1 - mag
-	if dec < 0 {
-		p := math.Pow(10, float64(-dec))
-		v = math.Round(v/p) * p
-		dec = 0
-	}
-	s := strconv.FormatFloat(v, 'f', dec, 64)
-	if strings.Contains(s, ".") {
-		s = strings.TrimRight(s, "0")
-		s = strings.TrimSuffix(s, ".")
-	}
-	if strings.HasPrefix(s, "-") {
-		s = "−" + s[1:]
-	}
-	if s == "−0" {
-		s = "0"
-	}
-	return s
-}
+	"github.com/plinth-calc/plinth/calc/units"
+)
 
 // Number prints v with at most sig significant digits; magnitudes of a
 // million and more, or below 0.0001, print as m × 10ⁿ.
 func Number(v float64, sig int) Node {
 	a := math.Abs(v)
 	if a == 0 || (a >= 1e-4 && a < 1e6) {
-		return Num{Text: FormatNumber(v, sig)}
+		return Num{Text: units.Significant(v, sig)}
 	}
 	exp := int(math.Floor(math.Log10(a)))
 	m := v / math.Pow(10, float64(exp))
@@ -51,7 +21,7 @@ func Number(v float64, sig int) Node {
 		m /= 10
 		exp++
 	}
-	return Row{Num{Text: FormatNumber(m, sig)}, Op{"×"}, Script{Base: Num{Text: "10"}, Sup: Num{Text: FormatNumber(float64(exp), 3)}}}
+	return Row{Num{Text: units.Significant(m, sig)}, Op{"×"}, Script{Base: Num{Text: "10"}, Sup: Num{Text: units.Significant(float64(exp), 3)}}}
 }
 
 // Quantity is a number followed by its unit, a thin space between

@@ -18,8 +18,8 @@ var fallback = map[rune]string{
 	'⁶': "^6", '⁷': "^7", '⁸': "^8", '⁹': "^9", '⁻': "^-",
 }
 
-// Vulgar reports whether r is a vulgar-fraction character (⅔).
-func Vulgar(r rune) bool {
+// vulgar reports whether r is a vulgar-fraction character (⅔).
+func vulgar(r rune) bool {
 	return r == '½' || r == '¼' || r == '¾' || r >= '⅐' && r <= '⅞'
 }
 
@@ -31,7 +31,7 @@ func Spell(s string, f Face) string {
 	font := Get(f)
 	need := false
 	for _, r := range s {
-		if Vulgar(r) || !font.Has(r) && fallback[r] != "" {
+		if vulgar(r) || !font.Has(r) && fallback[r] != "" {
 			need = true
 			break
 		}
@@ -42,7 +42,7 @@ func Spell(s string, f Face) string {
 	var b strings.Builder
 	for _, r := range s {
 		switch alt := fallback[r]; {
-		case alt != "" && (Vulgar(r) || !font.Has(r)):
+		case alt != "" && (vulgar(r) || !font.Has(r)):
 			b.WriteString(alt)
 		default:
 			b.WriteRune(r)

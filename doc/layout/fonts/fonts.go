@@ -74,6 +74,9 @@ type Font struct {
 	face Face
 	t    *ttf
 	adv  []int32 // per glyph advance, 1/1000 em, as the PDF width array
+	// kerns[g] says glyph g begins a kerning pair: most glyphs begin
+	// none, and for them the pair table is not consulted
+	kerns []bool
 }
 
 var (
@@ -92,9 +95,14 @@ func Get(f Face) *Font {
 		if err != nil {
 			panic(fmt.Sprintf("fonts: embedded %s: %v", f, err))
 		}
-		fo := &Font{face: f, t: t, adv: make([]int32, len(t.advances))}
+		fo := &Font{face: f, t: t, adv: make([]int32, len(t.advances)), kerns: make([]bool, t.glyphCount)}
 		for g, a := range t.advances {
 			fo.adv[g] = int32(int(a) * 1000 / t.upem)
+		}
+		for pair := range t.kern {
+			if l := int(pair >> 16); l < len(fo.kerns) {
+				fo.kerns[l] = true
+			}
 		}
 		loaded[f] = fo
 	})
@@ -140,8 +148,15 @@ func (f *Font) Kern(l, r rune) int {
 		return 0
 	}
 	gl, gr := f.glyph(l), f.glyph(r)
-	k := int(f.t.kern[uint32(gl)<<16|uint32(gr)])
-	return k * 1000 / f.t.upem
+	return f.kern(gl, gr)
+}
+
+// kern is the kerning of the glyph pair (l, r) in thousandths of an em.
+func (f *Font) kern(l, r int) int {
+	if l >= len(f.kerns) || !f.kerns[l] {
+		return 0
+	}
+	return int(f.t.kern[uint32(l)<<16|uint32(r)]) * 1000 / f.t.upem
 }
 
 // Units is the width of s in thousandths of an em, kerning included.
@@ -159,13 +174,41 @@ func (f *Font) Units(s string) int {
 		if g != 0 {
 			w += int(f.adv[g])
 			if kern && i > 0 {
-				w += int(f.t.kern[uint32(prev)<<16|uint32(g)]) * 1000 / f.t.upem
+				w += f.kern(prev, g)
 			}
 			prev = g
 		}
 		i += n
 	}
 	return w
+}
+
+// Measure is, in one pass over s, its Width and Ink at size and the first
+// rune the font lacks (Missing).
+func (f *Font) Measure(s string, size float64) (width, above, below float64, missing rune, lacks bool) {
+	w, top, bottom := 0, 0, 0
+	kern := len(f.t.kern) > 0
+	var prev int
+	for i := 0; i < len(s); {
+		r, n := rune(s[i]), 1
+		if r >= utf8.RuneSelf {
+			r, n = utf8.DecodeRuneInString(s[i:])
+		}
+		g := f.glyph(r)
+		if g != 0 {
+			w += int(f.adv[g])
+			if kern && i > 0 {
+				w += f.kern(prev, g)
+			}
+			prev = g
+			top = max(top, int(f.t.yMax[g]))
+			bottom = min(bottom, int(f.t.yMin[g]))
+		} else if !lacks {
+			missing, lacks = r, true
+		}
+		i += n
+	}
+	return float64(w) * size / 1000, f.em(top, size), f.em(-bottom, size), missing, lacks
 }
 
 // Width is the width of s set at size points, in points.

@@ -68,3 +68,18 @@ func TestSpell(t *testing.T) {
 		t.Errorf("Spell in the math face = %q", got)
 	}
 }
+
+// TestMeasure: Measure gives what Width, Ink and Missing give apart.
+func TestMeasure(t *testing.T) {
+	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
+		fo := fonts.Get(f)
+		for _, s := range []string{"", "AVAWAY To", "q_Ed = 1 883 kN", "γ′ N_γ ≤ ∑", "x\u2603y", "\xff", "WAVE ...."} {
+			w, a, d, r, lacks := fo.Measure(s, 9.5)
+			wa, wd := fo.Ink(s, 9.5)
+			wr, wl := fo.Missing(s)
+			if w != fo.Width(s, 9.5) || a != wa || d != wd || r != wr || lacks != wl {
+				t.Errorf("%s %q: Measure %v %v %v %q %v; apart %v %v %v %q %v", f, s, w, a, d, r, lacks, fo.Width(s, 9.5), wa, wd, wr, wl)
+			}
+		}
+	}
+}

@@ -1,14 +1,21 @@
-package sheet
+// Package suggest finds the nearest known name to an unknown one, for
+// "did you mean" hints: the one rule every stage uses (block words,
+// options, statements, symbols, metadata keys, units, templates).
+//
+// The rule: a name that is itself a candidate has no suggestion; a
+// candidate differing only in letter case wins ("kpa" → "kPa"), then one
+// differing only in letter case and underscores ("cu" → "c_u",
+// "gammasat" → "gamma_sat"); otherwise the candidate at the smallest
+// edit distance (Distance), allowed up to 1 for names of up to four runes
+// and 2 for longer ones, and always less than the name's length in runes
+// (so a single letter is corrected only for its case). Ties go to the
+// earlier candidate.
+package suggest
 
 import "strings"
 
-// Nearest returns the candidate closest to name, for "did you mean"
-// hints, and false when none is close. A candidate differing only in
-// letter case wins, then one differing only in underscores (cu → c_u,
-// gammasat → gamma_sat, site.firm_clay.cu → site.firm_clay.c_u rather than
-// the equally near site.firm_clay.c'); otherwise the smallest edit distance (Levenshtein, on
-// runes) up to 1 for names of up to four letters and 2 for longer ones,
-// ties going to the earlier candidate. name itself is never suggested.
+// Nearest returns the candidate nearest to name by the package's rule,
+// and false when none is near enough.
 func Nearest(name string, candidates []string) (string, bool) {
 	if name == "" {
 		return "", false
@@ -28,14 +35,14 @@ func Nearest(name string, candidates []string) (string, bool) {
 			return c, true
 		}
 	}
-	r := []rune(name)
+	n := len([]rune(name))
 	limit := 1
-	if len(r) > 4 {
+	if n > 4 {
 		limit = 2
 	}
 	best, bestD := "", limit+1
 	for _, c := range candidates {
-		if d := Distance(name, c); d < bestD && d < len(r) {
+		if d := Distance(name, c); d < bestD && d < n {
 			best, bestD = c, d
 		}
 	}
