@@ -190,12 +190,20 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	h := pad + f.h
 	var noteItems []draw.Item
 	if len(c.Note) > 0 {
-		y := h + 1
-		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
-			noteItems = ln.appendItems(noteItems, pad, y)
-			y += ln.h
+		ws := e.words(c.Note, noteStyle, c.Pos)
+		room := width - verdictW - 2*pad
+		if at := f.w + 14; f.lines == 1 && room-at >= 40 && noteLines(ws, room-at) == 1 {
+			// a short note beside the relation, on its line
+			ln := breakLines(ws, room-at, noteStyle)[0]
+			noteItems = ln.appendItems(noteItems, pad+at, pad+f.base-ln.base)
+		} else {
+			y := h + 1
+			for _, ln := range breakLines(ws, room, noteStyle) {
+				noteItems = ln.appendItems(noteItems, pad, y)
+				y += ln.h
+			}
+			h = y
 		}
-		h = y
 	}
 	h += pad
 	base := pad + f.base
