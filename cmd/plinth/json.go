@@ -272,6 +272,17 @@ func blockJSON(b *eval.Block) jsonBlock {
 				Factors: map[string]float64{"L": p.Spacing, "delta_s": p.Diff.Delta, "beta": p.Diff.Beta, "beta_lim": p.Diff.Limit}})
 		}
 	}
+	if pr := b.Platform; pr != nil {
+		for i, k := range pr.Cases {
+			f := map[string]float64{"q_k": k.Q, "W": k.W, "L": k.L, "gamma_q": k.Factor, "q_d": k.QD, "R_s": k.Rs, "R_p": k.Rp, "D_req": k.DReq, "util_0": k.UtilNone, "D": pr.D}
+			jc := jsonCase{Name: k.Name, Check: "platform", RD: k.Rd, Util: k.Util, OK: k.OK, Factors: f}
+			jb.Cases = append(jb.Cases, jc)
+			if i == pr.Governing {
+				g := jc
+				jb.Governing = &g
+			}
+		}
+	}
 	for _, c := range b.Cautions {
 		jb.Cautions = append(jb.Cautions, jsonCaution{Code: c.Code, Severity: c.Severity.String(), Message: c.Message, Case: c.Case})
 	}

@@ -3,11 +3,13 @@ package chart_test
 import (
 	"errors"
 	"flag"
-	"github.com/plinth-calc/plinth/internal/golden"
 	"math"
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/plinth-calc/plinth/internal/drawtest"
+	"github.com/plinth-calc/plinth/internal/golden"
 
 	"github.com/plinth-calc/plinth/doc/chart"
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -64,20 +66,7 @@ func TestTextsApart(t *testing.T) {
 	for _, d := range demos {
 		c := d.c()
 		items, _ := c.Draw()
-		var ts []draw.Text
-		for _, it := range items {
-			if x, ok := it.(draw.Text); ok {
-				ts = append(ts, x)
-			}
-		}
-		for i := range ts {
-			for j := i + 1; j < len(ts); j++ {
-				a, b := ts[i].Bounds(), ts[j].Bounds()
-				if a.X < b.X+b.W && b.X < a.X+a.W && a.Y < b.Y+b.H && b.Y < a.Y+a.H {
-					t.Errorf("%s: %q and %q overlap", d.name, ts[i].Text, ts[j].Text)
-				}
-			}
-		}
+		drawtest.Overlaps(t, d.name, items)
 	}
 }
 

@@ -1,16 +1,14 @@
 package chart_test
 
 import (
-	"bytes"
 	"flag"
-	"os"
 	"strings"
 	"testing"
-	"time"
+
+	"github.com/plinth-calc/plinth/internal/drawtest"
 
 	"github.com/plinth-calc/plinth/doc/chart"
 	"github.com/plinth-calc/plinth/doc/layout"
-	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
@@ -53,17 +51,5 @@ func TestDemoPDF(t *testing.T) {
 		Sheets: []layout.Sheet{{Pos: at(1), Fields: layout.Fields{Project: "Larchfield Depot", Title: "Charts", Calc: "D-1", By: "XY"},
 			Blocks: demoBlocks(t)}},
 	}
-	pages, diags := layout.Document(doc)
-	if diags.HasErrors() {
-		t.Fatal(diags)
-	}
-	var b bytes.Buffer
-	if err := pdf.Write(&b, pages, pdf.Options{Time: time.Date(2026, 1, 2, 3, 4, 5, 0, time.UTC)}); err != nil {
-		t.Fatal(err)
-	}
-	if *demo != "" {
-		if err := os.WriteFile(*demo, b.Bytes(), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
+	drawtest.DemoPDF(t, doc, *demo)
 }

@@ -346,6 +346,8 @@ func (c *composer) analysis(s *eval.Sheet, a *sheet.Analysis, b *eval.Block) []l
 		return c.size(s, b)
 	case b.Schedule != nil:
 		return c.schedule(s, b)
+	case b.Platform != nil:
+		return c.platform(s, b)
 	}
 	o := c.engineOut(s, b)
 	o.para(txt(fmt.Sprintf("The %s block %s has no result.", a.Kind, b.Name)))

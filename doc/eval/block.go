@@ -33,6 +33,7 @@ type Block struct {
 	Diff     *DiffResult // differential blocks
 	Size     *SizeResult // size blocks
 	Schedule *ScheduleResult
+	Platform *PlatformResult
 	Options  []string // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
@@ -140,11 +141,15 @@ func (e *evaluator) analysis(s *Sheet, b *sheet.Analysis) {
 		e.differential(s, b, blk)
 		return
 	}
-	if b.Kind == sheet.KindSchedule {
+	if b.Kind == sheet.KindSchedule || b.Kind == sheet.KindPlatform {
 		g, gok := e.findGround(s, b.Ground)
 		blk.On = g
 		opts := e.options(b)
-		if !gok || opts == nil || !e.schedule(s, b, blk, opts) {
+		run := e.schedule
+		if b.Kind == sheet.KindPlatform {
+			run = e.platformBlock
+		}
+		if !gok || opts == nil || !run(s, b, blk, opts) {
 			e.failResults(s, blk)
 		}
 		return

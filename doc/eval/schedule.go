@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 
-	"github.com/plinth-calc/plinth/calc/design"
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
@@ -90,30 +89,7 @@ func (e *evaluator) schedule(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 	}
 	base := size.Input{Bearing: bin}
 	base.Bearing.Actions = nil
-	lengthOpt := func(name string) (float64, bool) {
-		x := o[name]
-		if x == nil {
-			return 0, true
-		}
-		q, qok := e.quantity(sc, x, units.Length, "a length")
-		if qok && !(q.V > 0) {
-			e.errs.Add(x.Value.Span, "%s = %s: must be greater than 0", name, x.Value.Value)
-			qok = false
-		}
-		return q.V, qok
-	}
-	var good bool
-	base.Step, good = lengthOpt("step")
-	ok = ok && good
-	base.Max, good = lengthOpt("max")
-	ok = ok && good
-	if x := o["sizes"]; x != nil {
-		ws, wok := e.list(sc, x, units.Length, "a width")
-		ok = ok && wok
-		for _, w := range ws {
-			base.Sizes = append(base.Sizes, w.V)
-		}
-	}
+	ok = e.sizeOptions(sc, o, &base, sin) && ok
 	if x := o["ratio"]; x != nil {
 		q, qok := e.quantity(sc, x, units.None, "a pure number")
 		ok = ok && qok
@@ -123,18 +99,7 @@ func (e *evaluator) schedule(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 		}
 		base.Plan, base.Ratio = size.Ratio, q.V
 	}
-	switch o.word("eccentricity", "B/3") {
-	case "B/6":
-		base.Ecc = size.Sixth
-	case "none":
-		base.Ecc = size.NoEcc
-	}
-	res := &ScheduleResult{Ecc: base.Ecc, NoSettle: o.word("settlement", "yes") == "no", Footing: f.Model}
-	if !res.NoSettle {
-		kind, _ := design.ParseServiceKind(o.word("load", "characteristic"))
-		base.Service = kind
-		base.Settle = &sin
-	}
+	res := &ScheduleResult{Ecc: base.Ecc, NoSettle: base.Settle == nil, Footing: f.Model}
 	in := size.ScheduleInput{Base: base}
 	if x := o["beta_limit"]; x != nil {
 		q, qok := e.quantity(sc, x, units.None, "a pure number")

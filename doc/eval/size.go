@@ -5,6 +5,7 @@ import (
 	"fmt"
 
 	"github.com/plinth-calc/plinth/calc/design"
+	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
@@ -44,35 +45,7 @@ func (e *evaluator) sizeBlock(s *Sheet, b *sheet.Analysis, blk *Block, o opts) b
 	in := size.Input{Bearing: bin}
 	in.Bearing.Actions = append([]site.Action(nil), f.Actions...)
 	sc := scope{e: e, s: s}
-	ok := true
-	length := func(name string) (float64, bool) {
-		x := o[name]
-		if x == nil {
-			return 0, true
-		}
-		q, qok := e.quantity(sc, x, units.Length, "a length")
-		if qok && !(q.V > 0) {
-			e.errs.Add(x.Value.Span, "%s = %s: must be greater than 0", name, x.Value.Value)
-			qok = false
-		}
-		return q.V, qok
-	}
-	var good bool
-	in.Step, good = length("step")
-	ok = ok && good
-	in.Max, good = length("max")
-	ok = ok && good
-	if x := o["sizes"]; x != nil {
-		ws, wok := e.list(sc, x, units.Length, "a width")
-		ok = ok && wok
-		for _, w := range ws {
-			in.Sizes = append(in.Sizes, w.V)
-		}
-		if o["step"] != nil {
-			e.errs.Add(o["step"].Name.Span, "step is not used with sizes: give one or the other")
-			ok = false
-		}
-	}
+	ok := e.sizeOptions(sc, o, &in, sin)
 	switch f.Model.Shape {
 	case site.Rectangle:
 		switch {
@@ -95,18 +68,7 @@ func (e *evaluator) sizeBlock(s *Sheet, b *sheet.Analysis, blk *Block, o opts) b
 			ok = false
 		}
 	}
-	switch o.word("eccentricity", "B/3") {
-	case "B/6":
-		in.Ecc = size.Sixth
-	case "none":
-		in.Ecc = size.NoEcc
-	}
-	res := &SizeResult{Ecc: in.Ecc, NoSettle: o.word("settlement", "yes") == "no"}
-	if !res.NoSettle {
-		kind, _ := design.ParseServiceKind(o.word("load", "characteristic"))
-		in.Service = kind
-		in.Settle = &sin
-	}
+	res := &SizeResult{Ecc: in.Ecc, NoSettle: in.Settle == nil}
 	if f.SelfWeight {
 		sw := design.SelfWeight{Ground: blk.On.Model}
 		if f.GammaCGiven {
@@ -161,4 +123,47 @@ func (e *evaluator) sizeBlock(s *Sheet, b *sheet.Analysis, blk *Block, o opts) b
 	}
 	e.addCheck(s, blk, blk.Name+" size: util <= 1", "<=", units.Quantity{V: r.At.Util()}, units.Quantity{V: 1}, units.Dimensionless, r.At.Util(), r.At.OK, note)
 	return true
+}
+
+// sizeOptions reads the options a size and a schedule block share: the
+// increment, the largest width or the standard sizes, the eccentricity
+// limit and the settlement check (with its serviceability combination).
+func (e *evaluator) sizeOptions(sc scope, o opts, in *size.Input, sin settle.Input) bool {
+	ok := true
+	length := func(name string) float64 {
+		x := o[name]
+		if x == nil {
+			return 0
+		}
+		q, qok := e.quantity(sc, x, units.Length, "a length")
+		if qok && !(q.V > 0) {
+			e.errs.Add(x.Value.Span, "%s = %s: must be greater than 0", name, x.Value.Value)
+			qok = false
+		}
+		ok = ok && qok
+		return q.V
+	}
+	in.Step, in.Max = length("step"), length("max")
+	if x := o["sizes"]; x != nil {
+		ws, wok := e.list(sc, x, units.Length, "a width")
+		ok = ok && wok
+		for _, w := range ws {
+			in.Sizes = append(in.Sizes, w.V)
+		}
+		if o["step"] != nil {
+			e.errs.Add(o["step"].Name.Span, "step is not used with sizes: give one or the other")
+			ok = false
+		}
+	}
+	switch o.word("eccentricity", "B/3") {
+	case "B/6":
+		in.Ecc = size.Sixth
+	case "none":
+		in.Ecc = size.NoEcc
+	}
+	if o.word("settlement", "yes") != "no" {
+		in.Service, _ = design.ParseServiceKind(o.word("load", "characteristic"))
+		in.Settle = &sin
+	}
+	return ok
 }

@@ -19,6 +19,7 @@ const (
 	KindDifferential
 	KindSize
 	KindSchedule
+	KindPlatform
 )
 
 // Kinds are the block words in Kind order (from Specs).

@@ -4,6 +4,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/bearing"
 	"github.com/plinth-calc/plinth/calc/capacity"
 	"github.com/plinth-calc/plinth/calc/kind"
+	"github.com/plinth-calc/plinth/calc/platform"
 	"github.com/plinth-calc/plinth/calc/settle"
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/size"
@@ -32,6 +33,7 @@ var Specs = []*kind.Spec{
 	KindDifferential: &settle.DiffSpec,
 	KindSize:         &size.Spec,
 	KindSchedule:     &size.ScheduleSpec,
+	KindPlatform:     &platform.Spec,
 }
 
 // Spec is the declaration of kind k.

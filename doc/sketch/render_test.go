@@ -1,15 +1,13 @@
 package sketch_test
 
 import (
-	"bytes"
 	"flag"
-	"os"
 	"strings"
 	"testing"
-	"time"
+
+	"github.com/plinth-calc/plinth/internal/drawtest"
 
 	"github.com/plinth-calc/plinth/doc/layout"
-	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/sketch"
 	"github.com/plinth-calc/plinth/doc/source"
 )
@@ -32,17 +30,5 @@ func TestDemoPDF(t *testing.T) {
 	doc := layout.Doc{Info: layout.Info{Title: "Footing sketches", Fingerprint: "0123456789abcdef"},
 		Sheets: []layout.Sheet{{Pos: source.Span{File: src},
 			Fields: layout.Fields{Project: "Larchfield Depot", Title: "Sketches", Calc: "D-2", By: "XY"}, Blocks: blocks}}}
-	pages, diags := layout.Document(doc)
-	if diags.HasErrors() {
-		t.Fatal(diags)
-	}
-	var b bytes.Buffer
-	if err := pdf.Write(&b, pages, pdf.Options{Time: time.Date(2026, 1, 2, 3, 4, 5, 0, time.UTC)}); err != nil {
-		t.Fatal(err)
-	}
-	if *demo != "" {
-		if err := os.WriteFile(*demo, b.Bytes(), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
+	drawtest.DemoPDF(t, doc, *demo)
 }

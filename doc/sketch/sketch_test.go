@@ -4,11 +4,13 @@ import (
 	"errors"
 	"flag"
 	"fmt"
-	"github.com/plinth-calc/plinth/internal/golden"
 	"math"
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/plinth-calc/plinth/internal/drawtest"
+	"github.com/plinth-calc/plinth/internal/golden"
 
 	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/sketch"
@@ -63,7 +65,6 @@ func TestInside(t *testing.T) {
 		if draw.Dump(items) != draw.Dump(again) {
 			t.Errorf("%s: two draws differ", c.name)
 		}
-		var ts []draw.Text
 		for _, it := range items {
 			r := it.Bounds()
 			if math.IsNaN(r.X+r.Y+r.W+r.H) || math.IsInf(r.X+r.Y+r.W+r.H, 0) {
@@ -72,18 +73,8 @@ func TestInside(t *testing.T) {
 			if r.X < -1e-9 || r.Y < -1e-9 || r.X+r.W > c.w+1e-9 || r.Y+r.H > c.h+1e-9 {
 				t.Errorf("%s: %T %+v leaves the %g × %g sketch", c.name, it, r, c.w, c.h)
 			}
-			if x, ok := it.(draw.Text); ok {
-				ts = append(ts, x)
-			}
 		}
-		for i := range ts {
-			for j := i + 1; j < len(ts); j++ {
-				a, b := ts[i].Bounds(), ts[j].Bounds()
-				if a.X < b.X+b.W && b.X < a.X+a.W && a.Y < b.Y+b.H && b.Y < a.Y+a.H {
-					t.Errorf("%s: %q and %q overlap", c.name, ts[i].Text, ts[j].Text)
-				}
-			}
-		}
+		drawtest.Overlaps(t, c.name, items)
 	}
 }
 
