@@ -13,8 +13,8 @@ import (
 )
 
 // maxCaseCols is the most case columns a compact table holds before it
-// is split.
-const maxCaseCols = 6
+// is split: four, so that a table of many rows folds into two bands.
+const maxCaseCols = 4
 
 // bearing prints a bearing block: a summary of every case with the
 // governing one marked and the governing check, the working common to
@@ -41,10 +41,10 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 
 	// Summary of the cases and the governing check.
 	if len(r.Cases) > 0 {
-		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+		t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
 			unitHeader("V_d", fu.Name), unitHeader("H_d", fu.Name), unitHeader("R_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
 			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
-			Caption: []layout.Run{txt("Bearing: every design combination and drainage condition; the governing case (highest utilisation) is marked.")}}
+			Caption: []layout.Run{txt("Bearing: every design combination and drainage condition; the governing case (highest utilisation) is in bold.")}}
 		for i, cs := range r.Cases {
 			t.Rows = append(t.Rows, caseRow(i, r.Governing, cs.Combination, cs.Drainage.String(), cs.V, cs.H, cs.R, cs.Util, cs.OK, fu.Name))
 		}
@@ -75,15 +75,15 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 	}
 	o.compactCases("Other bearing cases", tr, bear, r.Governing, steps, "", func(i int) string { return r.Cases[i].Drainage.String() },
-		func(i int) float64 { return r.Cases[i].Util })
+		func(i int) float64 { return r.Cases[i].Util }, "V_d", "H_d", "R_d")
 
 	// Sliding.
 	if len(r.Sliding) > 0 {
 		o.head(fmt.Sprintf("Sliding resistance of %s", b.Of.Name))
-		t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
+		t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Case")}, {txt("Combination")}, {txt("Drainage")},
 			unitHeader("H_d", fu.Name), unitHeader("V_d", fu.Name), unitHeader("R_h_d", fu.Name), {txt("Utilisation")}, {txt("Verdict")}},
 			Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft},
-			Caption: richText("Sliding (EN 1997-1 6.5.3): every design combination; V_d is V′_d in drained cases; the governing case is marked.", layout.Regular)}
+			Caption: richText("Sliding (EN 1997-1 6.5.3): every design combination; V_d is V′_d in drained cases; the governing case is in bold.", layout.Regular)}
 		for i, sc := range r.Sliding {
 			row := caseRow(i, r.GoverningSliding, sc.Combination, sc.Drainage.String(), sc.H, sc.V, sc.R, sc.Util, sc.OK, fu.Name)
 			row.Cells[0] = layout.Cell{txt(fmt.Sprintf("S%d", i+1))}
@@ -103,10 +103,19 @@ func (c *composer) bearing(s *eval.Sheet, b *eval.Block) []layout.Block {
 		}
 		if g := r.GoverningSliding; g >= 0 {
 			o.head(fmt.Sprintf("Governing sliding case S%d: %s", g+1, r.Sliding[g].Name))
+			if r.Governing >= 0 { // the load and geometry by the governing bearing case's formulas
+				o.asCase = map[string]bool{}
+				for _, i := range steps[r.Cases[r.Governing].Name] {
+					if st := tr.Steps[i]; st.Formula != nil {
+						o.asCase[st.Symbol] = true
+					}
+				}
+			}
 			o.steps(tr, steps[slide[g]], fmt.Sprintf("sliding case S%d (governing)", g+1))
+			o.asCase = nil
 		}
 		o.compactCases("Other sliding cases", tr, slide, r.GoverningSliding, steps, "S", func(i int) string { return r.Sliding[i].Drainage.String() },
-			func(i int) float64 { return r.Sliding[i].Util })
+			func(i int) float64 { return r.Sliding[i].Util }, "H_d", "R_h_d")
 	}
 
 	// Any case the engine traced that is neither (none expected).
@@ -160,7 +169,10 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 	cells := []layout.Cell{{no}, {txt(comb)}, {txt(drainage)}, {txt(as)}, {txt(num(b, unit))}, {txt(rs)},
 		{mark(units.Utilisation(util))}, {verdict}}
 	if i == gov {
-		cells[2] = layout.Cell{txt(drainage), bold("  governing")}
+		cells[1] = layout.Cell{bold(comb)}
+		if ok {
+			cells[7] = layout.Cell{bold("OK")}
+		}
 	}
 	return layout.Row{Cells: cells}
 }
@@ -172,7 +184,33 @@ func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, 
 // the table. With detail = governing only the cases within 10 % of the
 // governing utilisation stay in the main flow; the others go to the
 // appendix.
-func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64) {
+//
+// With detail = governing the values the case summary on the sheet
+// gives (summarised: the demand and the resistance) are not tabulated
+// again.
+func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, gov int, steps map[string][]int, prefix string, drainage func(int) string, util func(int) float64, summarised ...string) {
+	if !o.c.governingOnly() {
+		summarised = nil // detail = full prints every value in place
+	}
+	o.inSummary = map[string]bool{}
+	for _, sym := range summarised {
+		o.inSummary[sym] = true
+	}
+	defer func() { o.inSummary = nil }()
+	var inSummary []layout.Run
+	for i, sym := range summarised {
+		sep := ", "
+		switch i {
+		case 0:
+			sep = " "
+		case len(summarised) - 1:
+			sep = " and "
+		}
+		inSummary = append(inSummary, txt(sep), layout.Run{Math: eqn.Sym{Name: sym}, Own: true})
+	}
+	if len(inSummary) > 0 {
+		inSummary = append(inSummary, txt(" of each case are in the case summary."))
+	}
 	var near, far []int
 	for i := range cases {
 		switch {
@@ -188,24 +226,26 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 	}
 	o.head(title)
 	if len(near) > 0 {
-		what := "Each column is one case (numbered as in the summary above); each row a value of its working, in the order computed, by the formulas shown for the governing case; values the same in every case of a table are given once, in its caption."
+		what := "A column per case (numbered as in the summary above), a row per value of its working in the order computed, by the formulas of the governing case; values the same in every case of a table are in its caption."
 		if o.c.governingOnly() {
-			what = "The cases within 10 % of the governing utilisation. " + what
+			what = "The cases within 10 % of the governing utilisation: " + strings.ToLower(what[:1]) + what[1:]
 		}
-		o.para(txt(what))
-		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage)
+		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, append([]layout.Run{txt(what)}, inSummary...))
 	}
 	if len(far) > 0 {
-		o.toAppendix(fmt.Sprintf("%s %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", plural(len(far), "other case"), caseList(prefix, far)))
-		o.apx = append(o.apx, &layout.Para{Pos: o.p, Runs: []layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}})
-		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage)
+		what := fmt.Sprintf("The other cases %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", caseList(prefix, far))
+		if len(far) == 1 {
+			what = fmt.Sprintf("The other case %s (utilisation below 90 %% of the governing case) is tabulated the same way in the", caseList(prefix, far))
+		}
+		o.toAppendix(what)
+		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, append([]layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}, inSummary...))
 	}
 }
 
 // caseTables adds the compact tables of the cases idx to out, one per
 // drainage condition (split at maxCaseCols), each followed by the
 // cautions raised in its cases.
-func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string) []layout.Block {
+func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []string, idx []int, steps map[string][]int, prefix string, drainage func(int) string, lead []layout.Run) []layout.Block {
 	var order []string
 	byDrain := map[string][]int{}
 	for _, i := range idx {
@@ -221,6 +261,10 @@ func (o *engineOut) caseTables(out []layout.Block, tr *trace.Trace, cases []stri
 		for start := 0; start < len(idx); start += maxCaseCols {
 			chunk := idx[start:min(start+maxCaseCols, len(idx))]
 			cap := []layout.Run{txt(fmt.Sprintf("%s cases (%s).", capital(d), caseList(prefix, chunk)))}
+			if len(lead) > 0 {
+				cap = append(append(lead, txt(" ")), cap...)
+				lead = nil
+			}
 			out = append(out, o.caseTable(tr, cases, chunk, steps, prefix, cap))
 		}
 		o.blocks = nil
@@ -267,7 +311,7 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 			vals[k][i] = st.Value
 		}
 	}
-	t := &layout.Table{Pos: o.p, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
+	t := &layout.Table{Pos: o.p, Compact: true, Header: []layout.Cell{{txt("Symbol")}, {txt("Unit")}},
 		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft},
 		Caption: caption}
 	for _, i := range idx {
@@ -276,6 +320,9 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 	}
 	var same []layout.Run
 	for _, k := range keys {
+		if k.n == 0 && o.inSummary[k.sym] {
+			continue // in the case summary on the sheet
+		}
 		if v, ok := constantRow(vals[k], idx); ok {
 			if len(same) > 0 {
 				same = append(same, txt(", "))
@@ -294,7 +341,7 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 		}
 		t.Rows = append(t.Rows, row)
 	}
-	fold(t, 2+len(idx))
+	o.c.foldToWidth(t, 2+len(idx))
 	if len(same) > 0 {
 		t.Caption = append(t.Caption, txt(" The same in every case of this table: "))
 		t.Caption = append(t.Caption, same...)
@@ -303,15 +350,24 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 	return t
 }
 
-// maxFoldCols is the most columns a folded compact table has.
-const maxFoldCols = 12
+// foldToWidth sets a narrow table of w columns and many rows in as
+// many side-by-side bands as the text column holds at the table's
+// natural width (at most four; read down the first band, then the
+// next), so a table of a few cases does not run down several pages.
+func (c *composer) foldToWidth(t *layout.Table, w int) {
+	if len(t.Rows) < 8 {
+		return
+	}
+	nat := layout.NaturalWidth(t)
+	if nat <= 0 {
+		return
+	}
+	foldBands(t, w, min(4, int((c.width+2)/nat), len(t.Rows)/4))
+}
 
-// fold sets a narrow table of many rows in side-by-side bands of w
-// columns (read down the first band, then the next), so a table of one
-// or two cases does not run down several pages.
-func fold(t *layout.Table, w int) {
-	bands := min(maxFoldCols/w, 3)
-	if bands < 2 || len(t.Rows) < 12 {
+// foldBands sets a table of w columns in the given number of bands.
+func foldBands(t *layout.Table, w, bands int) {
+	if bands < 2 || len(t.Rows) < 2*bands {
 		return
 	}
 	n := (len(t.Rows) + bands - 1) / bands

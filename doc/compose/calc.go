@@ -33,6 +33,27 @@ func (c *composer) calc(s *eval.Sheet, b *sheet.Calc) []layout.Block {
 			}
 		}
 	}
+	return runsOfLines(out)
+}
+
+// runsOfLines gathers consecutive calculation lines (inputs and
+// statements) into runs the layout may set several to a row.
+func runsOfLines(bs []layout.Block) []layout.Block {
+	var out []layout.Block
+	for _, b := range bs {
+		switch b.(type) {
+		case *layout.Statement, *layout.Input:
+			if n := len(out); n > 0 {
+				if s, ok := out[n-1].(*layout.Steps); ok {
+					s.Lines = append(s.Lines, b)
+					continue
+				}
+			}
+			out = append(out, &layout.Steps{Pos: b.Where(), Lines: []layout.Block{b}})
+		default:
+			out = append(out, b)
+		}
+	}
 	return out
 }
 

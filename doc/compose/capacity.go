@@ -29,7 +29,7 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if idx := steps[""]; len(idx) > 0 {
 		o.steps(tr, idx, "capacity")
 	}
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header:  []layout.Cell{unitHeader("B", "m"), unitHeader("L", "m"), unitHeader("q_a_b", "kPa"), unitHeader("q_a_s", "kPa"), unitHeader("q_allow", "kPa"), {txt("Governs")}, {txt("Bearing case")}},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
 		Caption: []layout.Run{txt(fmt.Sprintf("Allowable pressure against width for %s, %s; the footing's own width is marked.", b.Of.Name, capacity.Assumes))}}
@@ -52,14 +52,6 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 			qa = append(qa, row.QAllow/1e3)
 		}
 	}
-	o.add(t)
-	for _, n := range names {
-		if r.Own >= 0 && r.Own < len(r.Rows) && strings.HasPrefix(n, "B = ") && n == "B = "+f(r.Rows[r.Own].B, mU)+" m" {
-			o.label("Working at the footing's own width, " + n)
-			o.steps(tr, steps[n], n)
-		}
-	}
-	o.rest(tr, "capacity table", nil)
 	if len(xs) > 1 {
 		// The engine's crossings join the rows: there both limits are the
 		// allowable pressure, and the governing limit changes.
@@ -81,7 +73,9 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 		bear := chart.Series{Name: "bearing", X: xs, Y: qb, Dash: chart.Dashed}
 		sett := chart.Series{Name: "settlement", X: xs, Y: qs, Dash: chart.Dotted}
 		low := chart.Series{Name: "allowable (the lower)", X: xs, Y: qa, Style: chart.Band}
-		ch := chart.Chart{W: math.Min(c.width, 400), H: 230,
+		// the chart beside the table of its values
+		share := math.Min(0.55, (layout.NaturalWidth(t)+4)/(c.width-chartGap))
+		ch := chart.Chart{W: (c.width - chartGap) * (1 - share), H: 180,
 			X:       chart.Axis{Title: "footing width B (m)", Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
 			Y:       chart.Axis{Title: "allowable pressure (kPa)"},
 			Series:  []chart.Series{low, bear, sett},
@@ -90,11 +84,21 @@ func (c *composer) capacity(s *eval.Sheet, b *eval.Block) []layout.Block {
 			ch.Guides = []chart.Guide{{Value: r.Rows[r.Own].B, Label: b.Of.Name + " B = " + f(r.Rows[r.Own].B, mU) + " m"}}
 		}
 		if d, err := ch.Drawing(o.p, []layout.Run{txt("Allowable bearing pressure against footing width.")}); err == nil {
-			o.add(d)
+			o.add(&layout.Beside{Pos: o.p, Left: []layout.Block{t}, Right: []layout.Block{d}, Share: share})
 		} else {
+			o.add(t)
 			c.diags.Add(b.Span, "capacity chart: %v", err)
 		}
+	} else {
+		o.add(t)
 	}
+	for _, n := range names {
+		if r.Own >= 0 && r.Own < len(r.Rows) && strings.HasPrefix(n, "B = ") && n == "B = "+f(r.Rows[r.Own].B, mU)+" m" {
+			o.label("Working at the footing's own width, " + n)
+			o.steps(tr, steps[n], n)
+		}
+	}
+	o.rest(tr, "capacity table", nil)
 	c.sources(b)
 	return o.done()
 }

@@ -45,6 +45,16 @@ type composer struct {
 	selfShown map[*eval.Footing]*eval.Block   // the block that printed each footing's self-weight working
 	uses      map[*eval.Footing][]*eval.Block // each footing's analyses (sketch.go)
 	texts     *eqn.Texts                      // formula texts set by fits, reused
+	printed   map[string]bool                 // engine steps printed on the current sheet (stepKey)
+	shapes    map[string]string               // formulas printed in full on the current sheet (shapeKey) → the symbol
+	written   map[string]writtenOut           // long settlement formulas written out in the package (shapeKey)
+	firstAt   map[string]*firstLine           // the line that first printed each computed engine step (stepKey)
+}
+
+// writtenOut is a long formula written out in full: its symbol, its sheet
+// and the anchor on its line.
+type writtenOut struct {
+	symbol, sheet, anchor string
 }
 
 // raised is an engine caution with the place it was printed.
@@ -78,7 +88,8 @@ func (c *composer) recover(diags *source.List) {
 }
 
 func newComposer(res *eval.Result, opt Options) *composer {
-	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, texts: eqn.NewTexts()}
+	c := &composer{res: res, opt: opt, inputs: map[*eval.Symbol]string{}, texts: eqn.NewTexts(),
+		written: map[string]writtenOut{}, firstAt: map[string]*firstLine{}}
 	c.refs.linked = !opt.Bare
 	return c
 }
@@ -99,32 +110,28 @@ func (c *composer) document() layout.Doc {
 	// (when any working was moved there), the end matter. The cover's
 	// contents give each one's pages (layout.PageRef on its anchor).
 	c.matter = matterTitles
-	if len(c.appendix) > 0 {
-		c.matter = append([]matterTitle{{"Appendix: further working", "appendix"}}, c.matter...)
-	}
 	doc.Sheets = append(doc.Sheets, c.cover(), c.summary())
 	if c.opt.Changes != nil {
 		doc.Sheets = append(doc.Sheets, c.changesSheet())
 	}
 	doc.Sheets = append(doc.Sheets, sheets...)
-	if len(c.appendix) > 0 {
-		doc.Sheets = append(doc.Sheets, c.appendixSheet())
-	}
-	doc.Sheets = append(doc.Sheets, c.endMatter()...)
+	doc.Sheets = append(doc.Sheets, c.endMatter()...) // the appendix opens it
 	return doc
 }
 
-// appendixSheet holds the working left out of the main flow (detail =
+// appendixBlocks are the working left out of the main flow (detail =
 // governing): per block, the other cases' tables and the sublayer
-// tables, each headed by a link back to its block.
-func (c *composer) appendixSheet() layout.Sheet {
-	out := c.matterSheet("Appendix: further working", "appendix")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "Appendix: further working"),
-		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working that the sheets leave out of their main flow (the package prints the governing working in full; detail = full in package.yaml prints everything in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block. Each heading links back to its block.")}})
-	out.Blocks = append(out.Blocks, c.appendix...)
-	return out
+// tables, each headed by a link back to its block. They open the end
+// matter's sheet.
+func (c *composer) appendixBlocks() []layout.Block {
+	p := c.matterPos()
+	out := []layout.Block{&layout.Anchor{Pos: p, Name: "appendix"}, heading(p, 1, appendixTitle),
+		&layout.Para{Pos: p, Runs: []layout.Run{txt("The working the sheets leave out of their main flow (detail = full in package.yaml prints it in place): the cases further than 10 % from the governing utilisation and the stresses by sublayer, block by block, each heading linked to its block.")}}}
+	return append(out, c.appendix...)
 }
+
+// appendixTitle heads the appendix.
+const appendixTitle = "Appendix: further working"
 
 // sheet converts one evaluated sheet.
 func (c *composer) sheet(s *eval.Sheet) layout.Sheet {
@@ -133,6 +140,7 @@ func (c *composer) sheet(s *eval.Sheet) layout.Sheet {
 		Fields: c.fields(s.Meta),
 	}
 	c.level = 0
+	c.printed, c.shapes = map[string]bool{}, map[string]string{}
 	out.Blocks = append(out.Blocks, &layout.Anchor{Pos: out.Pos, Name: sheetAnchor(s.Index)})
 	out.Blocks = append(out.Blocks, c.blocks(s, s.Src.Body)...)
 	return out

@@ -153,6 +153,16 @@ func norm(s string) string {
 	return space.ReplaceAllString(strings.ReplaceAll(s, "−", "-"), " ")
 }
 
+// squash drops the digits, spaces and superscript digits of s.
+func squash(s string) string {
+	return strings.Map(func(r rune) rune {
+		if r >= '0' && r <= '9' || r == ' ' || r == '²' || r == '³' {
+			return -1
+		}
+		return r
+	}, s)
+}
+
 // checkText checks what every calculation package must show.
 func checkText(t *testing.T, res *eval.Result, pages *layout.Pages, text string) {
 	t.Helper()
@@ -181,7 +191,9 @@ func checkText(t *testing.T, res *eval.Result, pages *layout.Pages, text string)
 			if !strings.Contains(all, v) {
 				t.Errorf("%s: %s = %s not printed", s.Name(), y.Name, v)
 			}
-			if u := strings.TrimRight(y.Unit.Name, "0123456789"); u != "" && u != "deg" && !strings.Contains(all, u) {
+			// a unit's exponents are set raised, which text extraction may
+			// place apart from the unit: compare without digits and spaces
+			if u := strings.TrimRight(y.Unit.Name, "0123456789"); u != "" && u != "deg" && !strings.Contains(all, u) && !strings.Contains(squash(all), squash(u)) {
 				t.Errorf("%s: unit %s of %s not printed", s.Name(), y.Unit.Name, y.Name)
 			}
 		}

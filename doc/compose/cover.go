@@ -180,8 +180,22 @@ func (c *composer) cover() layout.Sheet {
 		}})
 	}
 	for _, mt := range c.matter {
+		title := cell(layout.Run{Text: mt.title, Link: mt.anchor})
+		if mt.anchor == "registers" {
+			title = nil
+			secs := matterSections
+			if len(c.appendix) > 0 {
+				secs = append([]matterTitle{{appendixTitle, "appendix"}}, secs...)
+			}
+			for i, sec := range secs {
+				if i > 0 {
+					title = append(title, txt(" · "))
+				}
+				title = append(title, layout.Run{Text: sec.title, Link: sec.anchor, Own: true})
+			}
+		}
 		contents.Rows = append(contents.Rows, layout.Row{Pos: p, Cells: []layout.Cell{
-			cell(sheetPages(mt.anchor)), nil, cell(layout.Run{Text: mt.title, Link: mt.anchor}), nil, nil,
+			cell(sheetPages(mt.anchor)), nil, title, nil, nil,
 		}})
 	}
 	add(contents)
@@ -234,8 +248,12 @@ func (c *composer) signOff(p source.Span) *layout.Drawing {
 // matterTitle names a matter sheet and its anchor.
 type matterTitle struct{ title, anchor string }
 
-// matterTitles are the end-matter sheets in order.
-var matterTitles = []matterTitle{
+// matterTitles are the end-matter sheets in order: one sheet, its
+// sections listed in its contents row.
+var matterTitles = []matterTitle{{registersTitle, "registers"}}
+
+// matterSections are the sections of the end-matter sheet.
+var matterSections = []matterTitle{
 	{"Check register", "check-register"},
 	{"Input register", "input-register"},
 	{"References", "references"},

@@ -22,15 +22,17 @@
 // numbers, a summary of the checks, the revision history and a checker's
 // sign-off box), the summary of results (summary.go: the design basis
 // from package.yaml, a row per footing block with its governing verdicts
-// and page, the open items), then every sheet in file-name order, the
-// appendix (working moved out of the main flow by detail = governing,
-// when there is any), then the end matter: the check register (demand,
-// capacity, utilisation, verdict, page), the input register (block
-// tables pointed to, not repeated; the assumed values), the references
+// and page, the open items), then every sheet in file-name order, then
+// one end sheet (matter.go): the appendix (working moved out of the main
+// flow by detail = governing, when there is any), the check register
+// (condition, demand, capacity, utilisation, verdict, page), the input
+// register (one table; block tables pointed to, not repeated; the assumed
+// values, each once with every block that assumed it), the references
 // list and the cautions (every engine caution, most severe first, with
-// where it was raised, and the standing cautions). Each is a layout sheet
-// of its own, so each has its own PDF bookmark and the title block on
-// every page.
+// where it was raised, one row for a caution raised alike in several
+// places, and the standing cautions). Each sheet is a layout sheet of
+// its own, so each has its own PDF bookmark and the title block on
+// every page; the end sheet's sections share one row of the contents.
 //
 // Page numbers printed in text (summary, check register, appendix
 // pointers) and the cover's contents are page references
@@ -46,11 +48,17 @@
 // Detail. package.yaml's detail (governing, the default, or full) says
 // how much of each engine block is printed in place. With governing the
 // compact tables keep only the cases within 10 % of the governing
-// utilisation (the others go to the appendix), each citation prints once
-// per block, a step already expanded in the block is listed by value,
-// rows the same in every column of a compact table print once in its
-// caption, and a settlement's repeated per-layer working is printed in
-// full once (the layer with the most steps) and tabulated for all.
+// utilisation (the others go to the appendix) and leave out the demand
+// and resistance the case summary gives, each citation prints once per
+// block, and no working is written out twice (repeat.go): a step already
+// printed on the sheet is listed by value, one printed alike on an
+// earlier sheet on the same ground by value with its page, one whose
+// formula is already written out by its value and inputs, the long
+// settlement formulas once in the package; rows the same in every column
+// of a compact table print once in its caption, and a settlement's
+// repeated per-layer working is printed in full once (the layer with the
+// most steps) and tabulated for all. With full everything is written out
+// in place.
 //
 // Title block fields come from the sheet's front matter laid over
 // package.yaml: Rev is the sheet's revision, else the latest entry of

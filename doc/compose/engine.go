@@ -15,14 +15,15 @@ import (
 
 // engineOut collects the blocks of one engine block's printout.
 type engineOut struct {
-	c       *composer
-	s       *eval.Sheet
-	b       *eval.Block
-	p       source.Span
-	blocks  []layout.Block
-	apx     []layout.Block    // working moved to the appendix (detail = governing)
-	printed map[string]bool   // steps printed in full (stepKey)
-	shown   map[shownKey]bool // cautions already boxed
+	c         *composer
+	s         *eval.Sheet
+	b         *eval.Block
+	p         source.Span
+	blocks    []layout.Block
+	apx       []layout.Block    // working moved to the appendix (detail = governing)
+	shown     map[shownKey]bool // cautions already boxed
+	asCase    map[string]bool   // symbols listed by value, by the governing case's formulas (steps)
+	inSummary map[string]bool   // symbols the case summary gives, left out of the case tables
 }
 
 type shownKey struct {
@@ -72,6 +73,18 @@ func (c *composer) governingOnly() bool {
 }
 
 func (o *engineOut) add(bs ...layout.Block) { o.blocks = append(o.blocks, bs...) }
+
+// line adds a calculation line to the run of lines it follows (one
+// layout.Steps, which sets short lines several to a row).
+func (o *engineOut) line(b layout.Block) {
+	if n := len(o.blocks); n > 0 {
+		if s, ok := o.blocks[n-1].(*layout.Steps); ok {
+			s.Lines = append(s.Lines, b)
+			return
+		}
+	}
+	o.add(&layout.Steps{Pos: o.p, Lines: []layout.Block{b}})
+}
 
 // para adds a paragraph.
 func (o *engineOut) para(runs ...layout.Run) { o.add(&layout.Para{Pos: o.p, Runs: runs}) }
@@ -171,7 +184,7 @@ func (c *composer) fits(n eqn.Node) bool {
 	if n == nil {
 		return true
 	}
-	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: 9.5, Texts: c.texts})
+	lines, err := eqn.Break(eqn.Row{eqn.Op{Text: "="}, n}, c.width-12, eqn.Style{Size: layout.MathSize, Texts: c.texts})
 	if err != nil {
 		return true // the layout reports it
 	}
@@ -183,48 +196,6 @@ func (c *composer) fits(n eqn.Node) bool {
 	return true
 }
 
-// steps prints the steps of tr with the given indices, each caution boxed
-// after the step that raised it. where names the place for the cautions
-// summary ("case 7").
-//
-// With detail = governing a step already printed in full in the block
-// (the same symbol, formula and value: a load combination the sliding
-// case shares with the bearing case) is not expanded again; such steps
-// are listed by value on one line where the first of them would be.
-func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
-	var again []layout.Run
-	var at *layout.Para
-	for _, i := range idx {
-		st := tr.Steps[i]
-		k := stepKey(st)
-		if o.c.governingOnly() && st.Formula != nil && o.printed[k] && !o.raises(tr, i) {
-			if at == nil {
-				at = &layout.Para{Pos: o.p}
-				o.add(at)
-			}
-			if len(again) > 0 {
-				again = append(again, txt(", "))
-			}
-			again = append(again, layout.Run{Math: eqn.Row{eqn.Sym{Name: st.Symbol}, eqn.Op{Text: "="}, siNode(st.Value, st.Unit)}, Own: true})
-			continue
-		}
-		if o.printed == nil {
-			o.printed = map[string]bool{}
-		}
-		o.printed[k] = true
-		o.add(o.c.stepLine(o.p, st))
-		for j, ca := range tr.Cautions {
-			if ca.Step == i {
-				o.cautionOf(tr, j, where)
-			}
-		}
-	}
-	if at != nil {
-		at.Runs = append([]layout.Run{{Text: "As computed above: ", Style: layout.Italic, Own: true}}, again...)
-		at.Runs = append(at.Runs, txt("."))
-	}
-}
-
 // raises reports whether step i of tr raised a caution.
 func (o *engineOut) raises(tr *trace.Trace, i int) bool {
 	for _, ca := range tr.Cautions {
@@ -233,11 +204,6 @@ func (o *engineOut) raises(tr *trace.Trace, i int) bool {
 		}
 	}
 	return false
-}
-
-// stepKey identifies a step by its symbol, formula, inputs and value.
-func stepKey(st trace.Step) string {
-	return fmt.Sprintf("%s|%v|%v|%v|%s", st.Symbol, st.Formula, st.Inputs, st.Value, st.Unit)
 }
 
 // cautionOf boxes caution j of tr unless it is already shown.

@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"github.com/plinth-calc/plinth/calc/trace"
 	"strings"
 
 	"github.com/plinth-calc/plinth/calc/site"
@@ -33,7 +34,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 			}
 		}
 	}
-	return out, opts
+	return runsOfLines(out), opts
 }
 
 // gridTable prints the pipe table of a ground or footing block as the
@@ -41,7 +42,7 @@ func (c *composer) blockLines(s *eval.Sheet, lines []sheet.Line) (out []layout.B
 // in that unit, a cell computed from other symbols as its expression and
 // value, text cells (names, types, sources) with their citations.
 func (c *composer) gridTable(s *eval.Sheet, g *sheet.Grid, cols []string, us []units.Unit, cells [][]*eval.Symbol, anchor string) *layout.Table {
-	t := &layout.Table{Pos: g.Span}
+	t := &layout.Table{Pos: g.Span, Compact: true}
 	numeric := make([]bool, len(cols))
 	for j, name := range cols {
 		for _, row := range cells {
@@ -119,7 +120,7 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 	}
 	g := b.Ground
 	o := c.engineOut(s, b)
-	o.label("Ground model " + g.Name)
+	o.label("Ground model " + g.Name + ": characteristic values; depths below ground level")
 	lines, _ := c.blockLines(s, src.Lines)
 	o.add(lines...)
 	if g.Water == nil {
@@ -135,9 +136,7 @@ func (c *composer) ground(s *eval.Sheet, b *eval.Block, src *sheet.Ground) []lay
 		for i, l := range g.Layers {
 			cells[i] = l.Cells
 		}
-		t := c.gridTable(s, src.Table, g.Columns, g.Units, cells, a)
-		t.Caption = []layout.Run{txt(fmt.Sprintf("Ground model %s: characteristic values; depths below ground level.", g.Name))}
-		o.add(t)
+		o.add(c.gridTable(s, src.Table, g.Columns, g.Units, cells, a))
 	}
 	return o.blocks
 }
@@ -178,6 +177,14 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 		o.add(t)
 	}
 	o.add(c.sketch(s, b)...)
+	// the plan and depth are stated here: the analyses below list them
+	// by value rather than print them again (detail = governing)
+	for _, d := range []struct {
+		sym string
+		v   float64
+	}{{"B", f.Model.B}, {"L", f.Model.L}, {"D", f.Model.D}} {
+		c.printed[stepKey(trace.Step{Symbol: d.sym, Value: d.v, Unit: "m"})] = true
+	}
 	return o.blocks
 }
 

@@ -13,10 +13,36 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-// endMatter is the check register, the input register, the references
-// list and the cautions, each a sheet of its own.
+// registersTitle is the title of the end-matter sheet; with an appendix,
+// appendixRegistersTitle.
+const (
+	registersTitle         = "Registers, references and cautions"
+	appendixRegistersTitle = "Appendix, registers, references and cautions"
+)
+
+// endMatter is one sheet: the appendix (when any working was moved
+// there), the check register, the input register, the references list
+// and the cautions, each a section under its own anchor, run on without
+// a page break between them.
 func (c *composer) endMatter() []layout.Sheet {
-	return []layout.Sheet{c.checkRegister(), c.inputRegister(), c.references(), c.cautionSheet()}
+	title := registersTitle
+	if len(c.appendix) > 0 {
+		title = appendixRegistersTitle
+	}
+	out := c.matterSheet(title, "registers")
+	if len(c.appendix) > 0 {
+		out.Blocks = append(out.Blocks, c.appendixBlocks()...)
+	}
+	for _, part := range [][]layout.Block{c.checkRegister(), c.inputRegister(), c.references(), c.cautionSheet()} {
+		out.Blocks = append(out.Blocks, part...)
+	}
+	return []layout.Sheet{out}
+}
+
+// section starts a part of the end matter: its anchor and heading.
+func (c *composer) section(title, anchor string) []layout.Block {
+	p := c.matterPos()
+	return []layout.Block{&layout.Anchor{Pos: p, Name: anchor}, heading(p, 1, title)}
 }
 
 // where prints a source place as "01-ground.md:16".
@@ -33,19 +59,18 @@ func where(sp source.Span) string {
 }
 
 // checkRegister lists every check of the package, linked to its line.
-func (c *composer) checkRegister() layout.Sheet {
-	out := c.matterSheet("Check register", "check-register")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "Check register"))
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: c.checkTotals(false)})
+func (c *composer) checkRegister() []layout.Block {
+	p := c.matterPos()
+	out := c.section("Check register", "check-register")
+	out = append(out, &layout.Para{Pos: p, Runs: c.checkTotals(false)})
 	if len(c.res.Checks) == 0 {
 		return out
 	}
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check links to the line that states it, on the page given; the sheet and file:line locate it in the source. Demand is the left side and capacity the right (the other way round for ≥); utilisation is the demand over the capacity.")}})
-	t := &layout.Table{Pos: p,
-		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check")), cell(txt("Description")), cell(txt("Demand")), cell(txt("Capacity")),
-			cell(txt("Utilisation")), cell(txt("Verdict")), cell(txt("Page")), cell(txt("Sheet, line"))},
-		Align: []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Each check (its condition, its description, and the sheet and file:line that locate it in the source) links to the line that states it, on the page given. Demand is the left side and capacity the right (the other way round for ≥); utilisation is the demand over the capacity.")}})
+	t := &layout.Table{Pos: p, Compact: true,
+		Header: []layout.Cell{cell(txt("No.")), cell(txt("Check; description; sheet, line")), cell(txt("Demand")), cell(txt("Capacity")),
+			cell(txt("Utilisation")), cell(txt("Verdict")), cell(txt("Page"))},
+		Align: []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight}}
 	for i, ch := range c.res.Checks {
 		util := "—"
 		if ch.HasUtil() {
@@ -60,18 +85,18 @@ func (c *composer) checkRegister() layout.Sheet {
 			demand, capacity = ch.R, ch.L
 		}
 		page := cell(pageOf(ch.Anchor, ""))
+		what := append(c.checkMath(ch), txt("; "))
+		what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		what = append(what, txt("; "), layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor})
 		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
-			cell(c.checkMath(ch)...),
-			cell(c.noteRuns(ch.Sheet, ch.Note)...),
+			cell(what...),
 			cell(layout.Run{Math: valueNode(demand, ch.Unit, -1), Own: true}),
 			cell(layout.Run{Math: valueNode(capacity, ch.Unit, -1), Own: true}),
 			cell(txt(util)), cell(verdict), page,
-			cell(layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor}),
 		}})
 	}
-	out.Blocks = append(out.Blocks, t)
-	return out
+	return append(out, t)
 }
 
 // checkMath prints a check's condition, linked to where it is stated.
@@ -92,13 +117,15 @@ func (c *composer) checkMath(ch *eval.Check) []layout.Run {
 }
 
 // inputRegister lists every input with its value, note and place.
-func (c *composer) inputRegister() layout.Sheet {
-	out := c.matterSheet("Input register", "input-register")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "Input register"))
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{
+func (c *composer) inputRegister() []layout.Block {
+	p := c.matterPos()
+	out := c.section("Input register", "input-register")
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{
 		txt("Every value the engineer gave (a number with its unit, not computed from other symbols), sheet by sheet, with its description and source, and the place it is defined (linked). The cells of ground and footing tables are not repeated: a row points to each table. Values plinth assumed are listed at the end."),
 	}})
+	reg := &layout.Table{Pos: p, Compact: true,
+		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("Description and source")), cell(txt("Defined at"))},
+		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft}}
 	for _, s := range c.res.Sheets {
 		var rows []layout.Row
 		tables := map[string]int{} // anchor of a ground or footing table → its inputs
@@ -146,41 +173,55 @@ func (c *composer) inputRegister() layout.Sheet {
 		if title == "" {
 			title = s.Name()
 		}
-		out.Blocks = append(out.Blocks, &layout.Heading{Pos: p, Level: 2, NoNumber: true,
-			Runs: []layout.Run{{Text: title, Link: sheetAnchor(s.Index)}}})
-		out.Blocks = append(out.Blocks, &layout.Table{Pos: p,
-			Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("Description and source")), cell(txt("Defined at"))},
-			Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
-			Rows:   rows})
+		// the sheet's rows under a row naming it, in one table for the package
+		reg.Rows = append(reg.Rows, layout.Row{Pos: p, Cells: []layout.Cell{nil, nil, cell(layout.Run{Text: title, Style: layout.Bold, Link: sheetAnchor(s.Index)}), nil}})
+		reg.Rows = append(reg.Rows, rows...)
 	}
-	out.Blocks = append(out.Blocks, c.assumedValues()...)
-	return out
+	if len(reg.Rows) > 0 {
+		out = append(out, reg)
+	}
+	return append(out, c.assumedValues()...)
 }
 
 // assumedValues lists the values plinth assumed or added: the
 // self-weight of each analysis with self_weight = auto (and its defaults),
-// and the engine's notes of values assumed where not given.
+// and the engine's notes of values assumed where not given. A value
+// assumed the same way in several blocks is one row naming every block.
 func (c *composer) assumedValues() []layout.Block {
 	p := c.matterPos()
-	var rows []layout.Row
+	type use struct {
+		s      *eval.Sheet
+		b      *eval.Block
+		where  string // the case or step, for a caution
+		anchor string
+	}
+	type entry struct {
+		sym, note string
+		val       float64
+		unit      string
+		uses      []use
+	}
+	var list []*entry
+	byKey := map[string]*entry{}
+	add := func(sym string, v float64, unit, note string, u use) {
+		k := fmt.Sprintf("%s\x00%v\x00%s\x00%s", sym, v, unit, note)
+		e := byKey[k]
+		if e == nil {
+			e = &entry{sym: sym, note: note, val: v, unit: unit}
+			byKey[k] = e
+			list = append(list, e)
+		}
+		e.uses = append(e.uses, u)
+	}
 	for _, s := range c.res.Sheets {
 		for _, b := range s.Blocks() {
 			for _, st := range b.SelfWeight.Steps {
-				if st.Symbol != "W" && !strings.Contains(st.Note, "assumed") {
-					continue
+				if st.Symbol == "W" || strings.Contains(st.Note, "assumed") {
+					add(st.Symbol, st.Value, st.Unit, st.Note, use{s: s, b: b, anchor: blockAnchor(b)})
 				}
-				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
-					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
-					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
-					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
-				}})
 			}
 			for _, st := range assumedSteps(b) {
-				rows = append(rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{
-					cell(layout.Run{Math: eqn.Sym{Name: st.Symbol}, Own: true}), cell(layout.Run{Math: siNode(st.Value, st.Unit), Own: true}),
-					cell(richText(fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), layout.Regular)...),
-					cell(layout.Run{Text: sheetLabel(s) + ", " + where(b.Span), Link: blockAnchor(b), Own: true}),
-				}})
+				add(st.Symbol, st.Value, st.Unit, st.Note, use{s: s, b: b, anchor: blockAnchor(b)})
 			}
 		}
 	}
@@ -188,21 +229,50 @@ func (c *composer) assumedValues() []layout.Block {
 		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
 			continue
 		}
-		rows = append(rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
-			cell(txt("—")), cell(txt("—")), cell(richText(r.where+": "+r.text, layout.Regular)...),
-			cell(layout.Run{Text: sheetLabel(r.sheet), Link: r.anchor, Own: true}),
-		}})
+		add("", 0, "", r.text, use{s: r.sheet, b: r.block, where: r.where, anchor: r.anchor})
 	}
 	out := []layout.Block{&layout.Heading{Pos: p, Level: 2, NoNumber: true, Runs: []layout.Run{txt("Assumed values")}}}
-	if len(rows) == 0 {
+	if len(list) == 0 {
 		return append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("plinth assumed no values for this package.")}})
 	}
-	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Values plinth added or assumed because the sheets do not give them, each printed with its working where it is used; confirm each.")}})
-	return append(out, &layout.Table{Pos: p,
-		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why")), cell(txt("Used at"))},
-		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignLeft},
-		Rows:   rows})
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("Values plinth added or assumed because the sheets do not give them, each printed with its working where it is used; confirm each. A value assumed alike in several blocks is listed once, with every block that uses it.")}})
+	t := &layout.Table{Pos: p, Compact: true,
+		Header: []layout.Cell{cell(txt("Symbol")), cell(txt("Value")), cell(txt("What and why; where used"))},
+		Align:  []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft}}
+	for _, e := range list {
+		sym, val := cell(txt("—")), cell(txt("—"))
+		if e.sym != "" {
+			sym, val = cell(layout.Run{Math: eqn.Sym{Name: e.sym}, Own: true}), cell(layout.Run{Math: siNode(e.val, e.unit), Own: true})
+		}
+		note := cell(richText(e.note, layout.Regular)...)
+		for from := 0; from < len(e.uses); from += maxUses {
+			at := append(append(layout.Cell(nil), note...), txt("\nUsed at "))
+			for i := from; i < min(from+maxUses, len(e.uses)); i++ {
+				u := e.uses[i]
+				if i > from {
+					at = append(at, txt("; "))
+				}
+				if i == from || u.s != e.uses[i-1].s {
+					at = append(at, txt(sheetLabel(u.s)+": "))
+				}
+				name := strings.TrimSpace(u.b.Kind.String() + " " + u.b.Name)
+				if u.where != "" {
+					name = u.where
+				}
+				at = append(at, layout.Run{Text: name + " (" + where(u.b.Span) + ")", Link: u.anchor, Own: true})
+			}
+			if from > 0 {
+				note = cell(txt("as the row above, in more blocks"))
+			}
+			t.Rows = append(t.Rows, layout.Row{Pos: e.uses[from].b.Span, Cells: []layout.Cell{sym, val, at}})
+		}
+	}
+	return append(out, t)
 }
+
+// maxUses is the most places a row of the assumed values or the cautions
+// lists; more continue on the next row, so no row outgrows a page.
+const maxUses = 8
 
 // assumedSteps are the steps of a block's engine working that record a
 // value the engine assumed because the sheet does not give it (their
@@ -232,11 +302,10 @@ func assumedSteps(b *eval.Block) []trace.Step {
 }
 
 // references prints the references list, numbered as cited.
-func (c *composer) references() layout.Sheet {
+func (c *composer) references() []layout.Block {
 	c.uncited()
-	out := c.matterSheet("References", "references")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "References"))
+	p := c.matterPos()
+	out := c.section("References", "references")
 	cited, pkgUncited := 0, 0
 	for _, r := range c.refs.list {
 		if r.cited {
@@ -259,9 +328,9 @@ func (c *composer) references() layout.Sheet {
 			break
 		}
 	}
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(intro)}})
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(intro)}})
 	if len(c.refs.list) == 0 {
-		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("No references are cited or listed.")}})
+		out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("No references are cited or listed.")}})
 	}
 	for _, r := range c.refs.list {
 		text := user("  " + r.text) // the package's own references are the user's text
@@ -274,7 +343,7 @@ func (c *composer) references() layout.Sheet {
 		} else {
 			runs = append(runs, layout.Run{Text: "  [" + r.key + "]", Style: layout.Italic})
 		}
-		out.Blocks = append(out.Blocks, &layout.Anchor{Pos: p, Name: r.anchor()}, &layout.Para{Pos: p, Runs: runs})
+		out = append(out, &layout.Anchor{Pos: p, Name: r.anchor()}, &layout.Para{Pos: p, Runs: runs, Small: true})
 	}
 	return out
 }
@@ -298,33 +367,42 @@ func severityOrder() string {
 }
 
 // cautionSheet lists every engine caution with where it was raised, then
-// the standing cautions.
-func (c *composer) cautionSheet() layout.Sheet {
-	out := c.matterSheet("Cautions", "cautions")
-	p := out.Pos
-	out.Blocks = append(out.Blocks, heading(p, 1, "Cautions"))
-	out.Blocks = append(out.Blocks, heading(p, 2, "Cautions raised by the engine"))
-	out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder())}})
+// the standing cautions. A caution raised in the same words in several
+// places is one row naming every place.
+func (c *composer) cautionSheet() []layout.Block {
+	p := c.matterPos()
+	out := c.section("Cautions", "cautions")
+	out = append(out, heading(p, 2, "Cautions raised by the engine"))
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(severityOrder())}})
 	if len(c.cautions) == 0 {
-		out.Blocks = append(out.Blocks, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
+		out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt("The engine raised no cautions for this package.")}})
 	} else {
-		t := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution")), cell(txt("Raised at"))},
+		t := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("No.")), cell(txt("Severity")), cell(txt("Caution; where raised"))},
 			Align: []layout.Align{layout.AlignRight}}
 		list := append([]raised(nil), c.cautions...)
 		sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
-		for i, r := range list {
+		rowOf := map[string]int{}                                                        // the row a caution's places go in
+		var uses []int                                                                   // places in each row
+		for _, r := range list {
+			at := layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}
+			k := r.sev.String() + "\x00" + r.text
+			if i, ok := rowOf[k]; ok && uses[i] < maxUses {
+				t.Rows[i].Cells[2] = append(t.Rows[i].Cells[2], txt("; "), at)
+				uses[i]++
+				continue
+			}
+			uses = append(uses, 1)
+			rowOf[k] = len(t.Rows)
 			t.Rows = append(t.Rows, layout.Row{Pos: r.block.Span, Cells: []layout.Cell{
-				cell(txt(fmt.Sprint(i + 1))), cell(bold(r.sev.String())), cell(richText(r.text, layout.Regular)...),
-				cell(layout.Run{Text: strings.TrimSpace(sheetLabel(r.sheet) + ", " + r.where), Link: r.anchor}),
+				cell(txt(fmt.Sprint(len(t.Rows) + 1))), cell(bold(r.sev.String())), append(richText(r.text, layout.Regular), txt("\nRaised at "), at),
 			}})
 		}
-		out.Blocks = append(out.Blocks, t)
+		out = append(out, t)
 	}
 	var items [][]layout.Block
 	for _, s := range standing {
 		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: []layout.Run{txt(s)}}})
 	}
-	out.Blocks = append(out.Blocks, &layout.Caution{Pos: p, Severity: severity.Caution, Title: []layout.Run{txt("Standing cautions")},
+	return append(out, &layout.Caution{Pos: p, Severity: severity.Caution, Title: []layout.Run{txt("Standing cautions")},
 		Body: []layout.Block{&layout.List{Pos: p, Items: items}}})
-	return out
 }

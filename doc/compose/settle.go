@@ -11,6 +11,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/chart"
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
+	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
 )
 
@@ -141,24 +142,92 @@ func f(v float64, u units.Unit) string {
 }
 
 // stressTable lists every sublayer: depth, stresses, how it settles.
+// The sublayers of one layer are consecutive; the caption names each
+// layer's range of sublayers, with its thickness h and form when they
+// are the same for all its sublayers (their columns are left out when
+// that holds for every layer). Long tables fold into side-by-side bands.
 func (c *composer) stressTable(o *engineOut, r *settle.Result) *layout.Table {
-	t := &layout.Table{Pos: o.p,
-		Header: []layout.Cell{{txt("No.")}, {txt("Layer")}, unitHeader("z", "m"), unitHeader("h", "m"), unitHeader("sigma'_v0", "kPa"),
-			deltaHeader("kPa"), unitHeader("sigma'_f", "kPa"), {txt("Form")}, unitHeader("s_i", "mm"), unitHeader("s_c", "mm")},
-		Align:   []layout.Align{layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight},
-		Caption: []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles.", r.Point))}}
+	type run struct{ from, to int }
+	var runs []run
 	for i, sl := range r.Sub {
-		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
-			{txt(fmt.Sprint(i + 1))}, {user(sl.Name)}, {txt(f(sl.Z, mU))}, {txt(f(sl.H, mU))}, {txt(f(sl.SigmaV0Eff, kPa))},
-			{txt(f(sl.DSigma, kPa))}, {txt(f(sl.SigmaF, kPa))}, richText(orDefault(sl.Case, "—"), layout.Regular), {txt(f(sl.Si, mm))}, {txt(f(sl.Sc, mm))},
-		}})
+		if n := len(runs); n > 0 && r.Sub[runs[n-1].from].Layer == sl.Layer {
+			runs[n-1].to = i
+		} else {
+			runs = append(runs, run{i, i})
+		}
 	}
+	sameH, sameForm := true, true
+	for _, rn := range runs {
+		for i := rn.from; i <= rn.to; i++ {
+			sameH = sameH && f(r.Sub[i].H, mU) == f(r.Sub[rn.from].H, mU) // as printed
+			sameForm = sameForm && r.Sub[i].Case == r.Sub[rn.from].Case
+		}
+	}
+	capt := []layout.Run{txt(fmt.Sprintf("Stresses by sublayer: z is the mid-depth below ground level (midpoint rule); Δσ at the %s of the footing; form is how the sublayer settles. ", r.Point))}
+	for k, rn := range runs {
+		sl := r.Sub[rn.from]
+		if k > 0 {
+			capt = append(capt, txt("; "))
+		}
+		span := fmt.Sprintf("%d", rn.from+1)
+		if rn.to > rn.from {
+			span += fmt.Sprintf("–%d", rn.to+1)
+		}
+		capt = append(capt, txt(span+" "), user(sl.Name))
+		var extra []layout.Run
+		if sameH {
+			extra = append(extra, layout.Run{Math: eqn.Row{eqn.Sym{Name: "h"}, eqn.Op{Text: "="}, siNode(sl.H, "m")}, Own: true})
+		}
+		if sameForm {
+			if len(extra) > 0 {
+				extra = append(extra, txt(", "))
+			}
+			extra = append(extra, txt("form "))
+			extra = append(extra, richText(orDefault(sl.Case, "—"), layout.Regular)...)
+		}
+		if len(extra) > 0 {
+			capt = append(capt, txt(" ("))
+			capt = append(capt, extra...)
+			capt = append(capt, txt(")"))
+		}
+	}
+	capt = append(capt, txt("."))
+	t := &layout.Table{Pos: o.p, Compact: true, Caption: capt,
+		Header: []layout.Cell{{txt("No.")}, unitHeader("z", "m")}, Align: []layout.Align{layout.AlignRight, layout.AlignRight}}
+	col := func(h layout.Cell, a layout.Align) {
+		t.Header = append(t.Header, h)
+		t.Align = append(t.Align, a)
+	}
+	if !sameH {
+		col(unitHeader("h", "m"), layout.AlignRight)
+	}
+	col(unitHeader("sigma'_v0", "kPa"), layout.AlignRight)
+	col(deltaHeader("kPa"), layout.AlignRight)
+	col(unitHeader("sigma'_f", "kPa"), layout.AlignRight)
+	if !sameForm {
+		col(layout.Cell{txt("Form")}, layout.AlignLeft)
+	}
+	col(unitHeader("s_i", "mm"), layout.AlignRight)
+	col(unitHeader("s_c", "mm"), layout.AlignRight)
+	for i, sl := range r.Sub {
+		cells := []layout.Cell{{txt(fmt.Sprint(i + 1))}, {txt(f(sl.Z, mU))}}
+		if !sameH {
+			cells = append(cells, layout.Cell{txt(f(sl.H, mU))})
+		}
+		cells = append(cells, layout.Cell{txt(f(sl.SigmaV0Eff, kPa))}, layout.Cell{txt(f(sl.DSigma, kPa))}, layout.Cell{txt(f(sl.SigmaF, kPa))})
+		if !sameForm {
+			cells = append(cells, richText(orDefault(sl.Case, "—"), layout.Regular))
+		}
+		cells = append(cells, layout.Cell{txt(f(sl.Si, mm))}, layout.Cell{txt(f(sl.Sc, mm))})
+		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: cells})
+	}
+	c.foldToWidth(t, len(t.Header))
 	return t
 }
 
 // layerTable gives the settlement of each layer and the total.
 func (c *composer) layerTable(o *engineOut, r *settle.Result) *layout.Table {
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header: []layout.Cell{{txt("Layer")}, {txt("Within the zone"), txt("\n(m)")}, {txt("Sublayers")}, unitHeader("s_i", "mm"),
 			unitHeader("s_oed", "mm"), unitHeader("mu", ""), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("t_50", "yr"), unitHeader("t_90", "yr")},
 		Align:   []layout.Align{layout.AlignLeft, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
@@ -196,10 +265,32 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 	if len(r.Curve) == 0 {
 		return nil
 	}
-	t := &layout.Table{Pos: o.p,
+	t := &layout.Table{Pos: o.p, Compact: true,
 		Header:  []layout.Cell{unitHeader("t", "yr"), unitHeader("U", ""), unitHeader("s_i", "mm"), unitHeader("s_c", "mm"), unitHeader("s_sec", "mm"), unitHeader("s", "mm")},
 		Align:   []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight, layout.AlignRight},
 		Caption: richText(fmt.Sprintf("Settlement with time after loading: U is the average degree of consolidation; total s = s_i + s_c + s_sec (final %s).", valueText(units.Quantity{V: r.Total, Dim: units.Length}, mm, -1)), layout.Regular)}
+	if len(r.Curve) <= maxTimeCols {
+		// a row per quantity, a column per time: a few lines across the page
+		t.Header = []layout.Cell{{{Math: eqn.Sym{Name: "t"}}}, {txt("yr")}}
+		t.Align = []layout.Align{layout.AlignLeft, layout.AlignLeft}
+		rows := []layout.Row{
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "U"}}}, nil}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_i"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_c"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s_sec"}}}, {txt("mm")}}},
+			{Pos: o.p, Cells: []layout.Cell{{{Math: eqn.Sym{Name: "s"}}}, {txt("mm")}}},
+		}
+		for _, p := range r.Curve {
+			t.Header = append(t.Header, layout.Cell{txt(f(p.T, yr))})
+			t.Align = append(t.Align, layout.AlignRight)
+			for i, v := range []string{fmt.Sprintf("%.3f", p.U), f(p.Si, mm), f(p.Sc, mm), f(p.Ssec, mm)} {
+				rows[i].Cells = append(rows[i].Cells, layout.Cell{txt(v)})
+			}
+			rows[4].Cells = append(rows[4].Cells, layout.Cell{bold(f(p.S, mm))})
+		}
+		t.Rows = rows
+		return t
+	}
 	for _, p := range r.Curve {
 		t.Rows = append(t.Rows, layout.Row{Pos: o.p, Cells: []layout.Cell{
 			{txt(f(p.T, yr))}, {txt(units.Printed(p.U, units.Dimensionless, 3))}, {txt(f(p.Si, mm))}, {txt(f(p.Sc, mm))}, {txt(f(p.Ssec, mm))}, {bold(f(p.S, mm))},
@@ -208,11 +299,18 @@ func (c *composer) timeTable(o *engineOut, r *settle.Result) *layout.Table {
 	return t
 }
 
+// maxTimeCols is the most times the time table sets across the page (a
+// column each); more are set down it.
+const maxTimeCols = 12
+
 // settleCharts draws the stress–depth chart and, when there is a time
 // curve, the settlement–time chart.
 func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
-	var out []layout.Block
+	var out []*layout.Drawing
 	w := math.Min(c.width, 400)
+	if len(r.Sub) > 1 && len(r.Curve) > 1 {
+		w = (c.width - chartGap) / 2 // the two side by side
+	}
 	if len(r.Sub) > 1 {
 		var z, s0, ds, sf []float64
 		for _, sl := range r.Sub {
@@ -221,7 +319,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			ds = append(ds, sl.DSigma/1e3)
 			sf = append(sf, sl.SigmaF/1e3)
 		}
-		ch := chart.Chart{W: w, H: 240,
+		ch := chart.Chart{W: w, H: 190,
 			X: chart.Axis{Title: "vertical stress (kPa)"}, Y: chart.Axis{Title: "depth below ground level (m)", Reverse: true},
 			Series: []chart.Series{{Name: "effective stress before loading", X: s0, Y: z}, {Name: "stress increase from the footing", X: ds, Y: z, Dash: []float64{4, 2}}, {Name: "effective stress after loading", X: sf, Y: z}},
 			Guides: []chart.Guide{{Value: r.ZInf, OnY: true, Label: "zone of influence " + f(r.ZInf, mU) + " m"}}}
@@ -244,7 +342,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 		for _, v := range s {
 			top = math.Max(top, v)
 		}
-		ch := chart.Chart{W: w, H: 200,
+		ch := chart.Chart{W: w, H: 190,
 			X: chart.Axis{Title: "time after loading (yr)", Log: true}, Y: chart.Axis{Title: "settlement (mm)", Reverse: true, Min: chart.At(0), Max: chart.At(niceCeil(1.15 * top))},
 			Series: []chart.Series{{Name: "total settlement", X: t, Y: s}},
 			Guides: []chart.Guide{{Value: r.Limit * 1e3, OnY: true, Label: "limit " + f(r.Limit, mm) + " mm"}}}
@@ -257,7 +355,30 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			c.diags.Add(o.b.Span, "settlement–time chart: %v", err)
 		}
 	}
-	return out
+	if len(out) == 2 {
+		return []layout.Block{beside(out[0], out[1], "Left: ", " Right: ")}
+	}
+	var bs []layout.Block
+	for _, d := range out {
+		bs = append(bs, d)
+	}
+	return bs
+}
+
+// chartGap is the space between two charts set side by side.
+const chartGap = 16.0
+
+// beside sets two drawings side by side, a's caption then b's, each
+// after its word (Left: …, Right: …).
+func beside(a, b *layout.Drawing, left, right string) *layout.Drawing {
+	d := &layout.Drawing{Pos: a.Pos, W: a.W + chartGap + b.W, H: math.Max(a.H, b.H)}
+	d.Items = append(d.Items, a.Items...)
+	for _, it := range b.Items {
+		d.Items = append(d.Items, draw.Offset(it, a.W+chartGap, 0))
+	}
+	d.Caption = append(append(d.Caption, txt(left)), a.Caption...)
+	d.Caption = append(append(d.Caption, txt(right)), b.Caption...)
+	return d
 }
 
 // groupKind is the kind of a settlement working group named
@@ -290,9 +411,7 @@ func (o *engineOut) layerCases(tr *trace.Trace, groups []string, steps map[strin
 	cap := append([]layout.Run{txt(fmt.Sprintf("%s of every layer, by the formulas above, a column per layer (", capital(kind)))}, layerList(groups)...)
 	cap = append(cap, txt(")."))
 	t := o.caseTable(tr, groups, idx, steps, "L", nil)
-	cap = append(cap, t.Caption...) // the values the same in every layer
-	t.Caption = nil
-	o.para(cap...)
+	t.Caption = append(cap, t.Caption...) // then the values the same in every layer
 	o.add(t)
 	for _, g := range groups {
 		for j, ca := range tr.Cautions {

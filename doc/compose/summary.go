@@ -98,8 +98,7 @@ func (c *composer) summary() layout.Sheet {
 	add(heading(p, 1, "Summary of results"))
 
 	var open [][]layout.Run
-	add(heading(p, 2, "Design basis"))
-	basis := &layout.Table{Pos: p, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
+	basis := &layout.Table{Pos: p, Compact: true, Header: []layout.Cell{cell(txt("Design basis")), cell(txt("As stated in package.yaml"))}}
 	for _, it := range c.designBasis() {
 		v := cell(user(it.field.Value))
 		switch {
@@ -114,10 +113,8 @@ func (c *composer) summary() layout.Sheet {
 	}
 	add(basis)
 
-	add(heading(p, 2, "Checks"))
+	add(heading(p, 2, "Checks and results by foundation"))
 	add(&layout.Para{Pos: p, Runs: c.checkTotals(true)})
-
-	add(heading(p, 2, "Results by foundation"))
 	rows := c.summaryRows()
 	if len(rows) == 0 {
 		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("The package has no footing blocks.")}})
@@ -129,19 +126,36 @@ func (c *composer) summary() layout.Sheet {
 	if strings.TrimSpace(c.packageMeta().Checked.Value) == "" {
 		open = append(open, []layout.Run{bold("NOT CHECKED"), txt(": the package has no checker's name; the sign-off on the cover is open.")})
 	}
+	type assumption struct {
+		st     trace.Step
+		blocks []*eval.Block
+	}
+	var assumed []*assumption // an assumed value made alike in several blocks is one item
+	byKey := map[string]*assumption{}
 	for _, fr := range rows {
 		for _, b := range fr.analyses {
 			for _, st := range b.SelfWeight.Steps {
-				if strings.Contains(st.Note, "assumed") {
-					open = append(open, c.openAt(b, fmt.Sprintf("%s %s: %s", b.Kind, b.Name, st.Note), st.Symbol, st.Value, st.Unit))
+				if !strings.Contains(st.Note, "assumed") {
+					continue
 				}
+				k := fmt.Sprintf("%s\x00%s\x00%v\x00%s", st.Note, st.Symbol, st.Value, st.Unit)
+				if a := byKey[k]; a != nil {
+					a.blocks = append(a.blocks, b)
+					continue
+				}
+				byKey[k] = &assumption{st: st, blocks: []*eval.Block{b}}
+				assumed = append(assumed, byKey[k])
 			}
 			if len(b.SelfWeight.Steps) > 0 {
 				break // the footing's assumptions once
 			}
 		}
 	}
+	for _, a := range assumed {
+		open = append(open, c.openAt(a.blocks, a.st))
+	}
 	seen := map[string]bool{}
+	item := map[string]int{} // a caution's item, by severity and words: its places are listed together
 	list := append([]raised(nil), c.cautions...)
 	sort.SliceStable(list, func(i, j int) bool { return list[i].sev > list[j].sev }) // most severe first
 	for _, r := range list {
@@ -149,9 +163,20 @@ func (c *composer) summary() layout.Sheet {
 			continue
 		}
 		seen[r.where+r.text] = true
-		runs := []layout.Run{bold(r.sev.String()), txt(" " + sheetLabel(r.sheet) + ", " + r.where + ": ")}
+		place := []layout.Run{txt(sheetLabel(r.sheet) + ", " + r.where + ", "), pageOf(r.anchor, "page ")}
+		k := r.sev.String() + "\x00" + r.text
+		if i, ok := item[k]; ok {
+			last := open[i][len(open[i])-1]
+			open[i] = append(append(open[i][:len(open[i])-1], txt("; ")), place...)
+			open[i] = append(open[i], last)
+			continue
+		}
+		item[k] = len(open)
+		runs := []layout.Run{bold(r.sev.String()), txt(" ")}
 		runs = append(runs, richText(r.text, layout.Regular)...)
-		runs = append(runs, txt(" ("), pageOf(r.anchor, "page "), txt(")"))
+		runs = append(runs, txt(" ("))
+		runs = append(runs, place...)
+		runs = append(runs, txt(")"))
 		open = append(open, runs)
 	}
 	add(heading(p, 2, "Open items"))
@@ -159,22 +184,33 @@ func (c *composer) summary() layout.Sheet {
 		add(&layout.Para{Pos: p, Runs: []layout.Run{txt("None.")}})
 		return out
 	}
-	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and the engine's cautions that a value was assumed or extrapolated or something not computed or verified (every caution is listed, by severity, in the "),
-		{Text: "cautions", Link: "cautions", Own: true}, txt(" at the end).")}})
+	add(&layout.Para{Pos: p, Runs: []layout.Run{txt("For the checker to settle: design-basis entries not stated, the sign-off, values plinth assumed, and cautions that a value was assumed or extrapolated or something not computed or verified (all cautions: "),
+		{Text: "cautions", Link: "cautions", Own: true}, txt(", by severity).")}})
 	var items [][]layout.Block
 	for _, runs := range open {
-		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: runs}})
+		items = append(items, []layout.Block{&layout.Para{Pos: p, Runs: runs, Small: true}})
 	}
 	add(&layout.List{Pos: p, Items: items})
 	return out
 }
 
-// openAt is an open item about an assumed value, linked to its block.
-func (c *composer) openAt(b *eval.Block, text, sym string, v float64, unit string) []layout.Run {
-	runs := richText(text, layout.Regular)
-	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(sym, v, unit), Own: true}, txt("; "),
-		pageOf(blockAnchor(b), "page "), txt(")."))
-	return runs
+// openAt is an open item about a value assumed alike in the given
+// blocks, linked to each.
+func (c *composer) openAt(bs []*eval.Block, st trace.Step) []layout.Run {
+	var names []string
+	for _, b := range bs {
+		names = append(names, b.Kind.String()+" "+b.Name)
+	}
+	runs := richText(strings.Join(names, ", ")+": "+st.Note, layout.Regular)
+	runs = append(runs, txt(" ("), layout.Run{Math: rowEq(st.Symbol, st.Value, st.Unit), Own: true})
+	for i, b := range bs {
+		sep := "; "
+		if i > 0 {
+			sep = ", "
+		}
+		runs = append(runs, txt(sep), pageOf(blockAnchor(b), "page "))
+	}
+	return append(runs, txt(")."))
 }
 
 // openCaution reports whether an engine caution is an open item: one
@@ -195,15 +231,15 @@ func openCaution(r raised) bool {
 // resultsTable is the table of results: a row per footing.
 func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 	p := c.matterPos()
-	t := &layout.Table{Pos: p,
+	t := &layout.Table{Pos: p, Compact: true,
 		Header: []layout.Cell{cell(txt("Foundation")), cell(txt("Bearing (ULS)")), cell(txt("Sliding (ULS)")),
-			cell(txt("Settlement (SLS); allowable pressure")), cell(txt("Warnings"))},
-		Caption: []layout.Run{txt("Governing utilisation and verdict of each check with its governing case; short and long term where both apply; warnings counts the WARNINGs and CAUTIONs the engine raised. Each foundation links to its page.")}}
+			cell(txt("Settlement (SLS); allowable pressure"))},
+		Caption: []layout.Run{txt("Governing utilisation, verdict and case of each check, short and long term where both apply; under each foundation (linked to its page) the WARNINGs and CAUTIONs raised.")}}
 	for _, fr := range rows {
 		b := fr.footing
 		f := b.Footing
 		page := pageOf(blockAnchor(b), "page ")
-		name := layout.Cell{userBold(f.Name), txt("\n" + sheetLabel(b.Sheet) + ", "), page}
+		name := layout.Cell{userBold(f.Name), txt("  " + sheetLabel(b.Sheet) + ", "), page}
 		size := layout.Cell{txt(shortShape(f.Model))}
 		strata := map[string]bool{}
 		var bear, slide, settl, allow layout.Cell
@@ -261,13 +297,14 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		}
 		name = append(name, txt("\n"))
 		name = append(name, size...)
+		name = append(name, txt(fmt.Sprintf("\nWARNINGs and CAUTIONs: %d", warn)))
 		if len(allow) > 0 {
 			if len(settl) > 0 {
 				settl = append(settl, txt("\n"))
 			}
 			settl = append(settl, allow...)
 		}
-		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl), {txt(fmt.Sprint(warn))}}})
+		t.Rows = append(t.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{name, dash(bear), dash(slide), dash(settl)}})
 	}
 	return t
 }

@@ -33,7 +33,7 @@ func (c *composer) within(o *engineOut, st *eval.SettleResult) {
 	}
 	tr := &st.Within.Trace
 	o.label("Differential settlement within the footing")
-	o.para(txt("The settlement at the centre, at a corner (the edge of a strip or circle) and at the middles of the sides, by the same method, stress distribution and sublayers as above, with the Steinbrenner and Newmark rectangles placed around each point as for at = corner."))
+	o.para(txt("At the centre, a corner (the edge of a strip or circle) and the middles of the sides, by the method, stresses and sublayers above, the rectangles placed around each point as for at = corner."))
 	o.steps(tr, indices(len(tr.Steps)), "within the footing")
 	o.rest(tr, "within the footing", nil)
 }

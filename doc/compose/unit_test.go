@@ -46,7 +46,7 @@ func TestReferenceOrder(t *testing.T) {
 	}
 	var refs *layout.Sheet
 	for i := range doc.Sheets {
-		if doc.Sheets[i].Bookmark == "References" {
+		if doc.Sheets[i].Bookmark == "Registers, references and cautions" {
 			refs = &doc.Sheets[i]
 		}
 	}
@@ -210,8 +210,5 @@ func ExampleDocument() {
 	// Cover sheet    0917     Cover sheet
 	// Summary of results 0917     Summary of results
 	//                0917-01  Garden room pad
-	// Check register 0917     Check register
-	// Input register 0917     Input register
-	// References     0917     References
-	// Cautions       0917     Cautions
+	// Registers, references and cautions 0917     Registers, references and cautions
 }

@@ -35,7 +35,13 @@ func linePieces(kind string, pos source.Span, lines []line, width, before float6
 	return ps
 }
 
+// smallStyle is the text of a Small paragraph.
+var smallStyle = textStyle{size: noteSize, lead: 1.3, color: ink}
+
 func (e *engine) para(p *Para, width float64) []*piece {
+	if p.Small {
+		return linePieces("line", p.Pos, e.setText(p.Runs, width, smallStyle, p.Pos), width, paraGap/2)
+	}
 	lines := e.setText(p.Runs, width, bodyStyle, p.Pos)
 	return linePieces("line", p.Pos, lines, width, paraGap)
 }

@@ -66,7 +66,7 @@ type formula struct {
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
 func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Span, own bool) (formula, bool) {
-	st := eqn.Style{Size: bodySize, Color: ink, Texts: e.texts()}
+	st := eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()}
 	lines, err := eqn.Break(row, width, st)
 	if err != nil {
 		e.mathProblem(pos, own, err)
@@ -75,8 +75,8 @@ func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Sp
 	f := formula{lines: len(lines)}
 	y := 0.0
 	for i, b := range lines {
-		asc := math.Max(b.Ascent, 0.78*bodySize) + 1
-		desc := math.Max(b.Descent, 0.3*bodySize) + 1
+		asc := math.Max(b.Ascent, 0.78*mathSize) + 1
+		desc := math.Max(b.Descent, 0.3*mathSize) + 1
 		if i == 0 {
 			f.base = y + asc
 		}
@@ -91,20 +91,27 @@ func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Sp
 	return f, true
 }
 
-// calcLine lays out a formula with its note beside it (right column), or
-// below it when the formula needs the whole width.
+// noteStops are where a note beside a formula may start, as shares of
+// the width: the first that clears the formula, so a short formula leaves
+// its note a wide column (one line where the fixed column wrapped it to
+// three) and the notes of a run of lines still start at one of a few
+// places.
+var noteStops = [...]float64{0.3, 0.48, 0.64}
+
+// calcLine lays out a formula with its note beside it (at the first note
+// stop clear of the formula), or below it when the formula needs the
+// whole width.
 func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
-	noteW := math.Min(0.34*width, 185)
-	const gap = 14.0
+	const gap = 12.0
+	last := noteStops[len(noteStops)-1] * width
 	eqW := width
 	if len(note) > 0 {
-		eqW = width - noteW - gap
+		eqW = last - gap
 	}
-	const pad = 1.5
 	// The note goes beside a formula that is one line no wider than eqW;
 	// such a formula is that same line at the full width, so one
 	// breaking at the full width serves both cases.
-	f, ok := e.stackFormula(row, width, 0, pad, pos, own)
+	f, ok := e.stackFormula(row, width, 0, calcPad, pos, own)
 	if !ok {
 		return nil
 	}
@@ -113,16 +120,29 @@ func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, n
 		e.diags.Add(pos, "formula is %.0f pt wide even when broken; the text column is %.0f pt", f.w, width)
 	}
 	b := &Box{Kind: kind, Pos: pos, W: width, Items: f.items}
-	h := pad + f.h
+	h := calcPad + f.h
 	if len(note) > 0 {
-		nw, x := noteW, width-noteW
-		if !beside {
-			nw, x = width-18, 18.0
-		}
-		lines := e.setText(note, nw, noteStyle, pos)
-		y := h + 1
+		ws := e.words(note, noteStyle, pos)
+		x := 18.0
 		if beside {
-			y = pad + f.base - lines[0].base
+			x = last
+			for _, s := range noteStops {
+				if f.w+gap <= s*width {
+					x = s * width
+					break
+				}
+			}
+		} else if f.lines == 1 {
+			// a long formula on one line: its note beside it still when
+			// it fits there on one line
+			if at := math.Max(last, f.w+gap); width-at >= 40 && noteLines(ws, width-at) == 1 {
+				x, beside = at, true
+			}
+		}
+		lines := breakLines(ws, width-x, noteStyle)
+		y := h + 0.5
+		if beside {
+			y = calcPad + f.base - lines[0].base
 		}
 		for _, ln := range lines {
 			b.Items = ln.appendItems(b.Items, x, y)
@@ -130,11 +150,11 @@ func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, n
 		}
 		h = math.Max(h, y)
 	}
-	b.H = h + pad
+	b.H = h + calcPad
 	if anchor != "" {
 		b.Items = append(b.Items, draw.Anchor{Name: anchor})
 	}
-	return []*piece{{box: b, before: calcGap, base: pad + f.base}}
+	return []*piece{{box: b, before: calcGap, base: calcPad + f.base}}
 }
 
 var relations = map[string]string{"<=": "≤", "≤": "≤", ">=": "≥", "≥": "≥", "<": "<", ">": ">", "=": "=", "==": "=", "!=": "≠", "≠": "≠"}
@@ -157,7 +177,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	if c.RightValue != nil {
 		row = append(row, eqn.Op{Text: "="}, c.RightValue)
 	}
-	const verdictW, pad = 128.0, 4.0
+	const verdictW, pad = 128.0, 3.0
 	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos, false)
 	if !ok {
 		return nil
@@ -170,12 +190,20 @@ func (e *engine) check(c *Check, width float64) []*piece {
 	h := pad + f.h
 	var noteItems []draw.Item
 	if len(c.Note) > 0 {
-		y := h + 1
-		for _, ln := range e.setText(c.Note, width-verdictW-2*pad, noteStyle, c.Pos) {
-			noteItems = ln.appendItems(noteItems, pad, y)
-			y += ln.h
+		ws := e.words(c.Note, noteStyle, c.Pos)
+		room := width - verdictW - 2*pad
+		if at := f.w + 14; f.lines == 1 && room-at >= 40 && noteLines(ws, room-at) == 1 {
+			// a short note beside the relation, on its line
+			ln := breakLines(ws, room-at, noteStyle)[0]
+			noteItems = ln.appendItems(noteItems, pad+at, pad+f.base-ln.base)
+		} else {
+			y := h + 1
+			for _, ln := range breakLines(ws, room, noteStyle) {
+				noteItems = ln.appendItems(noteItems, pad, y)
+				y += ln.h
+			}
+			h = y
 		}
-		h = y
 	}
 	h += pad
 	base := pad + f.base

@@ -17,7 +17,7 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 		e.diags.Add(c.Pos, "caution severity %d: want NOTE, CAUTION or WARNING", int(sev))
 		sev = severity.Warning
 	}
-	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 5.0
+	const bar, padL, padR, padV = 3.0, 9.0, 8.0, 3.5
 	inner := width - bar - padL - padR
 	// heading line: the word, then the title
 	word := sev.String()
@@ -28,31 +28,55 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 		mark = 11
 	}
 	wordW := mark + wf.Width(word, bodySize) + 7
-	head := &Box{Kind: "caution-head", Pos: c.Pos, W: inner}
-	st := bodyStyle
-	st.bold = true
-	var lines []line
-	if len(c.Title) > 0 {
-		lines = e.setText(c.Title, inner-wordW, st, c.Pos)
+	var ps []*piece
+	if para, ok := soleParagraph(c); ok {
+		// no title and one paragraph: the word heads the paragraph's
+		// first line, the paragraph hanging beside it
+		if sev == severity.Note { // information: in the note size
+			small := *para
+			small.Small = true
+			para = &small
+		}
+		ps = e.para(para, inner-wordW)
+		for _, p := range ps {
+			p.box.W = inner
+			for i := range p.box.Items {
+				p.box.Items[i] = draw.Offset(p.box.Items[i], wordW, 0)
+			}
+		}
+		first := ps[0].box
+		if sty.triangle {
+			first.Items = append(first.Items, warnTriangle(ps[0].base)...)
+		}
+		first.Items = append(first.Items, draw.Text{X: mark, Y: ps[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
+		ps[0].before = 0
 	} else {
-		lines = []line{setLine(nil, st)}
+		head := &Box{Kind: "caution-head", Pos: c.Pos, W: inner}
+		st := bodyStyle
+		st.bold = true
+		var lines []line
+		if len(c.Title) > 0 {
+			lines = e.setText(c.Title, inner-wordW, st, c.Pos)
+		} else {
+			lines = []line{setLine(nil, st)}
+		}
+		if sty.triangle {
+			head.Items = append(head.Items, warnTriangle(lines[0].base)...)
+		}
+		head.Items = append(head.Items, draw.Text{X: mark, Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
+		y := 0.0
+		for _, ln := range lines {
+			head.Items = ln.appendItems(head.Items, wordW, y)
+			y += ln.h
+		}
+		head.H = y
+		ps = []*piece{{box: head, keep: true, base: lines[0].base}}
+		body := e.blocks(c.Body, inner)
+		if len(body) > 0 {
+			body[0].before = 2
+		}
+		ps = append(ps, body...)
 	}
-	if sty.triangle {
-		head.Items = append(head.Items, warnTriangle(lines[0].base)...)
-	}
-	head.Items = append(head.Items, draw.Text{X: mark, Y: lines[0].base, Face: fonts.Bold, Size: bodySize, Color: sty.word, Text: word})
-	y := 0.0
-	for _, ln := range lines {
-		head.Items = ln.appendItems(head.Items, wordW, y)
-		y += ln.h
-	}
-	head.H = y
-	ps := []*piece{{box: head, keep: true, base: lines[0].base}}
-	body := e.blocks(c.Body, inner)
-	if len(body) > 0 {
-		body[0].before = 2
-	}
-	ps = append(ps, body...)
 	// wrap each piece in its strip of panel
 	wrap := func(p *piece, top, bottom float64, first, last bool) *piece {
 		h := top + p.box.H + bottom
@@ -92,6 +116,16 @@ func (e *engine) caution(c *Caution, width float64) []*piece {
 	}
 	out[0].before = paraGap + 3
 	return out
+}
+
+// soleParagraph is the body of a caution with no title and one
+// non-empty paragraph.
+func soleParagraph(c *Caution) (*Para, bool) {
+	if len(c.Title) > 0 || len(c.Body) != 1 {
+		return nil, false
+	}
+	p, ok := c.Body[0].(*Para)
+	return p, ok && len(p.Runs) > 0
 }
 
 // cautionStyle is how a severity is drawn. The house has one accent and

@@ -190,6 +190,10 @@ func (e *engine) block(b Block, width float64) []*piece {
 		return e.statement(b, width)
 	case *Input:
 		return e.input(b, width)
+	case *Steps:
+		return e.steps(b, width)
+	case *Beside:
+		return e.beside(b, width)
 	case *Check:
 		return e.check(b, width)
 	case *Caution:
@@ -267,7 +271,7 @@ func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 
 func kindName(k string) string {
 	switch k {
-	case "statement", "input", "check":
+	case "statement", "input", "check", "steps":
 		return "this calculation line"
 	case "row":
 		return "this table row"

@@ -108,7 +108,7 @@ func TestTableSplitsWithHeader(t *testing.T) {
 
 func TestProblems(t *testing.T) {
 	tall := make([]eqn.Node, 0)
-	for i := 0; i < 500; i++ {
+	for i := 0; i < 1000; i++ {
 		tall = append(tall, eqn.Frac{Num: eqn.Frac{Num: eqn.Num{Text: "1"}, Den: eqn.Num{Text: "2"}}, Den: eqn.Frac{Num: eqn.Num{Text: "3"}, Den: eqn.Num{Text: "4"}}}, eqn.Op{Text: "="})
 	}
 	doc := sheet(

@@ -140,10 +140,12 @@ type Heading struct {
 	Runs     []Run
 }
 
-// Para is a paragraph of text.
+// Para is a paragraph of text. A Small one is set in the note size, with
+// a smaller gap above it (lists of entries: references).
 type Para struct {
-	Pos  source.Span
-	Runs []Run
+	Pos   source.Span
+	Runs  []Run
+	Small bool
 }
 
 // List is a bullet list, or a numbered one from Start (0 means 1). Each
@@ -175,6 +177,9 @@ type Table struct {
 	Rows    []Row
 	Align   []Align
 	Caption []Run // printed above the table; optional
+	// Compact sets the table in a smaller size with tighter cells (long
+	// tables of working and registers).
+	Compact bool
 }
 
 // Image is a PNG or JPEG picture, scaled to fit the text width (and at

@@ -6,18 +6,25 @@ import "github.com/plinth-calc/plinth/doc/layout/draw"
 // (a dark slate blue) marks structure; red and green only ever support the
 // words NOT OK and OK.
 const (
-	bodySize    = 9.5
-	bodyLead    = 1.34 // line height / size
-	noteSize    = 8.2
+	bodySize    = 8.6
+	mathSize    = MathSize
+	bodyLead    = 1.3 // line height / size
+	noteSize    = 7.3
 	tableSize   = 8.5
+	compactSize = 7.6 // compact tables (Table.Compact)
 	codeSize    = 8.2
 	captionSize = 8.2
-	paraGap     = 5.0 // space between paragraphs
-	calcGap     = 4.0 // space between calc lines
+	paraGap     = 4.0 // space between paragraphs
+	calcGap     = 2.0 // space between calc lines
+	calcPad     = 0.7 // space above and below a calc line's formula
 )
 
-var headingSize = [4]float64{0, 12.5, 10.8, 9.8}
-var headingGap = [4]float64{0, 14, 10, 8}
+// MathSize is the size calculation lines set their formulas in (compose
+// measures formulas at it to decide how to print them).
+const MathSize = 8.4
+
+var headingSize = [4]float64{0, 12, 10.2, 9.4}
+var headingGap = [4]float64{0, 11, 8, 6}
 
 var (
 	ink      = draw.Color{R: 26, G: 26, B: 30}

@@ -9,96 +9,66 @@ import (
 	"github.com/plinth-calc/plinth/doc/layout/fonts"
 )
 
-const (
-	cellPadX = 4.5
-	cellPadY = 2.8
-)
+// tableLook is the size and cell padding of a table.
+type tableLook struct {
+	cell, head textStyle
+	padX, padY float64
+}
 
 var (
-	cellStyle = textStyle{size: tableSize, lead: 1.26, color: ink}
-	headStyle = textStyle{size: tableSize, lead: 1.26, color: ink, bold: true}
+	plainLook = tableLook{
+		cell: textStyle{size: tableSize, lead: 1.26, color: ink},
+		head: textStyle{size: tableSize, lead: 1.26, color: ink, bold: true},
+		padX: 4.5, padY: 2.8,
+	}
+	compactLook = tableLook{
+		cell: textStyle{size: compactSize, lead: 1.22, color: ink},
+		head: textStyle{size: compactSize, lead: 1.22, color: ink, bold: true},
+		padX: 3.5, padY: 1.3,
+	}
 )
+
+// cellWords is a table cell cut into words, in its style.
+type cellWords struct {
+	ws    []word
+	style textStyle
+}
+
+// measured is a table cut into words and measured: the narrowest and
+// the natural width of each column, and each number's shift onto its
+// column's decimal point.
+type measured struct {
+	ncol       int
+	look       tableLook
+	rows       [][]cellWords // header first (nil when there is none)
+	shift      func(ri, c int) float64
+	minW, maxW []float64
+}
+
+// NaturalWidth is the width t takes with no cell broken: its columns at
+// their natural widths (for a caller choosing how to fold a table).
+func NaturalWidth(t *Table) float64 {
+	e := &engine{}
+	m := e.measureTable(t)
+	if m == nil {
+		return 0
+	}
+	w := 0.0
+	for _, x := range m.maxW {
+		w += x
+	}
+	return w
+}
 
 // table lays out a table as one piece per row; the header row repeats at
 // the top of every page the table continues onto.
 func (e *engine) table(t *Table, width float64) []*piece {
-	ncol := len(t.Header)
-	for _, r := range t.Rows {
-		ncol = max(ncol, len(r.Cells))
-	}
-	if ncol == 0 {
+	m := e.measureTable(t)
+	if m == nil {
 		return nil
 	}
-	// words of every cell, header first
-	type cellWords struct {
-		ws    []word
-		style textStyle
-	}
-	rows := make([][]cellWords, 0, len(t.Rows)+1)
-	all := [][]Cell{t.Header}
-	for _, r := range t.Rows {
-		all = append(all, r.Cells)
-	}
-	for ri, cells := range all {
-		if ri == 0 && len(cells) == 0 {
-			rows = append(rows, nil)
-			continue
-		}
-		pos := t.Pos
-		if ri > 0 && t.Rows[ri-1].Pos.File != nil {
-			pos = t.Rows[ri-1].Pos
-		}
-		st := cellStyle
-		if ri == 0 {
-			st = headStyle
-		}
-		row := make([]cellWords, ncol)
-		for c := 0; c < ncol; c++ {
-			if c < len(cells) {
-				at := pos
-				if ri > 0 && c < len(t.Rows[ri-1].CellPos) && t.Rows[ri-1].CellPos[c].File != nil {
-					at = t.Rows[ri-1].CellPos[c]
-				}
-				row[c] = cellWords{e.words(cells[c], st, at), st}
-			} else {
-				row[c] = cellWords{style: st}
-			}
-		}
-		rows = append(rows, row)
-	}
-	// numbers in right-aligned columns line up on the decimal point:
-	// each is moved left by its column's longest fraction less its own
-	tails := make([][]float64, len(rows))
-	most := make([]float64, ncol)
-	for ri, row := range rows {
-		tails[ri] = make([]float64, len(row))
-		for c, cw := range row {
-			tails[ri][c] = -1
-			if ri == 0 || c >= len(t.Align) || t.Align[c] != AlignRight {
-				continue
-			}
-			if w, ok := fraction(cw.ws); ok {
-				tails[ri][c] = w
-				most[c] = math.Max(most[c], w)
-			}
-		}
-	}
-	shift := func(ri, c int) float64 {
-		if tails[ri][c] < 0 {
-			return 0
-		}
-		return most[c] - tails[ri][c]
-	}
-	// column widths from the content
-	minW := make([]float64, ncol)
-	maxW := make([]float64, ncol)
-	for ri, row := range rows {
-		for c, cw := range row {
-			lo, hi := measureWords(cw.ws)
-			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
-			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
-		}
-	}
+	look, rows, shift, minW, maxW := m.look, m.rows, m.shift, m.minW, m.maxW
+	cellPadX, cellPadY := look.padX, look.padY
 	// a word wider than half the table breaks rather than squeezing
 	// the other columns to nothing
 	share := math.Max(width/2, 4*cellPadX)
@@ -114,8 +84,15 @@ func (e *engine) table(t *Table, width float64) []*piece {
 	var out []*piece
 	var header, pristine *piece
 	if capRuns := t.Caption; len(capRuns) > 0 {
-		lines := e.setText(capRuns, total, captionStyle, t.Pos)
-		ps := linePieces("caption", t.Pos, lines, total, paraGap+2)
+		st := captionStyle
+		if t.Compact {
+			st.size = noteSize
+		}
+		// a caption may run wider than a narrow table, to the width of
+		// the column (two thirds of it at least)
+		cw := math.Max(total, math.Min(width, 2*width/3))
+		lines := e.setText(capRuns, cw, st, t.Pos)
+		ps := linePieces("caption", t.Pos, lines, cw, paraGap+2)
 		for _, p := range ps {
 			p.keep = true
 		}
@@ -289,4 +266,86 @@ func columnWidths(minW, maxW []float64, width float64) []float64 {
 		}
 	}
 	return out
+}
+
+func (e *engine) measureTable(t *Table) *measured {
+	ncol := len(t.Header)
+	for _, r := range t.Rows {
+		ncol = max(ncol, len(r.Cells))
+	}
+	if ncol == 0 {
+		return nil
+	}
+	look := plainLook
+	if t.Compact {
+		look = compactLook
+	}
+	cellPadX := look.padX
+	// words of every cell, header first
+	rows := make([][]cellWords, 0, len(t.Rows)+1)
+	all := [][]Cell{t.Header}
+	for _, r := range t.Rows {
+		all = append(all, r.Cells)
+	}
+	for ri, cells := range all {
+		if ri == 0 && len(cells) == 0 {
+			rows = append(rows, nil)
+			continue
+		}
+		pos := t.Pos
+		if ri > 0 && t.Rows[ri-1].Pos.File != nil {
+			pos = t.Rows[ri-1].Pos
+		}
+		st := look.cell
+		if ri == 0 {
+			st = look.head
+		}
+		row := make([]cellWords, ncol)
+		for c := 0; c < ncol; c++ {
+			if c < len(cells) {
+				at := pos
+				if ri > 0 && c < len(t.Rows[ri-1].CellPos) && t.Rows[ri-1].CellPos[c].File != nil {
+					at = t.Rows[ri-1].CellPos[c]
+				}
+				row[c] = cellWords{e.words(cells[c], st, at), st}
+			} else {
+				row[c] = cellWords{style: st}
+			}
+		}
+		rows = append(rows, row)
+	}
+	// numbers in right-aligned columns line up on the decimal point:
+	// each is moved left by its column's longest fraction less its own
+	tails := make([][]float64, len(rows))
+	most := make([]float64, ncol)
+	for ri, row := range rows {
+		tails[ri] = make([]float64, len(row))
+		for c, cw := range row {
+			tails[ri][c] = -1
+			if ri == 0 || c >= len(t.Align) || t.Align[c] != AlignRight {
+				continue
+			}
+			if w, ok := fraction(cw.ws); ok {
+				tails[ri][c] = w
+				most[c] = math.Max(most[c], w)
+			}
+		}
+	}
+	shift := func(ri, c int) float64 {
+		if tails[ri][c] < 0 {
+			return 0
+		}
+		return most[c] - tails[ri][c]
+	}
+	// column widths from the content
+	minW := make([]float64, ncol)
+	maxW := make([]float64, ncol)
+	for ri, row := range rows {
+		for c, cw := range row {
+			lo, hi := measureWords(cw.ws)
+			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
+			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
+		}
+	}
+	return &measured{ncol: ncol, look: look, rows: rows, shift: shift, minW: minW, maxW: maxW}
 }
