@@ -155,3 +155,33 @@ func BenchmarkScheduleRender200(b *testing.B) {
 		}
 	}
 }
+
+// A row's ground column sizes that footing on the other ground model:
+// the same as a size block on that ground.
+func TestScheduleRowGround(t *testing.T) {
+	dir := t.TempDir()
+	soft := "```ground soft\n| layer | top (m) | gamma (kN/m3) | c_u (kPa) | m_v (m2/MN) | E_u (MPa) |\n| --- | --- | --- | --- | --- | --- |\n| Soft clay | 0 | 18 | 35 | 0.2 | 12 |\n```\n\n"
+	sched := "---\ntitle: S\n---\n\n# S\n\n" + scheduleGround + soft +
+		"```schedule G on site\nshape = square\nD = 1.0 m\n\n| footing | x (m) | y (m) | G (kN) | ground |\n| --- | --- | --- | --- | --- |\n| A | 0 | 0 | 500 | |\n| B | 6 | 0 | 500 | soft |\n```\n"
+	single := "---\ntitle: S\n---\n\n# S\n\n" + soft +
+		"```footing B\nshape = square\nD = 1.0 m\n\n| action | type | V (kN) |\n| --- | --- | --- |\n| Dead | permanent | 500 |\n```\n\n```size B on soft\n```\n"
+	pa, pb := filepath.Join(dir, "a.md"), filepath.Join(dir, "b.md")
+	os.WriteFile(pa, []byte(sched), 0o644)
+	os.WriteFile(pb, []byte(single), 0o644)
+	a, b := checkJSON(t, pa), checkJSON(t, pb)
+	var rowA, rowB float64
+	for _, blk := range a.Blocks {
+		if blk.Kind == "schedule" {
+			rowA, rowB = blk.Results["a.B"], blk.Results["b.B"]
+		}
+	}
+	var want float64
+	for _, blk := range b.Blocks {
+		if blk.Kind == "size" {
+			want = blk.Results["B"]
+		}
+	}
+	if rowB != want || rowB <= rowA {
+		t.Errorf("row B on soft clay: %v, size block %v (row A on the site model %v)", rowB, want, rowA)
+	}
+}

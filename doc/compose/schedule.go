@@ -47,9 +47,14 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 	head := []layout.Cell{{txt("Footing")}, unitHeader("x", "m"), unitHeader("y", "m"), {txt("Size")}, unitHeader("D", "m"),
 		{txt("Governing check")}, {txt("Utilisation")}, unitHeader("s_total", "mm"), {txt("Verdict")}}
 	al := []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft}
-	sourced := false
-	for _, src := range r.Sources {
+	sourced, grounds := false, false
+	for i, src := range r.Sources {
 		sourced = sourced || src != ""
+		grounds = grounds || r.Grounds[i] != ""
+	}
+	if grounds {
+		head = append(head[:5:5], append([]layout.Cell{{txt("Ground")}}, head[5:]...)...)
+		al = append(al[:5:5], append([]layout.Align{layout.AlignLeft}, al[5:]...)...)
 	}
 	if sourced {
 		head = append(head, layout.Cell{txt("Source")})
@@ -78,6 +83,13 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 		name := layout.Run{Text: r.Names[i], Link: rowAnchor(b, i), Own: false}
 		cells := []layout.Cell{{name}, {txt(units.Printed(r.X[i], m, -1))}, {txt(units.Printed(r.Y[i], m, -1))},
 			{txt(sz)}, {txt(units.Printed(row.Footing.D, m, -1))}, {txt(gov.Name)}, {u}, {txt(st)}, {verdict}}
+		if grounds {
+			g := r.Grounds[i]
+			if g == "" {
+				g = b.On.Name
+			}
+			cells = append(cells[:5:5], append([]layout.Cell{{txt(g)}}, cells[5:]...)...)
+		}
 		if sourced {
 			cells = append(cells, richText(r.Sources[i], layout.Regular))
 		}

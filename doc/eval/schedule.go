@@ -3,6 +3,7 @@ package eval
 import (
 	"errors"
 	"fmt"
+	"strings"
 
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/size"
@@ -28,6 +29,7 @@ var scheduleCol = []colSpec{
 	{name: "M_G", dims: []units.Dim{units.Moment}, what: "permanent moment along B"},
 	{name: "M_Q", dims: []units.Dim{units.Moment}, what: "variable moment along B"},
 	{name: "D", dims: []units.Dim{units.Length}, what: "depth of this footing's underside, in place of the block's D"},
+	{name: "ground", text: true, what: "the ground model of this footing, in place of the block's"},
 	{name: "source", text: true, what: "where the row's values come from"},
 }
 
@@ -37,6 +39,7 @@ type ScheduleResult struct {
 	Names    []string // the footings' names, by row
 	Keys     []string // their symbol form (NAME.KEY.B)
 	Sources  []string // each row's source column ("" when none)
+	Grounds  []string // each row's own ground model ("" for the block's)
 	X, Y     []float64
 	Ecc      size.Ecc
 	NoSettle bool
@@ -143,6 +146,19 @@ func (e *evaluator) schedule(s *Sheet, b *sheet.Analysis, blk *Block, o opts) bo
 		}
 		if d, has := val(row, "D"); has {
 			r.D = site.Some(d)
+		}
+		if c, has := t.textCell(i, "ground"); has && strings.TrimSpace(c.Value) != "" {
+			name := sheet.Str{Value: strings.TrimSpace(c.Value), Span: c.Span}
+			if g, gok := e.findGround(s, name); gok {
+				m := g.Model
+				r.Ground = &m
+				res.Grounds = append(res.Grounds, g.Name)
+			} else {
+				ok = false
+				res.Grounds = append(res.Grounds, "")
+			}
+		} else {
+			res.Grounds = append(res.Grounds, "")
 		}
 		res.Names = append(res.Names, name)
 		res.Sources = append(res.Sources, t.text(i, "source"))
