@@ -247,3 +247,28 @@ func BenchmarkSizePad(b *testing.B) {
 		}
 	}
 }
+
+// A textbook "find B" problem: a square footing for a gross allowable
+// load of 670 kN, 1 m deep in sand with γ = 18.1 kN/m³, c′ = 0,
+// φ′ = 40°, FS = 3 on the gross ultimate pressure, Terzaghi's factors
+// for general shear (Das, Principles of Foundation Engineering, the
+// footing-size example of the bearing-capacity chapter; the problem as
+// reproduced publicly, its example number and printed answer from memory).
+// By hand from the problem's data with Terzaghi's N_q = 81.27 and
+// Kumbhojkar's N_γ = 115.31 at 40°: 670/B² = (18.1·81.27 + 0.4·18.1·B·115.31)/3
+// gives B = 0.943 m (solved by bisection); the
+// sizing must give its B_req within 1 cm and B = 0.95 m on a 0.01 m step.
+func TestTextbookFindB(t *testing.T) {
+	g := site.Ground{Layers: []site.Layer{{Name: "Sand", Top: 0, Gamma: 18.1e3, Phi: site.Some(40 * deg), C: site.Some(0), Type: site.Coarse}}}
+	in := size.Input{Bearing: bearing.Input{Ground: g, Footing: site.Footing{Name: "F", Shape: site.Square, D: 1},
+		Actions: []site.Action{{Name: "Load", Kind: site.Permanent, V: 670e3}},
+		Options: bearing.Options{Method: bearing.Terzaghi, Approach: design.FS(3), FSOnGross: true, Drainage: bearing.Drained, Sliding: bearing.No, LocalShear: bearing.No}},
+		Step: 0.01}
+	r, err := size.Size(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(r.BReq-0.943) > 0.01 || math.Abs(r.B-0.95) > 1e-9 {
+		t.Errorf("B_req = %.4f m (want 0.943 ± 0.01), B = %v (want 0.95)", r.BReq, r.B)
+	}
+}

@@ -47,6 +47,25 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 	head := []layout.Cell{{txt("Footing")}, unitHeader("x", "m"), unitHeader("y", "m"), {txt("Size")}, unitHeader("D", "m"),
 		{txt("Governing check")}, {txt("Utilisation")}, unitHeader("s_total", "mm"), {txt("Verdict")}}
 	al := []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft}
+	t90 := func(i int) (float64, bool) {
+		if st := r.Rows[i].Settle; st != nil {
+			for _, v := range st.Symbols {
+				if v.Symbol == "t_90" {
+					return v.V, true
+				}
+			}
+		}
+		return 0, false
+	}
+	consol := false
+	for i := range r.Rows {
+		_, has := t90(i)
+		consol = consol || has
+	}
+	if consol {
+		head = append(head[:8:8], append([]layout.Cell{unitHeader("t_90", "yr")}, head[8:]...)...)
+		al = append(al[:8:8], append([]layout.Align{layout.AlignRight}, al[8:]...)...)
+	}
 	sourced, grounds := false, false
 	for i, src := range r.Sources {
 		sourced = sourced || src != ""
@@ -83,6 +102,13 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 		name := layout.Run{Text: r.Names[i], Link: rowAnchor(b, i), Own: false}
 		cells := []layout.Cell{{name}, {txt(units.Printed(r.X[i], m, -1))}, {txt(units.Printed(r.Y[i], m, -1))},
 			{txt(sz)}, {txt(units.Printed(row.Footing.D, m, -1))}, {txt(gov.Name)}, {u}, {txt(st)}, {verdict}}
+		if consol {
+			tc := "—"
+			if v, has := t90(i); has {
+				tc = units.Printed(v, units.MustParse("yr"), -1)
+			}
+			cells = append(cells[:8:8], append([]layout.Cell{{txt(tc)}}, cells[8:]...)...)
+		}
 		if grounds {
 			g := r.Grounds[i]
 			if g == "" {
