@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"sort"
 	"strings"
 
 	"github.com/plinth-calc/plinth/calc/trace"
@@ -220,10 +221,16 @@ func (o *engineOut) cautionOf(tr *trace.Trace, j int, where string) {
 // as a whole, and those raised in steps not printed in full. where names
 // the place; a caution with a case says its case.
 func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution) bool) {
+	// highest severity first (WARNING, CAUTION, NOTE), in order raised within each
+	idx := make([]int, 0, len(tr.Cautions))
 	for j, ca := range tr.Cautions {
-		if only != nil && !only(ca) {
-			continue
+		if only == nil || only(ca) {
+			idx = append(idx, j)
 		}
+	}
+	sort.SliceStable(idx, func(a, b int) bool { return tr.Cautions[idx[a]].Severity > tr.Cautions[idx[b]].Severity })
+	for _, j := range idx {
+		ca := tr.Cautions[j]
 		w := where
 		if ca.Case != "" {
 			w = ca.Case
