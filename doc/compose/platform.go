@@ -30,6 +30,21 @@ func (c *composer) platform(s *eval.Sheet, b *eval.Block) []layout.Block {
 		intro += " Options: " + strings.Join(b.Options, ", ") + "."
 	}
 	o.para(txt(intro))
+	if mt := b.Mat; mt != nil {
+		o.label("Outrigger mat")
+		how := "checked"
+		if mt.Sized {
+			how = "sized for the allowable pressure"
+		}
+		o.para(txt(fmt.Sprintf("The mat, %s × %s, %s: bearing pressure %s against the allowable (utilisation %s); at the subgrade, %s below, the stress is %s by load spread and %s under the centre (Boussinesq). Its pressure is loading case 1 of the platform below.",
+			length(mt.B), length(mt.L), how, valueText(units.Quantity{V: mt.Q, Dim: units.Pressure}, kPa, -1), units.Utilisation(mt.Util), length(mt.Z),
+			valueText(units.Quantity{V: mt.Spread, Dim: units.Pressure}, kPa, -1), valueText(units.Quantity{V: mt.Centre, Dim: units.Pressure}, kPa, -1))))
+		o.steps(&mt.Trace, indices(len(mt.Trace.Steps)), "outrigger mat")
+		if ch := findCheck(b, "mat"); ch != nil {
+			o.add(c.checkBlock(o.p, ch, "mat_q", "q_a"))
+		}
+		o.rest(&mt.Trace, "outrigger mat", nil)
+	}
 	t := &layout.Table{Pos: o.p,
 		Header: []layout.Cell{{txt("Case")}, unitHeader("q_k", "kPa"), {txt("γq")}, unitHeader("q_d", "kPa"), unitHeader("R_s", "kPa"),
 			unitHeader("R_p", "kPa"), unitHeader("D_req", "m"), unitHeader("R_d", "kPa"), {txt("Utilisation")}, {txt("EN 1997-1")}, {txt("Verdict")}},

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/platform"
+
 	"github.com/plinth-calc/plinth/calc/bearing"
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/calc/units"
@@ -34,8 +36,9 @@ type Block struct {
 	Size     *SizeResult // size blocks
 	Schedule *ScheduleResult
 	Platform *PlatformResult
-	Vary     *VaryResult // the vary option's table, when given
-	Options  []string // the options in force, "method = ec7", for printing
+	Mat      *platform.MatResult // a platform block's outrigger mat
+	Vary     *VaryResult         // the vary option's table, when given
+	Options  []string            // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check
 	Cautions []trace.Caution // every engine caution, in trace order

@@ -65,3 +65,23 @@ func TestVaryAgreesWithSet(t *testing.T) {
 		t.Error("utilisation falls as c_u rises")
 	}
 }
+
+func evalPlatform(t *testing.T, src string) *eval.Block {
+	t.Helper()
+	f := source.NewFile("m.md", []byte(src))
+	s, pd := parse.Sheet(f)
+	if pd.HasErrors() {
+		t.Fatal(pd)
+	}
+	res, d := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{})
+	if d.HasErrors() {
+		t.Fatal(d)
+	}
+	for _, b := range res.Sheets[0].Blocks() {
+		if b.Platform != nil {
+			return b
+		}
+	}
+	t.Fatal("no platform block")
+	return nil
+}
