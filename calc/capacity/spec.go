@@ -41,3 +41,13 @@ func join(lists ...[]kind.Option) []kind.Option {
 	}
 	return out
 }
+
+// The capacity block takes the sensitivity option too: what it varies is
+// the allowable pressure at the footing's own width (a table has no
+// verdict to flip).
+func init() {
+	Spec.Options = append(Spec.Options, kind.Vary)
+	Spec.Results = append(Spec.Results,
+		kind.Result{Symbol: "q_allow_at_min", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the low end of the vary range", When: "vary"},
+		kind.Result{Symbol: "q_allow_at_max", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the high end of the vary range", When: "vary"})
+}

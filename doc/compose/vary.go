@@ -18,6 +18,9 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 	p := b.Span
 	u := v.Unit
 	val := func(x float64) string { return valueText(units.Quantity{V: x, Dim: u.Dim}, u, -1) }
+	if b.Capacity != nil {
+		return c.varyCapacity(b)
+	}
 	out := []layout.Block{&layout.Heading{Pos: p, Level: min(c.level+1, 3), NoNumber: true, Runs: []layout.Run{txt("Sensitivity of " + b.Name + " to "), {Math: eqn.Sym{Name: v.Symbol}, Own: true}}}}
 	intro := fmt.Sprintf("The package evaluated again for each value of %s (its value here %s), the rest unchanged (as --set would), and the block's governing utilisation read off each run. ", v.Symbol, val(v.Base))
 	if len(v.Crossings) == 0 {
@@ -67,4 +70,31 @@ func factor(u units.Unit) float64 {
 		return 1
 	}
 	return u.Factor
+}
+
+// varyCapacity prints a capacity table's sensitivity: the allowable
+// pressure at the footing's own width at each value of the input.
+func (c *composer) varyCapacity(b *eval.Block) []layout.Block {
+	v := b.Vary
+	p := b.Span
+	u := v.Unit
+	kPa := units.MustParse("kPa")
+	out := []layout.Block{&layout.Heading{Pos: p, Level: min(c.level+1, 3), NoNumber: true, Runs: []layout.Run{txt("Sensitivity of " + b.Name + " to "), {Math: eqn.Sym{Name: v.Symbol}, Own: true}}}}
+	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(fmt.Sprintf("The package evaluated again for each value of %s (its value here %s), the rest unchanged (as --set would), and the allowable pressure at the footing's own width read off each run.",
+		v.Symbol, valueText(units.Quantity{V: v.Base, Dim: u.Dim}, u, -1)))}})
+	t := &layout.Table{Pos: p, Header: []layout.Cell{{txt(v.Symbol + " (" + u.Name + ")")}, unitHeader("q_allow", "kPa")},
+		Align:   []layout.Align{layout.AlignRight, layout.AlignRight},
+		Caption: []layout.Run{txt("Allowable pressure of " + b.Name + " at the footing's own width against " + v.Symbol + ".")}}
+	var xs, ys []float64
+	for _, r := range v.Rows {
+		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: []layout.Cell{{txt(units.Printed(r.P, u, -1))}, {txt(units.Printed(r.Util, kPa, -1))}}})
+		xs, ys = append(xs, r.P/factor(u)), append(ys, r.Util/1e3)
+	}
+	out = append(out, t)
+	ch := chart.Chart{W: min(c.width, 360), H: 170, X: chart.Axis{Title: v.Symbol + " (" + u.Name + ")"}, Y: chart.Axis{Title: "Allowable pressure (kPa)", Min: chart.At(0)},
+		Series: []chart.Series{{Name: "q_allow", X: xs, Y: ys, Emphasis: true}}}
+	if d, err := ch.Drawing(p, []layout.Run{txt("Allowable pressure of " + b.Name + " against " + v.Symbol + ".")}); err == nil {
+		out = append(out, d)
+	}
+	return out
 }

@@ -45,7 +45,7 @@ func (e *evaluator) varyAll(opt Options) {
 					x = o
 				}
 			}
-			if x == nil || blk == nil || len(blk.Checks) == 0 {
+			if x == nil || blk == nil || (len(blk.Checks) == 0 && blk.Capacity == nil) {
 				continue
 			}
 			e.varyBlock(opt, s, a, blk, x)
@@ -122,7 +122,7 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 		for _, t := range append(res.Sheets, res.Context...) {
 			if t.Src == s.Src {
 				if nb := t.blocks[a]; nb != nil {
-					return governingUtil(nb), nil
+					return measure(nb), nil
 				}
 			}
 		}
@@ -135,7 +135,21 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 	}
 	blk.Vary = &VaryResult{Symbol: name, Unit: y.Unit, Base: y.Q.V, Result: r}
 	first, last := r.Rows[0], r.Rows[len(r.Rows)-1]
+	if blk.Capacity != nil {
+		e.defineResults(s, blk, []trace.Value{{Symbol: "q_allow_at_min", V: first.Util, Unit: "kPa"}, {Symbol: "q_allow_at_max", V: last.Util, Unit: "kPa"}})
+		return
+	}
 	e.defineResults(s, blk, []trace.Value{{Symbol: "util_at_min", V: first.Util}, {Symbol: "util_at_max", V: last.Util}})
+}
+
+// measure is what a vary option follows: a capacity table's allowable
+// pressure at the footing's own width (Pa), else the block's governing
+// utilisation.
+func measure(b *Block) float64 {
+	if b.Capacity != nil {
+		return b.Capacity.Rows[b.Capacity.Own].QAllow
+	}
+	return governingUtil(b)
 }
 
 // governingUtil is the highest utilisation among a block's checks.
