@@ -9,6 +9,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/trace"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/calc/vary"
+	"github.com/plinth-calc/plinth/doc/expr"
 	"github.com/plinth-calc/plinth/doc/sheet"
 )
 
@@ -72,6 +73,10 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 		e.errs.Add(x.Value.Span, "vary: %s is not a symbol of this sheet or a sheet it uses", name)
 		return
 	}
+	if y.Expr == nil || len(expr.Idents(y.Expr)) > 0 {
+		e.errs.AddHint(x.Value.Span, "vary one of the inputs it comes from", "vary: %s is not an input (it is computed), so it cannot be varied", name)
+		return
+	}
 	end := func(text string) (float64, bool) {
 		t := strings.TrimSpace(text)
 		if strings.HasSuffix(t, "%") {
@@ -130,7 +135,7 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 	}
 	r, err := vary.Table(f, from, to, VarySteps, vary.Options{Symbol: name, Unit: y.Unit.Name, Tol: 1e-4 * (to - from)})
 	if err != nil {
-		e.errs.Add(x.Value.Span, "vary: %v", err)
+		e.errs.Add(x.Value.Span, "%v", err) // "vary: at … = …: why"
 		return
 	}
 	blk.Vary = &VaryResult{Symbol: name, Unit: y.Unit, Base: y.Q.V, Result: r}
