@@ -7,6 +7,7 @@ import (
 	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/calc/solve"
 	"github.com/plinth-calc/plinth/calc/trace"
+	"github.com/plinth-calc/plinth/calc/units"
 )
 
 // Func is a check's utilisation as a function of one parameter (SI).
@@ -77,7 +78,11 @@ func Table(f Func, lo, hi float64, n int, o Options) (*Result, error) {
 	eval := func(p float64) (float64, error) {
 		u, err := f(p)
 		if err != nil {
-			return 0, fmt.Errorf("vary: at %s = %g: %w", sym, p, err)
+			at := fmt.Sprintf("%g", p)
+			if u, uerr := units.Parse(o.Unit); uerr == nil && o.Unit != "" {
+				at = units.Format(p, u, -1) + " " + u.Name // in the unit it is read in
+			}
+			return 0, fmt.Errorf("vary: at %s = %s: %w", sym, at, err)
 		}
 		if math.IsNaN(u) || math.IsInf(u, 0) {
 			return 0, fmt.Errorf("vary: at %s = %g: the utilisation is %v", sym, p, u)
