@@ -13,11 +13,11 @@ import (
 )
 
 // evalSheet evaluates one sheet's text and fails on any diagnostic.
-func evalSheet(t *testing.T, src string) (*eval.Result, *sheet.Sheet) {
+func evalSheet(t *testing.T, src string, set ...string) (*eval.Result, *sheet.Sheet) {
 	t.Helper()
 	f := source.NewFile("t.md", []byte(src))
 	s, prior := parse.Sheet(f)
-	res, diags := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{Prior: prior})
+	res, diags := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{Prior: prior, Set: set})
 	if len(prior) > 0 || len(diags) > 0 {
 		t.Fatalf("%v %v in\n%s", prior, diags, src)
 	}

@@ -6,33 +6,29 @@ import (
 	"testing"
 
 	"github.com/plinth-calc/plinth/doc/eval"
-	"github.com/plinth-calc/plinth/doc/parse"
-	"github.com/plinth-calc/plinth/doc/sheet"
-	"github.com/plinth-calc/plinth/doc/source"
 )
 
 const varySheet = "# T\n\n```ground site\n| layer | top (m) | gamma (kN/m3) | c_u (kPa) |\n| --- | --- | --- | --- |\n| Clay | 0 | 19 | 60 |\n```\n\n" +
 	"```footing F\nshape = square\nB = 1.6 m\nD = 1 m\n\n| action | type | V (kN) |\n| --- | --- | --- |\n| Dead | permanent | 700 |\n```\n\n" +
 	"```bearing F on site\ndrainage = undrained\nvary = site.clay.c_u: -30 % .. +30 %\n```\n"
 
-func evalWith(t *testing.T, src string, set ...string) *eval.Block {
+// blockOf evaluates the sheet src with --set arguments (evalSheet) and
+// returns its first block for which has holds.
+func blockOf(t *testing.T, src string, has func(*eval.Block) bool, set ...string) *eval.Block {
 	t.Helper()
-	f := source.NewFile("p.md", []byte(src))
-	s, pd := parse.Sheet(f)
-	if pd.HasErrors() {
-		t.Fatal(pd)
-	}
-	res, d := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{Set: set})
-	if d.HasErrors() {
-		t.Fatal(d)
-	}
+	res, _ := evalSheet(t, src, set...)
 	for _, b := range res.Sheets[0].Blocks() {
-		if b.Bearing != nil {
+		if has(b) {
 			return b
 		}
 	}
-	t.Fatal("no bearing block")
+	t.Fatal("no such block")
 	return nil
+}
+
+func evalWith(t *testing.T, src string, set ...string) *eval.Block {
+	t.Helper()
+	return blockOf(t, src, func(b *eval.Block) bool { return b.Bearing != nil }, set...)
 }
 
 // The vary option's rows are the block's governing utilisation with the
@@ -68,56 +64,5 @@ func TestVaryAgreesWithSet(t *testing.T) {
 
 func evalPlatform(t *testing.T, src string) *eval.Block {
 	t.Helper()
-	f := source.NewFile("m.md", []byte(src))
-	s, pd := parse.Sheet(f)
-	if pd.HasErrors() {
-		t.Fatal(pd)
-	}
-	res, d := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{})
-	if d.HasErrors() {
-		t.Fatal(d)
-	}
-	for _, b := range res.Sheets[0].Blocks() {
-		if b.Platform != nil {
-			return b
-		}
-	}
-	t.Fatal("no platform block")
-	return nil
-}
-
-// vary on a capacity block follows the allowable pressure at the
-// footing's own width: each row equals the table evaluated with --set.
-func TestVaryCapacity(t *testing.T) {
-	src := "# C\n\n```ground site\n| layer | top (m) | gamma (kN/m3) | c_u (kPa) | m_v (m2/MN) | E_u (MPa) |\n| --- | --- | --- | --- | --- | --- |\n| Clay | 0 | 19 | 60 | 0.1 | 30 |\n```\n\n" +
-		"```footing F\nshape = square\nB = 2 m\nD = 1 m\n\n| action | type | V (kN) |\n| --- | --- | --- |\n| Dead | permanent | 500 |\n```\n\n" +
-		"```capacity F on site\nwidths = 1 m, 2 m\nvary = site.clay.c_u: 40 kPa .. 80 kPa\n```\n"
-	get := func(set ...string) *eval.Block {
-		f := source.NewFile("c.md", []byte(src))
-		s, pd := parse.Sheet(f)
-		if pd.HasErrors() {
-			t.Fatal(pd)
-		}
-		res, d := eval.Package(&sheet.Package{Dir: ".", Sheets: []*sheet.Sheet{s}, Files: []*source.File{f}}, eval.Options{Set: set})
-		if d.HasErrors() {
-			t.Fatal(d)
-		}
-		for _, b := range res.Sheets[0].Blocks() {
-			if b.Capacity != nil {
-				return b
-			}
-		}
-		t.Fatal("no capacity block")
-		return nil
-	}
-	b := get()
-	if b.Vary == nil || len(b.Vary.Rows) != eval.VarySteps {
-		t.Fatalf("vary %+v", b.Vary)
-	}
-	for _, r := range b.Vary.Rows {
-		one := get(fmt.Sprintf("site.clay.c_u=%g kPa", r.P/1e3))
-		if q := one.Capacity.Rows[one.Capacity.Own].QAllow; math.Abs(q-r.Util) > 1e-9*q {
-			t.Errorf("c_u = %g kPa: vary %v, --set %v", r.P/1e3, r.Util, q)
-		}
-	}
+	return blockOf(t, src, func(b *eval.Block) bool { return b.Platform != nil })
 }
