@@ -149,10 +149,7 @@ func isSliding(ca trace.Caution) bool {
 
 // caseRow is one row of a case summary; the governing row is in bold.
 func caseRow(i, gov int, comb, drainage string, a, b, r, util float64, ok bool, unit string) layout.Row {
-	verdict := txt("OK")
-	if !ok {
-		verdict = bold("NOT OK")
-	}
+	verdict := verdictOf(ok)
 	mark := func(s string) layout.Run {
 		if i == gov {
 			return bold(s)

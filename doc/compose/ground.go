@@ -191,8 +191,7 @@ func (c *composer) footing(s *eval.Sheet, b *eval.Block, src *sheet.Footing) []l
 // toSize describes a footing a size block sizes: its shape, the fixed L
 // of a rectangle that gives one, and its depth.
 func toSize(f site.Footing) string {
-	m := units.MustParse("m")
-	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	l := metres
 	plan := f.Shape.String()
 	if f.Shape == site.Rectangle && f.L > 0 {
 		plan += " of fixed length " + l(f.L)
@@ -203,8 +202,7 @@ func toSize(f site.Footing) string {
 // shapeWords describes a footing's plan: "rectangle 2.7 m × 3.2 m,
 // underside 1 m below ground level".
 func shapeWords(f site.Footing) string {
-	m := units.MustParse("m")
-	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	l := metres
 	var plan string
 	switch f.Shape {
 	case site.Strip:

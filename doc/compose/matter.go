@@ -76,10 +76,7 @@ func (c *composer) checkRegister() []layout.Block {
 		if ch.HasUtil() {
 			util = ch.UtilText()
 		}
-		verdict := txt("OK")
-		if !ch.OK {
-			verdict = bold("NOT OK")
-		}
+		verdict := verdictOf(ch.OK)
 		demand, capacity := ch.L, ch.R
 		if ch.Op == ">=" || ch.Op == ">" {
 			demand, capacity = ch.R, ch.L

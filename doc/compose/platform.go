@@ -18,7 +18,7 @@ func (c *composer) platform(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
 	kPa := units.MustParse("kPa")
-	length := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	length := metres
 	o.head(fmt.Sprintf("Working platform %s on %s (BR 470)", b.Name, b.On.Name))
 	need := "the subgrade alone cannot carry the track: a platform is needed"
 	if !r.Needed {
@@ -54,10 +54,7 @@ func (c *composer) platform(s *eval.Sheet, b *eval.Block) []layout.Block {
 			txt("), the platform material alone ("), {Math: eqn.Sym{Name: "R_p"}, Own: true},
 			txt(", the upper limit), the thickness required and the resistance with the platform; beside it the EN 1997-1 two-layer utilisation of the same track.")}}
 	for _, k := range r.Cases {
-		verdict := txt("OK")
-		if !k.OK {
-			verdict = bold("NOT OK")
-		}
+		verdict := verdictOf(k.OK)
 		ec7 := "—"
 		if k.EC7 != nil && k.EC7.Governing >= 0 {
 			ec7 = units.Utilisation(k.EC7.Cases[k.EC7.Governing].Util)

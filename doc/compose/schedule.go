@@ -24,7 +24,7 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 	o := c.engineOut(s, b)
 	m := units.MustParse("m")
 	mm := units.MustParse("mm")
-	length := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	length := metres
 	o.head(fmt.Sprintf("Schedule %s on %s", b.Name, b.On.Name))
 	intro := fmt.Sprintf("%d %s footings, each sized as a size block sizes one: the smallest width that passes bearing, sliding, the eccentricity limit e ≤ %s",
 		len(r.Rows), r.Footing.Shape, r.Ecc)
@@ -95,10 +95,7 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 		if i == r.RowMax {
 			u = bold(units.Utilisation(row.At.Util()))
 		}
-		verdict := txt("OK")
-		if !row.At.OK {
-			verdict = bold("NOT OK")
-		}
+		verdict := verdictOf(row.At.OK)
 		name := layout.Run{Text: r.Names[i], Link: rowAnchor(b, i), Own: false}
 		cells := []layout.Cell{{name}, {txt(units.Printed(r.X[i], m, -1))}, {txt(units.Printed(r.Y[i], m, -1))},
 			{txt(sz)}, {txt(units.Printed(row.Footing.D, m, -1))}, {txt(gov.Name)}, {u}, {txt(st)}, {verdict}}
@@ -138,10 +135,7 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 			if i == r.PairMax {
 				bc = bold(beta)
 			}
-			verdict := txt("OK")
-			if !p.Diff.OK {
-				verdict = bold("NOT OK")
-			}
+			verdict := verdictOf(p.Diff.OK)
 			pt.Rows = append(pt.Rows, layout.Row{Pos: b.Span, Cells: []layout.Cell{{txt(r.Names[p.A] + " – " + r.Names[p.B])}, {txt(units.Printed(p.Spacing, m, -1))},
 				{txt(units.Printed(p.Diff.Delta, mm, -1))}, {bc}, {verdict}}})
 		}

@@ -27,8 +27,7 @@ func (c *composer) size(s *eval.Sheet, b *eval.Block) []layout.Block {
 func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, full bool) []layout.Block {
 	r := b.Size
 	o := c.engineOut(s, b)
-	m := units.MustParse("m")
-	width := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	width := metres
 	dims := "B = " + width(r.B)
 	if r.Footing.Shape == site.Strip {
 		dims += " (strip)"
@@ -61,12 +60,7 @@ func (c *composer) sizeWorking(s *eval.Sheet, b *eval.Block, full bool) []layout
 	}
 	t := &layout.Table{Pos: o.p, Header: head, Align: al,
 		Caption: []layout.Run{txt("Every check at the chosen width and one increment smaller (utilisation; the governing check in bold).")}}
-	verdict := func(ok bool) layout.Run {
-		if ok {
-			return txt("OK")
-		}
-		return bold("NOT OK")
-	}
+	verdict := verdictOf
 	cell := func(tr *size.Trial, name string) (layout.Cell, layout.Cell) {
 		for i, ch := range tr.Checks {
 			if ch.Name != name {
@@ -129,10 +123,7 @@ func sizeCells(a *eval.Block) (bear, slide, settl layout.Cell) {
 		if strings.HasPrefix(ch.Detail, "not computed") {
 			continue
 		}
-		v := txt("OK")
-		if !ch.OK {
-			v = bold("NOT OK")
-		}
+		v := verdictOf(ch.OK)
 		line := layout.Cell{txt(units.Utilisation(ch.Util) + "  "), v, txt("\n" + ch.Name)}
 		if i == r.At.Governing {
 			line = append(line, txt(" (governs the size)"))

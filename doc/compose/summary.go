@@ -319,6 +319,19 @@ func (c *composer) verdictCell(a *eval.Block, kind string, has bool, gov func() 
 	return cl
 }
 
+// verdictOf is a table's verdict cell: OK, or NOT OK in bold.
+func verdictOf(ok bool) layout.Run {
+	if ok {
+		return txt("OK")
+	}
+	return bold("NOT OK")
+}
+
+// metres is a length as printed, in metres ("2.4 m").
+func metres(v float64) string {
+	return valueText(units.Quantity{V: v, Dim: units.Length}, units.MustParse("m"), -1)
+}
+
 func verdictRun(ch *eval.Check) layout.Run {
 	if ch.OK {
 		return bold("OK")
@@ -334,8 +347,7 @@ func rowEq(sym string, v float64, unit string) eqn.Node {
 // shortShape is a footing's plan and depth in a few words: "2.7 m × 3.2 m,
 // D = 1 m".
 func shortShape(f site.Footing) string {
-	m := units.MustParse("m")
-	l := func(v float64) string { return valueText(units.Quantity{V: v, Dim: units.Length}, m, -1) }
+	l := metres
 	var plan string
 	switch f.Shape {
 	case site.Strip:

@@ -44,10 +44,7 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 		Caption: []layout.Run{txt("Governing utilisation of " + b.Name + " against " + v.Symbol + ".")}}
 	var xs, ys []float64
 	for _, r := range v.Rows {
-		verdict := txt("OK")
-		if r.Util > 1 {
-			verdict = bold("NOT OK")
-		}
+		verdict := verdictOf(!(r.Util > 1))
 		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: []layout.Cell{{txt(units.Printed(r.P, u, -1))}, {txt(units.Utilisation(r.Util))}, {verdict}}})
 		xs, ys = append(xs, r.P/factor(u)), append(ys, r.Util)
 	}
