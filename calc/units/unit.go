@@ -39,6 +39,10 @@ func (q Quantity) String() string {
 	return s + " " + u.Name
 }
 
+// SIFactor is the SI value of one u (1 for a pure number whose Factor is
+// unset).
+func (u Unit) SIFactor() float64 { return u.factor() }
+
 func (u Unit) factor() float64 {
 	if u.Factor == 0 {
 		return 1

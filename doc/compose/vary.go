@@ -46,7 +46,7 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 	for _, r := range v.Rows {
 		verdict := verdictOf(!(r.Util > 1))
 		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: []layout.Cell{{txt(units.Printed(r.P, u, -1))}, {txt(units.Utilisation(r.Util))}, {verdict}}})
-		xs, ys = append(xs, r.P/factor(u)), append(ys, r.Util)
+		xs, ys = append(xs, r.P/u.SIFactor()), append(ys, r.Util)
 	}
 	out = append(out, t)
 	ch := chart.Chart{W: min(c.width, 360), H: 170,
@@ -60,13 +60,6 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 		c.diags.Warn(p, "no sensitivity chart: %v", err)
 	}
 	return out
-}
-
-func factor(u units.Unit) float64 {
-	if u.Factor == 0 {
-		return 1
-	}
-	return u.Factor
 }
 
 // varyCapacity prints a capacity table's sensitivity: the allowable
@@ -85,7 +78,7 @@ func (c *composer) varyCapacity(b *eval.Block) []layout.Block {
 	var xs, ys []float64
 	for _, r := range v.Rows {
 		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: []layout.Cell{{txt(units.Printed(r.P, u, -1))}, {txt(units.Printed(r.Util, kPa, -1))}}})
-		xs, ys = append(xs, r.P/factor(u)), append(ys, r.Util/1e3)
+		xs, ys = append(xs, r.P/u.SIFactor()), append(ys, r.Util/1e3)
 	}
 	out = append(out, t)
 	ch := chart.Chart{W: min(c.width, 360), H: 170, X: chart.Axis{Title: v.Symbol + " (" + u.Name + ")"}, Y: chart.Axis{Title: "Allowable pressure (kPa)", Min: chart.At(0)},

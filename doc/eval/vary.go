@@ -95,7 +95,7 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 		if err != nil || u.Dim != y.Q.Dim {
 			return 0, false
 		}
-		return f * factorOf(u), true
+		return f * u.SIFactor(), true
 	}
 	from, ok1 := end(lo)
 	to, ok2 := end(hi)
@@ -119,7 +119,7 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 				set = append(set, arg)
 			}
 		}
-		set = append(set, fmt.Sprintf("%s:%s=%s %s", sheetName, name, strconv.FormatFloat(p/factorOf(y.Unit), 'g', 12, 64), y.Unit.Name))
+		set = append(set, fmt.Sprintf("%s:%s=%s %s", sheetName, name, strconv.FormatFloat(p/y.Unit.SIFactor(), 'g', 12, 64), y.Unit.Name))
 		res, diags := Package(e.pkg, Options{Set: set, Prior: opt.Prior, noVary: true})
 		if diags.HasErrors() {
 			return 0, fmt.Errorf("%s", diags[0].Msg)
@@ -166,12 +166,4 @@ func governingUtil(b *Block) float64 {
 		}
 	}
 	return u
-}
-
-// factorOf is the SI value of one u (a pure number's factor may be unset).
-func factorOf(u units.Unit) float64 {
-	if u.Factor == 0 {
-		return 1
-	}
-	return u.Factor
 }
