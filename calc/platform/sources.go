@@ -55,7 +55,7 @@ var (
 	// platforms or soft subgrades.
 	SrcLook2016 = trace.Source{Key: "LookHoneyfield2016", Citation: "Look, B. & Honeyfield, N. (2016) Working platforms – to BRE or not to BRE is the question. Australian Geomechanics, March 2016 (abstract: the BRE design method does not apply for thick platforms or for soft subgrades)."}
 	SrcVesic    = bearing.SrcVesic1973
-	SrcBrent    = trace.Source{Key: "Brent1973", Citation: "Brent, R. P. (1973). Algorithms for Minimization without Derivatives, ch. 4. Prentice-Hall, Englewood Cliffs."}
+	SrcBrent    = trace.Brent1973
 )
 
 var (

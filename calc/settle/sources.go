@@ -14,7 +14,7 @@ var (
 	Schmertmann1970  = trace.Source{Key: "Schmertmann1970", Citation: "Schmertmann, J.H. (1970). Static cone to compute static settlement over sand. J. Soil Mech. Found. Div. ASCE 96(SM3), 1011–1043."}
 	Schmertmann1978  = trace.Source{Key: "Schmertmann1978", Citation: "Schmertmann, J.H., Hartman, J.P. & Brown, P.R. (1978). Improved strain influence factor diagrams. J. Geotech. Eng. Div. ASCE 104(GT8), 1131–1135."}
 	BB1985           = trace.Source{Key: "BurlandBurbidge1985", Citation: "Burland, J.B. & Burbidge, M.C. (1985). Settlement of foundations on sand and gravel. Proc. Instn Civ. Engrs, Part 1, 78(6), 1325–1381."}
-	Brent1973        = trace.Source{Key: "Brent1973", Citation: "Brent, R.P. (1973). Algorithms for Minimization without Derivatives. Prentice-Hall, Englewood Cliffs, NJ (ch. 4)."}
+	Brent1973        = trace.Brent1973
 	SM1956           = trace.Source{Key: "SkemptonMacDonald1956", Citation: "Skempton, A.W. & MacDonald, D.H. (1956). The allowable settlements of buildings. Proc. Instn Civ. Engrs, Part III, 5, 727–768."}
 	Bjerrum1963      = trace.Source{Key: "Bjerrum1963", Citation: "Bjerrum, L. (1963). Allowable settlement of structures. Proc. 3rd European Conf. Soil Mech. Found. Eng., Wiesbaden, Vol. 2, 135–137."}
 )

@@ -149,7 +149,7 @@ func (z *sizer) eccentricity(br *bearing.Result, f site.Footing) (Check, bool) {
 }
 
 var (
-	srcSize = trace.Source{Key: "Brent1973", Citation: "Brent, R. P. (1973). Algorithms for Minimization without Derivatives, ch. 4. Prentice-Hall, Englewood Cliffs."}
+	srcSize = trace.Brent1973
 	refSize = trace.Ref{Source: srcSize, Clause: "ch. 4, procedure zero"}
 )
 

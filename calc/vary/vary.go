@@ -42,7 +42,7 @@ type Result struct {
 	Trace     trace.Trace
 }
 
-var srcBrent = trace.Source{Key: "Brent1973", Citation: "Brent, R. P. (1973). Algorithms for Minimization without Derivatives, ch. 4. Prentice-Hall, Englewood Cliffs."}
+var srcBrent = trace.Brent1973
 
 // Table evaluates f at n evenly spaced values from lo to hi and solves for
 // every crossing of utilisation 1 between neighbouring rows.
