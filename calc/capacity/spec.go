@@ -15,7 +15,7 @@ var Spec = kind.Spec{
 	Word:   "capacity",
 	Header: kind.On,
 	Doc:    "allowable bearing pressure against footing width, the lower of the bearing- and settlement-limited pressures",
-	Options: join(
+	Options: kind.Join(
 		[]kind.Option{{Name: "widths", Value: kind.List, Form: "a list of lengths (1.0 m, 1.5 m, 2.0 m)", Default: "none: required",
 			Doc: "the footing widths of the table"}},
 		settle.Spec.Pick(nil, "limit"),
@@ -34,13 +34,6 @@ var Spec = kind.Spec{
 	},
 }
 
-func join(lists ...[]kind.Option) []kind.Option {
-	var out []kind.Option
-	for _, l := range lists {
-		out = append(out, l...)
-	}
-	return out
-}
 
 // The capacity block takes the sensitivity option too: what it varies is
 // the allowable pressure at the footing's own width (a table has no

@@ -195,3 +195,13 @@ var VaryResults = []Result{
 	{Symbol: "util_at_min", Meaning: "governing utilisation at the low end of the vary range", When: "vary"},
 	{Symbol: "util_at_max", Meaning: "governing utilisation at the high end of the vary range", When: "vary"},
 }
+
+// Join is the options of several lists in order: a kind that takes its
+// own options and some of another kind's (Spec.Pick).
+func Join(lists ...[]Option) []Option {
+	var out []Option
+	for _, l := range lists {
+		out = append(out, l...)
+	}
+	return out
+}

@@ -14,7 +14,7 @@ var Spec = kind.Spec{
 	Word:   "size",
 	Header: kind.On,
 	Doc:    "the smallest footing on an increment that passes bearing (short and long term), sliding, the eccentricity limit and settlement",
-	Options: join(
+	Options: kind.Join(
 		[]kind.Option{
 			{Name: "step", Value: kind.Quantity, Form: "a length: the size increment", Default: "0.05 m",
 				Doc: "the increment of B"},
@@ -44,13 +44,6 @@ var Spec = kind.Spec{
 	},
 }
 
-func join(lists ...[]kind.Option) []kind.Option {
-	var out []kind.Option
-	for _, l := range lists {
-		out = append(out, l...)
-	}
-	return out
-}
 
 // ScheduleSpec declares the schedule block: a table of footings sized on
 // one ground model with one set of options (SizeSchedule). Its own options
@@ -61,7 +54,7 @@ var ScheduleSpec = kind.Spec{
 	Word:   "schedule",
 	Header: kind.NamedOn,
 	Doc:    "a table of footings, each sized as a size block sizes one, with the angular distortion between neighbours",
-	Options: join(
+	Options: kind.Join(
 		[]kind.Option{
 			{Name: "shape", Words: []string{"square", "circle", "rectangle"}, Default: "none: required",
 				Doc: "the plan shape of every footing (a rectangle with ratio)"},
