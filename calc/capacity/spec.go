@@ -34,7 +34,6 @@ var Spec = kind.Spec{
 	},
 }
 
-
 // The capacity block takes the sensitivity option too: what it varies is
 // the allowable pressure at the footing's own width (a table has no
 // verdict to flip).

@@ -44,7 +44,6 @@ var Spec = kind.Spec{
 	},
 }
 
-
 // ScheduleSpec declares the schedule block: a table of footings sized on
 // one ground model with one set of options (SizeSchedule). Its own options
 // say the footings' shape and depth; the rest are the size block's. Each
