@@ -83,7 +83,11 @@ func (c *composer) checkRegister() []layout.Block {
 		}
 		page := cell(pageOf(ch.Anchor, ""))
 		what := append(c.checkMath(ch), txt("; "))
-		what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		if ch.Stmt == nil { // an engine check: its note is plinth's, typeset as in the body
+			what = append(what, richText(ch.Note.Value, layout.Regular)...)
+		} else {
+			what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		}
 		what = append(what, txt("; "), layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor})
 		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),

@@ -12,10 +12,10 @@ package layout
 
 // shrinks are the factors tried, in turn, on the space between pieces when
 // a sheet's last page is short; the first that removes a page is used.
-var shrinks = [...]float64{0.8, 0.65, minShrink}
+var shrinks = [...]float64{0.8, 0.65, 0.5, minShrink}
 
 // minShrink is the least share of its space kept above a piece.
-const minShrink = 0.5
+const minShrink = 0.4
 
 // shortTail is the share of the text height below which a sheet's last
 // page counts as short (worth trying to take back onto the page before).

@@ -19,12 +19,12 @@ var (
 	plainLook = tableLook{
 		cell: textStyle{size: tableSize, lead: 1.26, color: ink},
 		head: textStyle{size: tableSize, lead: 1.26, color: ink, bold: true},
-		padX: 4.5, padY: 2.8,
+		padX: 4.5, padY: 2.3,
 	}
 	compactLook = tableLook{
 		cell: textStyle{size: compactSize, lead: 1.22, color: ink},
 		head: textStyle{size: compactSize, lead: 1.22, color: ink, bold: true},
-		padX: 3.5, padY: 1.3,
+		padX: 3.5, padY: 1.0,
 	}
 )
 
