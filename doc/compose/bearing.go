@@ -223,9 +223,9 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 	}
 	o.head(title)
 	if len(near) > 0 {
-		what := "A column per case (numbered as in the summary above), a row per value of its working in the order computed, by the formulas of the governing case; values the same in every case of a table are in its caption."
+		what := "By the governing case's formulas, a column per case as numbered above, its values in the order computed; values the same in every case are in this caption."
 		if o.c.governingOnly() {
-			what = "The cases within 10 % of the governing utilisation: " + strings.ToLower(what[:1]) + what[1:]
+			what = "The cases within 10 % of the governing utilisation, by its formulas: a column per case as numbered above, its values in the order computed; values the same in every case are in this caption."
 		}
 		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, append([]layout.Run{txt(what)}, inSummary...))
 	}

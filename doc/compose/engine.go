@@ -269,15 +269,37 @@ var restates = map[string]bool{"governing": true, "governing-sliding": true}
 // entered in the cautions summary with a link to the step.
 var inStep = map[string]bool{"water-above-base": true, "water-within-B": true, "nu-default": true}
 
+// listed enters caution code of tr (the first raised) in the cautions
+// summary with a link to this point, unboxed: the caller prints what it
+// says in its own words here. It reports the caution's message, or false
+// when tr raised none with that code.
+func (o *engineOut) listed(tr *trace.Trace, code, where string) (string, bool) {
+	for j, ca := range tr.Cautions {
+		if ca.Code == code {
+			o.shown[shownKey{tr, j}] = true
+			o.add(&layout.Anchor{Pos: o.p, Name: o.enter(ca, where)})
+			return ca.Message, true
+		}
+	}
+	return "", false
+}
+
+// enter enters an engine caution in the cautions summary and returns the
+// anchor its entry links to.
+func (o *engineOut) enter(ca trace.Caution, where string) string {
+	a := o.c.anchor("caution")
+	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: ca.Severity, code: ca.Code, text: sentence(ca.Message),
+		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
+	return a
+}
+
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
 		return
 	}
-	a := o.c.anchor("caution")
+	a := o.enter(ca, where)
 	sev := ca.Severity
-	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, code: ca.Code, text: sentence(ca.Message),
-		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	if inStep[ca.Code] && o.beside {
 		o.add(&layout.Anchor{Pos: o.p, Name: a})
 		return

@@ -24,12 +24,19 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 	r := st.Result
 	o := c.engineOut(s, b)
 	o.head(fmt.Sprintf("Settlement of %s on %s", b.Of.Name, b.On.Name))
+	method := r.Method.String()
+	// the engine's note of why it chose the method, said here
+	if m, ok := o.listed(&r.Trace, "auto-method", "method"); ok {
+		if _, why, cut := strings.Cut(m, "("); cut {
+			method += ", chosen from the layers' data (" + why
+		}
+	}
 	intro := fmt.Sprintf("Method: %s. Stress increase: %s, at the %s of the footing. Load: %s. Limit: %s.",
-		r.Method, r.Stress, r.Point, st.Service.Name, valueText(units.Quantity{V: r.Limit, Dim: units.Length}, mm, -1))
+		method, r.Stress, r.Point, st.Service.Name, valueText(units.Quantity{V: r.Limit, Dim: units.Length}, mm, -1))
 	if len(b.Options) > 0 {
 		intro += " Options: " + strings.Join(b.Options, ", ") + "."
 	}
-	o.para(txt(intro))
+	o.para(richText(intro, layout.Regular)...)
 	o.selfWeight()
 
 	if len(st.Load.Steps) > 0 {

@@ -24,7 +24,7 @@ const (
 const MathSize = 8.4
 
 var headingSize = [4]float64{0, 12, 10.2, 9.4}
-var headingGap = [4]float64{0, 11, 8, 6}
+var headingGap = [4]float64{0, 10, 7, 5}
 
 var (
 	ink      = draw.Color{R: 26, G: 26, B: 30}
