@@ -50,30 +50,22 @@ type measured struct {
 
 // NaturalWidth is the width t takes with no cell broken: its columns at
 // their natural widths (for a caller choosing how to fold a table).
-func NaturalWidth(t *Table) float64 {
-	e := &engine{}
-	m := e.measureTable(t)
-	if m == nil {
-		return 0
-	}
-	w := 0.0
-	for _, x := range m.maxW {
-		w += x
-	}
-	return w
-}
+func NaturalWidth(t *Table) float64 { return widthOf(t, func(m *measured) []float64 { return m.maxW }) }
 
 // BandWidth is the width t takes with its header cells broken at their
 // spaces and no body cell broken (for a caller folding a long table of
 // short values into bands).
-func BandWidth(t *Table) float64 {
+func BandWidth(t *Table) float64 { return widthOf(t, func(m *measured) []float64 { return m.bandW }) }
+
+// widthOf sums the column widths of t that pick reads off its measure.
+func widthOf(t *Table, pick func(*measured) []float64) float64 {
 	e := &engine{}
 	m := e.measureTable(t)
 	if m == nil {
 		return 0
 	}
 	w := 0.0
-	for _, x := range m.bandW {
+	for _, x := range pick(m) {
 		w += x
 	}
 	return w
