@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/kind"
 	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
@@ -218,13 +219,17 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), ha
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		varied := false
-		for _, o := range b.Options() {
-			varied = varied || o.Name.Value == "vary"
-		}
+		varied := varyOptions(b)
 		for _, n := range b.Kind.Spec().ResultNames() {
-			if r, _ := b.Kind.Spec().Result(n); r.When == "vary" && !varied {
-				continue // only a block with the vary option defines them
+			if r, _ := b.Kind.Spec().Result(n); r.When == "vary" && len(varied) != 1 {
+				// none without the vary option; with several inputs, each its
+				// own (PREFIX.vary.SYMBOL.n)
+				for _, o := range varied {
+					if y := varyName(o); y != "" && !has(p.Value+"."+kind.VaryName(y, n)) {
+						add(p.Value+"."+kind.VaryName(y, n), def{span: o.Span})
+					}
+				}
+				continue
 			}
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue

@@ -37,7 +37,7 @@ func evalWith(t *testing.T, src string, set ...string) *eval.Block {
 // rows and at the flip (tolerance: the solver's, 1e-4 of the range).
 func TestVaryAgreesWithSet(t *testing.T) {
 	b := evalWith(t, varySheet)
-	v := b.Vary
+	v := b.Vary.Inputs[0]
 	if v == nil || len(v.Rows) != eval.VarySteps {
 		t.Fatalf("vary %+v", v)
 	}
