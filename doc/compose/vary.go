@@ -10,6 +10,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/eval"
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/layout/eqn"
+	"github.com/plinth-calc/plinth/doc/notation"
 )
 
 // varyBlocks prints a block's sensitivity. One input: the governing
@@ -43,11 +44,6 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 	intro := fmt.Sprintf("The package evaluated again for each value of each input below, one input at a time with the others at their values here (as --set would), and %s read off each run.", what)
 	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(intro)}}, c.varySummary(b))
 	for _, v := range sens.Inputs {
-		runs := []layout.Run{{Text: b.Name + " against ", Style: layout.BoldItalic, Own: true}, sym(v.Symbol)}
-		if !capacity {
-			runs = append(runs, txt(". "+flipText(v)))
-		}
-		out = append(out, &layout.Para{Pos: v.Span, Runs: runs})
 		out = append(out, c.varyInput(b, v)...)
 	}
 	return out
@@ -90,11 +86,11 @@ func (c *composer) varySummary(b *eval.Block) *layout.Table {
 	t := &layout.Table{Pos: b.Span, Header: []layout.Cell{{txt("Input")}, {txt("Value here")}, {txt("Values")}},
 		Align: []layout.Align{layout.AlignLeft, layout.AlignRight, layout.AlignLeft, layout.AlignRight, layout.AlignRight, layout.AlignLeft}}
 	if capacity {
-		t.Header = append(t.Header, layout.Cell{{Math: eqn.Sym{Name: "q_allow"}, Own: true}, txt(" at the least (kPa)")}, layout.Cell{{Math: eqn.Sym{Name: "q_allow"}, Own: true}, txt(" at the greatest (kPa)")})
-		t.Caption = []layout.Run{txt("Allowable pressure of " + b.Name + " at the least and the greatest value of each input, the widest spread first.")}
+		t.Header = append(t.Header, layout.Cell{txt("At the least\nkPa")}, layout.Cell{txt("At the greatest\nkPa")})
+		t.Caption = []layout.Run{txt("Allowable pressure of " + b.Name + " at the footing's own width at the least and the greatest value of each input, the input whose allowable pressure spreads widest first.")}
 	} else {
-		t.Header = append(t.Header, layout.Cell{txt("Utilisation at the least")}, layout.Cell{txt("Utilisation at the greatest")}, layout.Cell{txt("Verdict flips at")})
-		t.Caption = []layout.Run{txt("Governing utilisation of " + b.Name + " at the least and the greatest value of each input, the widest spread first.")}
+		t.Header = append(t.Header, layout.Cell{txt("At the least")}, layout.Cell{txt("At the greatest")}, layout.Cell{txt("Verdict flips at")})
+		t.Caption = []layout.Run{txt("Governing utilisation of " + b.Name + " at the least and the greatest value of each input, the input whose utilisation spreads widest first.")}
 	}
 	for _, i := range b.Vary.Ranked {
 		v := b.Vary.Inputs[i]
@@ -107,7 +103,7 @@ func (c *composer) varySummary(b *eval.Block) *layout.Table {
 			}
 			values = strings.Join(xs, ", ")
 		} else {
-			values = fmt.Sprintf("%s to %s, %d steps", varyVal(v, first.P), varyVal(v, last.P), len(v.Rows))
+			values = fmt.Sprintf("%s to %s, %d values", varyVal(v, first.P), varyVal(v, last.P), len(v.Rows))
 		}
 		cells := []layout.Cell{{sym(v.Symbol)}, {txt(varyVal(v, v.Base))}, {txt(values)}}
 		if capacity {
@@ -134,16 +130,19 @@ func (c *composer) varyInput(b *eval.Block, v *eval.VaryResult) []layout.Block {
 	u := v.Unit
 	kPa := units.MustParse("kPa")
 	capacity := b.Capacity != nil
-	head := layout.Cell{sym(v.Symbol)}
+	// the input's own symbol heads the column and titles the axis (the
+	// captions name it in full: pf.soft_clay.c_u)
+	short := v.Symbol[strings.LastIndexByte(v.Symbol, '.')+1:]
+	head := layout.Cell{sym(short)}
 	if u.Name != "" {
-		head = append(head, txt(" ("+unitText(u.Name)+")"))
+		head = append(head, txt("\n"+unitText(u.Name)))
 	}
 	t := &layout.Table{Pos: p, Header: []layout.Cell{head, {txt("Utilisation")}, {txt("Verdict")}},
 		Align: []layout.Align{layout.AlignRight, layout.AlignRight, layout.AlignLeft}}
-	title := "Governing utilisation of " + b.Name + " against " + v.Symbol + "."
+	title := []layout.Run{txt("Governing utilisation of " + b.Name + " against "), sym(v.Symbol), txt(".")}
 	if capacity {
 		t.Header = []layout.Cell{head, unitHeader("q_allow", "kPa")}
-		title = "Allowable pressure of " + b.Name + " at the footing's own width against " + v.Symbol + "."
+		title = []layout.Run{txt("Allowable pressure of " + b.Name + " at the footing's own width against "), sym(v.Symbol), txt(".")}
 	}
 	var xs, ys []float64
 	for _, r := range v.Rows {
@@ -158,11 +157,15 @@ func (c *composer) varyInput(b *eval.Block, v *eval.VaryResult) []layout.Block {
 		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: cells})
 		xs = append(xs, r.P/u.SIFactor())
 	}
-	xTitle := v.Symbol
+	n := notation.Split(short)
+	xTitle := n.Base + strings.Repeat("′", n.Primes)
+	if n.Sub != "" {
+		xTitle += "_" + n.Sub
+	}
 	if u.Name != "" {
 		xTitle += " (" + unitText(u.Name) + ")"
 	}
-	share := math.Min(0.45, (layout.NaturalWidth(t)+4)/(c.width-chartGap))
+	share := math.Min(0.5, (layout.NaturalWidth(t)+4)/(c.width-chartGap))
 	ch := chart.Chart{W: (c.width - chartGap) * (1 - share), H: 170,
 		X:      chart.Axis{Title: xTitle, Min: chart.At(xs[0]), Max: chart.At(xs[len(xs)-1])},
 		Y:      chart.Axis{Title: "Governing utilisation", Min: chart.At(0)},
@@ -180,12 +183,18 @@ func (c *composer) varyInput(b *eval.Block, v *eval.VaryResult) []layout.Block {
 	if v.Base >= v.Rows[0].P && v.Base <= v.Rows[len(v.Rows)-1].P {
 		ch.Guides = append(ch.Guides, chart.Guide{Value: v.Base / u.SIFactor(), Label: "value here", Faint: true})
 	}
-	d, err := ch.Drawing(p, []layout.Run{txt(title)})
+	// the table's caption names the input; the chart's says what it shows
+	// and, with several inputs, where the verdict flips: both inside the
+	// Beside, which never splits from its input's text
+	t.Caption = []layout.Run{txt(b.Name + " against "), sym(v.Symbol)}
+	if len(b.Vary.Inputs) > 1 && !capacity {
+		title = append(title, txt(" "+flipText(v)))
+	}
+	d, err := ch.Drawing(p, title)
 	if err != nil {
 		c.diags.Warn(p, "no sensitivity chart: %v", err)
-		t.Caption = []layout.Run{txt(title)}
+		t.Caption = title
 		return []layout.Block{t}
 	}
-	t.Caption = []layout.Run{txt(title)}
 	return []layout.Block{&layout.Beside{Pos: p, Left: []layout.Block{t}, Right: []layout.Block{d}, Share: share}}
 }

@@ -74,6 +74,9 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 	e.register()
 	e.bounds()
 	for _, s := range e.res.Sheets {
+		if opt.noVary {
+			break // a vary run reads blocks only; its prose may quote the vary results, which it has not
+		}
 		e.prose(s)
 	}
 	e.errs = e.errs.OffLines(e.prior)
