@@ -43,6 +43,9 @@ func (c *composer) varyBlocks(b *eval.Block) []layout.Block {
 	}
 	intro := fmt.Sprintf("The package evaluated again for each value of each input below, one input at a time with the others at their values here (as --set would), and %s read off each run.", what)
 	out = append(out, &layout.Para{Pos: p, Runs: []layout.Run{txt(intro)}}, c.varySummary(b))
+	if d := c.varyTornado(b); d != nil {
+		out = append(out, d)
+	}
 	for _, v := range sens.Inputs {
 		out = append(out, c.varyInput(b, v)...)
 	}
@@ -157,11 +160,7 @@ func (c *composer) varyInput(b *eval.Block, v *eval.VaryResult) []layout.Block {
 		t.Rows = append(t.Rows, layout.Row{Pos: p, Cells: cells})
 		xs = append(xs, r.P/u.SIFactor())
 	}
-	n := notation.Split(short)
-	xTitle := n.Base + strings.Repeat("′", n.Primes)
-	if n.Sub != "" {
-		xTitle += "_" + n.Sub
-	}
+	xTitle := plainSym(short)
 	if u.Name != "" {
 		xTitle += " (" + unitText(u.Name) + ")"
 	}
@@ -197,4 +196,67 @@ func (c *composer) varyInput(b *eval.Block, v *eval.VaryResult) []layout.Block {
 		return []layout.Block{t}
 	}
 	return []layout.Block{&layout.Beside{Pos: p, Left: []layout.Block{t}, Right: []layout.Block{d}, Share: share}}
+}
+
+// varyTornado draws the summary as a tornado diagram: a bar per input
+// over the spread of the block's utilisation (a capacity table's
+// allowable pressure) across its values, the widest at the top, with the
+// values at the least and the greatest input marked, and utilisation 1.
+// Nil (with a warning) when it cannot be drawn.
+func (c *composer) varyTornado(b *eval.Block) *layout.Drawing {
+	sens := b.Vary
+	capacity := b.Capacity != nil
+	scale := 1.0
+	if capacity {
+		scale = units.MustParse("kPa").SIFactor()
+	}
+	n := len(sens.Ranked)
+	shorts := map[string]int{}
+	for _, v := range sens.Inputs {
+		shorts[v.Symbol[strings.LastIndexByte(v.Symbol, '.')+1:]]++
+	}
+	least := chart.Series{Name: "at the least value", Style: chart.Markers, Marker: chart.Circle}
+	most := chart.Series{Name: "at the greatest value", Style: chart.Markers, Marker: chart.Square}
+	var bars []chart.Series
+	var ticks []chart.Tick
+	for i, k := range sens.Ranked {
+		v := sens.Inputs[k]
+		y := float64(n - i)
+		lo, hi := v.Spread()
+		bars = append(bars, chart.Series{X: []float64{lo / scale, hi / scale}, Y: []float64{y, y}, Style: chart.Band})
+		least.X, least.Y = append(least.X, v.Rows[0].Util/scale), append(least.Y, y)
+		most.X, most.Y = append(most.X, v.Rows[len(v.Rows)-1].Util/scale), append(most.Y, y)
+		label := v.Symbol
+		if short := v.Symbol[strings.LastIndexByte(v.Symbol, '.')+1:]; shorts[short] == 1 {
+			label = plainSym(short)
+		}
+		ticks = append(ticks, chart.Tick{V: y, Label: label})
+	}
+	ch := chart.Chart{W: min(c.width, 400), H: 50 + 28*float64(n),
+		X:      chart.Axis{Title: "Governing utilisation"},
+		Y:      chart.Axis{Min: chart.At(0.4), Max: chart.At(float64(n) + 0.6), Ticks: ticks},
+		Series: append(bars, least, most),
+		Guides: []chart.Guide{{Value: 1, Label: "utilisation 1"}}}
+	caption := "Spread of the governing utilisation of " + b.Name + " over each input's values, the widest first."
+	if capacity {
+		ch.X.Title = "Allowable pressure (kPa)"
+		ch.Guides = nil
+		caption = "Spread of the allowable pressure of " + b.Name + " over each input's values, the widest first."
+	}
+	d, err := ch.Drawing(b.Span, []layout.Run{txt(caption)})
+	if err != nil {
+		c.diags.Warn(b.Span, "no sensitivity summary chart: %v", err)
+		return nil
+	}
+	return d
+}
+
+// plainSym is a symbol in plain text, for a chart: φ′, c_u.
+func plainSym(name string) string {
+	n := notation.Split(name)
+	out := n.Base + strings.Repeat("′", n.Primes)
+	if n.Sub != "" {
+		out += "_" + n.Sub
+	}
+	return out
 }
