@@ -90,11 +90,14 @@ func (e *evaluator) varyBlock(opt Options, s *Sheet, a *sheet.Analysis, blk *Blo
 	}
 	sens := &Sensitivity{}
 	for _, l := range lines {
-		r := e.varyInput(opt, s, a, l)
-		if r == nil {
-			return
+		if r := e.varyInput(opt, s, a, l); r != nil {
+			sens.Inputs = append(sens.Inputs, r)
+		} else {
+			ok = false // reported at its line; the others still run, to report theirs
 		}
-		sens.Inputs = append(sens.Inputs, r)
+	}
+	if !ok {
+		return
 	}
 	var rs []*vary.Result
 	for _, r := range sens.Inputs {
