@@ -173,3 +173,54 @@ func TestVaryListPercent(t *testing.T) {
 		t.Errorf("flips %+v", v.Crossings)
 	}
 }
+
+// The example's platform block varies two inputs, the subgrade's c_u over
+// a range and the platform's φ′ at listed values: each row is the block's
+// utilisation with that input alone set by --set (sheet-qualified, as a
+// user would give it), and each flip lies between rows of opposite
+// verdict.
+func TestVaryExamplePlatform(t *testing.T) {
+	for _, ex := range examples(t) {
+		for _, s := range ex.res.Sheets {
+			for _, b := range s.Blocks() {
+				if b.Platform == nil || b.Vary == nil {
+					continue
+				}
+				if len(b.Vary.Inputs) < 2 {
+					t.Errorf("%s: %d inputs varied", b.Name, len(b.Vary.Inputs))
+				}
+				for _, v := range b.Vary.Inputs {
+					for _, r := range v.Rows {
+						set := fmt.Sprintf("%s:%s=%.12g %s", s.Name(), v.Symbol, r.P/v.Unit.SIFactor(), v.Unit.Name)
+						res, d := eval.Package(ex.pkg, eval.WithoutVary(eval.Options{Set: []string{set}}))
+						if d.HasErrors() {
+							t.Fatal(d)
+						}
+						var u float64 = -1
+						for _, t2 := range res.Sheets {
+							for _, nb := range t2.Blocks() {
+								if t2.Name() == s.Name() && nb.Name == b.Name && nb.Platform != nil {
+									u = governing(nb)
+								}
+							}
+						}
+						if math.Abs(u-r.Util) > 1e-12 {
+							t.Errorf("%s: vary %v, --set %s %v", b.Name, r.Util, set, u)
+						}
+					}
+					for _, x := range v.Crossings {
+						k := 1
+						for k < len(v.Rows) && v.Rows[k].P < x.P {
+							k++
+						}
+						if k == len(v.Rows) || (v.Rows[k-1].Util > 1) == (v.Rows[k].Util > 1) {
+							t.Errorf("%s %s: flip %v not between rows of opposite verdict", b.Name, v.Symbol, x.P)
+						}
+					}
+				}
+				return
+			}
+		}
+	}
+	t.Fatal("no platform block varies in the examples")
+}
