@@ -357,15 +357,17 @@ func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, 
 	vg, vgs, vw := val(gs, l.Gamma, "kN/m3"), val(gss, l.GammaSatOr(), "kN/m3"), val("gamma_w", c.g.Gw(), "kN/m3")
 	switch {
 	case c.zw <= z:
-		if c.cas == "" {
+		v := c.eval(name, fw.sub, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
+		if c.cas == "" { // raised at the step that prints it
 			c.warn("water-above-base", trace.SevNote, refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
 		}
-		return c.eval(name, fw.sub, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
+		return v
 	case c.zw < z+b:
-		if c.cas == "" {
+		v := c.eval(name, fw.within, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
+		if c.cas == "" { // raised at the step that prints it
 			c.warn("water-within-B", trace.SevNote, refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
 		}
-		return c.eval(name, fw.within, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
+		return v
 	}
 	return c.eval(name, fw.bulk, "kN/m3", refWater, "bulk unit weight (water table deeper than B below the base)", vg)
 }

@@ -57,8 +57,12 @@ func (c *calc) layers() {
 	for _, i := range zone {
 		ns = append(ns, fmt.Sprintf("%s (top %.2f m)", layerName(g, i), g.Layers[i].Top))
 	}
-	c.warn("layers-in-zone", trace.SevNote, refMH, fmt.Sprintf("%s start within 2B = %.2f m below the base. Rule: the founding layer's parameters are used; a lower layer weaker than it (strip capacity q_2 < q_1, Meyerhof & Hanna 1978) is checked as a two-layer system (the weakest if several); stronger layers are ignored (conservative).",
-		strings.Join(ns, ", "), 2*f.B), val("z_2B", z1, "m"))
+	verb := "starts"
+	if len(ns) > 1 {
+		verb = "start"
+	}
+	c.warn("layers-in-zone", trace.SevNote, refMH, fmt.Sprintf("%s %s within 2B = %.2f m below the base. Rule: the founding layer's parameters are used; a lower layer weaker than it (strip capacity q_2 < q_1, Meyerhof & Hanna 1978) is checked as a two-layer system (the weakest if several); stronger layers are ignored (conservative).",
+		strings.Join(ns, ", "), verb, 2*f.B), val("z_2B", z1, "m"))
 	// weakest per drainage (characteristic values); the case uses its own
 	// design values for q_2/q_1
 	best, bestR := -1, math.Inf(1)

@@ -109,7 +109,7 @@ func loadCaution(t *trace.Trace, in bearing.Input) {
 		parts = append(parts, "not a downward central load")
 	}
 	t.Warn(trace.Caution{Code: "capacity-load", Severity: trace.SevCaution, Step: -1, Values: vals,
-		Message: "the allowable pressures assume a " + Assumes + "; the footing's own characteristic actions are " + strings.Join(parts, " and ") +
+		Message: "The allowable pressures assume a " + Assumes + "; the footing's own characteristic actions are " + strings.Join(parts, " and ") +
 			", so the footing cannot use the pressures tabulated: its bearing block, which applies the inclination factors and the effective area, governs."})
 }
 

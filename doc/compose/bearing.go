@@ -348,14 +348,15 @@ func (o *engineOut) caseTable(tr *trace.Trace, cases []string, idx []int, steps 
 }
 
 // foldToWidth sets a narrow table of w columns and many rows in as
-// many side-by-side bands as the text column holds at the table's
-// natural width (at most four; read down the first band, then the
-// next), so a table of a few cases does not run down several pages.
+// many side-by-side bands as the text column holds with the header
+// cells broken at their spaces and no value broken (at most four; read
+// down the first band, then the next), so a table of a few cases does
+// not run down several pages.
 func (c *composer) foldToWidth(t *layout.Table, w int) {
 	if len(t.Rows) < 8 {
 		return
 	}
-	nat := layout.NaturalWidth(t)
+	nat := layout.BandWidth(t)
 	if nat <= 0 {
 		return
 	}

@@ -62,6 +62,7 @@ type raised struct {
 	sheet  *eval.Sheet
 	block  *eval.Block
 	sev    severity.Level
+	code   string // the engine's code, for an engine caution
 	text   string
 	where  string // case or step
 	anchor string

@@ -29,7 +29,7 @@ func (c *composer) differential(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if len(b.Options) > 0 {
 		intro += " Options: " + strings.Join(b.Options, ", ") + "."
 	}
-	o.para(txt(intro))
+	o.para(richText(intro, layout.Regular)...)
 	tr := &d.Trace
 	o.steps(tr, indices(len(tr.Steps)), "angular distortion")
 	o.rest(tr, "angular distortion", nil)

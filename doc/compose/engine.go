@@ -25,6 +25,7 @@ type engineOut struct {
 	shown     map[shownKey]bool // cautions already boxed
 	asCase    map[string]bool   // symbols listed by value, by the governing case's formulas (steps)
 	inSummary map[string]bool   // symbols the case summary gives, left out of the case tables
+	beside    bool              // the caution being boxed follows its step, printed in full
 }
 
 type shownKey struct {
@@ -217,6 +218,24 @@ func (o *engineOut) cautionOf(tr *trace.Trace, j int, where string) {
 	o.caution(tr.Cautions[j], where)
 }
 
+// sentence starts a caution's message with a capital letter unless its
+// first word is a symbol or option name (φ′_d, local_shear).
+func sentence(m string) string {
+	w, _, _ := strings.Cut(m, " ")
+	if m == "" || m[0] < 'a' || m[0] > 'z' || strings.ContainsAny(w, "_=′'()") {
+		return m
+	}
+	return strings.ToUpper(m[:1]) + m[1:]
+}
+
+// cautionBeside is cautionOf for a caution raised at a step just printed
+// in full, whose note may already say it (inStep).
+func (o *engineOut) cautionBeside(tr *trace.Trace, j int, where string) {
+	o.beside = true
+	o.cautionOf(tr, j, where)
+	o.beside = false
+}
+
 // rest boxes the cautions of tr not shown yet: those of the calculation
 // as a whole, and those raised in steps not printed in full. where names
 // the place; a caution with a case says its case.
@@ -243,6 +262,13 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 // printed beside them; they are left out.
 var restates = map[string]bool{"governing": true, "governing-sliding": true}
 
+// inStep lists the NOTE codes the engine raises at a step whose own note
+// and reference say the same (the unit weight of the N_γ term with the
+// water table near the base; the Poisson's ratio assumed): printed in
+// full beside that step, the note is not boxed again under it, and is
+// entered in the cautions summary with a link to the step.
+var inStep = map[string]bool{"water-above-base": true, "water-within-B": true, "nu-default": true}
+
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
 	if restates[ca.Code] {
@@ -250,9 +276,13 @@ func (o *engineOut) caution(ca trace.Caution, where string) {
 	}
 	a := o.c.anchor("caution")
 	sev := ca.Severity
-	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, text: ca.Message,
+	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: sev, code: ca.Code, text: sentence(ca.Message),
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
-	body := richText(ca.Message, layout.Regular)
+	if inStep[ca.Code] && o.beside {
+		o.add(&layout.Anchor{Pos: o.p, Name: a})
+		return
+	}
+	body := richText(sentence(ca.Message), layout.Regular)
 	if ref := o.c.stepRef(ca.Ref); ref != nil {
 		body = append(body, txt(" "))
 		body = append(body, ref...)

@@ -83,7 +83,11 @@ func (c *composer) checkRegister() []layout.Block {
 		}
 		page := cell(pageOf(ch.Anchor, ""))
 		what := append(c.checkMath(ch), txt("; "))
-		what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		if ch.Stmt == nil { // an engine check: its note is plinth's, typeset as in the body
+			what = append(what, richText(ch.Note.Value, layout.Regular)...)
+		} else {
+			what = append(what, c.noteRuns(ch.Sheet, ch.Note)...)
+		}
 		what = append(what, txt("; "), layout.Run{Text: sheetLabel(ch.Sheet) + ", " + where(ch.Span), Link: ch.Anchor})
 		t.Rows = append(t.Rows, layout.Row{Pos: ch.Span, Cells: []layout.Cell{
 			cell(txt(fmt.Sprint(i + 1))),
@@ -223,7 +227,7 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 	}
 	for _, r := range c.cautions {
-		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning {
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning || inStep[r.code] { // inStep: its step is listed above
 			continue
 		}
 		add("", 0, "", r.text, use{s: r.sheet, b: r.block, where: r.where, anchor: r.anchor})

@@ -119,7 +119,7 @@ func (o *engineOut) steps(tr *trace.Trace, idx []int, where string) {
 		o.line(line)
 		for j, ca := range tr.Cautions {
 			if ca.Step == i {
-				o.cautionOf(tr, j, where)
+				o.cautionBeside(tr, j, where)
 			}
 		}
 	}

@@ -319,7 +319,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 			ds = append(ds, sl.DSigma/1e3)
 			sf = append(sf, sl.SigmaF/1e3)
 		}
-		ch := chart.Chart{W: w, H: 190,
+		ch := chart.Chart{W: w, H: settleChartH,
 			X: chart.Axis{Title: "vertical stress (kPa)"}, Y: chart.Axis{Title: "depth below ground level (m)", Reverse: true},
 			Series: []chart.Series{{Name: "effective stress before loading", X: s0, Y: z}, {Name: "stress increase from the footing", X: ds, Y: z, Dash: []float64{4, 2}}, {Name: "effective stress after loading", X: sf, Y: z}},
 			Guides: []chart.Guide{{Value: r.ZInf, OnY: true, Label: "zone of influence " + f(r.ZInf, mU) + " m"}}}
@@ -342,7 +342,7 @@ func (c *composer) settleCharts(o *engineOut, r *settle.Result) []layout.Block {
 		for _, v := range s {
 			top = math.Max(top, v)
 		}
-		ch := chart.Chart{W: w, H: 190,
+		ch := chart.Chart{W: w, H: settleChartH,
 			X: chart.Axis{Title: "time after loading (yr)", Log: true}, Y: chart.Axis{Title: "settlement (mm)", Reverse: true, Min: chart.At(0), Max: chart.At(niceCeil(1.15 * top))},
 			Series: []chart.Series{{Name: "total settlement", X: t, Y: s}},
 			Guides: []chart.Guide{{Value: r.Limit * 1e3, OnY: true, Label: "limit " + f(r.Limit, mm) + " mm"}}}
@@ -437,3 +437,7 @@ func layerList(groups []string) []layout.Run {
 	}
 	return out
 }
+
+// settleChartH is the height in points of the stress and time charts
+// set side by side under a settlement block.
+const settleChartH = 165

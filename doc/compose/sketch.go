@@ -76,7 +76,7 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 			sk.BEff = &bp
 		}
 	}
-	items, err := sketch.Draw(sk, c.width, 230)
+	items, err := sketch.Draw(sk, c.width, sketchHeight)
 	if err != nil {
 		c.diags.Warn(b.Span, "footing %s: no section sketch: %v", f.Name, err)
 		return nil
@@ -95,7 +95,7 @@ func (c *composer) sketch(s *eval.Sheet, b *eval.Block) []layout.Block {
 	if sk.BEff != nil {
 		caption += fmt.Sprintf("; B′ of the governing bearing case (%s)", gov.Bearing.Cases[gov.Bearing.Governing].Combination)
 	}
-	return []layout.Block{&layout.Drawing{Pos: b.Span, W: c.width, H: 230, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
+	return []layout.Block{&layout.Drawing{Pos: b.Span, W: c.width, H: sketchHeight, Items: items, Caption: []layout.Run{txt(caption + ".")}}}
 }
 
 // footingUses lists the analyses of every footing in document order,
@@ -115,3 +115,7 @@ func (c *composer) footingUses() map[*eval.Footing][]*eval.Block {
 	}
 	return c.uses
 }
+
+// sketchHeight is the height of a footing's section sketch in points
+// (about a fifth of an A4 text column).
+const sketchHeight = 180

@@ -11,7 +11,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
-var noteStyle = textStyle{size: noteSize, lead: 1.3, color: muted}
+var noteStyle = textStyle{size: noteSize, lead: 1.2, color: muted}
 
 func (e *engine) statement(s *Statement, width float64) []*piece {
 	row := eqn.Row{s.Symbol}

@@ -214,61 +214,6 @@ func (e *engine) block(b Block, width float64) []*piece {
 	return nil
 }
 
-// paginate stacks pieces into pages for sheet si, numbered from 1.
-func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
-	var page *Page
-	y, empty := 0.0, true
-	bottom := e.bodyY + e.bodyH
-	newPage := func() {
-		page = &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: len(pages) + 1}
-		pages = append(pages, page)
-		y, empty = e.bodyY, true
-	}
-	place := func(p *piece, gap float64) {
-		b := p.box
-		if empty {
-			gap = 0
-		}
-		b.move(e.bodyX, y+gap)
-		page.Boxes = append(page.Boxes, b)
-		y += gap + b.H
-		empty = false
-	}
-	newPage()
-	for i := 0; i < len(ps); i++ {
-		p := ps[i]
-		if p.brk {
-			if !empty {
-				newPage()
-			}
-			continue
-		}
-		gap := p.before
-		if empty {
-			gap = 0
-		}
-		need := gap + p.box.H
-		chain := need
-		for j := i; ps[j].keep && j+1 < len(ps) && !ps[j+1].brk; j++ {
-			chain += ps[j+1].before + ps[j+1].box.H
-		}
-		if chain <= e.bodyH {
-			need = chain
-		}
-		if y+need > bottom+1e-6 && !empty {
-			newPage()
-			if p.head != nil {
-				place(clonePiece(p.head), 0)
-			}
-		}
-		if p.box.H > e.bodyH+1e-6 {
-			e.diags.Add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
-		}
-		place(p, p.before)
-	}
-	return pages
-}
-
 func kindName(k string) string {
 	switch k {
 	case "statement", "input", "check", "steps":

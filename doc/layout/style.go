@@ -15,7 +15,7 @@ const (
 	codeSize    = 8.2
 	captionSize = 8.2
 	paraGap     = 4.0 // space between paragraphs
-	calcGap     = 2.0 // space between calc lines
+	calcGap     = 1.0 // space between calc lines
 	calcPad     = 0.7 // space above and below a calc line's formula
 )
 

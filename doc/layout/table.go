@@ -19,12 +19,12 @@ var (
 	plainLook = tableLook{
 		cell: textStyle{size: tableSize, lead: 1.26, color: ink},
 		head: textStyle{size: tableSize, lead: 1.26, color: ink, bold: true},
-		padX: 4.5, padY: 2.8,
+		padX: 4.5, padY: 2.3,
 	}
 	compactLook = tableLook{
 		cell: textStyle{size: compactSize, lead: 1.22, color: ink},
 		head: textStyle{size: compactSize, lead: 1.22, color: ink, bold: true},
-		padX: 3.5, padY: 1.3,
+		padX: 3.5, padY: 1.0,
 	}
 )
 
@@ -43,6 +43,9 @@ type measured struct {
 	rows       [][]cellWords // header first (nil when there is none)
 	shift      func(ri, c int) float64
 	minW, maxW []float64
+	// bandW is each column's width with its header broken at spaces
+	// and the body at its natural width
+	bandW []float64
 }
 
 // NaturalWidth is the width t takes with no cell broken: its columns at
@@ -55,6 +58,22 @@ func NaturalWidth(t *Table) float64 {
 	}
 	w := 0.0
 	for _, x := range m.maxW {
+		w += x
+	}
+	return w
+}
+
+// BandWidth is the width t takes with its header cells broken at their
+// spaces and no body cell broken (for a caller folding a long table of
+// short values into bands).
+func BandWidth(t *Table) float64 {
+	e := &engine{}
+	m := e.measureTable(t)
+	if m == nil {
+		return 0
+	}
+	w := 0.0
+	for _, x := range m.bandW {
 		w += x
 	}
 	return w
@@ -340,12 +359,17 @@ func (e *engine) measureTable(t *Table) *measured {
 	// column widths from the content
 	minW := make([]float64, ncol)
 	maxW := make([]float64, ncol)
+	bandW := make([]float64, ncol)
 	for ri, row := range rows {
 		for c, cw := range row {
 			lo, hi := measureWords(cw.ws)
 			minW[c] = math.Max(minW[c], lo+shift(ri, c)+2*cellPadX)
 			maxW[c] = math.Max(maxW[c], hi+shift(ri, c)+2*cellPadX)
+			if ri == 0 {
+				hi = lo
+			}
+			bandW[c] = math.Max(bandW[c], hi+shift(ri, c)+2*cellPadX)
 		}
 	}
-	return &measured{ncol: ncol, look: look, rows: rows, shift: shift, minW: minW, maxW: maxW}
+	return &measured{ncol: ncol, look: look, rows: rows, shift: shift, minW: minW, maxW: maxW, bandW: bandW}
 }

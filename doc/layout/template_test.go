@@ -69,11 +69,11 @@ func TestTemplateErrors(t *testing.T) {
 		{"no sheet field", `text: "{sheet} of {sheets}"`, `text: "x"`, "no {sheet} field"},
 		{"no checked field", `text: "{checked}   {checked_date}"`, `text: "{checked_date}"`, "no {checked} field"},
 		{"footer without fingerprint", `left: "inputs {fingerprint}"`, `left: "inputs"`, "footer has no {fingerprint}"},
-		{"cell outside", "w: 44mm,  h: 7mm, label: Sheet", "w: 90mm,  h: 7mm, label: Sheet", "lies outside the title block"},
-		{"bad length", "height: 21mm", "height: tall", `bad length "tall"`},
+		{"cell outside", "w: 24mm,  h: 7mm, label: Sheet", "w: 90mm,  h: 7mm, label: Sheet", "lies outside the title block"},
+		{"bad length", "height: 14mm", "height: tall", `bad length "tall"`},
 		{"unknown placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {sheet_count}"`, "unknown field {sheet_count}; fields are:"},
 		{"misspelt placeholder", `text: "{sheet} of {sheets}"`, `text: "{sheet} of {shets}"`, "unknown field {shets}; did you mean {sheets}?"},
-		{"bad align", "label: Revision,", "label: Revision, align: middle,", `align "middle"`},
+		{"bad align", "label: Rev.,", "label: Rev., align: middle,", `align "middle"`},
 	}
 	for _, tt := range tests {
 		src := a4()
