@@ -40,6 +40,6 @@ var Spec = kind.Spec{
 func init() {
 	Spec.Options = append(Spec.Options, kind.Vary)
 	Spec.Results = append(Spec.Results,
-		kind.Result{Symbol: "q_allow_at_min", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the low end of the vary range", When: "vary"},
-		kind.Result{Symbol: "q_allow_at_max", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the high end of the vary range", When: "vary"})
+		kind.Result{Symbol: "q_allow_at_min", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the least value of the input varied", When: "vary"},
+		kind.Result{Symbol: "q_allow_at_max", Unit: "kPa", Meaning: "allowable pressure at the footing's width at the greatest value of the input varied", When: "vary"})
 }

@@ -41,6 +41,10 @@ type Option struct {
 	Form    string   // any other value accepted, in words ("a length", "FS(factor), e.g. FS(3.0)"); "" if none
 	Default string   // the default, as the documentation states it
 	Doc     string   // what it does, in a line
+	// Repeat lets the option be given on several lines of a block, each
+	// line one value (vary: one line per parameter); any other option
+	// given twice is an error.
+	Repeat bool
 }
 
 // Allows reports whether word is one of the option's words.
@@ -183,18 +187,27 @@ func (s *Spec) RowMeaning(sym string) string {
 }
 
 // Vary is the sensitivity option of the analyses that have a verdict
-// (bearing, settlement, platform): the block evaluated again over a range
-// of one input of the sheet, through the same engine and --set machinery.
-var Vary = Option{Name: "vary", Value: Special,
-	Form:    "SYMBOL: FROM .. TO, a range of one input (site.clay.c_u: 40 kPa .. 80 kPa, or site.clay.c_u: -20 % .. +20 % of its value)",
+// (bearing, settlement, platform) and of capacity: the block evaluated
+// again over a range, or at a list of values, of one input of the sheet,
+// through the same engine and --set machinery. It may be given on several
+// lines, one input each, each varied on its own.
+var Vary = Option{Name: "vary", Value: Special, Repeat: true,
+	Form:    "SYMBOL: FROM .. TO, a range of one input (site.clay.c_u: 40 kPa .. 80 kPa, or site.clay.c_u: -20 % .. +20 % of its value), or SYMBOL: V1, V2, … a list of its values (site.clay.c_u: 40 kPa, 50 kPa, 60 kPa); one line per input",
 	Default: "none",
-	Doc:     "the governing utilisation against one input over a range, and where the verdict flips"}
+	Doc:     "the governing utilisation against each input over a range or a list of values, one input at a time, and where the verdict flips"}
 
-// VaryResults are the results the vary option brings.
+// VaryResults are the results the vary option brings: under the block's
+// prefix when one input is varied (P1.util_at_min), under
+// PREFIX.vary.SYMBOL for each input when several are
+// (P1.vary.site.clay.c_u.util_at_min; see VaryName).
 var VaryResults = []Result{
-	{Symbol: "util_at_min", Meaning: "governing utilisation at the low end of the vary range", When: "vary"},
-	{Symbol: "util_at_max", Meaning: "governing utilisation at the high end of the vary range", When: "vary"},
+	{Symbol: "util_at_min", Meaning: "governing utilisation at the least value of the input varied", When: "vary"},
+	{Symbol: "util_at_max", Meaning: "governing utilisation at the greatest value of the input varied", When: "vary"},
 }
+
+// VaryName is the name under the block's prefix of a result of one input
+// among several a block varies: vary.SYMBOL.RESULT.
+func VaryName(symbol, result string) string { return "vary." + symbol + "." + result }
 
 // Join is the options of several lists in order: a kind that takes its
 // own options and some of another kind's (Spec.Pick).

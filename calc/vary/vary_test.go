@@ -3,6 +3,8 @@ package vary_test
 import (
 	"errors"
 	"math"
+	"slices"
+	"sort"
 	"strings"
 	"testing"
 
@@ -131,5 +133,89 @@ func BenchmarkTable(b *testing.B) {
 		if _, err := vary.Table(f, 0, 6, 21, vary.Options{}); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// Values: the table at the caller's values. The parabola (p − 3)² + 0.5
+// at 0, 1, 2.5, 4, 6 (by hand: 9.5, 4.5, 0.75, 1.5, 9.5) crosses 1 at
+// 3 ∓ √0.5 = 2.2929 (between 1 and 2.5, falling) and 3.7071 (between 2.5
+// and 4, rising); each crossing lies between two rows of opposite verdict.
+func TestValues(t *testing.T) {
+	f := func(p float64) (float64, error) { return (p-3)*(p-3) + 0.5, nil }
+	ps := []float64{0, 1, 2.5, 4, 6}
+	r, err := vary.Values(f, ps, vary.Options{Symbol: "x"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := trace.Verify(r.Trace, 1e-12); err != nil {
+		t.Fatal(err)
+	}
+	for i, row := range r.Rows {
+		if u, _ := f(ps[i]); row.P != ps[i] || row.Util != u {
+			t.Errorf("row %d: %+v", i, row)
+		}
+	}
+	want := []float64{3 - math.Sqrt(0.5), 3 + math.Sqrt(0.5)}
+	if len(r.Crossings) != 2 {
+		t.Fatalf("crossings %+v", r.Crossings)
+	}
+	for i, c := range r.Crossings {
+		if math.Abs(c.P-want[i]) > 1e-8 || c.Rising != (i == 1) || c.Iter == 0 {
+			t.Errorf("crossing %+v, want %v", c, want[i])
+		}
+		k := sort.Search(len(ps), func(j int) bool { return ps[j] > c.P })
+		if k == 0 || k == len(ps) || (r.Rows[k-1].Util > 1) == (r.Rows[k].Util > 1) {
+			t.Errorf("crossing %v not between rows of opposite verdict", c.P)
+		}
+	}
+}
+
+// Values refuses fewer than two values, values that do not rise and a
+// non-finite one; f's error at a row is a *RowError naming the row.
+func TestValuesBad(t *testing.T) {
+	ok := func(p float64) (float64, error) { return p, nil }
+	for _, c := range []struct {
+		ps   []float64
+		want string
+	}{
+		{[]float64{1}, "values = 1: must be at least 2"},
+		{[]float64{1, 3, 2}, "the values must rise: 2 after 3"},
+		{[]float64{1, 1}, "the values must rise: 1 after 1"},
+		{[]float64{1, math.NaN()}, "value 2 = NaN"},
+	} {
+		if r, err := vary.Values(ok, c.ps, vary.Options{}); err == nil || r != nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("%v: want %q, got %v", c.ps, c.want, err)
+		}
+	}
+	boom := errors.New("boom")
+	_, err := vary.Values(func(p float64) (float64, error) {
+		if p > 2 {
+			return 0, boom
+		}
+		return p, nil
+	}, []float64{1, 2, 3}, vary.Options{Symbol: "c_u", Unit: "kPa"})
+	var re *vary.RowError
+	if !errors.As(err, &re) || re.Row != 2 || re.P != 3 || !errors.Is(err, boom) || err.Error() != "vary: at c_u = 0.003 kPa: boom" {
+		t.Errorf("got %v (%+v)", err, re)
+	}
+}
+
+// Rank: the widest spread of utilisation first (spreads 0.25, 0.5, 0.5,
+// 0, exact in binary: the tie keeps its order).
+func TestRank(t *testing.T) {
+	mk := func(us ...float64) *vary.Result {
+		r := &vary.Result{}
+		for i, u := range us {
+			r.Rows = append(r.Rows, vary.Row{P: float64(i), Util: u})
+		}
+		return r
+	}
+	rs := []*vary.Result{mk(0.875, 1.125), mk(1, 0.5, 0.75), mk(0.25, 0.75), mk(0.7, 0.7)}
+	got := vary.Rank(rs)
+	if want := []int{1, 2, 0, 3}; !slices.Equal(got, want) {
+		t.Errorf("rank %v, want %v", got, want)
+	}
+	if lo, hi := rs[1].Spread(); lo != 0.5 || hi != 1 {
+		t.Errorf("spread %v %v", lo, hi)
 	}
 }

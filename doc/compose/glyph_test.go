@@ -283,6 +283,9 @@ func walkOwn(doc layout.Doc, fn func(layout.Run)) {
 			case *layout.Caution:
 				runs(b.Title)
 				blocks(b.Body)
+			case *layout.Beside:
+				blocks(b.Left)
+				blocks(b.Right)
 			}
 		}
 	}

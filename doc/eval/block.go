@@ -37,7 +37,7 @@ type Block struct {
 	Schedule *ScheduleResult
 	Platform *PlatformResult
 	Mat      *platform.MatResult // a platform block's outrigger mat
-	Vary     *VaryResult         // the vary option's table, when given
+	Vary     *Sensitivity        // the vary lines' tables, when given
 	Options  []string            // the options in force, "method = ec7", for printing
 	Results  []*Symbol
 	Checks   []*Check

@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strings"
 
+	"github.com/plinth-calc/plinth/calc/kind"
 	"github.com/plinth-calc/plinth/calc/size"
 	"github.com/plinth-calc/plinth/calc/units"
 	"github.com/plinth-calc/plinth/doc/expr"
@@ -69,10 +70,14 @@ func Package(p *sheet.Package, opt Options) (res *Result, diags source.List) {
 		e.sheet(s)
 	}
 	e.varyAll(opt)
+	e.pastVary = true
 	e.splitContext()
 	e.register()
 	e.bounds()
 	for _, s := range e.res.Sheets {
+		if opt.noVary {
+			break // a vary run reads blocks only; its prose may quote the vary results, which it has not
+		}
 		e.prose(s)
 	}
 	e.errs = e.errs.OffLines(e.prior)
@@ -99,6 +104,7 @@ type def struct {
 	span  source.Span
 	input bool      // a value given directly (no symbol in its expression)
 	dim   units.Dim // an input's dimension (for checking --set values)
+	late  bool      // a vary result: defined after every block, for prose only
 }
 
 type evaluator struct {
@@ -117,6 +123,10 @@ type evaluator struct {
 	annexes    map[string]annexEntry
 	prior      map[source.Line]bool // lines with an earlier stage's error
 	at         source.Span          // the block or statement being evaluated, for internal errors
+	// pastVary is set once the vary runs are done (or skipped for earlier
+	// errors, or in a vary run itself): a vary result missing then has
+	// its own error, or none is due
+	pastVary bool
 }
 
 // internalError is the diagnostic for a panic inside plinth: it names the
@@ -218,13 +228,18 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), ha
 		reg("footing", b.Name)
 	case *sheet.Analysis:
 		p := b.ResultPrefix()
-		varied := false
-		for _, o := range b.Options() {
-			varied = varied || o.Name.Value == "vary"
-		}
+		varied := varyOptions(b)
 		for _, n := range b.Kind.Spec().ResultNames() {
-			if r, _ := b.Kind.Spec().Result(n); r.When == "vary" && !varied {
-				continue // only a block with the vary option defines them
+			r, _ := b.Kind.Spec().Result(n)
+			if r.When == "vary" && len(varied) != 1 {
+				// none without the vary option; with several inputs, each its
+				// own (PREFIX.vary.SYMBOL.n)
+				for _, o := range varied {
+					if y := varyName(o); y != "" && !has(p.Value+"."+kind.VaryName(y, n)) {
+						add(p.Value+"."+kind.VaryName(y, n), def{span: o.Span, late: true})
+					}
+				}
+				continue
 			}
 			if _, dup := e.defs[s.Index][p.Value+"."+n]; dup {
 				continue
@@ -234,7 +249,7 @@ func (e *evaluator) blockDefs(s *Sheet, b sheet.Block, add func(string, def), ha
 				// itself, and a rectangle's given L is the fixed length
 				continue
 			}
-			add(p.Value+"."+n, def{span: headerSpan(b.Span)})
+			add(p.Value+"."+n, def{span: headerSpan(b.Span), late: r.When == "vary"})
 		}
 		if t := e.tables[b.Table]; b.Kind == sheet.KindSchedule && t != nil && t.ok {
 			for i, key := range t.keys {

@@ -25,12 +25,14 @@ func (e *evaluator) options(b *sheet.Analysis) opts {
 		if !known {
 			continue // reported by the parser
 		}
-		if prev := out[o.Name.Value]; prev != nil {
+		if prev := out[o.Name.Value]; prev != nil && !spec.Repeat {
 			e.errs.Add(o.Name.Span, "option %s is given twice (first at %s)", o.Name.Value, posText(prev.Span, o.Span.File))
 			ok = false
 			continue
 		}
-		out[o.Name.Value] = o
+		if prev := out[o.Name.Value]; prev == nil {
+			out[o.Name.Value] = o // a repeated option: its first line (read in full by its own reader)
+		}
 		v := strings.TrimSpace(o.Value.Value)
 		if spec.Words != nil && spec.Form == "" && !spec.Allows(v) {
 			hint := ""

@@ -76,7 +76,13 @@ func (sc scope) unresolved(name string, sp source.Span) {
 		if e.failed[s.Name()+"\x00"+full] {
 			return // its own error was reported
 		}
-		if d, ok := e.defs[s.Index][full]; ok {
+		if d, ok := e.defs[s.Index][full]; ok && d.late {
+			if e.pastVary {
+				return // the vary runs reported why it is missing, or earlier errors stopped them
+			}
+			e.errs.AddHint(sp, "quote it in prose ({"+full+"}), which is read after the vary runs", "%s is a result of the vary option at %s, computed after every block of the package, so a statement cannot use it", name, posText(d.span, s.Src.File))
+			return
+		} else if ok {
 			e.errs.Add(sp, "%s is used above its definition at %s", name, posText(d.span, s.Src.File))
 			return
 		}

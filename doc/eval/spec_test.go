@@ -37,6 +37,17 @@ func TestResultsAsDeclared(t *testing.T) {
 		for _, y := range b.Results {
 			sym := y.Name[len(b.Name)+1:]
 			r, ok := spec.Result(sym)
+			if in, ok := strings.CutPrefix(sym, "vary."); ok {
+				// one of several inputs a block varies: vary.SYMBOL.result, the
+				// input after the meaning
+				i := strings.LastIndexByte(in, '.')
+				vr, vok := spec.Result(in[i+1:])
+				if !vok || vr.When != "vary" || i < 0 || sym != kind.VaryName(in[:i], in[i+1:]) || y.Unit.Name != vr.Unit || y.Note.Value != vr.Meaning+" ("+in[:i]+")" {
+					t.Errorf("%s %s: vary result %s %q %q not as declared", b.Kind, b.Name, sym, y.Unit.Name, y.Note.Value)
+				}
+				seen[b.Kind.String()+" "+sym] = true
+				continue
+			}
 			if _, rowSym, row := strings.Cut(sym, "."); row && len(spec.RowResults) > 0 {
 				// a schedule row's result, NAME.ROW.sym: the row's name after the meaning
 				rr, rok := spec.RowResult(rowSym)

@@ -158,7 +158,8 @@ func (b *blockLines) option(text string, off int) {
 	}
 	name := o.Key.Name
 	ks := b.span(o.Key.Pos, o.Key.End)
-	if _, known := sheet.LookupOption(b.kind, name); !known {
+	spec, known := sheet.LookupOption(b.kind, name)
+	if !known {
 		names := sheet.OptionNames(b.kind)
 		hint := "a " + b.kind.String() + " block takes " + strings.Join(names, ", ")
 		if len(names) == 0 {
@@ -170,7 +171,7 @@ func (b *blockLines) option(text string, off int) {
 		b.c.diags.AddHint(ks, hint, "unknown %s option %q", b.kind, name)
 		return
 	}
-	if line, dup := b.opts[name]; dup {
+	if line, dup := b.opts[name]; dup && !spec.Repeat { // a repeated option (vary) is one value a line
 		b.c.diags.Add(ks, "option %s is already set at line %d", name, line)
 		return
 	}
