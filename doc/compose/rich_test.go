@@ -42,3 +42,16 @@ func TestRichText(t *testing.T) {
 		}
 	}
 }
+
+// TestPlainSym: a chart label prints a symbol's subscript in the font's
+// subscript characters, or with the sheet's underscore when a letter has
+// none (Unicode's subscript letters: a e h i j k l m n o p r s t u v x).
+func TestPlainSym(t *testing.T) {
+	for in, want := range map[string]string{
+		"c_u": "cᵤ", "phi'": "φ′", "sigma'_v0": "σ′ᵥ₀", "N_q": "N_q", "B": "B", "q_ult": "qᵤₗₜ",
+	} {
+		if got := plainSym(in); got != want {
+			t.Errorf("plainSym(%q) = %q, want %q", in, got, want)
+		}
+	}
+}

@@ -2,6 +2,7 @@ package compose
 
 import (
 	"fmt"
+	"github.com/plinth-calc/plinth/doc/layout/fonts"
 	"math"
 	"strings"
 
@@ -251,12 +252,33 @@ func (c *composer) varyTornado(b *eval.Block) *layout.Drawing {
 	return d
 }
 
-// plainSym is a symbol in plain text, for a chart: φ′, c_u.
+// plainSym is a symbol in plain text, for a chart's labels (which set
+// one face, no math): the Greek letter and primes as the notation prints
+// them, the subscript in the font's subscript characters (c_u → cᵤ,
+// σ′_v0 → σ′ᵥ₀); a subscript with a letter that has no subscript form
+// (N_q) keeps the sheet's underscore.
 func plainSym(name string) string {
 	n := notation.Split(name)
 	out := n.Base + strings.Repeat("′", n.Primes)
-	if n.Sub != "" {
-		out += "_" + n.Sub
+	if n.Sub == "" {
+		return out
 	}
-	return out
+	var sub strings.Builder
+	body := fonts.Get(fonts.Regular)
+	for _, r := range n.Sub {
+		s, ok := subscripts[r]
+		if !ok || !body.Has(s) {
+			return out + "_" + n.Sub
+		}
+		sub.WriteRune(s)
+	}
+	return out + sub.String()
+}
+
+// subscripts are the Unicode subscript forms of the characters that have
+// one.
+var subscripts = map[rune]rune{
+	'0': '₀', '1': '₁', '2': '₂', '3': '₃', '4': '₄', '5': '₅', '6': '₆', '7': '₇', '8': '₈', '9': '₉',
+	'a': 'ₐ', 'e': 'ₑ', 'o': 'ₒ', 'x': 'ₓ', 'h': 'ₕ', 'k': 'ₖ', 'l': 'ₗ', 'm': 'ₘ', 'n': 'ₙ', 'p': 'ₚ',
+	's': 'ₛ', 't': 'ₜ', 'i': 'ᵢ', 'r': 'ᵣ', 'u': 'ᵤ', 'v': 'ᵥ', 'j': 'ⱼ',
 }
