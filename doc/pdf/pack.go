@@ -2,14 +2,19 @@ package pdf
 
 import (
 	"bytes"
-	"compress/zlib"
 	"errors"
 	"fmt"
 	"strconv"
+
+	"github.com/klauspost/compress/zlib"
 )
 
 // zipper compresses page streams with one reused compressor (opening a
-// compressor costs more than compressing a page).
+// compressor costs more than compressing a page). The compressor is
+// klauspost/compress's zlib at BestSpeed: on plinth's page streams it
+// takes about half the time of the standard library's at the same level
+// and writes smaller streams; its output, like the standard library's,
+// depends only on the input.
 type zipper struct {
 	z   *zlib.Writer
 	buf bytes.Buffer
