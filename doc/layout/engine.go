@@ -68,6 +68,12 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 	if err != nil {
 		return nil, internal(doc, err.Error())
 	}
+	for si := range laid {
+		if !laid[si].final && streams(doc) {
+			doc.Final(si, laid[si].pages)
+			doc.Sheets[si].Blocks, laid[si].blocks = nil, nil
+		}
+	}
 	out := &Pages{Info: doc.Info}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
@@ -84,7 +90,7 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 	}
 	e.furnish(doc, out, banner)
 	markChanges(out, doc.Bars)
-	e.checkLinks(out)
+	e.checkLinks(laid)
 	if e.diags.HasErrors() {
 		e.diags.Sort()
 		return nil, e.diags
@@ -110,7 +116,44 @@ type laidSheet struct {
 	diags  source.List
 	refs   map[PageRef]refUse
 	blocks []laidBlock // its blocks' pieces, when it may be laid out again (reuse.go)
+	marks  []mark      // its anchors and links, in the order drawn
+	final  bool        // handed to doc.Final already
 }
+
+// mark is an anchor or a link as laid out: its name (or target), the
+// page of its sheet it is on (from 0) and the span of its box. The
+// anchors and links are read off the boxes once, when the sheet is
+// paginated, so a sheet's boxes may go (doc.Final) before the anchors
+// are counted and the links checked.
+type mark struct {
+	link bool
+	name string
+	page int
+	pos  source.Span
+}
+
+// marksOf lists the anchors and links on pages, in the order drawn.
+func marksOf(pages []*Page) []mark {
+	var out []mark
+	for pi, pg := range pages {
+		for _, b := range pg.Boxes {
+			b.Walk(func(b *Box) {
+				for _, it := range b.Items {
+					switch it := it.(type) {
+					case draw.Anchor:
+						out = append(out, mark{name: it.Name, page: pi, pos: b.Pos})
+					case draw.Link:
+						out = append(out, mark{link: true, name: it.Target, page: pi, pos: b.Pos})
+					}
+				}
+			})
+		}
+	}
+	return out
+}
+
+// streams reports whether final sheets go to doc.Final.
+func streams(doc Doc) bool { return doc.Final != nil && doc.Bars == nil }
 
 // sheets lays out and paginates the sheets numbered in which, in
 // parallel: each is independent of the others (a page reference's text
@@ -139,7 +182,13 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 					se.fills, se.used = fills, map[PageRef]refUse{}
 					pieces, kept := se.sheetBlocks(doc.Sheets[si].Blocks, out[si].blocks)
 					pages := se.paginate(si, pieces)
-					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept}
+					ls := laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept, marks: marksOf(pages)}
+					if len(se.used) == 0 && streams(doc) {
+						// set no page reference: it will not be laid out again
+						doc.Final(si, pages)
+						doc.Sheets[si].Blocks, ls.final = nil, true
+					}
+					out[si] = ls
 				}()
 				if doc.Progress != nil {
 					mu.Lock()
@@ -308,34 +357,23 @@ func shift(ps []*piece, dx float64) {
 
 // checkLinks reports duplicate anchors and links to anchors that do not
 // exist (the PDF writer would otherwise write a dangling link).
-func (e *engine) checkLinks(out *Pages) {
+func (e *engine) checkLinks(laid []laidSheet) {
 	anchors := map[string]source.Span{}
-	type ref struct {
-		target string
-		pos    source.Span
-	}
-	var links []ref
-	for _, pg := range out.Pages {
-		for _, b := range pg.Boxes {
-			b.Walk(func(b *Box) {
-				for _, it := range b.Items {
-					switch it := it.(type) {
-					case draw.Anchor:
-						if prev, dup := anchors[it.Name]; dup {
-							e.diags.Add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
-						} else {
-							anchors[it.Name] = b.Pos
-						}
-					case draw.Link:
-						links = append(links, ref{it.Target, b.Pos})
-					}
-				}
-			})
+	var links []mark
+	for _, ls := range laid {
+		for _, m := range ls.marks {
+			if m.link {
+				links = append(links, m)
+			} else if prev, dup := anchors[m.name]; dup {
+				e.diags.Add(m.pos, "anchor %q is defined twice (first at %s)", m.name, prev)
+			} else {
+				anchors[m.name] = m.pos
+			}
 		}
 	}
 	for _, l := range links {
-		if _, ok := anchors[l.target]; !ok {
-			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.target)
+		if _, ok := anchors[l.name]; !ok {
+			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.name)
 		}
 	}
 }

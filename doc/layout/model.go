@@ -22,6 +22,17 @@ type Doc struct {
 	// out again with their page references filled in (it does not change
 	// the pages).
 	Progress func(done, total int)
+	// Final, when set, is handed each sheet's pages as soon as their
+	// bodies can no longer change (a sheet that sets no page reference
+	// after its first layout, the others once the references are filled
+	// in), before the title block and footer are added. It is called
+	// from several goroutines at once, in no set order, and may paint the
+	// bodies and set each page's Boxes to nil (pdf.Bodies does): the
+	// layout keeps what it needs of them, the anchors and links. With
+	// Final set the layout also drops each final sheet's Blocks, so the
+	// Doc is used up. It is not called when Bars are set (the change bars
+	// are drawn on the bodies at the end).
+	Final func(sheet int, pages []*Page)
 }
 
 // Info describes the package as a whole.
