@@ -33,6 +33,9 @@ type piece struct {
 	head   *piece  // repeat this above the piece when it starts a page
 	brk    bool    // start a new page here
 	base   float64 // first baseline below the top
+	// the top-level block of the sheet it comes from and its place among
+	// that block's pieces (set by sheetBlocks)
+	block, idx int
 }
 
 // Document lays out doc: every sheet's body into pages, the page
@@ -69,10 +72,7 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 		return nil, internal(doc, err.Error())
 	}
 	for si := range laid {
-		if !laid[si].final && streams(doc) {
-			doc.Final(si, laid[si].pages)
-			doc.Sheets[si].Blocks, laid[si].blocks = nil, nil
-		}
+		laid[si].compact()
 	}
 	out := &Pages{Info: doc.Info}
 	for si := range doc.Sheets {
@@ -112,12 +112,16 @@ func internal(doc Doc, msg string) source.List {
 // numbered within the sheet), the problems found, and the text each page
 // reference in it was set with.
 type laidSheet struct {
-	pages  []*Page
-	diags  source.List
-	refs   map[PageRef]refUse
-	blocks []laidBlock // its blocks' pieces, when it may be laid out again (reuse.go)
-	marks  []mark      // its anchors and links, in the order drawn
-	final  bool        // handed to doc.Final already
+	pages []*Page
+	diags source.List
+	refs  map[PageRef]refUse
+	marks []mark // its anchors and links, in the order drawn
+	// when it may be laid out again (it set a page reference, reuse.go):
+	// each top-level block's heading numbers, problems and, for those
+	// that set a page reference, the shape of its pieces and where they
+	// went; and the problems of the pagination
+	blocks    []laidBlock
+	pageDiags source.List
 }
 
 // mark is an anchor or a link as laid out: its name (or target), the
@@ -126,29 +130,35 @@ type laidSheet struct {
 // paginated, so a sheet's boxes may go (doc.Final) before the anchors
 // are counted and the links checked.
 type mark struct {
-	link bool
-	name string
-	page int
-	pos  source.Span
+	link      bool
+	name      string
+	page, seq int // the page of the sheet and the box's place on it
+	pos       source.Span
 }
 
 // marksOf lists the anchors and links on pages, in the order drawn.
 func marksOf(pages []*Page) []mark {
 	var out []mark
 	for pi, pg := range pages {
-		for _, b := range pg.Boxes {
-			b.Walk(func(b *Box) {
-				for _, it := range b.Items {
-					switch it := it.(type) {
-					case draw.Anchor:
-						out = append(out, mark{name: it.Name, page: pi, pos: b.Pos})
-					case draw.Link:
-						out = append(out, mark{link: true, name: it.Target, page: pi, pos: b.Pos})
-					}
-				}
-			})
+		for j, b := range pg.Boxes {
+			out = appendMarks(out, b, pi, j)
 		}
 	}
+	return out
+}
+
+// appendMarks adds the anchors and links of box b, the seq-th of page.
+func appendMarks(out []mark, b *Box, page, seq int) []mark {
+	b.Walk(func(b *Box) {
+		for _, it := range b.Items {
+			switch it := it.(type) {
+			case draw.Anchor:
+				out = append(out, mark{name: it.Name, page: page, seq: seq, pos: b.Pos})
+			case draw.Link:
+				out = append(out, mark{link: true, name: it.Target, page: page, seq: seq, pos: b.Pos})
+			}
+		}
+	})
 	return out
 }
 
@@ -177,18 +187,15 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 							fails[si] = fmt.Errorf("layout: internal error: %v", r)
 						}
 					}()
-					se := *e
-					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
-					se.fills, se.used = fills, map[PageRef]refUse{}
-					pieces, kept := se.sheetBlocks(doc.Sheets[si].Blocks, out[si].blocks)
-					pages := se.paginate(si, pieces)
-					ls := laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept, marks: marksOf(pages)}
-					if len(se.used) == 0 && streams(doc) {
-						// set no page reference: it will not be laid out again
-						doc.Final(si, pages)
-						doc.Sheets[si].Blocks, ls.final = nil, true
+					fresh := func() *engine {
+						se := *e
+						se.diags, se.num, se.listDepth = nil, [4]int{}, 0
+						se.fills, se.used = fills, map[PageRef]refUse{}
+						return &se
 					}
-					out[si] = ls
+					if out[si].blocks == nil || !fresh().again(doc, si, &out[si]) {
+						out[si] = fresh().whole(doc, si)
+					}
 				}()
 				if doc.Progress != nil {
 					mu.Lock()
@@ -263,8 +270,9 @@ func (e *engine) block(b Block, width float64) []*piece {
 	return nil
 }
 
-// paginate stacks pieces into pages for sheet si, numbered from 1.
-func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
+// paginate stacks pieces into pages for sheet si, numbered from 1, and
+// says where each box went.
+func (e *engine) paginate(si int, ps []*piece) (pages []*Page, at []placed) {
 	var page *Page
 	y, empty := 0.0, true
 	bottom := e.bodyY + e.bodyH
@@ -273,12 +281,12 @@ func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 		pages = append(pages, page)
 		y, empty = e.bodyY, true
 	}
-	place := func(p *piece, gap float64) {
-		b := p.box
+	place := func(b *Box, gap float64, of *piece, head bool) {
 		if empty {
 			gap = 0
 		}
 		b.move(e.bodyX, y+gap)
+		at = append(at, placed{page: len(pages) - 1, seq: len(page.Boxes), block: of.block, idx: of.idx, head: head, dx: e.bodyX, dy: y + gap})
 		page.Boxes = append(page.Boxes, b)
 		y += gap + b.H
 		empty = false
@@ -307,15 +315,15 @@ func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 		if y+need > bottom+1e-6 && !empty {
 			newPage()
 			if p.head != nil {
-				place(clonePiece(p.head), 0)
+				place(cloneBox(p.head.box), 0, p, true)
 			}
 		}
 		if p.box.H > e.bodyH+1e-6 {
 			e.diags.Add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
 		}
-		place(p, p.before)
+		place(p.box, p.before, p, false)
 	}
-	return pages
+	return pages, at
 }
 
 func kindName(k string) string {
