@@ -19,8 +19,9 @@ type engine struct {
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
-	refCalls                   int   // page references set so far (reuse.go)
-	sp                         space // word and frag chunks (space.go)
+	refCalls                   int    // page references set so far (reuse.go)
+	sp                         space  // word and frag chunks (space.go)
+	pre                        preset // a formula shortLine set, for the line set alone (steps.go)
 }
 
 // piece is an unbreakable strip of a sheet's body, stacked by the
