@@ -12,6 +12,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/memory"
 )
 
 // evaluate runs load → parse → eval and returns the result with every
@@ -61,6 +62,7 @@ func layOut(res *eval.Result, opt compose.Options, progress func(done, total int
 	doc.Progress = progress
 	if bodies != nil {
 		doc.Final = bodies.Sheet
+		memory.Cap() // a soft limit for the layout and the PDF (internal/memory)
 	}
 	pages, ld := layout.Document(doc)
 	diags.Append(ld)

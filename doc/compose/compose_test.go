@@ -20,6 +20,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/source"
 	"github.com/plinth-calc/plinth/internal/golden"
+	"github.com/plinth-calc/plinth/internal/memory"
 	"github.com/plinth-calc/plinth/internal/tools"
 )
 
@@ -56,6 +57,7 @@ func pagesOf(res *eval.Result, opt compose.Options, bodies ...*pdf.Bodies) (*lay
 	}
 	if len(bodies) > 0 {
 		doc.Final = bodies[0].Sheet
+		memory.Cap() // as plinth render does (cmd/plinth layOut)
 	}
 	pages, ld := layout.Document(doc)
 	d.Append(ld)
