@@ -2,6 +2,7 @@ package pdf
 
 import (
 	"bytes"
+	"errors"
 	"hash/adler32"
 	"sync"
 
@@ -213,6 +214,9 @@ func (p *painter) deflate(data []byte) ([]byte, error) {
 // sync-flushed (so it ends on a byte boundary and is not final), the
 // body's deflate stream after it, and the adler-32 of the two combined.
 func (z *zipper) join(head []byte, b *bodyStream) ([]byte, error) {
+	if b.z == nil {
+		return nil, errors.New("a body painted ahead was written already (a Bodies serves one Write)")
+	}
 	if z.raw == nil {
 		var err error
 		if z.raw, err = flate.NewWriter(&z.buf, flate.BestSpeed); err != nil {

@@ -34,7 +34,8 @@ type Options struct {
 	Files []File
 	// Bodies holds the page bodies painted while the pages were laid out
 	// (layout.Doc.Final = Bodies.Sheet); a page whose body is there has
-	// only its furniture left in Boxes.
+	// only its furniture left in Boxes. A Bodies serves one Write: the
+	// compressed bodies go once written.
 	Bodies *Bodies
 }
 
@@ -122,15 +123,16 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	if err := p.subsetFonts(opt.Bodies); err != nil {
 		return err
 	}
-	streams, err := zp.streams()
-	if err != nil {
-		return fmt.Errorf("pdf: %w", err)
-	}
 	// gopdf's part is small now the page streams are apart: fonts, page
-	// objects, links, outlines (about 1.6 kB a page)
+	// objects, links, outlines (about 1.6 kB a page); it is written while
+	// the last pages are still being compressed
 	var buf bytes.Buffer
 	buf.Grow(256<<10 + 2<<10*len(pages.Pages))
 	if _, err := gp.WriteTo(&buf); err != nil {
+		return fmt.Errorf("pdf: %w", err)
+	}
+	streams, err := zp.streams()
+	if err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
 	// the information is completed in gopdf's trailer, which pack copies

@@ -39,6 +39,7 @@ func newZipPool(pages int) *zipPool {
 				var err error
 				if j.body != nil {
 					s, err = z.join(j.data, j.body)
+					j.body.z = nil // in s now
 				} else {
 					s, err = z.compress(j.data)
 				}
