@@ -14,6 +14,7 @@ require (
 )
 
 require (
+	github.com/klauspost/compress v1.20.4 // indirect
 	github.com/phpdave11/gofpdi v1.0.14-0.20211212211723-1f10f9844311 // indirect
 	github.com/pkg/errors v0.8.1 // indirect
 	golang.org/x/sys v0.50.0 // indirect

@@ -58,7 +58,7 @@ func check(args []string, stdout, stderr io.Writer) int {
 // too when pages is set.
 func documentErrors(res *eval.Result, diags source.List, pages bool) source.List {
 	if pages {
-		_, cd := layOut(res, compose.Options{}, nil)
+		_, cd := layOut(res, compose.Options{}, nil, nil)
 		diags.Append(cd)
 	} else {
 		_, cd := compose.Document(res, compose.Options{})

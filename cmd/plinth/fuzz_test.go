@@ -49,7 +49,7 @@ func FuzzPipeline(f *testing.F) {
 		if diags.HasErrors() || res == nil {
 			return
 		}
-		pages, cd := layOut(res, compose.Options{}, nil)
+		pages, cd := layOut(res, compose.Options{}, nil, nil)
 		if cd.HasErrors() {
 			return
 		}

@@ -9,8 +9,10 @@ import (
 	"github.com/plinth-calc/plinth/doc/layout"
 	"github.com/plinth-calc/plinth/doc/load"
 	"github.com/plinth-calc/plinth/doc/parse"
+	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/sheet"
 	"github.com/plinth-calc/plinth/doc/source"
+	"github.com/plinth-calc/plinth/internal/memory"
 )
 
 // evaluate runs load → parse → eval and returns the result with every
@@ -49,13 +51,19 @@ func evaluateWith(path string, sets []string, hook func(*sheet.Package)) (*eval.
 
 // layOut runs compose → layout: the pages of res with every diagnostic
 // of both stages, sorted (no pages when compose or layout found an
-// error). progress, when set, hears of the sheets laid out.
-func layOut(res *eval.Result, opt compose.Options, progress func(done, total int)) (*layout.Pages, source.List) {
+// error). progress, when set, hears of the sheets laid out; bodies, when
+// set, paints each sheet's page bodies as soon as they are final (render
+// gives it to pdf.Write), so the document is never held as boxes whole.
+func layOut(res *eval.Result, opt compose.Options, progress func(done, total int), bodies *pdf.Bodies) (*layout.Pages, source.List) {
 	doc, diags := compose.Document(res, opt)
 	if diags.HasErrors() {
 		return nil, diags
 	}
 	doc.Progress = progress
+	if bodies != nil {
+		doc.Final = bodies.Sheet
+		memory.Cap() // a soft limit for the layout and the PDF (internal/memory)
+	}
 	pages, ld := layout.Document(doc)
 	diags.Append(ld)
 	diags.Sort()

@@ -51,7 +51,8 @@ func render(args []string, stdout, stderr io.Writer) int {
 		}
 		copt.Changes = ch
 	}
-	pages, cd := layOut(res, copt, prog.sheetFunc())
+	bodies := pdf.NewBodies()
+	pages, cd := layOut(res, copt, prog.sheetFunc(), bodies)
 	diags.Append(cd)
 	created, dd := compose.Created(res, os.Getenv("SOURCE_DATE_EPOCH"))
 	diags.Append(dd)
@@ -68,7 +69,7 @@ func render(args []string, stdout, stderr io.Writer) int {
 		return exitErrors
 	}
 	var buf bytes.Buffer
-	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Progress: prog.pageFunc(), Release: true, Files: files})
+	err = pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth " + Version(), Progress: prog.pageFunc(), Release: true, Files: files, Bodies: bodies})
 	prog.done()
 	if err != nil {
 		printDiags(stderr, diags)

@@ -85,8 +85,8 @@ func BenchmarkEvalEngine100(b *testing.B) {
 }
 
 // benchPackage renders a generated package of n sheets from its
-// evaluated form as plinth render does (compose, layout, the PDF with
-// each page's boxes released once drawn) and reports pages, PDF size,
+// evaluated form as plinth render does (compose, layout with each
+// sheet's bodies painted as soon as they are final, the PDF) and reports pages, PDF size,
 // peak memory and the CPU time per render (the machine may be shared,
 // so wall time alone says little).
 func benchPackage(b *testing.B, write func(string, int) error, n int) {
@@ -102,13 +102,14 @@ func benchPackage(b *testing.B, write func(string, int) error, n int) {
 	b.ResetTimer()
 	var pages, size int
 	for b.Loop() {
-		p, d := pagesOf(res, compose.Options{})
+		bodies := pdf.NewBodies()
+		p, d := pagesOf(res, compose.Options{}, bodies)
 		if d.HasErrors() {
 			b.Fatal(d)
 		}
 		pages = len(p.Pages)
 		var buf bytes.Buffer
-		if err := pdf.Write(&buf, p, pdf.Options{Release: true}); err != nil {
+		if err := pdf.Write(&buf, p, pdf.Options{Release: true, Bodies: bodies}); err != nil {
 			b.Fatal(err)
 		}
 		size = buf.Len()

@@ -20,6 +20,7 @@ import (
 	"github.com/plinth-calc/plinth/doc/pdf"
 	"github.com/plinth-calc/plinth/doc/source"
 	"github.com/plinth-calc/plinth/internal/golden"
+	"github.com/plinth-calc/plinth/internal/memory"
 	"github.com/plinth-calc/plinth/internal/tools"
 )
 
@@ -47,11 +48,16 @@ func evaluate(t testing.TB, path string, sets ...string) *eval.Result {
 	return res
 }
 
-// pagesOf composes and lays out a result, as plinth render does.
-func pagesOf(res *eval.Result, opt compose.Options) (*layout.Pages, source.List) {
+// pagesOf composes and lays out a result, as plinth render does (with
+// bodies set, the pages' bodies painted as they are final).
+func pagesOf(res *eval.Result, opt compose.Options, bodies ...*pdf.Bodies) (*layout.Pages, source.List) {
 	doc, d := compose.Document(res, opt)
 	if d.HasErrors() {
 		return nil, d
+	}
+	if len(bodies) > 0 {
+		doc.Final = bodies[0].Sheet
+		memory.Cap() // as plinth render does (cmd/plinth layOut)
 	}
 	pages, ld := layout.Document(doc)
 	d.Append(ld)
@@ -62,7 +68,8 @@ func pagesOf(res *eval.Result, opt compose.Options) (*layout.Pages, source.List)
 // render makes the PDF bytes of a result, as plinth render does.
 func render(t testing.TB, res *eval.Result) ([]byte, *layout.Pages) {
 	t.Helper()
-	pages, d := pagesOf(res, compose.Options{})
+	bodies := pdf.NewBodies()
+	pages, d := pagesOf(res, compose.Options{}, bodies)
 	if d.HasErrors() {
 		t.Fatal(d)
 	}
@@ -71,7 +78,7 @@ func render(t testing.TB, res *eval.Result) ([]byte, *layout.Pages) {
 		t.Fatal(cd)
 	}
 	var buf bytes.Buffer
-	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth"}); err != nil {
+	if err := pdf.Write(&buf, pages, pdf.Options{Time: created, Creator: "plinth", Bodies: bodies}); err != nil {
 		t.Fatal(err)
 	}
 	return buf.Bytes(), pages

@@ -27,7 +27,7 @@ func (e *engine) statement(s *Statement, width float64) []*piece {
 		e.diags.Add(s.Pos, "statement has no symbol")
 		return nil
 	}
-	return e.calcLine("statement", s.Pos, s.Own, row, noteRuns(s.Note, s.Ref), s.Anchor, width)
+	return e.calcLine("statement", s.Pos, s.Own, row, e.presetFor(s), noteRuns(s.Note, s.Ref), s.Anchor, width)
 }
 
 func (e *engine) input(in *Input, width float64) []*piece {
@@ -36,7 +36,7 @@ func (e *engine) input(in *Input, width float64) []*piece {
 		return nil
 	}
 	row := eqn.Row{in.Symbol, eqn.Op{Text: "="}, in.Value}
-	return e.calcLine("input", in.Pos, in.Own, row, noteRuns(in.Note, in.Ref), in.Anchor, width)
+	return e.calcLine("input", in.Pos, in.Own, row, e.presetFor(in), noteRuns(in.Note, in.Ref), in.Anchor, width)
 }
 
 // noteRuns appends a reference to a note, in brackets.
@@ -54,6 +54,11 @@ func noteRuns(note []Run, ref string) []Run {
 	return append(out, Run{Text: ref, Style: Italic})
 }
 
+// mathStyle is how calculation lines set their formulas.
+func (e *engine) mathStyle() eqn.Style {
+	return eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()}
+}
+
 // formula is a broken formula stacked into lines.
 type formula struct {
 	items []draw.Item
@@ -65,13 +70,17 @@ type formula struct {
 
 // stackFormula breaks row to width and stacks the lines.
 // The items are moved by (dx, dy); own marks plinth's own formula.
-func (e *engine) stackFormula(row eqn.Node, width, dx, dy float64, pos source.Span, own bool) (formula, bool) {
-	st := eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()}
-	lines, err := eqn.Break(row, width, st)
-	if err != nil {
-		e.mathProblem(pos, own, err)
-		return formula{}, false
+// stackFormula breaks row to width and stacks the lines; set, when not
+// nil, is row set already (eqn.Prepare with mathStyle).
+func (e *engine) stackFormula(row eqn.Node, set *eqn.Set, width, dx, dy float64, pos source.Span, own bool) (formula, bool) {
+	if set == nil {
+		var err error
+		if set, err = eqn.Prepare(row, e.mathStyle()); err != nil {
+			e.mathProblem(pos, own, err)
+			return formula{}, false
+		}
 	}
+	lines := set.Break(width)
 	f := formula{lines: len(lines)}
 	y := 0.0
 	for i, b := range lines {
@@ -101,7 +110,7 @@ var noteStops = [...]float64{0.3, 0.48, 0.64}
 // calcLine lays out a formula with its note beside it (at the first note
 // stop clear of the formula), or below it when the formula needs the
 // whole width.
-func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, note []Run, anchor string, width float64) []*piece {
+func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, set *eqn.Set, note []Run, anchor string, width float64) []*piece {
 	const gap = 12.0
 	last := noteStops[len(noteStops)-1] * width
 	eqW := width
@@ -111,7 +120,7 @@ func (e *engine) calcLine(kind string, pos source.Span, own bool, row eqn.Row, n
 	// The note goes beside a formula that is one line no wider than eqW;
 	// such a formula is that same line at the full width, so one
 	// breaking at the full width serves both cases.
-	f, ok := e.stackFormula(row, width, 0, calcPad, pos, own)
+	f, ok := e.stackFormula(row, set, width, 0, calcPad, pos, own)
 	if !ok {
 		return nil
 	}
@@ -178,7 +187,7 @@ func (e *engine) check(c *Check, width float64) []*piece {
 		row = append(row, eqn.Op{Text: "="}, c.RightValue)
 	}
 	const verdictW, pad = 128.0, 3.0
-	f, ok := e.stackFormula(row, width-verdictW-2*pad, pad, pad, c.Pos, false)
+	f, ok := e.stackFormula(row, nil, width-verdictW-2*pad, pad, pad, c.Pos, false)
 	if !ok {
 		return nil
 	}

@@ -19,8 +19,9 @@ type engine struct {
 	bodyX, bodyY, bodyW, bodyH float64
 	num                        [4]int // heading counters of the current sheet
 	listDepth                  int
-	refCalls                   int   // page references set so far (reuse.go)
-	sp                         space // word and frag chunks (space.go)
+	refCalls                   int    // page references set so far (reuse.go)
+	sp                         space  // word and frag chunks (space.go)
+	pre                        preset // a formula shortLine set, for the line set alone (steps.go)
 }
 
 // piece is an unbreakable strip of a sheet's body, stacked by the
@@ -33,6 +34,9 @@ type piece struct {
 	head   *piece  // repeat this above the piece when it starts a page
 	brk    bool    // start a new page here
 	base   float64 // first baseline below the top
+	// the top-level block of the sheet it comes from and its place among
+	// that block's pieces (set by sheetBlocks)
+	block, idx int
 }
 
 // Document lays out doc: every sheet's body into pages, the page
@@ -68,6 +72,9 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 	if err != nil {
 		return nil, internal(doc, err.Error())
 	}
+	for si := range laid {
+		laid[si].compact()
+	}
 	out := &Pages{Info: doc.Info}
 	for si := range doc.Sheets {
 		sh := &doc.Sheets[si]
@@ -84,7 +91,7 @@ func Document(doc Doc) (pages *Pages, diags source.List) {
 	}
 	e.furnish(doc, out, banner)
 	markChanges(out, doc.Bars)
-	e.checkLinks(out)
+	e.checkLinks(laid)
 	if e.diags.HasErrors() {
 		e.diags.Sort()
 		return nil, e.diags
@@ -106,11 +113,58 @@ func internal(doc Doc, msg string) source.List {
 // numbered within the sheet), the problems found, and the text each page
 // reference in it was set with.
 type laidSheet struct {
-	pages  []*Page
-	diags  source.List
-	refs   map[PageRef]refUse
-	blocks []laidBlock // its blocks' pieces, when it may be laid out again (reuse.go)
+	pages []*Page
+	diags source.List
+	refs  map[PageRef]refUse
+	marks []mark // its anchors and links, in the order drawn
+	// when it may be laid out again (it set a page reference, reuse.go):
+	// each top-level block's heading numbers, problems and, for those
+	// that set a page reference, the shape of its pieces and where they
+	// went; and the problems of the pagination
+	blocks    []laidBlock
+	pageDiags source.List
 }
+
+// mark is an anchor or a link as laid out: its name (or target), the
+// page of its sheet it is on (from 0) and the span of its box. The
+// anchors and links are read off the boxes once, when the sheet is
+// paginated, so a sheet's boxes may go (doc.Final) before the anchors
+// are counted and the links checked.
+type mark struct {
+	link      bool
+	name      string
+	page, seq int // the page of the sheet and the box's place on it
+	pos       source.Span
+}
+
+// marksOf lists the anchors and links on pages, in the order drawn.
+func marksOf(pages []*Page) []mark {
+	var out []mark
+	for pi, pg := range pages {
+		for j, b := range pg.Boxes {
+			out = appendMarks(out, b, pi, j)
+		}
+	}
+	return out
+}
+
+// appendMarks adds the anchors and links of box b, the seq-th of page.
+func appendMarks(out []mark, b *Box, page, seq int) []mark {
+	b.Walk(func(b *Box) {
+		for _, it := range b.Items {
+			switch it := it.(type) {
+			case draw.Anchor:
+				out = append(out, mark{name: it.Name, page: page, seq: seq, pos: b.Pos})
+			case draw.Link:
+				out = append(out, mark{link: true, name: it.Target, page: page, seq: seq, pos: b.Pos})
+			}
+		}
+	})
+	return out
+}
+
+// streams reports whether final sheets go to doc.Final.
+func streams(doc Doc) bool { return doc.Final != nil && doc.Bars == nil }
 
 // sheets lays out and paginates the sheets numbered in which, in
 // parallel: each is independent of the others (a page reference's text
@@ -134,12 +188,15 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 							fails[si] = fmt.Errorf("layout: internal error: %v", r)
 						}
 					}()
-					se := *e
-					se.diags, se.num, se.listDepth = nil, [4]int{}, 0
-					se.fills, se.used = fills, map[PageRef]refUse{}
-					pieces, kept := se.sheetBlocks(doc.Sheets[si].Blocks, out[si].blocks)
-					pages := se.paginate(si, pieces)
-					out[si] = laidSheet{pages: pages, diags: se.diags, refs: se.used, blocks: kept}
+					fresh := func() *engine {
+						se := *e
+						se.diags, se.num, se.listDepth = nil, [4]int{}, 0
+						se.fills, se.used = fills, map[PageRef]refUse{}
+						return &se
+					}
+					if out[si].blocks == nil || !fresh().again(doc, si, &out[si]) {
+						out[si] = fresh().whole(doc, si)
+					}
 				}()
 				if doc.Progress != nil {
 					mu.Lock()
@@ -253,34 +310,23 @@ func shift(ps []*piece, dx float64) {
 
 // checkLinks reports duplicate anchors and links to anchors that do not
 // exist (the PDF writer would otherwise write a dangling link).
-func (e *engine) checkLinks(out *Pages) {
+func (e *engine) checkLinks(laid []laidSheet) {
 	anchors := map[string]source.Span{}
-	type ref struct {
-		target string
-		pos    source.Span
-	}
-	var links []ref
-	for _, pg := range out.Pages {
-		for _, b := range pg.Boxes {
-			b.Walk(func(b *Box) {
-				for _, it := range b.Items {
-					switch it := it.(type) {
-					case draw.Anchor:
-						if prev, dup := anchors[it.Name]; dup {
-							e.diags.Add(b.Pos, "anchor %q is defined twice (first at %s)", it.Name, prev)
-						} else {
-							anchors[it.Name] = b.Pos
-						}
-					case draw.Link:
-						links = append(links, ref{it.Target, b.Pos})
-					}
-				}
-			})
+	var links []mark
+	for _, ls := range laid {
+		for _, m := range ls.marks {
+			if m.link {
+				links = append(links, m)
+			} else if prev, dup := anchors[m.name]; dup {
+				e.diags.Add(m.pos, "anchor %q is defined twice (first at %s)", m.name, prev)
+			} else {
+				anchors[m.name] = m.pos
+			}
 		}
 	}
 	for _, l := range links {
-		if _, ok := anchors[l.target]; !ok {
-			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.target)
+		if _, ok := anchors[l.name]; !ok {
+			e.diags.Add(l.pos, "link to %q, which is not an anchor in this document", l.name)
 		}
 	}
 }

@@ -22,6 +22,20 @@ type Doc struct {
 	// out again with their page references filled in (it does not change
 	// the pages).
 	Progress func(done, total int)
+	// Final, when set, is handed each sheet's pages as soon as the sheet
+	// is laid out whole, before the title block and footer are added,
+	// less the boxes of the blocks that set a page reference (those stay
+	// on the pages, to be filled in). It is called from several goroutines
+	// at once, in no set order, and may paint the boxes and set each
+	// page's Boxes to nil (pdf.Bodies does); the layout keeps what it
+	// needs of them (anchors and links) and, once they are painted, drops
+	// them from its pages. A sheet laid out whole again (a filled-in page
+	// number changed the shape of a block) is handed on again, and the
+	// later pages replace the earlier. A sheet that sets no page reference
+	// has its Blocks dropped once painted, so the Doc is used up. Final is
+	// not called when Bars are set (the change bars are drawn on the
+	// bodies at the end).
+	Final func(sheet int, pages []*Page)
 }
 
 // Info describes the package as a whole.

@@ -21,9 +21,9 @@ const minShrink = 0.4
 // page counts as short (worth trying to take back onto the page before).
 const shortTail = 0.3
 
-// placed is one piece's place in a plan: its page (from 0) and the top of
+// slot is one piece's place in a plan: its page (from 0) and the top of
 // its box; head marks a table header repeated above the piece.
-type placed struct {
+type slot struct {
 	p    *piece
 	page int
 	y    float64
@@ -32,7 +32,7 @@ type placed struct {
 
 // plan stacks ps into pages with the space above each piece scaled by
 // shrink, and reports the pages used and the height taken on the last.
-func (e *engine) plan(ps []*piece, shrink float64) (out []placed, pages int, last float64) {
+func (e *engine) plan(ps []*piece, shrink float64) (out []slot, pages int, last float64) {
 	bottom := e.bodyY + e.bodyH
 	page, y, empty := 0, e.bodyY, true
 	newPage := func() { page, y, empty = page+1, e.bodyY, true }
@@ -40,7 +40,7 @@ func (e *engine) plan(ps []*piece, shrink float64) (out []placed, pages int, las
 		if empty {
 			gap = 0
 		}
-		out = append(out, placed{p: p, page: page, y: y + gap, head: head})
+		out = append(out, slot{p: p, page: page, y: y + gap, head: head})
 		y += gap + p.box.H
 		empty = false
 	}
@@ -75,8 +75,9 @@ func (e *engine) plan(ps []*piece, shrink float64) (out []placed, pages int, las
 	return out, page + 1, y - e.bodyY
 }
 
-// paginate stacks pieces into pages for sheet si, numbered from 1.
-func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
+// paginate stacks pieces into pages for sheet si, numbered from 1, and
+// says where each box went.
+func (e *engine) paginate(si int, ps []*piece) (pages []*Page, at []placed) {
 	plan, n, last := e.plan(ps, 1)
 	if n > 1 && last < shortTail*e.bodyH {
 		for _, f := range shrinks {
@@ -86,22 +87,28 @@ func (e *engine) paginate(si int, ps []*piece) (pages []*Page) {
 			}
 		}
 	}
-	for _, pl := range plan {
+	newPage := func() {
+		pages = append(pages, &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: len(pages) + 1})
+	}
+	for i, pl := range plan {
 		for len(pages) <= pl.page {
-			pages = append(pages, &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: len(pages) + 1})
+			newPage()
 		}
-		p := pl.p
+		b := pl.p.box
+		of := pl.p
 		if pl.head {
-			p = clonePiece(p)
-		} else if p.box.H > e.bodyH+1e-6 {
-			e.diags.Add(p.box.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(p.box.Kind), p.box.H, e.bodyH)
+			b = cloneBox(b)
+			of = plan[i+1].p // the header goes above the row that needs it
+		} else if b.H > e.bodyH+1e-6 {
+			e.diags.Add(b.Pos, "%s is %.0f pt tall and cannot fit on a page (%.0f pt of text height)", kindName(b.Kind), b.H, e.bodyH)
 		}
-		p.box.move(e.bodyX, pl.y)
+		b.move(e.bodyX, pl.y)
 		pg := pages[pl.page]
-		pg.Boxes = append(pg.Boxes, p.box)
+		at = append(at, placed{page: pl.page, seq: len(pg.Boxes), block: of.block, idx: of.idx, head: pl.head, dx: e.bodyX, dy: pl.y})
+		pg.Boxes = append(pg.Boxes, b)
 	}
 	if len(pages) == 0 {
-		pages = append(pages, &Page{W: float64(e.tpl.Page.Width), H: float64(e.tpl.Page.Height), Sheet: si, Number: 1})
+		newPage()
 	}
-	return pages
+	return pages, at
 }

@@ -46,7 +46,7 @@ func TestPaginateTakesBackShortTail(t *testing.T) {
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			e := testEngine(t, col)
-			pages := e.paginate(0, c.ps)
+			pages, _ := e.paginate(0, c.ps)
 			if len(pages) != c.pages {
 				t.Fatalf("%d pages, want %d", len(pages), c.pages)
 			}

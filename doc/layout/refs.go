@@ -3,7 +3,6 @@ package layout
 import (
 	"strconv"
 
-	"github.com/plinth-calc/plinth/doc/layout/draw"
 	"github.com/plinth-calc/plinth/doc/source"
 )
 
@@ -109,20 +108,12 @@ func anchorPlaces(laid []laidSheet) map[string]place {
 	n := 0
 	for _, ls := range laid {
 		first, last := n+1, n+len(ls.pages)
-		for _, pg := range ls.pages {
-			n++
-			for _, b := range pg.Boxes {
-				b.Walk(func(b *Box) {
-					for _, it := range b.Items {
-						if a, ok := it.(draw.Anchor); ok {
-							if _, seen := at[a.Name]; !seen {
-								at[a.Name] = place{page: n, first: first, last: last}
-							}
-						}
-					}
-				})
+		for _, m := range ls.marks {
+			if _, seen := at[m.name]; !seen && !m.link {
+				at[m.name] = place{page: first + m.page, first: first, last: last}
 			}
 		}
+		n = last
 	}
 	return at
 }

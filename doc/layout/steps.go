@@ -91,13 +91,39 @@ func (e *engine) shortLine(b Block, width float64) (cellLine, bool) {
 		return c, false
 	}
 	half := (width - stepColGap) / 2
-	lines, err := eqn.Break(row, half, eqn.Style{Size: mathSize, Color: ink, Texts: e.texts()})
-	if err != nil || len(lines) != 1 || lines[0].W > half {
+	set, err := eqn.Prepare(row, e.mathStyle())
+	if err != nil {
 		return c, false // the line alone reports any problem
+	}
+	if set.Width() > half {
+		e.pre = preset{b, set} // for the line set alone, next
+		return c, false
+	}
+	lines := set.Break(half)
+	if len(lines) != 1 || lines[0].W > half {
+		return c, false
 	}
 	c.line = lines[0]
 	c.note = e.words(note, noteStyle, c.pos)
 	return c, true
+}
+
+// preset is a calculation line's formula set by shortLine, too wide for
+// a row of short lines: the line set alone takes it rather than set the
+// formula again.
+type preset struct {
+	b   Block
+	set *eqn.Set
+}
+
+// presetFor takes the formula set for b, if shortLine set it.
+func (e *engine) presetFor(b Block) *eqn.Set {
+	if e.pre.b != b {
+		return nil
+	}
+	s := e.pre.set
+	e.pre = preset{}
+	return s
 }
 
 // noteLines is how many lines a note takes at width.

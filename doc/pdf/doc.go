@@ -18,13 +18,23 @@
 // The page content streams are plinth's own (stream.go, paint.go): each
 // page is painted with strconv into a reused buffer, with the font and
 // colours set only when they change and consecutive text in one text
-// object, and compressed at once on another core (zip.go); only the
-// compressed bytes are kept, and with Options.Release the page's boxes
-// are dropped as soon as it is painted. Glyph indices and kerning are
-// gopdf's own (glyphs.go reads the faces with gopdf's parser), and gopdf
-// writes everything else: the font subsets (told the characters used, in
-// the order first met), pages, outlines, links, anchors, images and the
-// cross-reference table. gopdf opens each page's content object where
+// object, and compressed at once on another core (zip.go, with
+// klauspost/compress at its fastest level); only the compressed bytes are
+// kept, and with Options.Release the page's boxes are dropped as soon as
+// it is painted. Bodies paints the bodies of a sheet's pages while the
+// layout is still at work on other sheets (layout.Doc.Final), on the
+// layout's goroutines, and drops their boxes; Write then paints only each
+// page's furniture (title block, footer, and the boxes the layout kept
+// for their page references) and joins its compressed stream to the body's
+// (bodies.go), so a long document is never held as boxes whole. The
+// painter names each face's font resource after the face, and pack
+// renames gopdf's to match. Glyph indices and kerning are gopdf's own
+// (glyphs.go reads the faces with gopdf's parser), and gopdf writes
+// everything else: the font subsets (told the characters used, in
+// character order), pages, outlines, links, anchors, images and the
+// cross-reference table; what a body painted ahead asks of gopdf (its
+// content object, links, anchors) is recorded and asked in the same order
+// when its page is written. gopdf opens each page's content object where
 // the painter starts drawing, and pack puts the painted stream in its
 // place.
 //

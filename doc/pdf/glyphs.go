@@ -37,15 +37,15 @@ func parsedFace(f fonts.Face) (*gopdf.SubsetFontObj, error) {
 	return parsed[f], parseErr[f]
 }
 
-// glyphs maps one face's characters to glyphs for one Write, and keeps
-// the characters used in the order first met: gopdf is told them at the
-// end (subsetFont), so its subset holds them in the order it would have
-// met them drawing the text itself.
+// glyphs maps one face's characters to glyphs for one Write (or for one
+// painter of bodies ahead, bodies.go), and keeps the characters used:
+// gopdf is told them at the end (subsetFonts), in character order, so its
+// subset does not depend on which painter met a character first.
 type glyphs struct {
 	font   *gopdf.SubsetFontObj
 	kerns  core.KernMap // gopdf's kerning pairs, left glyph → right glyph → TTF units (nil: none)
 	lefts  []bool       // lefts[g]: glyph g begins a pair in kerns (most begin none)
-	number int          // the face's font resource, /F<number>
+	number int          // the face's font resource, /F<number+1>: the face's own number (pack renames gopdf's)
 	upem   int
 	low    []uint32 // rune → glyph+1 for runes below len(low); 0 = not looked up
 	high   map[rune]uint32
@@ -54,7 +54,8 @@ type glyphs struct {
 
 const lowRunes = 0x3000
 
-func newGlyphs(f fonts.Face, number int) (*glyphs, error) {
+func newGlyphs(f fonts.Face) (*glyphs, error) {
+	number := int(f)
 	font, err := parsedFace(f)
 	if err != nil {
 		return nil, err

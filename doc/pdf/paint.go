@@ -1,8 +1,11 @@
 package pdf
 
 import (
+	"bytes"
+	"errors"
 	"slices"
 
+	"github.com/klauspost/compress/flate"
 	"github.com/signintech/gopdf"
 
 	"github.com/plinth-calc/plinth/doc/layout"
@@ -34,6 +37,14 @@ type painter struct {
 	// which of the above hold on the current page (a new page's content
 	// stream starts from the default graphics state)
 	hasFont, hasStroke, hasFill bool
+
+	// ahead: a body painted before Write (bodies.go), with no gopdf: its
+	// calls on gopdf are recorded in events, and its faces are read as
+	// they are met.
+	ahead  bool
+	events []event
+	zw     *flate.Writer
+	zbuf   bytes.Buffer
 }
 
 // glyphKern is a glyph and the kerning before it.
@@ -61,7 +72,11 @@ func (p *painter) finish() {
 // (pack puts this stream in the object's place).
 func (p *painter) open() {
 	if !p.opened {
-		p.gp.SetStrokeColor(0, 0, 0)
+		if p.ahead {
+			p.events = append(p.events, event{kind: evOpen})
+		} else {
+			p.gp.SetStrokeColor(0, 0, 0)
+		}
 		p.opened = true
 	}
 }
@@ -145,12 +160,9 @@ func (p *painter) style(pt draw.Paint) string {
 // its font and colour if they changed, its position, then the glyphs with
 // gopdf's kerning adjustments between them (TJ when there are any).
 func (p *painter) drawText(v draw.Text, x, y float64) error {
-	var g *glyphs
-	if v.Face.Valid() {
-		g = p.glyphs[v.Face]
-	}
-	if g == nil {
-		return gopdf.ErrMissingFontFamily
+	g, err := p.face(v.Face)
+	if err != nil {
+		return err
 	}
 	p.size = v.Size
 	gs := p.scratch[:0]
@@ -200,11 +212,38 @@ func (p *painter) drawText(v draw.Text, x, y float64) error {
 	return nil
 }
 
+// face is the glyphs of face f: those Write made for the faces the pages
+// use, or for a body painted ahead the face's own, made when first met.
+func (p *painter) face(f fonts.Face) (*glyphs, error) {
+	var g *glyphs
+	if f.Valid() {
+		g = p.glyphs[f]
+		if g == nil && p.ahead {
+			var err error
+			if g, err = newGlyphs(f); err != nil {
+				return nil, err
+			}
+			p.glyphs[f] = g
+		}
+	}
+	if g == nil {
+		return nil, gopdf.ErrMissingFontFamily
+	}
+	return g, nil
+}
+
+// errImageAhead: a body with an image is painted by Write (bodies.go).
+var errImageAhead = errors.New("pdf: an image in a body painted ahead")
+
 // item draws it moved by (dx, dy) (its box's corner).
 func (p *painter) item(it draw.Item, dx, dy float64) error {
 	switch v := it.(type) {
 	case draw.Text:
 		if v.Text == "" {
+			if p.ahead && v.Face.Valid() {
+				_, err := p.face(v.Face) // the face is embedded all the same
+				return err
+			}
 			return nil
 		}
 		return p.drawText(v, v.Start()+dx, v.Y+dy)
@@ -244,6 +283,9 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 			p.c.line(a.X+dx, a.Y+dy, b.X+dx, b.Y+dy)
 		}
 	case draw.Image:
+		if p.ahead {
+			return errImageAhead
+		}
 		h, err := gopdf.ImageHolderByBytes(v.Data)
 		if err != nil {
 			return err
@@ -264,29 +306,72 @@ func (p *painter) item(it draw.Item, dx, dy float64) error {
 		p.shapes()
 		p.c.image(index, v.X+dx, v.Y+dy, v.W, v.H)
 	case draw.Link:
+		if p.ahead {
+			p.events = append(p.events, event{kind: evLink, name: v.Target, x: v.X + dx, y: v.Y + dy, w: v.W, h: v.H})
+			return nil
+		}
 		p.gp.AddInternalLink(v.Target, v.X+dx, v.Y+dy, v.W, v.H)
 	case draw.Anchor:
-		// gopdf places an anchor at (page height − y + font size): aim a
-		// little above the anchored line.
-		p.gp.SetFontSize(p.size)
-		p.gp.SetY(v.Y + dy - 8 + p.size)
-		p.gp.SetAnchor(v.Name)
+		if p.ahead {
+			p.events = append(p.events, event{kind: evAnchor, name: v.Name, y: v.Y + dy, size: p.size})
+			return nil
+		}
+		p.anchor(v.Name, v.Y+dy, p.size)
 	}
 	return nil
 }
 
-// subsetFonts tells gopdf the characters each face drew, in the order they
-// were met, so its font subsets hold those glyphs.
-func (p *painter) subsetFonts() error {
+// anchor places anchor name at y on the page, after text of the given
+// size. gopdf places an anchor at (page height − y + font size): aim a
+// little above the anchored line.
+func (p *painter) anchor(name string, y, size float64) {
+	p.gp.SetFontSize(size)
+	p.gp.SetY(y - 8 + size)
+	p.gp.SetAnchor(name)
+}
+
+// replay makes the gopdf calls of a body painted ahead, in the order it
+// made them, on the page being written (after its furniture), and leaves
+// the painter as the body left it.
+func (p *painter) replay(b *bodyStream) {
+	for _, ev := range b.events {
+		switch ev.kind {
+		case evOpen:
+			p.open()
+		case evLink:
+			p.gp.AddInternalLink(ev.name, ev.x, ev.y, ev.w, ev.h)
+		case evAnchor:
+			size := ev.size
+			if size < 0 { // no text before it in the body: the furniture's
+				size = p.size
+			}
+			p.anchor(ev.name, ev.y, size)
+		}
+	}
+	if b.lastSize >= 0 {
+		p.size = b.lastSize
+	}
+}
+
+// subsetFonts tells gopdf the characters each face drew (with those of
+// the bodies painted ahead), in character order, so its font subsets hold
+// those glyphs.
+func (p *painter) subsetFonts(ahead *Bodies) error {
 	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
 		g := p.glyphs[f]
-		if g == nil || len(g.used) == 0 {
+		if g == nil {
 			continue
 		}
+		rs := append(slices.Clone(g.used), ahead.runes(f)...)
+		if len(rs) == 0 {
+			continue
+		}
+		slices.Sort(rs)
+		rs = slices.Compact(rs)
 		if err := p.gp.SetFont(f.PDFName(), "", 10); err != nil {
 			return err
 		}
-		if _, err := p.gp.MeasureTextWidth(string(g.used)); err != nil {
+		if _, err := p.gp.MeasureTextWidth(string(rs)); err != nil {
 			return err
 		}
 	}

@@ -32,6 +32,11 @@ type Options struct {
 	// Files are embedded as attachments (the package's inputs), listed in
 	// the catalog's EmbeddedFiles name tree in name order.
 	Files []File
+	// Bodies holds the page bodies painted while the pages were laid out
+	// (layout.Doc.Final = Bodies.Sheet); a page whose body is there has
+	// only its furniture left in Boxes. A Bodies serves one Write: the
+	// compressed bodies go once written.
+	Bodies *Bodies
 }
 
 // Write draws pages as a PDF to w.
@@ -44,7 +49,7 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	if pages == nil || len(pages.Pages) == 0 {
 		return errors.New("pdf: no pages to write")
 	}
-	if err := checkLinks(pages); err != nil {
+	if err := checkLinks(pages, opt.Bodies); err != nil {
 		return err
 	}
 	first := pages.Pages[0]
@@ -62,20 +67,21 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	})
 	p := &painter{gp: gp, images: map[string]int{}}
 	faces := usedFaces(pages)
-	n := 0
+	ahead := opt.Bodies.faces()
+	var order []fonts.Face // the faces in gopdf's order: pack names the k-th /F<face+1>
 	for f := fonts.Face(0); f < fonts.NumFaces; f++ {
-		if !faces[f] {
+		if !faces[f] && !ahead[f] {
 			continue
 		}
 		if err := gp.AddTTFFontDataWithOption(f.PDFName(), f.TTF(), ttfOption); err != nil {
 			return fmt.Errorf("pdf: embedding %s: %w", f, err)
 		}
-		g, err := newGlyphs(f, n)
+		g, err := newGlyphs(f)
 		if err != nil {
 			return err
 		}
 		p.glyphs[f] = g
-		n++
+		order = append(order, f)
 	}
 	marks := map[int][]layout.Bookmark{}
 	for _, b := range pages.Outline {
@@ -99,8 +105,12 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			}
 		}
 		p.finish()
+		body := opt.Bodies.body(pg.Sheet, pg.Number)
+		if body != nil {
+			p.replay(body)
+		}
 		if p.opened {
-			zp.add(i, p.c.b)
+			zp.add(i, p.c.b, body)
 			p.c.b = nil
 		}
 		if opt.Release {
@@ -110,18 +120,19 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 			opt.Progress(i+1, len(pages.Pages))
 		}
 	}
-	if err := p.subsetFonts(); err != nil {
+	if err := p.subsetFonts(opt.Bodies); err != nil {
 		return err
 	}
-	streams, err := zp.streams()
-	if err != nil {
-		return fmt.Errorf("pdf: %w", err)
-	}
 	// gopdf's part is small now the page streams are apart: fonts, page
-	// objects, links, outlines (about 1.6 kB a page)
+	// objects, links, outlines (about 1.6 kB a page); it is written while
+	// the last pages are still being compressed
 	var buf bytes.Buffer
 	buf.Grow(256<<10 + 2<<10*len(pages.Pages))
 	if _, err := gp.WriteTo(&buf); err != nil {
+		return fmt.Errorf("pdf: %w", err)
+	}
+	streams, err := zp.streams()
+	if err != nil {
 		return fmt.Errorf("pdf: %w", err)
 	}
 	// the information is completed in gopdf's trailer, which pack copies
@@ -130,7 +141,7 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 	if err != nil {
 		return err
 	}
-	out, err := pack(small, streams)
+	out, err := pack(small, streams, order)
 	if err != nil {
 		return err
 	}
@@ -144,9 +155,16 @@ func Write(w io.Writer, pages *layout.Pages, opt Options) (err error) {
 }
 
 // checkLinks makes sure every link has its anchor.
-func checkLinks(pages *layout.Pages) error {
+func checkLinks(pages *layout.Pages, ahead *Bodies) error {
 	anchors := map[string]bool{}
 	var targets []string
+	ahead.marks(func(link bool, name string) {
+		if link {
+			targets = append(targets, name)
+		} else {
+			anchors[name] = true
+		}
+	})
 	for _, pg := range pages.Pages {
 		for _, b := range pg.Boxes {
 			b.Walk(func(b *layout.Box) {

@@ -21,6 +21,7 @@ type zipPool struct {
 type zipJob struct {
 	page int
 	data []byte
+	body *bodyStream // the page's body painted ahead, to follow data; nil: none
 }
 
 func newZipPool(pages int) *zipPool {
@@ -34,7 +35,14 @@ func newZipPool(pages int) *zipPool {
 			defer zp.wg.Done()
 			z := newZipper()
 			for j := range zp.jobs {
-				s, err := z.compress(j.data)
+				var s []byte
+				var err error
+				if j.body != nil {
+					s, err = z.join(j.data, j.body)
+					j.body.z = nil // in s now
+				} else {
+					s, err = z.compress(j.data)
+				}
 				zp.out[j.page] = s
 				if err != nil {
 					zp.mu.Lock()
@@ -61,8 +69,9 @@ func (zp *zipPool) buffer() []byte {
 	}
 }
 
-// add queues page's stream; the pool owns data from here on.
-func (zp *zipPool) add(page int, data []byte) { zp.jobs <- zipJob{page, data} }
+// add queues page's stream (its furniture when b, the body painted
+// ahead, is not nil); the pool owns data from here on.
+func (zp *zipPool) add(page int, data []byte, b *bodyStream) { zp.jobs <- zipJob{page, data, b} }
 
 // close ends the workers once the queue is done.
 func (zp *zipPool) close() {

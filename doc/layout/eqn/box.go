@@ -3,6 +3,7 @@ package eqn
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -34,14 +35,26 @@ func (b *Box) Items() []draw.Item { return b.AppendItems(nil, 0, 0) }
 // AppendItems appends every primitive of the box to dst, moved by
 // (dx, dy), and returns the extended slice.
 func (b *Box) AppendItems(dst []draw.Item, dx, dy float64) []draw.Item {
-	return b.appendItems(dst, dx, dy, 0, 0, false)
+	return b.appendItems(slices.Grow(dst, b.count()), dx, dy, 0, 0, false)
+}
+
+// count is the number of primitives appendItems appends.
+func (b *Box) count() int {
+	n := len(b.items)
+	if b.hasText {
+		n++
+	}
+	for _, k := range b.kids {
+		n += k.b.count()
+	}
+	return n
 }
 
 // AppendItemsThen appends every primitive of the box to dst, moved by
 // (dx, dy) and then by (ex, ey): the values AppendItems followed by
 // draw.Offset gives, without the second copy.
 func (b *Box) AppendItemsThen(dst []draw.Item, dx, dy, ex, ey float64) []draw.Item {
-	return b.appendItems(dst, dx, dy, ex, ey, true)
+	return b.appendItems(slices.Grow(dst, b.count()), dx, dy, ex, ey, true)
 }
 
 func (b *Box) appendItems(dst []draw.Item, dx, dy, ex, ey float64, then bool) []draw.Item {

@@ -8,6 +8,26 @@ package eqn
 // further 1 em. Continuation boxes include their indent. A single piece
 // wider than width (a long fraction, say) is left to overflow.
 func Break(n Node, width float64, st Style) ([]*Box, error) {
+	s, err := Prepare(n, st)
+	if err != nil {
+		return nil, err
+	}
+	return s.Break(width), nil
+}
+
+// Set is a formula's parts set once, to be broken at any width (a
+// caller that tries a narrow column first, then the full width, sets the
+// formula once).
+type Set struct {
+	c     *ctx
+	nodes []Node
+	boxes []*Box
+	st    Style
+	w     float64 // on one line
+}
+
+// Prepare sets n's parts for Break.
+func Prepare(n Node, st Style) (*Set, error) {
 	c := &ctx{size: st.Size, base: st.Size, color: st.Color, texts: st.Texts}
 	var nodes []Node
 	if r, ok := n.(Row); ok {
@@ -19,8 +39,17 @@ func Break(n Node, width float64, st Style) ([]*Box, error) {
 	if c.err != nil {
 		return nil, c.err
 	}
-	if c.width(nodes, boxes, false) <= width {
-		return []*Box{c.assemble(nodes, boxes, false)}, nil
+	return &Set{c: c, nodes: nodes, boxes: boxes, st: st, w: c.width(nodes, boxes, false)}, nil
+}
+
+// Width is the formula's width on one line.
+func (s *Set) Width() float64 { return s.w }
+
+// Break is Break of the formula at width.
+func (s *Set) Break(width float64) []*Box {
+	c, nodes, boxes, st := s.c, s.nodes, s.boxes, s.st
+	if s.w <= width {
+		return []*Box{c.assemble(nodes, boxes, false)}
 	}
 	// segments: [lhs...], [rel, ...], [rel, ...] as index ranges
 	type span struct{ from, to int }
@@ -97,7 +126,7 @@ func Break(n Node, width float64, st Style) ([]*Box, error) {
 		}
 		out[i] = b
 	}
-	return out, nil
+	return out
 }
 
 type part struct{ from, to int }

@@ -1,0 +1,10 @@
+// Package memory holds the soft memory limit plinth render sets once a
+// document is composed and before it is laid out (Cap). It complements
+// the structural savings of the pipeline (each sheet's page bodies
+// painted and dropped as soon as they are laid out, doc/pdf Bodies):
+// the evaluated package and the composed document stay in memory to the
+// end, and the collector's default pacing lets the heap reach twice
+// what is live — more while the layout allocates quickly during a
+// collection. The compose benchmarks call Cap at the same point, so
+// their MB-peak is what the command uses.
+package memory
