@@ -69,6 +69,16 @@ func evalPlatform(t *testing.T, src string) *eval.Block {
 }
 
 // governing is a block's highest utilisation, as the vary option reads it.
+// flipBetween reports whether a flip at p lies between two rows of v
+// with opposite verdicts.
+func flipBetween(v *eval.VaryResult, p float64) bool {
+	k := 1
+	for k < len(v.Rows) && v.Rows[k].P < p {
+		k++
+	}
+	return k < len(v.Rows) && (v.Rows[k-1].Util > 1) != (v.Rows[k].Util > 1)
+}
+
 func governing(b *eval.Block) float64 {
 	u := 0.0
 	for _, c := range b.Checks {
@@ -123,11 +133,7 @@ func TestVaryTwoInputs(t *testing.T) {
 			t.Errorf("%s: no flip in %+v", v.Symbol, v.Rows)
 		}
 		for _, x := range v.Crossings {
-			k := 1
-			for k < len(v.Rows) && v.Rows[k].P < x.P {
-				k++
-			}
-			if k == len(v.Rows) || (v.Rows[k-1].Util > 1) == (v.Rows[k].Util > 1) {
+			if !flipBetween(v, x.P) {
 				t.Errorf("%s: flip at %v not between rows of opposite verdict: %+v", v.Symbol, x.P, v.Rows)
 			}
 			at := evalWith(t, varyTwo, fmt.Sprintf("%s=%.9g %s", v.Symbol, x.P/si, unit))
@@ -209,11 +215,7 @@ func TestVaryExamplePlatform(t *testing.T) {
 						}
 					}
 					for _, x := range v.Crossings {
-						k := 1
-						for k < len(v.Rows) && v.Rows[k].P < x.P {
-							k++
-						}
-						if k == len(v.Rows) || (v.Rows[k-1].Util > 1) == (v.Rows[k].Util > 1) {
+						if !flipBetween(v, x.P) {
 							t.Errorf("%s %s: flip %v not between rows of opposite verdict", b.Name, v.Symbol, x.P)
 						}
 					}
