@@ -17,7 +17,8 @@ type Within struct {
 	Dist           float64 // centre to corner (half-diagonal; half-width of a strip, radius of a circle), m
 	Beta           float64 // Delta/Dist
 	// Rectangles and squares: the middles of a long side (B/2 from the
-	// centre) and of a short side (L/2), and β from the centre to each.
+	// centre) and of a short side (L/2), and β from the centre to each
+	// (on a square, one side's values serve for both).
 	MidB, MidL   float64
 	BetaB, BetaL float64
 	Trace        trace.Trace
@@ -95,6 +96,18 @@ func WithinFooting(in Input) (*Within, error) {
 		side, what string
 		s, beta    *float64
 	}{{stress.MidB, "B", "middle of a long side", &w.MidB, &w.BetaB}, {stress.MidL, "L", "middle of a short side", &w.MidL, &w.BetaL}} {
+		if m.side == "L" && f.Shape == site.Square {
+			// the middles of a square's four sides are alike: the short
+			// side's values are the long side's, computed once
+			same := "a square's four sides are alike"
+			w.MidL = eval("s_mid_L", trace.S("s_mid_B"), []trace.Value{val("s_mid_B", w.MidB, "mm")}, "mm", trace.Ref{}, same)
+			w.BetaL = eval("beta_L", trace.S("beta_B"), []trace.Value{val("beta_B", w.BetaB, "")}, "", trace.Ref{}, same)
+			w.Values = append(w.Values, val("s_mid_L", w.MidL, "mm"), val("beta_L", w.BetaL, ""))
+			break
+		}
+		if f.Shape == site.Square {
+			m.what = "middle of a side"
+		}
 		x := in
 		x.At = m.p
 		r, err := compute(x, false)

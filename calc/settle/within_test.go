@@ -96,4 +96,15 @@ func TestWithinMidSides(t *testing.T) {
 	if math.Abs(w.BetaB-(w.Centre-w.MidB)/0.5) > 1e-15 || w.MidB != w.MidL {
 		t.Errorf("beta_B = %g, s_mid B %g L %g", w.BetaB, w.MidB, w.MidL)
 	}
+	// on a square the short side's values are the long side's, taken
+	// once: a calculation at the middle of the other side agrees
+	at := in
+	at.At = stress.MidL
+	r, err := settle.Compute(at)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(r.Total/w.MidL-1) > 1e-9 {
+		t.Errorf("square: s at the middle of the other side %g, s_mid_L %g", r.Total, w.MidL)
+	}
 }

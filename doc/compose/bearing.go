@@ -223,16 +223,16 @@ func (o *engineOut) compactCases(title string, tr *trace.Trace, cases []string, 
 	}
 	o.head(title)
 	if len(near) > 0 {
-		what := "By the governing case's formulas, a column per case as numbered above, its values in the order computed; values the same in every case are in this caption."
+		what := "By the governing case's formulas, a column per case as numbered above, values in the order computed; values common to every case are in this caption."
 		if o.c.governingOnly() {
-			what = "The cases within 10 % of the governing utilisation, by its formulas: a column per case as numbered above, its values in the order computed; values the same in every case are in this caption."
+			what = "Cases within 10 % of the governing utilisation, by its formulas, a column per case as numbered above, values in the order computed; values common to every case are in this caption."
 		}
 		o.blocks = o.caseTables(o.blocks, tr, cases, near, steps, prefix, drainage, append([]layout.Run{txt(what)}, inSummary...))
 	}
 	if len(far) > 0 {
-		what := fmt.Sprintf("The other cases %s (utilisation below 90 %% of the governing case) are tabulated the same way in the", caseList(prefix, far))
+		what := fmt.Sprintf("Cases %s (below 90 %% of the governing utilisation) are tabulated in the", caseList(prefix, far))
 		if len(far) == 1 {
-			what = fmt.Sprintf("The other case %s (utilisation below 90 %% of the governing case) is tabulated the same way in the", caseList(prefix, far))
+			what = fmt.Sprintf("Case %s (below 90 %% of the governing utilisation) is tabulated in the", caseList(prefix, far))
 		}
 		o.toAppendix(what)
 		o.apx = o.caseTables(o.apx, tr, cases, far, steps, prefix, drainage, append([]layout.Run{txt(title + ": " + caseList(prefix, far) + ", numbered as in the summary on the sheet; formulas as for the governing case there.")}, inSummary...))

@@ -3,6 +3,7 @@ package compose
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 
 	"github.com/plinth-calc/plinth/calc/settle"
@@ -33,8 +34,10 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 	}
 	intro := fmt.Sprintf("Method: %s. Stress increase: %s, at the %s of the footing. Load: %s. Limit: %s.",
 		method, r.Stress, r.Point, st.Service.Name, valueText(units.Quantity{V: r.Limit, Dim: units.Length}, mm, -1))
-	if len(b.Options) > 0 {
-		intro += " Options: " + strings.Join(b.Options, ", ") + "."
+	// the options the sentence above already states in full are not
+	// listed again
+	if opts := optionsBut(b.Options, "method", "load", "limit", "stress", "at"); len(opts) > 0 {
+		intro += " Options: " + strings.Join(opts, ", ") + "."
 	}
 	o.para(richText(intro, layout.Regular)...)
 	o.selfWeight()
@@ -448,3 +451,16 @@ func layerList(groups []string) []layout.Run {
 // settleChartH is the height in points of the stress and time charts
 // set side by side under a settlement block.
 const settleChartH = 165
+
+// optionsBut is opts ("name = value", as eval prints them) without the
+// options named.
+func optionsBut(opts []string, names ...string) []string {
+	var out []string
+	for _, o := range opts {
+		name, _, _ := strings.Cut(o, " =")
+		if !slices.Contains(names, name) {
+			out = append(out, o)
+		}
+	}
+	return out
+}

@@ -3,6 +3,7 @@ package compose
 import (
 	"fmt"
 
+	"github.com/plinth-calc/plinth/calc/site"
 	"github.com/plinth-calc/plinth/doc/eval"
 )
 
@@ -33,7 +34,11 @@ func (c *composer) within(o *engineOut, st *eval.SettleResult) {
 	}
 	tr := &st.Within.Trace
 	o.label("Differential settlement within the footing")
-	o.para(txt("At the centre, a corner (the edge of a strip or circle) and the middles of the sides, by the method, stresses and sublayers above, the rectangles placed around each point as for at = corner."))
+	at := "At the centre, a corner and the middles of the sides"
+	if sh := o.b.Of.Model.Shape; sh == site.Strip || sh == site.Circle {
+		at = "At the centre and the edge"
+	}
+	o.para(txt(at + ", by the method, stresses and sublayers above, with the rectangles placed around each point as for at = corner."))
 	o.steps(tr, indices(len(tr.Steps)), "within the footing")
 	o.rest(tr, "within the footing", nil)
 }
