@@ -55,6 +55,9 @@ func evaluateWith(path string, sets []string, hook func(*sheet.Package)) (*eval.
 // set, paints each sheet's page bodies as soon as they are final (render
 // gives it to pdf.Write), so the document is never held as boxes whole.
 func layOut(res *eval.Result, opt compose.Options, progress func(done, total int), bodies *pdf.Bodies) (*layout.Pages, source.List) {
+	if bodies != nil {
+		memory.SetPace() // a render: compose, layout and PDF at the pace of internal/memory
+	}
 	doc, diags := compose.Document(res, opt)
 	if diags.HasErrors() {
 		return nil, diags

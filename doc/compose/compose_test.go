@@ -51,6 +51,9 @@ func evaluate(t testing.TB, path string, sets ...string) *eval.Result {
 // pagesOf composes and lays out a result, as plinth render does (with
 // bodies set, the pages' bodies painted as they are final).
 func pagesOf(res *eval.Result, opt compose.Options, bodies ...*pdf.Bodies) (*layout.Pages, source.List) {
+	if len(bodies) > 0 {
+		memory.SetPace() // as plinth render does (cmd/plinth layOut)
+	}
 	doc, d := compose.Document(res, opt)
 	if d.HasErrors() {
 		return nil, d

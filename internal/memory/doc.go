@@ -1,5 +1,6 @@
-// Package memory holds the soft memory limit plinth render sets once a
-// document is composed and before it is laid out (Cap). It complements
+// Package memory holds the collector's pace plinth render sets once the
+// package is evaluated (SetPace) and the soft memory limit it sets once
+// the document is composed and before it is laid out (Cap). It complements
 // the structural savings of the pipeline (each sheet's page bodies
 // painted and dropped as soon as they are laid out, doc/pdf Bodies):
 // the evaluated package and the composed document stay in memory to the
