@@ -3,6 +3,7 @@ package bearing
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"github.com/plinth-calc/plinth/calc/design"
@@ -291,44 +292,36 @@ func (c *calc) anyH() bool {
 }
 
 // overburden records σ_v0, u_0 and σ′_v0 at the base from the layers above
-// it (common practice: Σγh, with γ_sat below the water table).
+// it (site.Ground.Overburden: Σγh, with γ_sat below the water table, in
+// the notation the settlement engine prints too).
 func (c *calc) overburden() {
 	g, D := c.g, c.f.D
-	var f trace.Expr
-	var in []trace.Value
+	o := g.Overburden(D)
 	var parts []string
 	if h0 := g.Flood(); h0 > 0 {
 		c.warnOnce("water-above-ground", trace.SevCaution, trace.Ref{},
 			"Free water stands above ground level: σ_v0 and u_0 include its weight γ_w·h_w0, σ′_v0 does not; the actions must account for the water on the footing and the uplift on its base.",
 			val("h_w0", h0, "m"))
-		f = fFlood
-		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
-		parts = append(parts, "0: free water above ground level")
 	}
-	for k, st := range g.Strata(D) {
-		gs, hs := fmt.Sprintf("gamma_s%d", k+1), fmt.Sprintf("h_s%d", k+1)
-		term := trace.Mul(trace.S(gs), trace.S(hs))
-		if f == nil {
-			f = term
+	for _, i := range o.Layers {
+		if n := g.Layers[i].Name; n != "" {
+			parts = append(parts, fmt.Sprintf("%d %q", i+1, n))
 		} else {
-			f = trace.Add(f, term)
+			parts = append(parts, strconv.Itoa(i+1))
 		}
-		in = append(in, val(gs, st.Gamma, "kN/m3"), val(hs, st.H(), "m"))
-		w := ""
-		if st.Wet {
-			w = ", below water"
-		}
-		parts = append(parts, fmt.Sprintf("%d: %s%s", k+1, layerName(g, st.Layer), w))
 	}
 	ref := trace.Ref{}
 	note := "total vertical stress at the base (common practice)"
-	if len(parts) > 0 {
-		note += "; strata " + strings.Join(parts, "; ")
+	if l := o.Note(); l != "" {
+		note += "; " + l
 	}
-	if f == nil {
+	if len(parts) > 0 {
+		note += "; layers " + strings.Join(parts, ", ")
+	}
+	if o.F == nil {
 		c.sv0 = c.take("sigma_v0", 0, "kPa", ref, note)
 	} else {
-		c.sv0 = c.eval("sigma_v0", f, "kPa", ref, note, in...)
+		c.sv0 = c.eval("sigma_v0", o.F, "kPa", ref, note, o.In...)
 	}
 	if c.g.Water.Set {
 		c.take("z_w", c.zw, "m", trace.Ref{}, "depth of the groundwater table")
@@ -374,9 +367,8 @@ func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, 
 
 // Formulas of the overburden, built once.
 var (
-	fFlood = trace.Mul(trace.S("gamma_w"), trace.S("h_w0"))
-	fU0    = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("D"), trace.S("z_w")))
-	fSv0e  = trace.Sub(trace.S("sigma_v0"), trace.S("u_0"))
+	fU0   = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("D"), trace.S("z_w")))
+	fSv0e = trace.Sub(trace.S("sigma_v0"), trace.S("u_0"))
 )
 
 // wForms are the three unit-weight formulas of unitWeight for one set of

@@ -207,7 +207,8 @@
 // Every formula uses sheet notation: B, L, D, alpha, B', L', A', e_B, e_L,
 // R, e, b_e, l_e (circle), H_d, V_d, H_B_d, M_B_d, beta (load inclination
 // from vertical), theta (H to L′), k (depth ratio), sigma_v0, u_0,
-// sigma'_v0, gamma_s1, h_s1 … (strata above the base), z_w, gamma_w,
+// sigma'_v0, gamma_1, h_1, gamma_sat,1, h_w,1 … (the layers above the base,
+// site.Ground.Overburden), gamma_w, h_w0, z_w,
 // gamma, gamma_sat, gamma'_k, gamma', q, q', phi'_k, phi'_d, c'_k, c'_d,
 // c_u_k, c_u_d, gamma_phi, gamma_c, gamma_cu, gamma_Rv, gamma_Rh, N_c,
 // N_q, N_gamma, K_p, s_c, s_q, s_gamma, d_c, d_q, d_gamma, i_c, i_q,

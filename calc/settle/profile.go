@@ -173,71 +173,30 @@ func (k *calc) layerName(i int) string {
 
 // Formulas shared by every calculation (an Expr is immutable).
 var (
-	fxFlood  = trace.Mul(trace.S("gamma_w"), trace.S("h_w0"))
 	fxU0     = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("z"), trace.S("z_w")))
+	fxU0D    = trace.Mul(trace.S("gamma_w"), trace.Sub(trace.S("D"), trace.S("z_w"))) // at the base, as the bearing engine writes it
 	fxSigEff = trace.Sub(trace.S("sigma_v0"), trace.S("u_0"))
 	fxZmid   = trace.Add(trace.S("z_t"), trace.Div(trace.S("h"), trace.N(2)))
 	fxZb     = trace.Sub(trace.S("z"), trace.S("D"))
 	fxSigF   = trace.Add(trace.S("sigma'_v0"), trace.S("Delta_sigma"))
-	fxDry    [64]trace.Expr
-	fxWet    [64]trace.Expr
-	symGamma [64]string
-	symH     [64]string
-	symGsat  [64]string
-	symHw    [64]string
 )
-
-func init() {
-	for i := range fxDry {
-		d := strconv.Itoa(i + 1)
-		symGamma[i], symH[i] = "gamma_"+d, "h_"+d
-		symGsat[i], symHw[i] = "gamma_sat,"+d, "h_w,"+d
-		fxDry[i] = trace.Mul(trace.S(symGamma[i]), trace.S(symH[i]))
-		fxWet[i] = trace.Mul(trace.S(symGsat[i]), trace.S(symHw[i]))
-	}
-}
-
-// layerSyms returns the overburden symbols of layer i (0-based).
-func layerSyms(i int) (dry, wet trace.Expr, g, h, gs, hw string) {
-	if i < len(fxDry) {
-		return fxDry[i], fxWet[i], symGamma[i], symH[i], symGsat[i], symHw[i]
-	}
-	d := strconv.Itoa(i + 1)
-	g, h, gs, hw = "gamma_"+d, "h_"+d, "gamma_sat,"+d, "h_w,"+d
-	return trace.Mul(trace.S(g), trace.S(h)), trace.Mul(trace.S(gs), trace.S(hw)), g, h, gs, hw
-}
 
 // ix returns prefix followed by the 1-based number of layer i.
 func ix(prefix string, i int) string { return prefix + strconv.Itoa(i+1) }
 
-// overburden appends σ_v0 = Σ γ h, u_0 and σ′_v0 at depth z (below ground)
-// and returns σ_v0, u_0 and σ′_v0 (Pa), each from its formula.
-func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
+// overburden appends σ_v0 (site.Ground.Overburden), u_0 and σ′_v0 at
+// depth z (below ground; at the base when base is set, where z is D) and
+// returns σ_v0, u_0 and σ′_v0 (Pa), each from its formula.
+func (k *calc) overburden(cs string, z float64, base bool) (sv, u, se float64) {
 	g := k.g
-	var terms []trace.Expr
-	var in []trace.Value
-	if h0 := g.Flood(); h0 > 0 {
-		terms = append(terms, fxFlood)
-		in = append(in, val("gamma_w", g.Gw(), "kN/m3"), val("h_w0", h0, "m"))
-	}
-	for _, st := range g.Strata(z) {
-		fd, fw, gsym, hsym, gssym, hwsym := layerSyms(st.Layer)
-		if st.Wet {
-			terms = append(terms, fw)
-			in = append(in, val(gssym, st.Gamma, "kN/m3"), val(hwsym, st.H(), "m"))
-		} else {
-			terms = append(terms, fd)
-			in = append(in, val(gsym, st.Gamma, "kN/m3"), val(hsym, st.H(), "m"))
-		}
-	}
-	if len(terms) == 0 {
+	if o := g.Overburden(z); o.F == nil {
 		sv = k.take(cs, "sigma_v0", trace.Given, 0, "kPa", trace.Ref{}, "at ground level")
 	} else {
-		note := "total vertical stress from the ground model (h_w: thickness below the water table)"
-		if g.Flood() > 0 {
-			note = "total vertical stress from the ground model (h_w0: free water above ground level; h_w: thickness below the water table)"
+		note := "total vertical stress from the ground model"
+		if l := o.Note(); l != "" {
+			note += " (" + l + ")"
 		}
-		sv = k.eval(cs, "sigma_v0", trace.Add(terms[0], terms[1:]...), in, "kPa", trace.Ref{}, note)
+		sv = k.eval(cs, "sigma_v0", o.F, o.In, "kPa", trace.Ref{}, note)
 	}
 	wet := g.Water.Set && z > g.Water.V
 	if wet && !k.gwShown {
@@ -249,7 +208,11 @@ func (k *calc) overburden(cs string, z float64) (sv, u, se float64) {
 		k.take(cs, "gamma_w", trace.Given, g.Gw(), "kN/m3", trace.Ref{}, note)
 	}
 	if wet {
-		u = k.eval(cs, "u_0", fxU0, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val("z", z, "m"), val("z_w", g.Water.V, "m")}, "kPa", trace.Ref{}, "hydrostatic pore pressure")
+		fu, zs := fxU0, "z"
+		if base {
+			fu, zs = fxU0D, "D"
+		}
+		u = k.eval(cs, "u_0", fu, []trace.Value{val("gamma_w", g.Gw(), "kN/m3"), val(zs, z, "m"), val("z_w", g.Water.V, "m")}, "kPa", trace.Ref{}, "hydrostatic pore pressure")
 	} else {
 		u = k.take(cs, "u_0", trace.Given, 0, "kPa", trace.Ref{}, "above the water table")
 	}
@@ -295,7 +258,7 @@ func (k *calc) load() {
 	} else {
 		k.take(cs, "q", trace.Given, c.q, "kPa", trace.Ref{}, "gross bearing pressure (SLS), given")
 	}
-	k.sv, k.u, k.se = k.overburden(cs, f.D)
+	k.sv, k.u, k.se = k.overburden(cs, f.D, true)
 	k.qn = k.eval(cs, "q_net", fxQNet, []trace.Value{val("q", c.q, "kPa"), val("sigma_v0", k.sv, "kPa")}, "kPa",
 		trace.Ref{Source: Craig2012, Clause: "net foundation pressure"}, "net bearing pressure: gross less the overburden removed")
 	if h0 := k.g.Flood(); h0 > 0 {
@@ -499,7 +462,7 @@ func (k *calc) sublayers(top, bot float64) error {
 func (k *calc) explainSub(cs string, j int) (se, ds, sf float64) {
 	s := k.r.Sub[j]
 	z := k.eval(cs, "z", fxZmid, []trace.Value{val("z_t", s.Top, "m"), val("h", s.H, "m")}, "m", trace.Ref{}, "mid-depth of sublayer "+strconv.Itoa(j+1)+" (midpoint rule)")
-	_, _, se = k.overburden(cs, z)
+	_, _, se = k.overburden(cs, z, false)
 	zb := k.eval(cs, "z_b", fxZb, []trace.Value{val("z", z, "m"), val("D", k.f.D, "m")}, "m", trace.Ref{}, "depth below the underside of the footing")
 	ds = s.DSigma
 	if k.full {

@@ -159,7 +159,7 @@ func (k *calc) schmertmann() error {
 		for i := range parts {
 			record(i)
 		}
-		_, _, svp := k.overburden(cs+": peak", D+geom[0])
+		_, _, svp := k.overburden(cs+": peak", D+geom[0], false)
 		if svp <= 0 {
 			return &site.InputError{Where: f.Name, Param: "gamma_sat", Msg: "the vertical effective stress at the peak of the strain influence diagram is not positive: the saturated unit weight must exceed that of water"}
 		}
