@@ -224,6 +224,15 @@ func (c *calc) warn(code string, sev trace.Severity, ref trace.Ref, msg string, 
 	c.t.Warn(trace.Caution{Code: code, Severity: sev, Message: msg, Values: vals, Ref: ref, Case: c.cas})
 }
 
+// noteAtStep records a NOTE that says what the note and reference of the
+// step just recorded say (trace.Caution.AtStep).
+func (c *calc) noteAtStep(code string, ref trace.Ref, msg string, vals ...trace.Value) {
+	if c.dry {
+		return
+	}
+	c.t.Warn(trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Values: vals, Ref: ref, Case: c.cas, AtStep: true})
+}
+
 // common records the steps shared by every case: footing, overburden,
 // groundwater, the layers below the base and the choices made.
 func (c *calc) common() {
@@ -352,13 +361,13 @@ func (c *calc) unitWeight(name string, l site.Layer, gs, gss string, z float64, 
 	case c.zw <= z:
 		v := c.eval(name, fw.sub, "kN/m3", refWater, "submerged unit weight (water above the base)", vgs, vw)
 		if c.cas == "" { // raised at the step that prints it
-			c.warn("water-above-base", trace.SevNote, refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
+			c.noteAtStep("water-above-base", refWater, "Groundwater at or above the base: effective overburden q′ and submerged unit weight γ′ = γ_sat − γ_w in the N_γ term.", val("z_w", c.zw, "m"))
 		}
 		return v
 	case c.zw < z+b:
 		v := c.eval(name, fw.within, "kN/m3", refWater, "unit weight with the water table within B below the base", vg, vgs, vw, val("z_w", c.zw, "m"), val(zs, z, "m"), val(bs, b, "m"))
 		if c.cas == "" { // raised at the step that prints it
-			c.warn("water-within-B", trace.SevNote, refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
+			c.noteAtStep("water-within-B", refWater, "Groundwater within B below the base: the unit weight of the N_γ term is interpolated between γ′ and γ.", val("z_w", c.zw, "m"))
 		}
 		return v
 	}

@@ -274,5 +274,5 @@ func (c *calc) completeWeak(governing string) {
 // whole records a note about the calculation as a whole (Step -1; Warn
 // would attach it to the latest step).
 func (c *calc) whole(code, msg string, vals ...trace.Value) {
-	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Values: vals, Step: -1})
+	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Values: vals, Step: -1, Restates: true})
 }

@@ -115,6 +115,14 @@ type Caution struct {
 	Step     int
 	Ref      Ref
 	Case     string
+	// Restates marks a caution that says only what its check's verdict
+	// line says ("Bearing governed by …"): a document that prints the
+	// line leaves the caution out.
+	Restates bool
+	// AtStep marks a caution that says what the note and reference of the
+	// step it was raised at say: printed beside that step in full, it is
+	// not boxed again (the cautions summary still lists it).
+	AtStep bool
 }
 
 // Trace is the ordered working of one calculation.

@@ -63,6 +63,7 @@ type raised struct {
 	block  *eval.Block
 	sev    severity.Level
 	code   string // the engine's code, for an engine caution
+	atStep bool   // says what the step it was raised at says (trace.Caution.AtStep)
 	text   string
 	where  string // case or step
 	anchor string

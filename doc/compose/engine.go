@@ -229,7 +229,7 @@ func sentence(m string) string {
 }
 
 // cautionBeside is cautionOf for a caution raised at a step just printed
-// in full, whose note may already say it (inStep).
+// in full, whose note may already say it (trace.Caution.AtStep).
 func (o *engineOut) cautionBeside(tr *trace.Trace, j int, where string) {
 	o.beside = true
 	o.cautionOf(tr, j, where)
@@ -258,17 +258,6 @@ func (o *engineOut) rest(tr *trace.Trace, where string, only func(trace.Caution)
 	}
 }
 
-// restates lists the caution codes that only restate the check line
-// printed beside them; they are left out.
-var restates = map[string]bool{"governing": true, "governing-sliding": true}
-
-// inStep lists the NOTE codes the engine raises at a step whose own note
-// and reference say the same (the unit weight of the N_γ term with the
-// water table near the base; the Poisson's ratio assumed): printed in
-// full beside that step, the note is not boxed again under it, and is
-// entered in the cautions summary with a link to the step.
-var inStep = map[string]bool{"water-above-base": true, "water-within-B": true, "nu-default": true}
-
 // listed enters caution code of tr (the first raised) in the cautions
 // summary with a link to this point, unboxed: the caller prints what it
 // says in its own words here. It reports the caution's message, or false
@@ -288,19 +277,19 @@ func (o *engineOut) listed(tr *trace.Trace, code, where string) (string, bool) {
 // anchor its entry links to.
 func (o *engineOut) enter(ca trace.Caution, where string) string {
 	a := o.c.anchor("caution")
-	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: ca.Severity, code: ca.Code, text: sentence(ca.Message),
+	o.c.cautions = append(o.c.cautions, raised{sheet: o.s, block: o.b, sev: ca.Severity, code: ca.Code, atStep: ca.AtStep, text: sentence(ca.Message),
 		where: strings.TrimSpace(o.b.Kind.String() + " " + o.b.Name + ", " + where), anchor: a})
 	return a
 }
 
 // caution boxes an engine caution and enters it in the cautions summary.
 func (o *engineOut) caution(ca trace.Caution, where string) {
-	if restates[ca.Code] {
+	if ca.Restates { // the check line printed beside it says it
 		return
 	}
 	a := o.enter(ca, where)
 	sev := ca.Severity
-	if inStep[ca.Code] && o.beside {
+	if ca.AtStep && o.beside { // printed in full beside its step, whose note says it: listed, not boxed
 		o.add(&layout.Anchor{Pos: o.p, Name: a})
 		return
 	}

@@ -227,7 +227,7 @@ func (c *composer) assumedValues() []layout.Block {
 		}
 	}
 	for _, r := range c.cautions {
-		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning || inStep[r.code] { // inStep: its step is listed above
+		if !strings.Contains(strings.ToLower(r.text), "assumed") || r.sev >= severity.Warning || r.atStep { // its step is listed above
 			continue
 		}
 		add("", 0, "", r.text, use{s: r.sheet, b: r.block, where: r.where, anchor: r.anchor})

@@ -247,7 +247,7 @@ func (c *composer) resultsTable(rows []footingRow) *layout.Table {
 		gov := governingAnalyses(fr.analyses)
 		for _, a := range fr.analyses {
 			for _, ca := range a.Cautions {
-				if ca.Severity >= trace.SevWarning && !restates[ca.Code] {
+				if ca.Severity >= trace.SevWarning && !ca.Restates {
 					warn++
 				}
 			}
