@@ -99,7 +99,7 @@ func (o *engineOut) head(text string) {
 
 // label adds a small label line above a group of calculation lines.
 func (o *engineOut) label(text string) {
-	o.add(&layout.Para{Pos: o.p, Runs: []layout.Run{{Text: text, Style: layout.BoldItalic}}})
+	o.add(&layout.Para{Pos: o.p, Runs: []layout.Run{{Text: text, Style: layout.BoldItalic}}, Label: true})
 }
 
 // kindWords say how a step with no formula was reached (trace.Kind); a

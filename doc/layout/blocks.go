@@ -43,7 +43,11 @@ func (e *engine) para(p *Para, width float64) []*piece {
 		return linePieces("line", p.Pos, e.setText(p.Runs, width, smallStyle, p.Pos), width, paraGap/2)
 	}
 	lines := e.setText(p.Runs, width, bodyStyle, p.Pos)
-	return linePieces("line", p.Pos, lines, width, paraGap)
+	ps := linePieces("line", p.Pos, lines, width, paraGap)
+	if n := len(ps); p.Label && n > 0 {
+		ps[n-1].keep = true
+	}
+	return ps
 }
 
 func (e *engine) heading(h *Heading, width float64) []*piece {

@@ -143,19 +143,49 @@ func TestProblems(t *testing.T) {
 }
 
 func TestKeepHeadingWithNext(t *testing.T) {
-	var bs []layout.Block
-	for i := 0; i < 52; i++ {
-		bs = append(bs, para(2+i, "Filler line."))
+	for n := 40; n < 60; n++ {
+		var bs []layout.Block
+		for i := 0; i < n; i++ {
+			bs = append(bs, para(2+i, "Filler line."))
+		}
+		bs = append(bs, &layout.Heading{Pos: at(80), Level: 2, Runs: []layout.Run{txt("Kept")}}, para(81, "Follows the heading."))
+		for i := 0; i < 30; i++ { // a tail too long for the page to be taken back by shrinking the gaps
+			bs = append(bs, para(100+i, "Tail line."))
+		}
+		p, diags := layout.Document(sheet(bs...))
+		if diags.HasErrors() {
+			t.Fatal(diags)
+		}
+		for _, pg := range p.Pages {
+			last := pg.Boxes[len(pg.Boxes)-1]
+			if last.Kind == "heading" {
+				t.Errorf("%d lines of filler: page %d ends with a heading", n, pg.Number)
+			}
+		}
 	}
-	bs = append(bs, &layout.Heading{Pos: at(60), Level: 2, Runs: []layout.Run{txt("Kept")}}, para(61, "Follows the heading."))
-	p, diags := layout.Document(sheet(bs...))
-	if diags.HasErrors() {
-		t.Fatal(diags)
-	}
-	for _, pg := range p.Pages {
-		last := pg.Boxes[len(pg.Boxes)-1]
-		if last.Kind == "heading" {
-			t.Errorf("page %d ends with a heading", pg.Number)
+}
+
+// TestKeepLabelWithNext checks that a run-in label (Para.Label, the
+// engine's "Zone of influence") never ends a page, whatever the text
+// before it: the filler is grown a line at a time past a page break.
+func TestKeepLabelWithNext(t *testing.T) {
+	for n := 40; n < 70; n++ {
+		var bs []layout.Block
+		for i := 0; i < n; i++ {
+			bs = append(bs, para(2+i, "Filler line."))
+		}
+		bs = append(bs, &layout.Para{Pos: at(80), Runs: []layout.Run{{Text: "Label", Style: layout.BoldItalic}}, Label: true}, para(81, "Follows the label."))
+		for i := 0; i < 30; i++ { // a tail too long for the page to be taken back by shrinking the gaps
+			bs = append(bs, para(100+i, "Tail line."))
+		}
+		p, diags := layout.Document(sheet(bs...))
+		if diags.HasErrors() {
+			t.Fatal(diags)
+		}
+		for _, pg := range p.Pages {
+			if last := pg.Boxes[len(pg.Boxes)-1]; last.Pos == at(80) {
+				t.Errorf("%d lines of filler: page %d ends with the label", n, pg.Number)
+			}
 		}
 	}
 }

@@ -160,6 +160,7 @@ type Para struct {
 	Pos   source.Span
 	Runs  []Run
 	Small bool
+	Label bool // a run-in heading over what follows: never left alone at the foot of a page
 }
 
 // List is a bullet list, or a numbered one from Start (0 means 1). Each
