@@ -142,40 +142,19 @@ func TestProblems(t *testing.T) {
 	}
 }
 
-func TestKeepHeadingWithNext(t *testing.T) {
-	for n := 40; n < 60; n++ {
-		var bs []layout.Block
-		for i := 0; i < n; i++ {
-			bs = append(bs, para(2+i, "Filler line."))
-		}
-		bs = append(bs, &layout.Heading{Pos: at(80), Level: 2, Runs: []layout.Run{txt("Kept")}}, para(81, "Follows the heading."))
-		for i := 0; i < 30; i++ { // a tail too long for the page to be taken back by shrinking the gaps
-			bs = append(bs, para(100+i, "Tail line."))
-		}
-		p, diags := layout.Document(sheet(bs...))
-		if diags.HasErrors() {
-			t.Fatal(diags)
-		}
-		for _, pg := range p.Pages {
-			last := pg.Boxes[len(pg.Boxes)-1]
-			if last.Kind == "heading" {
-				t.Errorf("%d lines of filler: page %d ends with a heading", n, pg.Number)
-			}
-		}
-	}
-}
-
-// TestKeepLabelWithNext checks that a run-in label (Para.Label, the
-// engine's "Zone of influence") never ends a page, whatever the text
-// before it: the filler is grown a line at a time past a page break.
-func TestKeepLabelWithNext(t *testing.T) {
+// keptWithNext lays out n lines of filler, then kept and a line that
+// follows it, then a tail too long for the page to be taken back by
+// shrinking the gaps, for n from 40 to 69 (past a page break), and
+// reports each page that ends with the box ends says is kept's.
+func keptWithNext(t *testing.T, kept layout.Block, ends func(*layout.Box) bool) {
+	t.Helper()
 	for n := 40; n < 70; n++ {
 		var bs []layout.Block
 		for i := 0; i < n; i++ {
 			bs = append(bs, para(2+i, "Filler line."))
 		}
-		bs = append(bs, &layout.Para{Pos: at(80), Runs: []layout.Run{{Text: "Label", Style: layout.BoldItalic}}, Label: true}, para(81, "Follows the label."))
-		for i := 0; i < 30; i++ { // a tail too long for the page to be taken back by shrinking the gaps
+		bs = append(bs, kept, para(81, "Follows it."))
+		for i := 0; i < 30; i++ {
 			bs = append(bs, para(100+i, "Tail line."))
 		}
 		p, diags := layout.Document(sheet(bs...))
@@ -183,11 +162,21 @@ func TestKeepLabelWithNext(t *testing.T) {
 			t.Fatal(diags)
 		}
 		for _, pg := range p.Pages {
-			if last := pg.Boxes[len(pg.Boxes)-1]; last.Pos == at(80) {
-				t.Errorf("%d lines of filler: page %d ends with the label", n, pg.Number)
+			if ends(pg.Boxes[len(pg.Boxes)-1]) {
+				t.Errorf("%d lines of filler: page %d ends with the block kept with the next", n, pg.Number)
 			}
 		}
 	}
+}
+
+func TestKeepHeadingWithNext(t *testing.T) {
+	keptWithNext(t, &layout.Heading{Pos: at(80), Level: 2, Runs: []layout.Run{txt("Kept")}}, func(b *layout.Box) bool { return b.Kind == "heading" })
+}
+
+// TestKeepLabelWithNext checks that a run-in label (Para.Label, the
+// engine's "Zone of influence") never ends a page.
+func TestKeepLabelWithNext(t *testing.T) {
+	keptWithNext(t, &layout.Para{Pos: at(80), Runs: []layout.Run{{Text: "Label", Style: layout.BoldItalic}}, Label: true}, func(b *layout.Box) bool { return b.Pos == at(80) })
 }
 
 func TestVariantAndNotChecked(t *testing.T) {
