@@ -58,7 +58,11 @@ func (c *composer) settlement(s *eval.Sheet, b *eval.Block) []layout.Block {
 				continue
 			}
 			shownTime = true
-			o.label("Time " + strings.TrimPrefix(n, "t = ") + " (the other times are in the time table below)")
+			at := strings.TrimPrefix(n, "t = ")
+			if len(r.Curve) > 0 { // the first time's group comes first: printed as the time table prints it
+				at = f(r.Curve[0].T, yr) + " yr"
+			}
+			o.label("Time " + at + " (the other times are in the time table below)")
 			o.steps(tr, steps[n], n)
 			continue
 		}
