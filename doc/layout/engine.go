@@ -3,7 +3,6 @@ package layout
 import (
 	"fmt"
 	"runtime"
-	"slices"
 	"sync"
 
 	"github.com/plinth-calc/plinth/doc/layout/draw"
@@ -208,7 +207,7 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 			}
 		}()
 	}
-	for _, si := range heaviestFirst(doc, which) {
+	for _, si := range which {
 		next <- si
 	}
 	close(next)
@@ -219,31 +218,6 @@ func (e *engine) sheets(doc Doc, which []int, fills map[PageRef]string, out []la
 		}
 	}
 	return nil
-}
-
-// heaviestFirst is which in the order the workers take the sheets: the
-// ones with the most to lay out first (by blocks and table rows: the
-// end matter's registers, the cover), so that no long sheet starts last
-// and leaves the other workers idle while it is laid out. The order is
-// the workers' only; each sheet's result has its own place.
-func heaviestFirst(doc Doc, which []int) []int {
-	weight := func(si int) int {
-		w := 0
-		for _, b := range doc.Sheets[si].Blocks {
-			w++
-			if t, ok := b.(*Table); ok {
-				w += len(t.Rows)
-			}
-		}
-		return w
-	}
-	ws := make(map[int]int, len(which))
-	for _, si := range which {
-		ws[si] = weight(si)
-	}
-	order := slices.Clone(which)
-	slices.SortStableFunc(order, func(a, b int) int { return ws[b] - ws[a] })
-	return order
 }
 
 // blocks lays out a list of blocks at width.
