@@ -272,7 +272,8 @@ func (c *calc) completeWeak(governing string) {
 }
 
 // whole records a note about the calculation as a whole (Step -1; Warn
-// would attach it to the latest step).
+// would attach it to the latest step) that restates a verdict line: the
+// governing case of bearing or sliding (trace.Caution.Restates).
 func (c *calc) whole(code, msg string, vals ...trace.Value) {
 	c.t.Cautions = append(c.t.Cautions, trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Values: vals, Step: -1, Restates: true})
 }

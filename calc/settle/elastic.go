@@ -206,9 +206,7 @@ func (k *calc) elastic(combined bool) {
 		if kind == "E'" && !l.Nu.Set && !noted {
 			pending = append(pending, func() {
 				k.take(cs, "nu'", trace.Given, DefaultNu, "", trace.Ref{}, "Poisson's ratio: assumed, default (common practice); give nu in the layer table to change it")
-				if k.full { // says what the note of ν′ says (trace.Caution.AtStep)
-					k.t.Warn(trace.Caution{Code: "nu-default", Severity: trace.SevNote, Message: fmt.Sprintf("Poisson's ratio ν′ = %g assumed where not given (common practice)", DefaultNu), Case: cs, AtStep: true})
-				}
+				k.noteAtStep(cs, "nu-default", fmt.Sprintf("Poisson's ratio ν′ = %g assumed where not given (common practice)", DefaultNu))
 			})
 			noted = true
 		}

@@ -153,6 +153,15 @@ func (k *calc) warn(cs, code string, sev trace.Severity, ref trace.Ref, msg stri
 	k.t.Warn(trace.Caution{Code: code, Severity: sev, Message: msg, Values: vals, Ref: ref, Case: cs})
 }
 
+// noteAtStep records a NOTE that says what the note of the step just
+// recorded says (trace.Caution.AtStep).
+func (k *calc) noteAtStep(cs, code, msg string) {
+	if !k.full {
+		return
+	}
+	k.t.Warn(trace.Caution{Code: code, Severity: trace.SevNote, Message: msg, Case: cs, AtStep: true})
+}
+
 // unverified records that a layer lacks the data its method needs, so the
 // check cannot pass (Result.Unverified), whether or not the trace is kept.
 func (k *calc) unverified(reason string) {

@@ -91,23 +91,17 @@ func WithinFooting(in Input) (*Within, error) {
 	if edge == "edge" {
 		return w.done(f.Name)
 	}
-	for _, m := range []struct {
+	type side struct {
 		p          stress.Point
 		side, what string
 		s, beta    *float64
-	}{{stress.MidB, "B", "middle of a long side", &w.MidB, &w.BetaB}, {stress.MidL, "L", "middle of a short side", &w.MidL, &w.BetaL}} {
-		if m.side == "L" && f.Shape == site.Square {
-			// the middles of a square's four sides are alike: the short
-			// side's values are the long side's, computed once
-			same := "a square's four sides are alike"
-			w.MidL = eval("s_mid_L", trace.S("s_mid_B"), []trace.Value{val("s_mid_B", w.MidB, "mm")}, "mm", trace.Ref{}, same)
-			w.BetaL = eval("beta_L", trace.S("beta_B"), []trace.Value{val("beta_B", w.BetaB, "")}, "", trace.Ref{}, same)
-			w.Values = append(w.Values, val("s_mid_L", w.MidL, "mm"), val("beta_L", w.BetaL, ""))
-			break
-		}
-		if f.Shape == site.Square {
-			m.what = "middle of a side"
-		}
+	}
+	sides := []side{{stress.MidB, "B", "middle of a long side", &w.MidB, &w.BetaB}, {stress.MidL, "L", "middle of a short side", &w.MidL, &w.BetaL}}
+	square := f.Shape == site.Square
+	if square { // the middles of a square's four sides are alike: one is computed
+		sides = []side{{stress.MidB, "B", "middle of a side", &w.MidB, &w.BetaB}}
+	}
+	for _, m := range sides {
 		x := in
 		x.At = m.p
 		r, err := compute(x, false)
@@ -117,16 +111,19 @@ func WithinFooting(in Input) (*Within, error) {
 		*m.s = r.Total
 		ss := "s_mid_" + m.side
 		take(ss, r.Total, "total settlement at the "+m.what+", "+m.side+"/2 from the centre")
-		side, sv := m.side, f.B
+		sv := f.B
 		if m.side == "L" {
 			sv = f.Length()
-			if f.Shape == site.Square {
-				side = "B"
-			}
 		}
-		*m.beta = eval("beta_"+m.side, trace.Div(trace.Sub(trace.S("s_centre"), trace.S(ss)), trace.Div(trace.S(side), trace.N(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(side, sv, "m")}, "",
+		*m.beta = eval("beta_"+m.side, trace.Div(trace.Sub(trace.S("s_centre"), trace.S(ss)), trace.Div(trace.S(m.side), trace.N(2))), []trace.Value{val("s_centre", w.Centre, "mm"), val(ss, r.Total, "mm"), val(m.side, sv, "m")}, "",
 			trace.Ref{Source: trace.EN1997, Clause: "Annex H"}, "angular distortion from the centre to the "+m.what)
 		w.Values = append(w.Values, val(ss, r.Total, "mm"), val("beta_"+m.side, *m.beta, ""))
+	}
+	if square { // the short side's values are the long side's
+		same := "a square's four sides are alike"
+		w.MidL = eval("s_mid_L", trace.S("s_mid_B"), []trace.Value{val("s_mid_B", w.MidB, "mm")}, "mm", trace.Ref{}, same)
+		w.BetaL = eval("beta_L", trace.S("beta_B"), []trace.Value{val("beta_B", w.BetaB, "")}, "", trace.Ref{}, same)
+		w.Values = append(w.Values, val("s_mid_L", w.MidL, "mm"), val("beta_L", w.BetaL, ""))
 	}
 	return w.done(f.Name)
 }

@@ -19,9 +19,8 @@ const Floor = 450 << 20
 const Factor = 2.25
 
 // Pace is the collector's GOGC SetPace sets for compose, the layout and
-// the PDF: the
-// heap may grow to 2.5 times what is live before a collection, rather
-// than the default 2, since those stages allocate fast and keep little
+// the PDF: the heap may grow to 2.5 times what is live before a
+// collection, rather than the default 2, since those stages allocate fast and keep little
 // (about a fifth less time on two cores for 100 sheets of prose; the
 // peak stays within the benchmarks' targets, and the soft limit bounds
 // it on long documents, where it binds before the pace does).
