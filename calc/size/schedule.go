@@ -3,6 +3,7 @@ package size
 import (
 	"fmt"
 	"math"
+	"reflect"
 	"runtime"
 	"sync"
 
@@ -56,6 +57,9 @@ type Schedule struct {
 	UtilMax float64     // the highest governing utilisation of any row
 	BetaMax float64     // the largest angular distortion between neighbours (0 without settlement)
 	RowMax  int         // the row of UtilMax
+	// Like is, for each row, the first earlier row with the same depth,
+	// ground and actions (so the same sizing, under its own name), or −1.
+	Like []int
 	PairMax int         // the pair of BetaMax (−1 when none)
 	Trace   trace.Trace // the schedule's own cautions and sources
 }
@@ -139,6 +143,7 @@ func SizeSchedule(in ScheduleInput) (*Schedule, error) {
 			out.UtilMax, out.RowMax = u, i
 		}
 	}
+	out.Like = likeRows(in.Rows)
 	if in.Base.Settle == nil {
 		return out, nil
 	}
@@ -161,6 +166,24 @@ func SizeSchedule(in ScheduleInput) (*Schedule, error) {
 		}
 	}
 	return out, nil
+}
+
+// likeRows returns, for each row, the first earlier row whose depth,
+// ground and actions are those of the row (a row that is itself like
+// another is not a model), or −1.
+func likeRows(rows []Row) []int {
+	like := make([]int, len(rows))
+	for i, a := range rows {
+		like[i] = -1
+		for j := range i {
+			b := rows[j]
+			if like[j] < 0 && a.D == b.D && (a.Ground == b.Ground || a.Ground != nil && b.Ground != nil && reflect.DeepEqual(*a.Ground, *b.Ground)) && reflect.DeepEqual(a.Actions, b.Actions) {
+				like[i] = j
+				break
+			}
+		}
+	}
+	return like
 }
 
 func sizeRow(base Input, r Row) (*Result, error) {

@@ -107,3 +107,28 @@ func BenchmarkSchedule200(b *testing.B) {
 		}
 	}
 }
+
+// Rows with the same depth, ground and actions are marked like the first
+// of them (Schedule.Like), and are sized the same: equal width and
+// utilisation (they are sized independently all the same).
+func TestScheduleLikeRows(t *testing.T) {
+	rows := []size.Row{
+		{Name: "A1", X: 0, Actions: acts(350e3, 120e3, 0)},
+		{Name: "A2", X: 6, Actions: acts(600e3, 200e3, 0)},
+		{Name: "A3", X: 12, Actions: acts(600e3, 200e3, 0)},
+		{Name: "A4", X: 18, Actions: acts(350e3, 120e3, 0)},
+		{Name: "A5", X: 24, D: site.Some(1.5), Actions: acts(350e3, 120e3, 0)},
+	}
+	s, err := size.SizeSchedule(size.ScheduleInput{Base: base(), Rows: rows})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := []int{-1, -1, 1, 0, -1}; fmt.Sprint(s.Like) != fmt.Sprint(want) {
+		t.Fatalf("Like = %v, want %v", s.Like, want)
+	}
+	for i, j := range s.Like {
+		if j >= 0 && (s.Rows[i].B != s.Rows[j].B || s.Rows[i].At.Util() != s.Rows[j].At.Util()) {
+			t.Errorf("%s like %s: B %v util %v, against %v %v", rows[i].Name, rows[j].Name, s.Rows[i].B, s.Rows[i].At.Util(), s.Rows[j].B, s.Rows[j].At.Util())
+		}
+	}
+}

@@ -155,12 +155,33 @@ func (c *composer) schedule(s *eval.Sheet, b *eval.Block) []layout.Block {
 		rb := &eval.Block{Kind: sheet.KindSize, Name: b.Name + " " + r.Names[i], Span: b.Span, Sheet: b.Sheet, On: b.On, Of: f,
 			Size: &eval.SizeResult{Result: row, Ecc: r.Ecc, NoSettle: r.NoSettle}, Options: b.Options, Checks: b.Checks}
 		c.appendix = append(c.appendix, &layout.Anchor{Pos: b.Span, Name: rowAnchor(b, i)})
+		if j := likeRow(r, i); j >= 0 && c.governingOnly() {
+			// the same inputs as an earlier row: its sizing is not printed again
+			o := c.engineOut(s, rb)
+			o.head(fmt.Sprintf("Size of %s on %s", f.Name, b.On.Name))
+			o.para(txt(fmt.Sprintf("The same depth, ground and actions as %s, so the same sizing, B = %s; its working, cautions included, is ",
+				r.Names[j], metres(row.B))), layout.Run{Text: r.Names[j] + "'s", Link: rowAnchor(b, j)}, txt(" (detail = full prints it again)."))
+			if ch := findCheck(rb, "size"); ch != nil {
+				o.add(c.checkBlock(o.p, ch, "u_gov", "u_lim"))
+			}
+			c.appendix = append(c.appendix, o.done()...)
+			continue
+		}
 		// Under detail = governing only the governing row prints its
 		// bearing and settlement working in full; the others their checks
 		// at both widths and the sizing.
 		c.appendix = append(c.appendix, c.sizeWorking(s, rb, !c.governingOnly() || i == r.RowMax)...)
 	}
 	return out
+}
+
+// likeRow is the earlier row row i has the inputs of (size.Schedule.Like),
+// or −1.
+func likeRow(r *eval.ScheduleResult, i int) int {
+	if i < len(r.Like) {
+		return r.Like[i]
+	}
+	return -1
 }
 
 func rowAnchor(b *eval.Block, i int) string { return fmt.Sprintf("%s-row-%d", blockAnchor(b), i+1) }
